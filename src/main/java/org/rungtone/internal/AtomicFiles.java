@@ -1,0 +1,132 @@
+package org.rungtone.internal;
+
+import java.io.IOException;
+import java.io.OutputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.AccessDeniedException;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.FileAlreadyExistsException;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.NotDirectoryException;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+
+/**
+ * The one way Rungtone writes files: into a temporary file beside the target, then an atomic move into
+ * place, so a failed run never leaves a half-written file. Folder problems become {@link InputError}s.
+ */
+public final class AtomicFiles {
+    private AtomicFiles() {
+    }
+
+    /** Writes the content of a stream-producing action. */
+    @FunctionalInterface
+    public interface Writer {
+        /** Writes everything to {@code out}. */
+        void write(OutputStream out) throws IOException;
+    }
+
+    /**
+     * Creates {@code dir} (and parents) or fails with a clear message when it cannot be a folder.
+     *
+     * @throws InputError when the path is a file or cannot be created or written
+     */
+    public static Path prepareFolder(Path dir) {
+        if (Files.exists(dir) && !Files.isDirectory(dir)) {
+            throw new InputError(dir + ": output folder is an existing file; choose another --out");
+        }
+        try {
+            Files.createDirectories(dir);
+        } catch (FileAlreadyExistsException | NotDirectoryException e) {
+            throw new InputError(dir + ": cannot create output folder, a part of its path is a file;"
+                    + " choose another --out", e);
+        } catch (IOException e) {
+            throw new InputError(dir + ": cannot create output folder (" + reason(e)
+                    + "); choose another --out", e);
+        }
+        if (!Files.isWritable(dir)) {
+            throw new InputError(dir + ": output folder is not writable; choose another --out");
+        }
+        return dir;
+    }
+
+    /**
+     * Checks up front that the folder can be used, without creating it; lets a command fail before any
+     * work when the output can never be written.
+     *
+     * @throws InputError when an existing part of the path is a file or not writable
+     */
+    public static void checkFolderUsable(Path dir) {
+        Path p = dir.toAbsolutePath().normalize();
+        while (p != null && !Files.exists(p)) {
+            p = p.getParent();
+        }
+        if (p == null) {
+            return;
+        }
+        if (!Files.isDirectory(p)) {
+            throw new InputError(dir + ": output folder cannot be created, " + p
+                    + " is a file; choose another --out");
+        }
+        if (!Files.isWritable(p)) {
+            throw new InputError(dir + ": output folder is not writable (" + p
+                    + "); choose another --out");
+        }
+    }
+
+    /** Writes UTF-8 text atomically, with {@code \n} line endings as given. */
+    public static void writeString(Path target, String text) {
+        write(target, out -> out.write(text.getBytes(StandardCharsets.UTF_8)));
+    }
+
+    /** Writes bytes atomically. */
+    public static void writeBytes(Path target, byte[] bytes) {
+        write(target, out -> out.write(bytes));
+    }
+
+    /**
+     * Writes through {@code writer} into a temporary file beside {@code target}, then moves it into place.
+     *
+     * @throws InputError when the folder cannot be written
+     */
+    public static void write(Path target, Writer writer) {
+        Path abs = target.toAbsolutePath();
+        Path dir = abs.getParent();
+        prepareFolder(dir);
+        Path tmp = null;
+        try {
+            tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".part");
+            try (OutputStream out = new java.io.BufferedOutputStream(Files.newOutputStream(tmp), 1 << 16)) {
+                writer.write(out);
+            }
+            try {
+                Files.move(tmp, abs, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            } catch (AtomicMoveNotSupportedException e) {
+                Files.move(tmp, abs, StandardCopyOption.REPLACE_EXISTING);
+            }
+            tmp = null;
+        } catch (IOException e) {
+            throw new InputError(target + ": cannot write (" + reason(e) + ")", e);
+        } finally {
+            if (tmp != null) {
+                try {
+                    Files.deleteIfExists(tmp);
+                } catch (IOException ignored) {
+                    // the temporary file is hidden and named .part; nothing better to do
+                }
+            }
+        }
+    }
+
+    private static String reason(IOException e) {
+        if (e instanceof AccessDeniedException) {
+            return "permission denied";
+        }
+        if (e instanceof NoSuchFileException) {
+            return "no such folder";
+        }
+        String m = e.getMessage();
+        return m == null ? e.getClass().getSimpleName() : m;
+    }
+}

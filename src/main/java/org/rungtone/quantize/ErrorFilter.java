@@ -1,0 +1,78 @@
+package org.rungtone.quantize;
+
+import java.util.Arrays;
+import org.rungtone.internal.Checks;
+
+/**
+ * The error-feedback filter of a noise-shaping quantizer: the value sent to the quantizer is
+ * {@code v[n] = x[n] − Σ h[k]·e[n−1−k]}, where {@code e = y − v} is the quantizer's own error, so the
+ * output error has the noise transfer function {@code NTF(z) = 1 − Σ h[k] z^−(k+1)}.
+ *
+ * <p>First order, {@code h = {1}}, gives {@code NTF = 1 − z^−1} with {@code |NTF| = 2·sin(ω/2)}: error pushed
+ * to high frequencies, total error power doubled (Gerzon, Craven, "Optimal Noise Shaping and Dither of
+ * Digital Signals", AES preprint 2822, 1989). Second order, {@code h = {2, −1}}, gives {@code (1 − z^−1)²}.
+ */
+public final class ErrorFilter {
+    /** No shaping: plain quantization. */
+    public static final ErrorFilter NONE = new ErrorFilter("none", new double[0]);
+    /** First-order shaping, NTF = 1 − z^−1. */
+    public static final ErrorFilter FIRST_ORDER = new ErrorFilter("first-order", new double[] {1});
+    /** Second-order shaping, NTF = (1 − z^−1)². */
+    public static final ErrorFilter SECOND_ORDER = new ErrorFilter("second-order", new double[] {2, -1});
+
+    private final String name;
+    private final double[] taps;
+
+    private ErrorFilter(String name, double[] taps) {
+        this.name = name;
+        this.taps = taps;
+    }
+
+    /**
+     * A user-given FIR error filter h[0..K−1] (h[0] weights the previous sample's error).
+     *
+     * @throws IllegalArgumentException when there are more than 32 taps or a tap is not finite
+     */
+    public static ErrorFilter fir(double... taps) {
+        Checks.checkArgument(taps.length <= 32, "an error filter has at most 32 taps: %d", taps.length);
+        for (double t : taps) {
+            Checks.checkArgument(Double.isFinite(t), "error filter taps must be finite: %s", t);
+        }
+        return new ErrorFilter("fir" + Arrays.toString(taps), taps.clone());
+    }
+
+    /** Name for reports. */
+    public String name() {
+        return name;
+    }
+
+    /** A copy of the taps. */
+    public double[] taps() {
+        return taps.clone();
+    }
+
+    /** Number of taps; 0 means no shaping. */
+    public int order() {
+        return taps.length;
+    }
+
+    double tap(int k) {
+        return taps[k];
+    }
+
+    /** |NTF(e^jω)| at normalised angular frequency ω (radians per sample). */
+    public double noiseGain(double omega) {
+        double re = 1;
+        double im = 0;
+        for (int k = 0; k < taps.length; k++) {
+            re -= taps[k] * Math.cos(omega * (k + 1));
+            im += taps[k] * Math.sin(omega * (k + 1));
+        }
+        return Math.hypot(re, im);
+    }
+
+    @Override
+    public String toString() {
+        return name;
+    }
+}
