@@ -1,0 +1,91 @@
+package org.rungtone.firmware;
+
+import com.samskivert.mustache.Escapers;
+import com.samskivert.mustache.Mustache;
+import com.samskivert.mustache.MustacheException;
+import com.samskivert.mustache.Template;
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Optional;
+import org.rungtone.internal.InputError;
+
+/**
+ * Finds and renders the logic-free C templates: from the jar's {@code templates/} folder, or from a user's
+ * folder given explicitly with {@code --templates DIR} (same layout: one folder per target family). Rendering
+ * uses JMustache with no escaping (the output is C, not HTML) and fails on missing values.
+ */
+public final class Templates {
+    private static final Mustache.Compiler COMPILER = Mustache.compiler()
+            .withEscaper(Escapers.NONE)
+            .strictSections(false)
+            .defaultValue(null);
+
+    private final Optional<Path> userDir;
+
+    private Templates(Optional<Path> userDir) {
+        this.userDir = userDir;
+    }
+
+    /** The templates bundled with Rungtone. */
+    public static Templates bundled() {
+        return new Templates(Optional.empty());
+    }
+
+    /**
+     * Templates from a user folder.
+     *
+     * @throws InputError when the folder does not exist
+     */
+    public static Templates fromFolder(Path dir) {
+        if (!Files.isDirectory(dir)) {
+            throw new InputError(dir + ": --templates folder does not exist");
+        }
+        return new Templates(Optional.of(dir));
+    }
+
+    /** True when {@code family/name} exists. */
+    public boolean exists(String family, String name) {
+        if (userDir.isPresent()) {
+            return Files.isRegularFile(userDir.get().resolve(family).resolve(name));
+        }
+        return Templates.class.getClassLoader().getResource("templates/" + family + "/" + name) != null;
+    }
+
+    /**
+     * Renders {@code family/name} with {@code context} (a map or bean).
+     *
+     * @throws InputError when the template is missing or refers to a value that is not there
+     */
+    public String render(String family, String name, Object context) {
+        Template t = COMPILER.compile(load(family, name));
+        try {
+            return t.execute(context);
+        } catch (MustacheException e) {
+            throw new InputError("template " + family + "/" + name + ": " + e.getMessage(), e);
+        }
+    }
+
+    private String load(String family, String name) {
+        try {
+            if (userDir.isPresent()) {
+                Path p = userDir.get().resolve(family).resolve(name);
+                if (!Files.isRegularFile(p)) {
+                    throw new InputError(p + ": template not found in --templates folder");
+                }
+                return Files.readString(p, StandardCharsets.UTF_8);
+            }
+            try (InputStream in = Templates.class.getClassLoader()
+                    .getResourceAsStream("templates/" + family + "/" + name)) {
+                if (in == null) {
+                    throw new InputError("no bundled template " + family + "/" + name);
+                }
+                return new String(in.readAllBytes(), StandardCharsets.UTF_8);
+            }
+        } catch (IOException e) {
+            throw new InputError("cannot read template " + family + "/" + name + ": " + e.getMessage(), e);
+        }
+    }
+}
