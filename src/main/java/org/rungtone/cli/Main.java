@@ -14,6 +14,8 @@ import picocli.CommandLine.ParseResult;
             "Turns sounds and waveform scripts into firmware for resistor-ladder DACs on GPIO pins,",
             "and tells you how the result will sound on your board."},
         subcommands = {
+            BuildCommand.class,
+            DemoCommand.class,
             CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {
@@ -50,7 +52,9 @@ public final class Main implements Runnable {
     public static CommandLine newCommandLine() {
         CommandLine cl = new CommandLine(new Main());
         cl.setExecutionExceptionHandler(Main::handleFailure);
-        cl.setExitCodeExceptionMapper(t -> t instanceof InputError ? EXIT_INPUT : EXIT_INTERNAL);
+        cl.setParameterExceptionHandler(Main::handleUsage);
+        cl.setExitCodeExceptionMapper(t -> t instanceof CommandLine.ParameterException ? EXIT_USAGE
+                : t instanceof InputError ? EXIT_INPUT : EXIT_INTERNAL);
         cl.setCaseInsensitiveEnumValuesAllowed(true);
         return cl;
     }
@@ -74,6 +78,16 @@ public final class Main implements Runnable {
         }
         err.flush();
         return EXIT_INTERNAL;
+    }
+
+    private static int handleUsage(CommandLine.ParameterException e, String[] args) {
+        CommandLine cl = e.getCommandLine();
+        PrintWriter err = cl.getErr();
+        err.println("rungtone: error: " + e.getMessage());
+        CommandLine.UnmatchedArgumentException.printSuggestions(e, err);
+        err.println("Try '" + cl.getCommandSpec().qualifiedName() + " --help' for the options.");
+        err.flush();
+        return EXIT_USAGE;
     }
 
     private static boolean isVerbose(ParseResult parsed) {

@@ -96,8 +96,11 @@ public final class AtomicFiles {
         prepareFolder(dir);
         Path tmp = null;
         try {
-            tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".part");
-            try (OutputStream out = new java.io.BufferedOutputStream(Files.newOutputStream(tmp), 1 << 16)) {
+            // Not Files.createTempFile: that makes the file owner-only; a new file here follows the umask.
+            tmp = dir.resolve("." + abs.getFileName() + "." + Long.toHexString(System.nanoTime()) + ".part");
+            try (OutputStream out = new java.io.BufferedOutputStream(Files.newOutputStream(tmp,
+                    java.nio.file.StandardOpenOption.CREATE_NEW, java.nio.file.StandardOpenOption.WRITE),
+                    1 << 16)) {
                 writer.write(out);
             }
             try {

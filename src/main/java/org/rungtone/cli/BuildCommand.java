@@ -1,0 +1,166 @@
+package org.rungtone.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.OptionalDouble;
+import java.util.concurrent.Callable;
+import org.rungtone.firmware.CNames;
+import org.rungtone.project.Build;
+import org.rungtone.project.BuildPlan;
+import org.rungtone.quantize.Dither;
+import org.rungtone.quantize.ErrorFilter;
+import org.rungtone.report.BuildReport;
+import org.rungtone.report.BuildSummary;
+import org.rungtone.report.Json;
+import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code rungtone build}: one source to C files and a report. */
+@Command(name = "build", mixinStandardHelpOptions = true,
+        description = "Condition and quantize a WAV file or .rung script for an N-bit ladder DAC and write C files"
+                + " and a report.",
+        sortOptions = false,
+        footerHeading = "%nExample:%n",
+        footer = {"  rungtone build door-chime.wav --bits 6 --rate 16k --name door_chime",
+            "  (writes door_chime.h, door_chime.c, report.txt and report.json",
+            "   into rungtone-out/door_chime/)"})
+public final class BuildCommand implements Callable<Integer> {
+    @Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Mixin
+    CommonOptions common;
+
+    @Parameters(index = "0", paramLabel = "SOURCE", description = "A .wav file or a .rung script.")
+    Path source;
+
+    @Option(names = "--bits", paramLabel = "<n>", defaultValue = "8",
+            description = "DAC bit depth, 1..16 (default ${DEFAULT-VALUE}).")
+    int bits;
+
+    @Option(names = "--rate", paramLabel = "<hz>", converter = Converters.Hertz.class,
+            description = "Target sample rate, e.g. 16k, 8000 (default: the script's own rate, else 16 kHz).")
+    Double rateHz;
+
+    @Option(names = "--dither", paramLabel = "none|rpdf|tpdf", defaultValue = "tpdf",
+            description = "Dither before quantizing (default ${DEFAULT-VALUE}).")
+    Dither dither;
+
+    @Option(names = "--shaping", paramLabel = "none|first|second", defaultValue = "none",
+            description = "Error-feedback noise shaping: pushes quantization noise towards high frequencies"
+                    + " (default ${DEFAULT-VALUE}).")
+    String shaping;
+
+    @Option(names = "--seed", paramLabel = "<n>", defaultValue = "1",
+            description = "Seed for dither; the same inputs and seed give identical outputs (default ${DEFAULT-VALUE}).")
+    long seed;
+
+    @Option(names = "--name", paramLabel = "<symbol>",
+            description = "C symbol prefix and output folder name (default: from the source file name).")
+    String name;
+
+    @Option(names = "--out", paramLabel = "<dir>", description = "Output folder (default ./rungtone-out/NAME).")
+    Path out;
+
+    @Option(names = "--channel", paramLabel = "<n>", defaultValue = "0",
+            description = "0 mixes all channels down (default); 1..8 picks one.")
+    int channel;
+
+    @ArgGroup(exclusive = true)
+    Level level;
+
+    /** Either a fixed gain or a normalization target. */
+    static final class Level {
+        @Option(names = "--gain", paramLabel = "<dB>", converter = Converters.Decibels.class,
+                description = "Fixed gain in dB instead of normalizing.")
+        Double gainDb;
+
+        @Option(names = "--normalize", paramLabel = "<dBFS>", converter = Converters.Decibels.class,
+                description = "Scale so the peak reaches this level (default -1 dBFS).")
+        Double normalizeDbfs;
+    }
+
+    @Option(names = "--keep-dc", description = "Do not subtract the source's mean.")
+    boolean keepDc;
+
+    @Option(names = "--trim", paramLabel = "<dBFS>", converter = Converters.Decibels.class,
+            description = "Trim leading and trailing audio quieter than this, e.g. -50.")
+    Double trimDbfs;
+
+    @Option(names = "--fade-in", paramLabel = "<time>", converter = Converters.Seconds.class, defaultValue = "0",
+            description = "Linear fade-in, e.g. 20ms.")
+    double fadeIn;
+
+    @Option(names = "--fade-out", paramLabel = "<time>", converter = Converters.Seconds.class, defaultValue = "0",
+            description = "Linear fade-out, e.g. 50ms.")
+    double fadeOut;
+
+    @Option(names = "--resampler", paramLabel = "kaiser|tarsos", defaultValue = "kaiser",
+            description = "kaiser: polyphase filter with its stopband below the target's quantization noise"
+                    + " (default); tarsos: TarsosDSP's resampler, about 70 dB stopband.")
+    String resampler;
+
+    @Option(names = "--full-scale", paramLabel = "<volts>", converter = Converters.Volts.class,
+            defaultValue = "5V", description = "Reference voltage of the ideal ladder (default ${DEFAULT-VALUE}).")
+    double fullScale;
+
+    @Option(names = "--flash-attr", paramLabel = "<text>", defaultValue = "",
+            description = "Attribute that keeps the sample array in flash, e.g. PROGMEM (default none).")
+    String flashAttr;
+
+    @Option(names = "--json", description = "Print the report as JSON instead of text.")
+    boolean json;
+
+    @Override
+    public Integer call() {
+        BuildPlan plan = plan();
+        BuildSummary summary = new Build(Version.get()).run(plan);
+        PrintWriter out = spec.commandLine().getOut();
+        if (json) {
+            out.print(Json.toJson(BuildReport.json(summary)));
+        } else if (!common.quiet) {
+            out.print(BuildReport.text(summary));
+        }
+        out.flush();
+        return 0;
+    }
+
+    BuildPlan plan() {
+        String base = name != null ? name : stem(source);
+        String symbol = CNames.symbol(base);
+        Path outDir = out != null ? out : Path.of("rungtone-out", symbol);
+        OptionalDouble gain = level != null && level.gainDb != null ? OptionalDouble.of(level.gainDb)
+                : OptionalDouble.empty();
+        OptionalDouble norm = gain.isPresent() ? OptionalDouble.empty()
+                : OptionalDouble.of(level != null && level.normalizeDbfs != null ? level.normalizeDbfs : -1.0);
+        return new BuildPlan(source, channel, symbol, outDir, bits,
+                rateHz == null ? OptionalDouble.empty() : OptionalDouble.of(rateHz), dither,
+                errorFilter(shaping), seed, !keepDc,
+                trimDbfs == null ? OptionalDouble.empty() : OptionalDouble.of(trimDbfs), gain, norm, fadeIn,
+                fadeOut, resampler.toLowerCase(Locale.ROOT), fullScale, flashAttr);
+    }
+
+    static ErrorFilter errorFilter(String text) {
+        switch (text.toLowerCase(Locale.ROOT)) {
+            case "none":
+                return ErrorFilter.NONE;
+            case "first":
+                return ErrorFilter.FIRST_ORDER;
+            case "second":
+                return ErrorFilter.SECOND_ORDER;
+            default:
+                throw new org.rungtone.internal.InputError("--shaping must be none, first or second: " + text);
+        }
+    }
+
+    static String stem(Path p) {
+        String f = p.getFileName() == null ? "sound" : p.getFileName().toString();
+        int dot = f.lastIndexOf('.');
+        return dot > 0 ? f.substring(0, dot) : f;
+    }
+}

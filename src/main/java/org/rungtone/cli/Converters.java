@@ -1,0 +1,86 @@
+package org.rungtone.cli;
+
+import org.rungtone.internal.InputError;
+import org.rungtone.internal.Units;
+import picocli.CommandLine.ITypeConverter;
+import picocli.CommandLine.TypeConversionException;
+
+/** Option converters for quantities with units; a bad value is a usage error (exit 2). */
+final class Converters {
+    private Converters() {
+    }
+
+    private static double parse(String text, String unit) {
+        try {
+            return Units.parse(text, unit);
+        } catch (InputError e) {
+            throw new TypeConversionException(e.getMessage());
+        }
+    }
+
+    /** Hertz: 16k, 16kHz, 22050. */
+    static final class Hertz implements ITypeConverter<Double> {
+        @Override
+        public Double convert(String value) {
+            return parse(value, "Hz");
+        }
+    }
+
+    /** Seconds: 250ms, 1.5s, 0.2. */
+    static final class Seconds implements ITypeConverter<Double> {
+        @Override
+        public Double convert(String value) {
+            return parse(value, "s");
+        }
+    }
+
+    /** Volts: 5V, 3.3, 600mV. */
+    static final class Volts implements ITypeConverter<Double> {
+        @Override
+        public Double convert(String value) {
+            return parse(value, "V");
+        }
+    }
+
+    /** Decibels: -1, -1dB, +6dB. */
+    static final class Decibels implements ITypeConverter<Double> {
+        @Override
+        public Double convert(String value) {
+            String v = value.trim();
+            if (v.endsWith("dBFS")) {
+                v = v.substring(0, v.length() - 4);
+            } else if (v.endsWith("dB")) {
+                v = v.substring(0, v.length() - 2);
+            }
+            try {
+                double d = Double.parseDouble(v);
+                if (!Double.isFinite(d)) {
+                    throw new NumberFormatException();
+                }
+                return d;
+            } catch (NumberFormatException e) {
+                throw new TypeConversionException("'" + value + "' is not a level in dB (e.g. -1, -6dB)");
+            }
+        }
+    }
+
+    /** A byte count with optional k/M suffix (binary multiples are not used: 32k is 32,000). */
+    static final class Bytes implements ITypeConverter<Long> {
+        @Override
+        public Long convert(String value) {
+            String v = value.trim();
+            if (v.endsWith("B")) {
+                v = v.substring(0, v.length() - 1);
+            }
+            try {
+                long n = Units.parseCount(v);
+                if (n <= 0) {
+                    throw new TypeConversionException("'" + value + "' must be a positive number of bytes");
+                }
+                return n;
+            } catch (InputError e) {
+                throw new TypeConversionException("'" + value + "' is not a byte count (e.g. 32000, 32k)");
+            }
+        }
+    }
+}

@@ -1,0 +1,138 @@
+package org.rungtone.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.Arguments;
+import org.junit.jupiter.params.provider.MethodSource;
+import org.rungtone.testing.Cli;
+import org.rungtone.testing.WavFixtures;
+
+class BuildCommandTest {
+    @TempDir
+    Path dir;
+
+    Path fixture() throws IOException {
+        Path wav = dir.resolve("bell.wav");
+        Files.write(wav, WavFixtures.sine16(44_100, 0.5, 523.25, 0.5));
+        return wav;
+    }
+
+    @Test
+    void writesAllOutputs() throws IOException {
+        Path out = dir.resolve("out");
+        Cli.Run r = Cli.run("build", fixture().toString(), "--bits", "6", "--rate", "16k", "--out", out.toString());
+        assertEquals(0, r.exitCode(), r.err());
+        assertEquals("", r.err());
+        for (String f : List.of("bell.h", "bell.c", "report.txt", "report.json")) {
+            assertTrue(Files.size(out.resolve(f)) > 0, f);
+        }
+        assertTrue(r.out().contains("6 bits at 16kHz, 8000 samples, 0.500 s"), r.out());
+        String json = Files.readString(out.resolve("report.json"));
+        assertTrue(json.contains("\"samples\": 8000"), json);
+        try (Stream<Path> s = Files.list(out)) {
+            assertEquals(4, s.count(), "no temporary files left behind");
+        }
+    }
+
+    @Test
+    void quantizedSnrIsNearTheoryForASine() throws IOException {
+        Path out = dir.resolve("o");
+        Cli.Run r = Cli.run("build", fixture().toString(), "--bits", "10", "--dither", "none", "--json",
+                "--out", out.toString());
+        assertEquals(0, r.exitCode(), r.err());
+        double snr = Double.parseDouble(r.out().replaceAll("(?s).*\"snr_db\": ([0-9.]+).*", "$1"));
+        // Bennett 1948: 6.02*10 + 1.76 = 61.96 dB for a full-scale sine; normalized to -1 dBFS it is 1 dB less.
+        assertEquals(61.96 - 1, snr, 1.0);
+    }
+
+    @Test
+    void sameInputsGiveIdenticalOutputs() throws IOException {
+        Path wav = fixture();
+        Cli.run("build", wav.toString(), "--out", dir.resolve("a").toString(), "--seed", "5");
+        Cli.run("build", wav.toString(), "--out", dir.resolve("b").toString(), "--seed", "5");
+        assertEquals(Files.readString(dir.resolve("a/bell.c")), Files.readString(dir.resolve("b/bell.c")));
+    }
+
+    static Stream<Arguments> badInputs() {
+        return Stream.of(
+                Arguments.of("missing", null, List.of("--bits", "6"), "missing.wav: no such file"),
+                Arguments.of("notriff.wav", "just some text, no audio".getBytes(), List.of(), "is not a WAV file"),
+                Arguments.of("trunc.wav", new byte[] {'R', 'I', 'F', 'F', 0, 0, 0, 0, 'W', 'A', 'V', 'E', 'f', 'm'},
+                        List.of(), "has no fmt chunk (truncated header?)"),
+                Arguments.of("alaw.wav", WavFixtures.wav().layout(WavFixtures.Layout.U8, 1, 8000, new double[] {0})
+                        .tag(6).bytes(), List.of(), "uses format tag 0x0006 (A-law)"),
+                Arguments.of("nochan.wav", WavFixtures.wav().layout(WavFixtures.Layout.S16, 1, 8000,
+                        new double[] {0}).channels(0).blockAlign(2).bytes(), List.of(), "says it has 0 channels"),
+                Arguments.of("rate.wav", WavFixtures.wav().layout(WavFixtures.Layout.S16, 1, 8000,
+                        new double[] {0}).rate(1_000_000).bytes(), List.of(), "unusable sample rate"),
+                Arguments.of("bits.wav", WavFixtures.sine16(8000, 0.1, 440, 0.5), List.of("--bits", "17"),
+                        "bit depth must be 1..16: 17"),
+                Arguments.of("song.mp3", new byte[] {1, 2, 3}, List.of(),
+                        "is not a source Rungtone reads; give a .wav file or a .rung script"));
+    }
+
+    @ParameterizedTest
+    @MethodSource("badInputs")
+    void badInputGivesOneLineExitOneAndNoFiles(String name, byte[] bytes, List<String> extra, String message)
+            throws IOException {
+        Path src = dir.resolve(name.contains(".") ? name : name + ".wav");
+        if (bytes != null) {
+            Files.write(src, bytes);
+        }
+        Path out = dir.resolve("out-" + name);
+        List<String> args = new java.util.ArrayList<>(List.of("build", src.toString(), "--out", out.toString()));
+        args.addAll(extra);
+        Cli.Run r = Cli.run(args.toArray(new String[0]));
+        assertEquals(1, r.exitCode(), r.err());
+        assertTrue(r.err().startsWith("rungtone: error: "), r.err());
+        assertTrue(r.err().contains(message), r.err());
+        assertEquals(1, r.err().strip().split("\n").length, "one line: " + r.err());
+        assertFalse(r.err().contains("Exception"), r.err());
+        assertFalse(Files.exists(out), "no output folder");
+    }
+
+    @Test
+    void outputFolderThatIsAFileIsBadInput() throws IOException {
+        Path file = dir.resolve("taken");
+        Files.writeString(file, "x");
+        Cli.Run r = Cli.run("build", fixture().toString(), "--out", file.toString());
+        assertEquals(1, r.exitCode());
+        assertEquals("rungtone: error: " + file + ": output folder cannot be created, " + file
+                + " is a file; choose another --out\n", r.err());
+        Cli.Run r2 = Cli.run("build", fixture().toString(), "--out", file.resolve("sub").toString());
+        assertEquals(1, r2.exitCode());
+        assertEquals("x", Files.readString(file));
+    }
+
+    @Test
+    void unknownOptionIsUsageError() throws IOException {
+        Cli.Run r = Cli.run("build", fixture().toString(), "--bitz", "6");
+        assertEquals(2, r.exitCode());
+        assertEquals("rungtone: error: Unknown options: '--bitz', '6'\nPossible solutions: --bits\n"
+                + "Try 'rungtone build --help' for the options.\n", r.err());
+    }
+
+    @Test
+    void badUnitIsUsageError() throws IOException {
+        Cli.Run r = Cli.run("build", fixture().toString(), "--rate", "5V");
+        assertEquals(2, r.exitCode());
+        assertTrue(r.err().contains("'5V' is not a frequency"), r.err());
+    }
+
+    @Test
+    void helpShowsAnExample() {
+        Cli.Run r = Cli.run("build", "--help");
+        assertEquals(0, r.exitCode());
+        assertTrue(r.out().contains("Example:"), r.out());
+    }
+}
