@@ -126,6 +126,9 @@ public final class BuildCommand implements Callable<Integer> {
         } else if (!common.quiet) {
             out.print(BuildReport.text(summary));
         }
+        if (common.verbose) {
+            spec.commandLine().getErr().println(BuildReport.timings(summary));
+        }
         out.flush();
         return 0;
     }

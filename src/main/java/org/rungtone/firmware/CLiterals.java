@@ -25,24 +25,41 @@ public final class CLiterals {
      */
     public static List<String> arrayLines(int[] values, int digits, int perLine, String indent) {
         List<String> lines = new ArrayList<>((values.length + perLine - 1) / perLine);
-        StringBuilder b = new StringBuilder();
+        String all = arrayBody(values, digits, perLine, indent);
+        if (!all.isEmpty()) {
+            lines.addAll(List.of(all.split("\n")));
+        }
+        return lines;
+    }
+
+    /**
+     * The same as {@link #arrayLines} joined with {@code \n} (no final newline), built in one buffer: this is
+     * the hot path for large sample arrays.
+     */
+    public static String arrayBody(int[] values, int digits, int perLine, String indent) {
+        StringBuilder b = new StringBuilder(values.length * (digits + 4) + values.length / perLine * 8);
         for (int i = 0; i < values.length; i++) {
             if (i % perLine == 0) {
-                b.setLength(0);
+                if (i > 0) {
+                    b.append('\n');
+                }
                 b.append(indent);
             } else {
                 b.append(' ');
             }
-            b.append(hex(values[i] & 0xFFFFFFFFL, digits));
+            b.append('0').append('x');
+            long v = values[i] & 0xFFFFFFFFL;
+            for (int d = digits - 1; d >= 0; d--) {
+                b.append(HEX[(int) ((v >>> (4 * d)) & 0xF)]);
+            }
             if (i < values.length - 1) {
                 b.append(',');
             }
-            if (i % perLine == perLine - 1 || i == values.length - 1) {
-                lines.add(b.toString());
-            }
         }
-        return lines;
+        return b.toString();
     }
+
+    private static final char[] HEX = "0123456789ABCDEF".toCharArray();
 
     /** A C double literal with enough digits, e.g. {@code 16000.0}. */
     public static String real(double v) {

@@ -47,7 +47,9 @@ public final class Build {
      */
     public BuildSummary run(BuildPlan plan) {
         AtomicFiles.checkFolderUsable(plan.outDir());
+        Stopwatch watch = new Stopwatch();
         Loaded loaded = load(plan);
+        watch.lap("decode");
         double rate = plan.rateHz().orElse(BuildPlan.DEFAULT_RATE_HZ);
         Conditioning conditioning = new Conditioning(plan.removeDc(), plan.trimDbfs(), rate, plan.gainDb(),
                 plan.normalizeDbfs(), plan.fadeInSeconds(), plan.fadeOutSeconds());
@@ -55,6 +57,7 @@ public final class Build {
                 : KaiserResampler.forBits(plan.bits());
         Conditioner.Conditioned conditioned = new Conditioner(resampler).apply(loaded.signal(), conditioning);
         Signal reference = conditioned.signal();
+        watch.lap("condition");
         if (reference.length() == 0) {
             throw InputError.inFile(plan.source(), "nothing is left to build after conditioning"
                     + " (all trimmed?)");
@@ -64,7 +67,9 @@ public final class Build {
                 plan.shaping(), plan.seed());
         Quantizer.Quantized q = quantizer.apply(reference);
         Codes codes = q.codes();
+        watch.lap("quantize");
         double snr = snrDb(reference, codes, table);
+        watch.lap("analyze");
 
         List<String> warnings = new ArrayList<>(loaded.warnings());
         warnings.addAll(conditioned.warnings());
@@ -83,6 +88,7 @@ public final class Build {
         List<Path> files = new ArrayList<>(new SampleArrayEmitter(Templates.bundled()).emit(
                 new SampleArrayEmitter.Request(plan.symbol(), codes, plan.flashQualifier(), toolVersion,
                         settings), plan.outDir()));
+        watch.lap("emit");
         long flash = (long) codes.length() * (plan.bits() <= 8 ? 1 : 2);
         Path txt = plan.outDir().resolve("report.txt");
         Path json = plan.outDir().resolve("report.json");
@@ -91,10 +97,26 @@ public final class Build {
         BuildSummary summary = new BuildSummary(toolVersion, plan.source(), loaded.layout(), plan.symbol(),
                 plan.bits(), rate, codes.length(), codes.length() / rate, plan.dither().label(),
                 plan.shaping().name(), plan.seed(), condText, conditioned.resampler(), table.origin(),
-                q.clippedSamples(), snr, flash, files, warnings);
+                q.clippedSamples(), snr, flash, files, warnings, watch.laps());
         AtomicFiles.writeString(txt, BuildReport.text(summary));
         Json.write(json, BuildReport.json(summary));
         return summary;
+    }
+
+    /** Wall-clock milliseconds per stage, in order. */
+    static final class Stopwatch {
+        private final java.util.LinkedHashMap<String, Double> laps = new java.util.LinkedHashMap<>();
+        private long last = System.nanoTime();
+
+        void lap(String stage) {
+            long now = System.nanoTime();
+            laps.merge(stage, (now - last) / 1e6, Double::sum);
+            last = now;
+        }
+
+        java.util.Map<String, Double> laps() {
+            return laps;
+        }
     }
 
     private static Loaded load(BuildPlan plan) {

@@ -43,6 +43,14 @@ public final class BuildReport {
         return b.toString();
     }
 
+    /** One line of stage timings, for --verbose: "decode 120 ms, condition 80 ms, ...". */
+    public static String timings(BuildSummary s) {
+        StringBuilder b = new StringBuilder("stage timings:");
+        s.stageMillis().forEach((k, v) -> b.append(String.format(Locale.ROOT, " %s %.0f ms,", k, v)));
+        b.setLength(b.length() - 1);
+        return b.toString();
+    }
+
     /** The JSON report, with the stable field names documented in the README. */
     public static Map<String, Object> json(BuildSummary s) {
         Map<String, Object> m = new LinkedHashMap<>();
@@ -66,6 +74,7 @@ public final class BuildReport {
         m.put("flash_bytes", s.flashBytes());
         m.put("files", s.files().stream().map(Path::toString).toList());
         m.put("warnings", List.copyOf(s.warnings()));
+        m.put("stage_ms", s.stageMillis());
         return m;
     }
 }

@@ -25,14 +25,17 @@ import java.util.List;
  * @param flashBytes bytes of sample data
  * @param files files written, in order
  * @param warnings what the user should know
+ * @param stageMillis wall-clock milliseconds per stage, in pipeline order
  */
 public record BuildSummary(String toolVersion, Path source, String sourceLayout, String symbol, int bits,
         double rateHz, int samples, double durationSeconds, String dither, String shaping, long seed,
         String conditioning, String resampler, String ladder, long clippedSamples, double snrDb,
-        long flashBytes, List<Path> files, List<String> warnings) {
+        long flashBytes, List<Path> files, List<String> warnings,
+        java.util.Map<String, Double> stageMillis) {
     /** Copies the lists. */
     public BuildSummary {
         files = List.copyOf(files);
         warnings = List.copyOf(warnings);
+        stageMillis = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(stageMillis));
     }
 }
