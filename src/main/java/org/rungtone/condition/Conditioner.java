@@ -36,48 +36,64 @@ public final class Conditioner {
         }
     }
 
-    /** Conditions {@code source}. */
+    /**
+     * Conditions {@code source}. The source is read in place, never copied whole: trimming picks an index
+     * range, the resampler reads that range, and DC removal, gain and fades work on the resampled result
+     * (when the rate already matches, the range is copied once).
+     */
     public Conditioned apply(Signal source, Conditioning c) {
         List<String> warnings = new ArrayList<>();
         double rate = source.sampleRateHz();
-        double[] x = source.samples();
+        double[] x = source.unsafeSamples();
+        double mean = 0;
         if (c.removeDc() && x.length > 0) {
-            double mean = 0;
             for (double v : x) {
                 mean += v;
             }
             mean /= x.length;
-            for (int i = 0; i < x.length; i++) {
-                x[i] -= mean;
-            }
         }
         double trimmedStart = 0;
         double trimmedEnd = 0;
+        int first = 0;
+        int last = x.length - 1;
         if (c.trimBelowDbfs().isPresent()) {
             double threshold = Math.pow(10, c.trimBelowDbfs().getAsDouble() / 20);
-            int first = 0;
-            while (first < x.length && Math.abs(x[first]) < threshold) {
+            while (first < x.length && Math.abs(x[first] - mean) < threshold) {
                 first++;
             }
-            int last = x.length - 1;
-            while (last >= first && Math.abs(x[last]) < threshold) {
+            while (last >= first && Math.abs(x[last] - mean) < threshold) {
                 last--;
             }
             if (first > last) {
                 warnings.add(String.format(Locale.ROOT,
                         "the whole source is below the %.1f dBFS trim threshold; nothing was trimmed",
                         c.trimBelowDbfs().getAsDouble()));
+                first = 0;
+                last = x.length - 1;
             } else {
                 trimmedStart = first / rate;
                 trimmedEnd = (x.length - 1 - last) / rate;
-                x = Arrays.copyOfRange(x, first, last + 1);
             }
         }
-        Signal s = Signal.wrap(x, rate);
         String how = "none";
+        Signal s;
         if (rate != c.targetRateHz()) {
-            s = resampler.resample(s, c.targetRateHz());
+            s = resampler.resample(source, first, last + 1, c.targetRateHz());
             how = resampler.name();
+        } else {
+            s = Signal.wrap(Arrays.copyOfRange(x, first, last + 1), rate);
+        }
+        if (c.removeDc()) {
+            // The resampled signal's own mean: equal to the source's but for the filter's edge transients.
+            double[] y = s.unsafeSamples();
+            double m = 0;
+            for (double v : y) {
+                m += v;
+            }
+            m = y.length == 0 ? 0 : m / y.length;
+            for (int i = 0; i < y.length; i++) {
+                y[i] -= m;
+            }
         }
         double[] y = s.unsafeSamples();
         double gainDb = 0;

@@ -58,23 +58,31 @@ public final class KaiserResampler implements Resampler {
 
     @Override
     public Signal resample(Signal signal, double targetRateHz) {
+        return resample(signal, 0, signal.length(), targetRateHz);
+    }
+
+    @Override
+    public Signal resample(Signal signal, int from, int to, double targetRateHz) {
         Checks.checkArgument(Double.isFinite(targetRateHz) && targetRateHz > 0,
                 "target rate must be positive: %s", targetRateHz);
+        Checks.checkArgument(from >= 0 && to <= signal.length() && from <= to, "bad range %d..%d", from, to);
         double fin = signal.sampleRateHz();
         if (fin == targetRateHz) {
-            return signal;
+            return from == 0 && to == signal.length() ? signal
+                    : Signal.wrap(java.util.Arrays.copyOfRange(signal.unsafeSamples(), from, to), fin);
         }
         double[] x = signal.unsafeSamples();
         double step = fin / targetRateHz;
-        int outLen = (int) Math.ceil(x.length / step - 1e-9);
+        int length = to - from;
+        int outLen = (int) Math.ceil(length / step - 1e-9);
         Kernel kernel = new Kernel(fin, targetRateHz);
         double[] y = new double[outLen];
         int blocks = (outLen + BLOCK - 1) / BLOCK;
         IntStream.range(0, blocks).parallel().forEach(b -> {
-            int from = b * BLOCK;
-            int to = Math.min(outLen, from + BLOCK);
-            for (int n = from; n < to; n++) {
-                y[n] = kernel.at(x, n);
+            int first = b * BLOCK;
+            int end = Math.min(outLen, first + BLOCK);
+            for (int n = first; n < end; n++) {
+                y[n] = kernel.at(x, from, length, n);
             }
         });
         return Signal.wrap(y, targetRateHz);
@@ -120,7 +128,8 @@ public final class KaiserResampler implements Resampler {
             }
         }
 
-        double at(double[] x, int n) {
+        /** Output sample n of the range x[from .. from+length). */
+        double at(double[] x, int from, int length, int n) {
             long base;
             double[] row;
             double[] row2 = null;
@@ -140,9 +149,9 @@ public final class KaiserResampler implements Resampler {
             }
             long start = base - half + 1;
             int j0 = (int) Math.max(0, -start);
-            int j1 = (int) Math.min(taps, x.length - start);
+            int j1 = (int) Math.min(taps, length - start);
             double acc = 0;
-            int off = (int) start;
+            int off = (int) start + from;
             if (row2 == null) {
                 for (int j = j0; j < j1; j++) {
                     acc += row[j] * x[off + j];
