@@ -3,6 +3,7 @@ package org.rungtone.analysis;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.SplittableRandom;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
@@ -41,6 +42,26 @@ class ToneAnalysisTest {
         assertEquals(-46.02, r.harmonics().get(1).levelDbc(), 0.05);
         assertEquals(20 * Math.log10(0.9), r.amplitudeDbfs(), 1e-3);
         assertTrue(r.snrDb() > 150, "noise-free signal, SNR " + r.snrDb());
+    }
+
+    @Test
+    void snrOfASineInWhiteNoiseIsTheirPowerRatio() {
+        // Sine of amplitude 0.5 plus uniform noise of width w (variance w²/12): SNR = (0.5²/2)/(w²/12),
+        // analytic; with no harmonics SINAD equals SNR and THD sits at the noise in the harmonic lobes.
+        double rate = 48000;
+        int n = 1 << 16;
+        double w = 1e-3;
+        SplittableRandom random = new SplittableRandom(2);
+        double[] x = new double[n];
+        for (int i = 0; i < n; i++) {
+            x[i] = 0.5 * Math.sin(2 * Math.PI * 3001.1 * i / rate) + w * (random.nextDouble() - 0.5);
+        }
+        ToneReport r = ToneAnalysis.analyze(Signal.wrap(x, rate));
+        double expected = 10 * Math.log10(0.125 / (w * w / 12));
+        assertEquals(expected, r.snrDb(), 0.1);
+        assertEquals(expected, r.fftSinadDb(), 0.1);
+        assertEquals(expected, r.sinadDb(), 0.1);
+        assertEquals(10 * Math.log10(w * w / 12 / 0.5), r.noiseFloorDbfs(), 0.1);
     }
 
     @Test
