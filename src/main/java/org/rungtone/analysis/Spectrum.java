@@ -74,7 +74,8 @@ public final class Spectrum {
 
     /**
      * Welch's averaged spectrum over half-overlapping segments of {@code segmentLength} samples (a power of
-     * two); a signal shorter than one segment is analysed whole, zero-padded to the segment length.
+     * two); a signal shorter than one segment is analysed whole, zero-padded to the segment length. The last
+     * partial hop (fewer than segmentLength/2 samples) is left out.
      *
      * @throws IllegalArgumentException when the segment length is not a power of two of at least 2, there
      *     are fewer than two samples, or the rate is not positive
