@@ -65,12 +65,26 @@ public final class Plots {
     public record Chart(String title, String xLabel, String yLabel, boolean logX, List<Series> series) {
     }
 
+    /** Where the legend sits inside the plot area. */
+    public enum Legend {
+        /** Top right (the default). */
+        TOP_RIGHT,
+        /** Bottom right, for data that rise to the right. */
+        BOTTOM_RIGHT
+    }
+
     /** Renders a chart to PNG bytes (800 x 480). */
     public static byte[] png(Chart chart) {
+        return png(chart, Legend.TOP_RIGHT);
+    }
+
+    /** Renders a chart to PNG bytes (800 x 480) with the legend where asked. */
+    public static byte[] png(Chart chart, Legend legend) {
         XYChart c = new XYChartBuilder().width(800).height(480).title(chart.title())
                 .xAxisTitle(chart.xLabel()).yAxisTitle(chart.yLabel()).build();
         c.getStyler().setTheme(new org.knowm.xchart.style.theme.XChartTheme());
-        c.getStyler().setLegendPosition(Styler.LegendPosition.InsideNE);
+        c.getStyler().setLegendPosition(legend == Legend.BOTTOM_RIGHT ? Styler.LegendPosition.InsideSE
+                : Styler.LegendPosition.InsideNE);
         c.getStyler().setXAxisLogarithmic(chart.logX());
         c.getStyler().setChartBackgroundColor(Color.WHITE);
         c.getStyler().setPlotGridLinesColor(new Color(0xdd, 0xdd, 0xdd));
@@ -116,5 +130,10 @@ public final class Plots {
     /** Renders a chart and writes it atomically to {@code file}. */
     public static void write(Path file, Chart chart) {
         AtomicFiles.writeBytes(file, png(chart));
+    }
+
+    /** Renders a chart with the legend where asked and writes it atomically to {@code file}. */
+    public static void write(Path file, Chart chart, Legend legend) {
+        AtomicFiles.writeBytes(file, png(chart, legend));
     }
 }

@@ -1,0 +1,216 @@
+package org.rungtone.analysis;
+
+import java.util.Arrays;
+import org.rungtone.internal.Checks;
+import org.rungtone.ladder.LevelTable;
+import org.rungtone.quantize.Codes;
+import org.rungtone.source.Signal;
+
+/**
+ * Error-based quality of arbitrary audio: an output (codes through a level table, or any signal at the
+ * reference's rate) against the conditioned reference it was made from.
+ *
+ * <p>Alignment: the output is modelled as {@code o = g·r + c + g·e}; least squares give
+ * {@code g = Σ(r − r̄)(o − ō) / Σ(r − r̄)²} and {@code c = ō − g·r̄}, and the error in reference units is
+ * {@code e = (o − c)/g − r}. Fitting the output to the reference (as the sine fit of IEEE Std 1241-2010
+ * fits a model to the output) leaves an error that is uncorrelated with the reference unbiased, and makes
+ * gain and offset errors of the ladder invisible: they are not noise.
+ *
+ * <p>Figures, with {@code P_r} the reference's mean square (mean removed) and {@code P_e} the error's:
+ * SINAD = {@code P_r/P_e}; in-band SNR = {@code (P_r·φ_r)/(P_e·φ_e)}, where φ is the fraction of a signal's
+ * power at or below the cutoff in its Welch spectrum (Hann window, 8192-sample segments, half overlap);
+ * A-weighted SNR = {@code P_r/(P_e·α_e)}, α the A-weighted fraction of the error's power (IEC 61672-1; the
+ * reference is left unweighted, as for A-weighted noise figures in AES17); ENOB = {@code (10·log10(½/P_e)
+ * − 1.76)/6.02}, which measures the error against a full-scale sine and so equals N for an ideal N-bit
+ * quantizer whatever the programme's level (the 1.76 and 6.02 of IEEE Std 1241-2010). Power fractions
+ * rather than absolute spectral sums keep the in-band figure equal to SINAD when the cutoff is rate/2.
+ *
+ * <p>Immutable and thread-safe: the reference's figures are computed once, in {@link #of}.
+ */
+public final class AudioMetrics {
+    /** Welch segment length for the in-band and weighted fractions. */
+    public static final int SEGMENT_LENGTH = 8192;
+
+    private final Signal reference;
+    private final double inBandCutoffHz;
+    private final double referenceMean;
+    private final double referenceSumSquares;
+    private final double referenceInBandFraction;
+
+    private AudioMetrics(Signal reference, double inBandCutoffHz, double referenceMean,
+            double referenceSumSquares, double referenceInBandFraction) {
+        this.reference = reference;
+        this.inBandCutoffHz = inBandCutoffHz;
+        this.referenceMean = referenceMean;
+        this.referenceSumSquares = referenceSumSquares;
+        this.referenceInBandFraction = referenceInBandFraction;
+    }
+
+    /**
+     * Prepares measurements against {@code reference}; the in-band cutoff is clamped to rate/2.
+     *
+     * @throws org.rungtone.internal.InputError when the reference is constant (nothing to measure)
+     * @throws IllegalArgumentException when the reference has fewer than 16 samples or the cutoff is not
+     *     positive
+     */
+    public static AudioMetrics of(Signal reference, double inBandCutoffHz) {
+        double[] r = reference.unsafeSamples();
+        Checks.checkArgument(r.length >= 16, "quality figures need at least 16 samples: %d", r.length);
+        Checks.checkArgument(inBandCutoffHz > 0, "the in-band cutoff must be positive: %s", inBandCutoffHz);
+        double cutoff = Math.min(inBandCutoffHz, reference.sampleRateHz() / 2);
+        double mean = 0;
+        for (double v : r) {
+            mean += v;
+        }
+        mean /= r.length;
+        double ss = 0;
+        double[] centred = new double[r.length];
+        for (int i = 0; i < r.length; i++) {
+            centred[i] = r[i] - mean;
+            ss += centred[i] * centred[i];
+        }
+        Checks.checkInput(ss > 0, "the reference signal is constant, so there is no sound to measure "
+                + "quality against; use a source with some signal in it");
+        Spectrum s = spectrum(centred, reference.sampleRateHz());
+        double fraction = s.bandPower(0, cutoff) / s.totalPower();
+        return new AudioMetrics(reference, cutoff, mean, ss, fraction);
+    }
+
+    /** One-off measurement of {@code output} against {@code reference}. */
+    public static QualityReport measure(String label, Signal reference, Signal output, double inBandCutoffHz) {
+        return of(reference, inBandCutoffHz).measure(label, output);
+    }
+
+    /** The reference measured against. */
+    public Signal reference() {
+        return reference;
+    }
+
+    /** Upper edge of the in-band figure in hertz (clamped to rate/2). */
+    public double inBandCutoffHz() {
+        return inBandCutoffHz;
+    }
+
+    /**
+     * Measures an output signal at the reference's rate and length; its units are free (alignment removes
+     * gain and offset).
+     *
+     * @throws IllegalArgumentException when the rate or length differs from the reference's
+     */
+    public QualityReport measure(String label, Signal output) {
+        Checks.checkArgument(output.sampleRateHz() == reference.sampleRateHz(),
+                "output rate %s Hz differs from the reference's %s Hz", output.sampleRateHz(),
+                reference.sampleRateHz());
+        return measure(label, output.unsafeSamples());
+    }
+
+    /**
+     * Measures codes played through a level table (the volts the board would put out).
+     *
+     * @throws IllegalArgumentException when the bit depths, rates or lengths do not match
+     */
+    public QualityReport measure(String label, Codes codes, LevelTable table) {
+        Checks.checkArgument(codes.bits() == table.bits(), "codes have %d bits, the table %d", codes.bits(),
+                table.bits());
+        Checks.checkArgument(codes.sampleRateHz() == reference.sampleRateHz(),
+                "codes rate %s Hz differs from the reference's %s Hz", codes.sampleRateHz(),
+                reference.sampleRateHz());
+        return measure(label, volts(codes, table));
+    }
+
+    /** The volts of every code through the table. */
+    public static double[] volts(Codes codes, LevelTable table) {
+        int[] c = codes.unsafeCodes();
+        double[] v = new double[c.length];
+        for (int i = 0; i < c.length; i++) {
+            v[i] = table.volts(c[i]);
+        }
+        return v;
+    }
+
+    /**
+     * Measures output samples at the reference's rate.
+     *
+     * @throws IllegalArgumentException when the length differs from the reference's
+     */
+    public QualityReport measure(String label, double[] output) {
+        Alignment a = align(output);
+        double[] e = a.error();
+        double pr = referenceSumSquares / e.length;
+        double pe = 0;
+        for (double v : e) {
+            pe += v * v;
+        }
+        pe /= e.length;
+        double inBandError;
+        double weightedError;
+        if (pe > 0 && Double.isFinite(pe)) {
+            Spectrum s = spectrum(e, reference.sampleRateHz());
+            double total = s.totalPower();
+            inBandError = pe * s.bandPower(0, inBandCutoffHz) / total;
+            weightedError = pe * s.weightedPower(AWeighting::powerGain) / total;
+        } else {
+            inBandError = pe;
+            weightedError = pe;
+        }
+        double errorDbfs = db(pe / 0.5);
+        return new QualityReport(label, reference.sampleRateHz(), e.length, inBandCutoffHz, db(pr / 0.5),
+                db(pr / pe), db(pr * referenceInBandFraction / inBandError), db(pr / weightedError),
+                (-errorDbfs - 1.76) / 6.02, errorDbfs, a.gain(), a.offset());
+    }
+
+    /**
+     * The aligned error of an output, in reference units (see the class comment).
+     *
+     * @throws IllegalArgumentException when the length differs from the reference's
+     */
+    public double[] alignedError(double[] output) {
+        return align(output).error();
+    }
+
+    /** Welch spectrum of the aligned error (Hann, 8192-sample segments), for plots. */
+    public Spectrum errorSpectrum(double[] output) {
+        return spectrum(alignedError(output), reference.sampleRateHz());
+    }
+
+    private Alignment align(double[] o) {
+        double[] r = reference.unsafeSamples();
+        Checks.checkArgument(o.length == r.length, "output has %d samples, the reference %d", o.length,
+                r.length);
+        int n = r.length;
+        double mo = 0;
+        for (double v : o) {
+            mo += v;
+        }
+        mo /= n;
+        double sro = 0;
+        for (int i = 0; i < n; i++) {
+            sro += (r[i] - referenceMean) * (o[i] - mo);
+        }
+        double gain = sro / referenceSumSquares;
+        double offset = mo - gain * referenceMean;
+        double[] e = new double[n];
+        if (gain > 0) {
+            double inv = 1 / gain;
+            for (int i = 0; i < n; i++) {
+                e[i] = (o[i] - offset) * inv - r[i];
+            }
+        } else {
+            // The output carries none of the reference: the error is unbounded.
+            Arrays.fill(e, Double.POSITIVE_INFINITY);
+        }
+        return new Alignment(gain, offset, e);
+    }
+
+    private static Spectrum spectrum(double[] x, double rate) {
+        int segment = Math.min(SEGMENT_LENGTH, Spectrum.nextPowerOfTwo(Math.max(16, x.length)));
+        return Spectrum.welch(x, rate, Window.HANN, segment);
+    }
+
+    private static double db(double ratio) {
+        return 10 * Math.log10(ratio);
+    }
+
+    private record Alignment(double gain, double offset, double[] error) {
+    }
+}

@@ -1,0 +1,235 @@
+package org.rungtone.analysis;
+
+import java.util.function.DoubleUnaryOperator;
+import org.apache.commons.math3.transform.DftNormalization;
+import org.apache.commons.math3.transform.FastFourierTransformer;
+import org.apache.commons.math3.transform.TransformType;
+import org.rungtone.internal.Checks;
+
+/**
+ * A single-sided power spectrum, calibrated so that the bins add up to the signal's power.
+ *
+ * <p>With window {@code w} over the {@code n} analysed samples and a transform of length {@code M ≥ n}
+ * (zero-padded; longer input is trimmed to its first M samples), bin k holds
+ * {@code P_k = c_k·|X_k|² / (M·Σw²) / ½}, {@code c_k = 2} for 0 &lt; k &lt; M/2 and 1 at DC and M/2. By
+ * Parseval ({@code Σ|X_k|² = M·Σ|x·w|²}) the bins sum to the mean square of the signal, here expressed
+ * relative to the power of a full-scale sine (½), so a full-scale sine adds up to 1 (0 dBFS). This is the
+ * noise-calibrated form: sums over bins give band powers. A pure tone's peak bin reads lower by the
+ * window's equivalent noise bandwidth {@code ENBW = M·Σw²/(Σw)²} bins; {@link #toneDbfs} adds it back for
+ * tone-calibrated displays. Welch's method averages such spectra over half-overlapping segments (P. D.
+ * Welch, IEEE Trans. Audio Electroacoust. 15(2), 1967). Transforms use Commons Math's in-place radix-2 FFT.
+ */
+public final class Spectrum {
+    private static final double FULL_SCALE_SINE_POWER = 0.5;
+
+    private final double sampleRateHz;
+    private final int fftLength;
+    private final int analysedLength;
+    private final Window window;
+    private final double enbwBins;
+    private final double[] power;
+
+    private Spectrum(double sampleRateHz, int fftLength, int analysedLength, Window window, double enbwBins,
+            double[] power) {
+        this.sampleRateHz = sampleRateHz;
+        this.fftLength = fftLength;
+        this.analysedLength = analysedLength;
+        this.window = window;
+        this.enbwBins = enbwBins;
+        this.power = power;
+    }
+
+    /**
+     * The spectrum of all of {@code samples}, zero-padded to the next power of two.
+     *
+     * @throws IllegalArgumentException when there are fewer than two samples or the rate is not positive
+     */
+    public static Spectrum of(double[] samples, double sampleRateHz, Window window) {
+        return of(samples, sampleRateHz, window, nextPowerOfTwo(Math.max(2, samples.length)));
+    }
+
+    /**
+     * The spectrum with a transform of {@code fftLength} points: shorter input is zero-padded, longer input is
+     * trimmed to its first {@code fftLength} samples.
+     *
+     * @throws IllegalArgumentException when {@code fftLength} is not a power of two of at least 2, there are
+     *     fewer than two samples, or the rate is not positive
+     */
+    public static Spectrum of(double[] samples, double sampleRateHz, Window window, int fftLength) {
+        checkCommon(samples, sampleRateHz, fftLength);
+        int n = Math.min(samples.length, fftLength);
+        double[] w = window.values(n);
+        double[][] ri = new double[2][fftLength];
+        double sw = 0;
+        double sw2 = 0;
+        for (int i = 0; i < n; i++) {
+            ri[0][i] = samples[i] * w[i];
+            sw += w[i];
+            sw2 += w[i] * w[i];
+        }
+        double[] p = new double[fftLength / 2 + 1];
+        accumulate(ri, p, 1.0 / (fftLength * sw2));
+        return new Spectrum(sampleRateHz, fftLength, n, window, fftLength * sw2 / (sw * sw), p);
+    }
+
+    /**
+     * Welch's averaged spectrum over half-overlapping segments of {@code segmentLength} samples (a power of
+     * two); a signal shorter than one segment is analysed whole, zero-padded to the segment length. The last
+     * partial hop (fewer than segmentLength/2 samples) is left out.
+     *
+     * @throws IllegalArgumentException when the segment length is not a power of two of at least 2, there
+     *     are fewer than two samples, or the rate is not positive
+     */
+    public static Spectrum welch(double[] samples, double sampleRateHz, Window window, int segmentLength) {
+        checkCommon(samples, sampleRateHz, segmentLength);
+        if (samples.length <= segmentLength) {
+            return of(samples, sampleRateHz, window, segmentLength);
+        }
+        double[] w = window.values(segmentLength);
+        double sw = 0;
+        double sw2 = 0;
+        for (double v : w) {
+            sw += v;
+            sw2 += v * v;
+        }
+        int hop = segmentLength / 2;
+        int segments = 1 + (samples.length - segmentLength) / hop;
+        double[] p = new double[segmentLength / 2 + 1];
+        double[][] ri = new double[2][segmentLength];
+        double scale = 1.0 / (segmentLength * sw2 * segments);
+        for (int s = 0; s < segments; s++) {
+            int start = s * hop;
+            for (int i = 0; i < segmentLength; i++) {
+                ri[0][i] = samples[start + i] * w[i];
+                ri[1][i] = 0;
+            }
+            accumulate(ri, p, scale);
+        }
+        return new Spectrum(sampleRateHz, segmentLength, segmentLength, window, segmentLength * sw2 / (sw * sw),
+                p);
+    }
+
+    private static void checkCommon(double[] samples, double sampleRateHz, int fftLength) {
+        Checks.checkArgument(samples.length >= 2, "a spectrum needs at least two samples: %d", samples.length);
+        Checks.checkArgument(Double.isFinite(sampleRateHz) && sampleRateHz > 0,
+                "sample rate must be positive: %s", sampleRateHz);
+        Checks.checkArgument(fftLength >= 2 && Integer.bitCount(fftLength) == 1,
+                "transform length must be a power of two: %d", fftLength);
+    }
+
+    /** Transforms {@code ri} in place and adds its scaled single-sided power into {@code p}. */
+    private static void accumulate(double[][] ri, double[] p, double scale) {
+        FastFourierTransformer.transformInPlace(ri, DftNormalization.STANDARD, TransformType.FORWARD);
+        int m = ri[0].length;
+        int half = m / 2;
+        double toFullScale = scale / FULL_SCALE_SINE_POWER;
+        for (int k = 0; k <= half; k++) {
+            double re = ri[0][k];
+            double im = ri[1][k];
+            double c = k == 0 || k == half ? 1 : 2;
+            p[k] += c * (re * re + im * im) * toFullScale;
+        }
+    }
+
+    /** The smallest power of two at least {@code n} (n ≤ 2^30). */
+    public static int nextPowerOfTwo(int n) {
+        Checks.checkArgument(n >= 1 && n <= 1 << 30, "length out of range: %d", n);
+        return n == 1 ? 1 : Integer.highestOneBit(n - 1) << 1;
+    }
+
+    /** Sample rate of the analysed signal in hertz. */
+    public double sampleRateHz() {
+        return sampleRateHz;
+    }
+
+    /** Transform length M. */
+    public int fftLength() {
+        return fftLength;
+    }
+
+    /** Number of samples under the window (per segment for Welch spectra). */
+    public int analysedLength() {
+        return analysedLength;
+    }
+
+    /** The window used. */
+    public Window window() {
+        return window;
+    }
+
+    /** Equivalent noise bandwidth of the window in bins of this transform. */
+    public double enbwBins() {
+        return enbwBins;
+    }
+
+    /** Half-width in bins of a tone's main lobe, allowing for zero-padding, plus one bin of margin. */
+    public int mainLobeHalfWidthBins() {
+        return (int) Math.ceil(window.mainLobeHalfWidthBins() * (double) fftLength / analysedLength) + 1;
+    }
+
+    /** Number of bins, M/2 + 1 (DC to Nyquist). */
+    public int bins() {
+        return power.length;
+    }
+
+    /** Bin spacing in hertz, rate/M. */
+    public double binHz() {
+        return sampleRateHz / fftLength;
+    }
+
+    /** Centre frequency of bin {@code k} in hertz. */
+    public double frequencyHz(int k) {
+        return k * binHz();
+    }
+
+    /** Power of bin {@code k} relative to a full-scale sine (noise-calibrated; linear). */
+    public double power(int k) {
+        return power[k];
+    }
+
+    /** A copy of all bin powers (linear, relative to a full-scale sine). */
+    public double[] powers() {
+        return power.clone();
+    }
+
+    /** Bin {@code k} in dBFS (noise-calibrated). */
+    public double powerDbfs(int k) {
+        return 10 * Math.log10(power[k]);
+    }
+
+    /** Bin {@code k} in dBFS as a tone reads it: the noise-calibrated value plus the ENBW in dB. */
+    public double toneDbfs(int k) {
+        return 10 * Math.log10(power[k] * enbwBins);
+    }
+
+    /** Sum of all bins: the signal's mean square relative to a full-scale sine. */
+    public double totalPower() {
+        double s = 0;
+        for (double v : power) {
+            s += v;
+        }
+        return s;
+    }
+
+    /** Sum of the bins whose centre lies in [lowHz, highHz]. */
+    public double bandPower(double lowHz, double highHz) {
+        double bin = binHz();
+        int k0 = Math.max(0, (int) Math.ceil(lowHz / bin - 1e-9));
+        int k1 = Math.min(power.length - 1, (int) Math.floor(highHz / bin + 1e-9));
+        double s = 0;
+        for (int k = k0; k <= k1; k++) {
+            s += power[k];
+        }
+        return s;
+    }
+
+    /** Sum of the bins weighted by a power gain of frequency, {@code Σ P_k·g(f_k)}. */
+    public double weightedPower(DoubleUnaryOperator powerGainOfHz) {
+        double s = 0;
+        double bin = binHz();
+        for (int k = 0; k < power.length; k++) {
+            s += power[k] * powerGainOfHz.applyAsDouble(k * bin);
+        }
+        return s;
+    }
+}

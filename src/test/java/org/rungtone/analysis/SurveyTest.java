@@ -1,0 +1,97 @@
+package org.rungtone.analysis;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.DoubleFunction;
+import org.junit.jupiter.api.Test;
+import org.rungtone.source.Signal;
+
+class SurveyTest {
+    private static final double AMPLITUDE = 0.9;
+    private static final DoubleFunction<Signal> TONE =
+            rate -> TestSignals.sine(AMPLITUDE, 300, 0, rate, (int) (0.5 * rate));
+
+    private static SurveySpec.Builder small() {
+        return SurveySpec.builder().bitDepths(List.of(4, 8, 12)).ratesHz(List.of(8000.0, 16000.0)).seed(3);
+    }
+
+    @Test
+    void everyCellHasItsFiguresAndFlashBytes() {
+        SurveyResult result = Survey.run(small().build(), TONE);
+        assertEquals(6, result.rows().size());
+        SurveyRow first = result.rows().get(0);
+        assertEquals(4, first.bits());
+        assertEquals(8000, first.rateHz(), 0);
+        assertEquals(12, result.rows().get(5).bits());
+        assertEquals(16000, result.rows().get(5).rateHz(), 0);
+        for (SurveyRow r : result.rows()) {
+            int n = (int) (0.5 * r.rateHz());
+            assertEquals(n, r.samples());
+            assertEquals((long) n * (r.bits() <= 8 ? 1 : 2), r.flashBytesUnpacked());
+            assertEquals(((long) n * r.bits() + 7) / 8, r.flashBytesPacked());
+            // TPDF-dithered ideal quantizer: error power LSB²/4 with LSB = 2/(2^N − 1) (Lipshitz,
+            // Wannamaker, Vanderkooy 1992), against the tone's AMPLITUDE²/2.
+            double lsb = 2 / (Math.pow(2, r.bits()) - 1);
+            double expected = 10 * Math.log10(AMPLITUDE * AMPLITUDE / 2 / (lsb * lsb / 4));
+            assertEquals(expected, r.sinadDb(), 0.3, r.bits() + " bits at " + r.rateHz());
+            assertTrue(r.fits());
+            assertFalse(r.chosen());
+        }
+        assertTrue(result.chosen().isEmpty());
+    }
+
+    @Test
+    void choosesTheFewestFlashBytesThatReachTheTarget() {
+        // TPDF costs 4.77 dB, 0.79 bit: 8 bits give ENOB ≈ 7.2, 4 bits ≈ 3.2.
+        SurveyResult result = Survey.run(small().target(SurveyTarget.enobBits(7)).build(), TONE);
+        SurveyRow chosen = result.chosen().orElseThrow();
+        assertEquals(8, chosen.bits());
+        assertEquals(8000, chosen.rateHz(), 0);
+        assertEquals(1, result.rows().stream().filter(SurveyRow::chosen).count());
+
+        SurveyResult tight = Survey.run(small().target(SurveyTarget.enobBits(7)).flashBudgetBytes(3999).build(),
+                TONE);
+        assertTrue(tight.chosen().isEmpty());
+        assertFalse(tight.rows().get(1).fits());
+        assertEquals(3999L, tight.flashBudgetBytes());
+    }
+
+    @Test
+    void equalFlashGoesToFewerBits() {
+        // Unpacked, 6 and 8 bits cost the same byte per sample; both reach 20 dB SINAD.
+        SurveySpec spec = small().bitDepths(List.of(8, 6)).target(SurveyTarget.sinadDb(20)).build();
+        assertEquals(6, Survey.run(spec, TONE).chosen().orElseThrow().bits());
+        // Packed, fewer bits are cheaper: 4 bits reach 18 dB (19.6 dB with TPDF) and win.
+        SurveySpec packed = small().packed(true).target(SurveyTarget.sinadDb(18)).build();
+        assertEquals(4, Survey.run(packed, TONE).chosen().orElseThrow().bits());
+    }
+
+    @Test
+    void resultDoesNotDependOnTheNumberOfThreads() {
+        SurveySpec spec = small().target(SurveyTarget.sinadDb(30)).build();
+        assertEquals(Survey.run(spec.toBuilder().threads(1).build(), TONE),
+                Survey.run(spec.toBuilder().threads(3).build(), TONE));
+    }
+
+    @Test
+    void reportsProgressOncePerCell() {
+        List<Integer> seen = new ArrayList<>();
+        Survey.run(small().build(), TONE, (done, total) -> {
+            assertEquals(6, total);
+            seen.add(done);
+        });
+        assertEquals(List.of(1, 2, 3, 4, 5, 6), seen);
+    }
+
+    @Test
+    void rejectsAReferenceAtTheWrongRate() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> Survey.run(small().build(), rate -> TestSignals.sine(0.5, 300, 0, 44100, 1000)));
+        assertTrue(e.getMessage().startsWith("reference for 8000.0 Hz came at 44100.0 Hz"), e.getMessage());
+    }
+}
