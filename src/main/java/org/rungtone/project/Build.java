@@ -22,7 +22,6 @@ import org.rungtone.report.BuildReport;
 import org.rungtone.report.BuildSummary;
 import org.rungtone.report.Json;
 import org.rungtone.source.Signal;
-import org.rungtone.source.WavReader;
 
 /**
  * Runs one {@link BuildPlan}: read the source, condition it, quantize onto the level table, measure, emit C
@@ -36,10 +35,6 @@ public final class Build {
         this.toolVersion = toolVersion;
     }
 
-    /** A loaded source: the signal and a description of its layout. */
-    record Loaded(Signal signal, String layout, List<String> warnings) {
-    }
-
     /**
      * Runs the plan and writes every output into the plan's folder.
      *
@@ -48,7 +43,8 @@ public final class Build {
     public BuildSummary run(BuildPlan plan) {
         AtomicFiles.checkFolderUsable(plan.outDir());
         Stopwatch watch = new Stopwatch();
-        Loaded loaded = load(plan);
+        Sources.Loaded loaded = Sources.load(plan.source(), plan.channel(), plan.rateHz().orElse(Double.NaN),
+                plan.seed());
         watch.lap("decode");
         double rate = plan.rateHz().orElse(BuildPlan.DEFAULT_RATE_HZ);
         Conditioning conditioning = new Conditioning(plan.removeDc(), plan.trimDbfs(), rate, plan.gainDb(),
@@ -117,18 +113,6 @@ public final class Build {
         java.util.Map<String, Double> laps() {
             return laps;
         }
-    }
-
-    private static Loaded load(BuildPlan plan) {
-        Path src = plan.source();
-        String name = src.getFileName() == null ? "" : src.getFileName().toString().toLowerCase(Locale.ROOT);
-        if (name.endsWith(".wav") || name.endsWith(".wave")) {
-            WavReader.Decoded d = WavReader.read(src, plan.channel());
-            String layout = d.format().describe() + (d.format().channels() > 1
-                    ? (plan.channel() == 0 ? ", mixed down" : ", channel " + plan.channel()) : "");
-            return new Loaded(d.signal(), layout, d.warnings());
-        }
-        throw InputError.inFile(src, "is not a source Rungtone reads; give a .wav file or a .rung script");
     }
 
     /** Aligned error SNR of the codes' levels, back in signal units, against the reference. */

@@ -1,0 +1,45 @@
+package org.rungtone.project;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+import org.rungtone.internal.InputError;
+import org.rungtone.source.Signal;
+import org.rungtone.source.WavReader;
+
+/** Loads a source file of any kind Rungtone reads into a mono {@link Signal}. */
+public final class Sources {
+    private Sources() {
+    }
+
+    /**
+     * A loaded source.
+     *
+     * @param signal the mono signal at the source's own rate
+     * @param layout a one-line description of what was read
+     * @param warnings non-fatal problems
+     */
+    public record Loaded(Signal signal, String layout, List<String> warnings) {
+        /** Copies the warnings. */
+        public Loaded {
+            warnings = List.copyOf(warnings);
+        }
+    }
+
+    /**
+     * Loads a .wav file (mixed down, or one channel) or a .rung script (rendered at {@code scriptRateHz}, or
+     * its own declared rate when that is NaN).
+     *
+     * @throws InputError naming the file for anything unreadable
+     */
+    public static Loaded load(Path source, int channel, double scriptRateHz, long seed) {
+        String name = source.getFileName() == null ? "" : source.getFileName().toString().toLowerCase(Locale.ROOT);
+        if (name.endsWith(".wav") || name.endsWith(".wave")) {
+            WavReader.Decoded d = WavReader.read(source, channel);
+            String layout = d.format().describe() + (d.format().channels() > 1
+                    ? (channel == 0 ? ", mixed down" : ", channel " + channel) : "");
+            return new Loaded(d.signal(), layout, d.warnings());
+        }
+        throw InputError.inFile(source, "is not a source Rungtone reads; give a .wav file or a .rung script");
+    }
+}

@@ -1,0 +1,253 @@
+package org.rungtone.project;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.Set;
+import org.rungtone.internal.InputError;
+import org.rungtone.internal.Units;
+import org.tomlj.TomlArray;
+import org.tomlj.TomlPosition;
+import org.tomlj.TomlTable;
+
+/**
+ * Typed, position-aware reading of one TOML table of a project file. Every value read is remembered, so
+ * {@link #rejectUnknown()} can name the keys that were never read, with their line and the nearest known key.
+ * Errors read {@code FILE:LINE: SECTION.KEY: what is wrong; an example of what is right}.
+ */
+final class TomlFields {
+    private final TomlTable table;
+    private final Path file;
+    private final String section;
+    private final Set<String> known = new LinkedHashSet<>();
+
+    TomlFields(TomlTable table, Path file, String section) {
+        this.table = table;
+        this.file = file;
+        this.section = section;
+    }
+
+    Path file() {
+        return file;
+    }
+
+    TomlTable table() {
+        return table;
+    }
+
+    String section() {
+        return section;
+    }
+
+    /** The line of a key, or of the table when the key is absent. */
+    int line(String key) {
+        TomlPosition p = table.inputPositionOf(key);
+        return p == null ? 0 : p.line();
+    }
+
+    InputError error(String key, String message) {
+        int line = line(key);
+        return new InputError(file + (line > 0 ? ":" + line : "") + ": " + qualified(key) + ": " + message);
+    }
+
+    private String qualified(String key) {
+        return section.isEmpty() ? key : section + "." + key;
+    }
+
+    boolean has(String key) {
+        known.add(key);
+        return table.contains(key);
+    }
+
+    /** Declares keys that are read elsewhere (for example a sub-table handed to another reader). */
+    void declare(String... keys) {
+        known.addAll(List.of(keys));
+    }
+
+    Optional<String> string(String key) {
+        if (!has(key)) {
+            return Optional.empty();
+        }
+        Object v = table.get(key);
+        if (!(v instanceof String s)) {
+            throw error(key, "expected a string in quotes, got " + describe(v));
+        }
+        return Optional.of(s);
+    }
+
+    /** A string that must be one of {@code choices} (case-insensitive); returned in lower case. */
+    Optional<String> choice(String key, String... choices) {
+        Optional<String> s = string(key);
+        if (s.isPresent()) {
+            String v = s.get().toLowerCase(Locale.ROOT);
+            if (!List.of(choices).contains(v)) {
+                throw error(key, "'" + s.get() + "' is not one of " + String.join(", ", choices));
+            }
+            return Optional.of(v);
+        }
+        return s;
+    }
+
+    Optional<Long> integer(String key, long min, long max) {
+        if (!has(key)) {
+            return Optional.empty();
+        }
+        Object v = table.get(key);
+        if (!(v instanceof Long n)) {
+            throw error(key, "expected a whole number, got " + describe(v));
+        }
+        if (n < min || n > max) {
+            throw error(key, "must be " + min + ".." + max + ", got " + n);
+        }
+        return Optional.of(n);
+    }
+
+    Optional<Boolean> bool(String key) {
+        if (!has(key)) {
+            return Optional.empty();
+        }
+        Object v = table.get(key);
+        if (!(v instanceof Boolean b)) {
+            throw error(key, "expected true or false, got " + describe(v));
+        }
+        return Optional.of(b);
+    }
+
+    /** A quantity written as a number (SI units) or a string with a suffix, e.g. "16k", "250ms", "5V". */
+    OptionalDouble quantity(String key, String unit) {
+        if (!has(key)) {
+            return OptionalDouble.empty();
+        }
+        Object v = table.get(key);
+        if (v instanceof Long n) {
+            return OptionalDouble.of(n);
+        }
+        if (v instanceof Double d) {
+            return OptionalDouble.of(d);
+        }
+        if (v instanceof String s) {
+            try {
+                return OptionalDouble.of(Units.parse(s, unit));
+            } catch (InputError e) {
+                throw error(key, e.getMessage());
+            }
+        }
+        throw error(key, "expected a number or a string like \"16k\", got " + describe(v));
+    }
+
+    /** A level in dB, written as a number or a string like "-1dB". */
+    OptionalDouble decibels(String key) {
+        if (!has(key)) {
+            return OptionalDouble.empty();
+        }
+        Object v = table.get(key);
+        if (v instanceof Long n) {
+            return OptionalDouble.of(n);
+        }
+        if (v instanceof Double d) {
+            return OptionalDouble.of(d);
+        }
+        if (v instanceof String s) {
+            String t = s.trim().replaceFirst("(?i)dbfs$|(?i)db$", "");
+            try {
+                return OptionalDouble.of(Double.parseDouble(t));
+            } catch (NumberFormatException e) {
+                throw error(key, "'" + s + "' is not a level in dB (e.g. -1 or \"-6dB\")");
+            }
+        }
+        throw error(key, "expected a level in dB, got " + describe(v));
+    }
+
+    Optional<TomlFields> table(String key) {
+        if (!has(key)) {
+            return Optional.empty();
+        }
+        Object v = table.get(key);
+        if (!(v instanceof TomlTable t)) {
+            throw error(key, "expected a table, got " + describe(v));
+        }
+        return Optional.of(new TomlFields(t, file, qualified(key)));
+    }
+
+    /** An array of tables ({@code [[sound]]}), each with its index in the section name. */
+    List<TomlFields> tables(String key) {
+        List<TomlFields> out = new ArrayList<>();
+        if (!has(key)) {
+            return out;
+        }
+        Object v = table.get(key);
+        if (!(v instanceof TomlArray a) || (!a.isEmpty() && !(a.get(0) instanceof TomlTable))) {
+            throw error(key, "expected one or more [[" + key + "]] tables");
+        }
+        for (int i = 0; i < a.size(); i++) {
+            out.add(new TomlFields(a.getTable(i), file, qualified(key) + "[" + (i + 1) + "]"));
+        }
+        return out;
+    }
+
+    /** Fails on the first key that was never read, naming its line and the nearest known key. */
+    void rejectUnknown() {
+        for (String key : table.keySet()) {
+            if (!known.contains(key)) {
+                String near = nearest(key);
+                throw error(key, "unknown key" + (near == null ? "" : "; did you mean '" + near + "'?")
+                        + " (known: " + String.join(", ", known) + ")");
+            }
+        }
+    }
+
+    private String nearest(String key) {
+        String best = null;
+        int bestD = Integer.MAX_VALUE;
+        for (String k : known) {
+            int d = distance(key, k);
+            if (d < bestD) {
+                bestD = d;
+                best = k;
+            }
+        }
+        return bestD <= Math.max(2, key.length() / 3) ? best : null;
+    }
+
+    static int distance(String a, String b) {
+        int[] prev = new int[b.length() + 1];
+        int[] cur = new int[b.length() + 1];
+        for (int j = 0; j <= b.length(); j++) {
+            prev[j] = j;
+        }
+        for (int i = 1; i <= a.length(); i++) {
+            cur[0] = i;
+            for (int j = 1; j <= b.length(); j++) {
+                int cost = a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1;
+                cur[j] = Math.min(Math.min(cur[j - 1] + 1, prev[j] + 1), prev[j - 1] + cost);
+            }
+            int[] t = prev;
+            prev = cur;
+            cur = t;
+        }
+        return prev[b.length()];
+    }
+
+    static String describe(Object v) {
+        if (v instanceof String s) {
+            return "the string \"" + s + "\"";
+        }
+        if (v instanceof Long || v instanceof Double) {
+            return "the number " + v;
+        }
+        if (v instanceof Boolean) {
+            return v.toString();
+        }
+        if (v instanceof TomlTable) {
+            return "a table";
+        }
+        if (v instanceof TomlArray) {
+            return "an array";
+        }
+        return v == null ? "nothing" : "a " + v.getClass().getSimpleName();
+    }
+}
