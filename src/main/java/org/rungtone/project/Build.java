@@ -2,9 +2,18 @@ package org.rungtone.project;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
-import org.rungtone.analysis.ErrorMetrics;
+import java.util.Map;
+import java.util.Optional;
+import org.rungtone.analysis.AnalogModel;
+import org.rungtone.analysis.AudioMetrics;
+import org.rungtone.analysis.QualityReport;
+import org.rungtone.analysis.SineFit;
+import org.rungtone.analysis.ToneAnalysis;
+import org.rungtone.analysis.ToneReport;
 import org.rungtone.condition.Conditioner;
 import org.rungtone.condition.Conditioning;
 import org.rungtone.condition.KaiserResampler;
@@ -17,17 +26,30 @@ import org.rungtone.internal.InputError;
 import org.rungtone.internal.Units;
 import org.rungtone.ladder.LevelTable;
 import org.rungtone.quantize.Codes;
+import org.rungtone.quantize.ErrorFilter;
 import org.rungtone.quantize.Quantizer;
+import org.rungtone.report.AnalysisPlots;
 import org.rungtone.report.BuildReport;
 import org.rungtone.report.BuildSummary;
 import org.rungtone.report.Json;
 import org.rungtone.source.Signal;
+import org.rungtone.source.WavWriter;
 
 /**
- * Runs one {@link BuildPlan}: read the source, condition it, quantize onto the level table, measure, emit C
- * and write the reports. Each stage is a pure function; only the firmware and report writers touch files.
+ * Runs one {@link BuildPlan}: read the source, condition it, quantize onto the level table, measure every
+ * ladder case, render the analog preview, emit C and write the reports. Each stage is a pure function; only
+ * the firmware and report writers touch files.
+ *
+ * <p>Ladder cases: "ideal" is the source quantized onto the ideal ladder. With a board (modelled ladder or
+ * measured unit profile) two more: "board, plain codes" plays the ideal codes on the board's real levels,
+ * and "board, compensated" quantizes onto those real levels. The emitted codes are the compensated ones when
+ * compensation is on, else the plain ones; the preview is of the emitted codes on the board.
  */
 public final class Build {
+    /** A reference whose 4-parameter sine fit leaves less than this residual (dB) counts as a single tone. */
+    private static final double TONE_THRESHOLD_DB = 40;
+    private static final int TONE_SAMPLES = 1 << 16;
+
     private final String toolVersion;
 
     /** A build that stamps {@code toolVersion} into its outputs. */
@@ -43,86 +65,163 @@ public final class Build {
     public BuildSummary run(BuildPlan plan) {
         AtomicFiles.checkFolderUsable(plan.outDir());
         Stopwatch watch = new Stopwatch();
-        Sources.Loaded loaded = Sources.load(plan.source(), plan.channel(), plan.rateHz().orElse(Double.NaN),
-                plan.seed());
-        watch.lap("decode");
         double rate = plan.rateHz().orElse(BuildPlan.DEFAULT_RATE_HZ);
-        Conditioning conditioning = new Conditioning(plan.removeDc(), plan.trimDbfs(), rate, plan.gainDb(),
-                plan.normalizeDbfs(), plan.fadeInSeconds(), plan.fadeOutSeconds());
-        Resampler resampler = plan.resampler().equals("tarsos") ? new TarsosResampler()
-                : KaiserResampler.forBits(plan.bits());
-        Conditioner.Conditioned conditioned = new Conditioner(resampler).apply(loaded.signal(), conditioning);
+        Prepared prepared = prepare(plan, rate, watch);
+        Sources.Loaded loaded = prepared.loaded();
+        Conditioner.Conditioned conditioned = prepared.conditioned();
         Signal reference = conditioned.signal();
-        watch.lap("condition");
-        if (reference.length() == 0) {
+        if (reference.length() < 2) {
             throw InputError.inFile(plan.source(), "nothing is left to build after conditioning"
                     + " (all trimmed?)");
         }
-        LevelTable table = LevelTable.ideal(plan.bits(), plan.fullScaleVolts());
-        Quantizer quantizer = new Quantizer(table, table.minVolts(), table.maxVolts(), plan.dither(),
-                plan.shaping(), plan.seed());
-        Quantizer.Quantized q = quantizer.apply(reference);
-        Codes codes = q.codes();
-        watch.lap("quantize");
-        double snr = snrDb(reference, codes, table);
-        watch.lap("analyze");
 
         List<String> warnings = new ArrayList<>(loaded.warnings());
         warnings.addAll(conditioned.warnings());
-        if (q.clippedSamples() > 0) {
-            warnings.add(q.clippedSamples() + " samples were beyond full scale and clipped");
+        LevelTable ideal = LevelTable.ideal(plan.bits(), plan.fullScaleVolts());
+        Quantizer.Quantized idealQ = quantizer(ideal, plan).apply(reference);
+        Codes emitted = idealQ.codes();
+        LevelTable played = ideal;
+        long clipped = idealQ.clippedSamples();
+        Optional<Codes> compensated = Optional.empty();
+        if (plan.board().isPresent()) {
+            LevelTable board = plan.board().get();
+            played = board;
+            if (plan.compensate()) {
+                Quantizer.Quantized q = quantizer(board, plan).apply(reference);
+                compensated = Optional.of(q.codes());
+                emitted = q.codes();
+                clipped = q.clippedSamples();
+            }
         }
-        String condText = describe(plan, conditioned);
-        List<String> settings = List.of(
-                "source: " + plan.source().getFileName() + " (" + loaded.layout() + ")",
-                "conditioning: " + condText,
-                "target: " + plan.bits() + " bits at " + Units.format(rate, "Hz"),
-                "dither: " + plan.dither().label() + ", shaping: " + plan.shaping().name() + ", seed: "
-                        + plan.seed(),
-                "levels: " + table.origin() + ", " + Units.format(table.minVolts(), "V") + " .. "
-                        + Units.format(table.maxVolts(), "V"));
+        watch.lap("quantize");
+        if (clipped > 0) {
+            warnings.add(clipped + " samples were beyond full scale and clipped");
+        }
+
+        double cutoff = plan.filter().kind() == org.rungtone.analysis.ReconstructionFilter.Kind.NONE
+                ? rate / 2 : Math.min(rate / 2, plan.filter().cutoffHz());
+        AudioMetrics metrics = AudioMetrics.of(reference, cutoff);
+        List<QualityReport> quality = new ArrayList<>();
+        quality.add(metrics.measure("ideal ladder", idealQ.codes(), ideal));
+        if (plan.board().isPresent()) {
+            quality.add(metrics.measure("board, plain codes", idealQ.codes(), played));
+            compensated.ifPresent(c -> quality.add(metrics.measure("board, compensated", c, plan.board().get())));
+        }
+        QualityReport emittedQuality = quality.get(quality.size() - 1);
+        Optional<Double> shapingGain = Optional.empty();
+        if (plan.shaping().order() > 0) {
+            Quantizer flat = new Quantizer(played, played.minVolts(), played.maxVolts(), plan.dither(),
+                    ErrorFilter.NONE, plan.seed());
+            double flatInBand = metrics.measure("flat", flat.apply(reference).codes(), played).inBandSnrDb();
+            shapingGain = Optional.of(emittedQuality.inBandSnrDb() - flatInBand);
+        }
+        Optional<ToneReport> tone = toneOf(reference, emitted, played);
+        watch.lap("analyze");
+
+        AnalogModel model = new AnalogModel(plan.filter(), plan.previewRateHz());
+        AnalogModel.Preview preview = model.render(emitted, played);
+        watch.lap("preview");
+
         List<Path> files = new ArrayList<>(new SampleArrayEmitter(Templates.bundled()).emit(
-                new SampleArrayEmitter.Request(plan.symbol(), codes, plan.flashQualifier(), toolVersion,
-                        settings), plan.outDir()));
+                new SampleArrayEmitter.Request(plan.symbol(), emitted, plan.flashQualifier(), toolVersion,
+                        settings(plan, loaded, conditioned, played, rate)), plan.outDir()));
         watch.lap("emit");
-        long flash = (long) codes.length() * (plan.bits() <= 8 ? 1 : 2);
+
+        Path previewFile = plan.outDir().resolve("preview.wav");
+        WavWriter.write(previewFile, preview.signal(), WavWriter.Format.PCM16);
+        files.add(previewFile);
+        Path errPlot = plan.outDir().resolve("error-spectrum.png");
+        AnalysisPlots.writeErrorSpectrum(errPlot, metrics.errorSpectrum(AudioMetrics.volts(emitted, played)),
+                cutoff);
+        files.add(errPlot);
+        if (tone.isPresent()) {
+            Path specPlot = plan.outDir().resolve("spectrum.png");
+            AnalysisPlots.writeSpectrum(specPlot, ToneAnalysis.spectrum(head(volts(emitted, played), rate)),
+                    tone.get(), plan.bits());
+            files.add(specPlot);
+        }
+        watch.lap("plots");
+
+        long flash = (long) emitted.length() * (plan.bits() <= 8 ? 1 : 2);
         Path txt = plan.outDir().resolve("report.txt");
         Path json = plan.outDir().resolve("report.json");
         files.add(txt);
         files.add(json);
         BuildSummary summary = new BuildSummary(toolVersion, plan.source(), loaded.layout(), plan.symbol(),
-                plan.bits(), rate, codes.length(), codes.length() / rate, plan.dither().label(),
-                plan.shaping().name(), plan.seed(), condText, conditioned.resampler(), table.origin(),
-                q.clippedSamples(), snr, flash, files, warnings, watch.laps());
+                plan.bits(), rate, emitted.length(), emitted.length() / rate, plan.dither().label(),
+                plan.shaping().name(), plan.seed(), describe(plan, conditioned), conditioned.resampler(),
+                played.origin(), clipped, quality, emittedQuality.label(), shapingGain, tone,
+                new BuildSummary.PreviewInfo(plan.filter().describe(), plan.previewRateHz(),
+                        preview.passbandTopHz(), preview.zohDroopDb(), preview.peak()),
+                flash, files, warnings, watch.laps());
         AtomicFiles.writeString(txt, BuildReport.text(summary));
         Json.write(json, BuildReport.json(summary));
         return summary;
     }
 
-    /** Wall-clock milliseconds per stage, in order. */
-    static final class Stopwatch {
-        private final java.util.LinkedHashMap<String, Double> laps = new java.util.LinkedHashMap<>();
-        private long last = System.nanoTime();
-
-        void lap(String stage) {
-            long now = System.nanoTime();
-            laps.merge(stage, (now - last) / 1e6, Double::sum);
-            last = now;
-        }
-
-        java.util.Map<String, Double> laps() {
-            return laps;
-        }
+    /** The source's description (its samples dropped) and the conditioned reference. */
+    private record Prepared(Sources.Loaded loaded, Conditioner.Conditioned conditioned) {
     }
 
-    /** Aligned error SNR of the codes' levels, back in signal units, against the reference. */
-    static double snrDb(Signal reference, Codes codes, LevelTable table) {
-        int[] c = codes.unsafeCodes();
-        double[] out = new double[c.length];
-        for (int i = 0; i < c.length; i++) {
-            out[i] = table.volts(c[i]);
+    /**
+     * Loads and conditions the source. The decoded source lives only inside this method, so its memory can be
+     * reclaimed before quantizing a long clip.
+     */
+    private static Prepared prepare(BuildPlan plan, double rate, Stopwatch watch) {
+        Sources.Loaded loaded = Sources.load(plan.source(), plan.channel(), plan.rateHz().orElse(Double.NaN),
+                plan.seed());
+        watch.lap("decode");
+        Conditioning conditioning = new Conditioning(plan.removeDc(), plan.trimDbfs(), rate, plan.gainDb(),
+                plan.normalizeDbfs(), plan.fadeInSeconds(), plan.fadeOutSeconds());
+        Resampler resampler = plan.resampler().equals("tarsos") ? new TarsosResampler()
+                : KaiserResampler.forBits(plan.bits());
+        Conditioner.Conditioned conditioned = new Conditioner(resampler).apply(loaded.signal(), conditioning);
+        watch.lap("condition");
+        return new Prepared(new Sources.Loaded(Signal.wrap(new double[0], 1), loaded.layout(), loaded.warnings()),
+                conditioned);
+    }
+
+    private static Quantizer quantizer(LevelTable table, BuildPlan plan) {
+        return new Quantizer(table, table.minVolts(), table.maxVolts(), plan.dither(), plan.shaping(), plan.seed());
+    }
+
+    private static List<String> settings(BuildPlan plan, Sources.Loaded loaded, Conditioner.Conditioned c,
+            LevelTable played, double rate) {
+        return List.of(
+                "source: " + plan.source().getFileName() + " (" + loaded.layout() + ")",
+                "conditioning: " + describe(plan, c),
+                "target: " + plan.bits() + " bits at " + Units.format(rate, "Hz"),
+                "dither: " + plan.dither().label() + ", shaping: " + plan.shaping().name() + ", seed: "
+                        + plan.seed(),
+                "levels: " + played.origin() + ", " + Units.format(played.minVolts(), "V") + " .. "
+                        + Units.format(played.maxVolts(), "V")
+                        + (plan.board().isPresent() ? (plan.compensate() ? ", compensated" : ", plain codes") : ""));
+    }
+
+    /** Single-tone figures when the reference is essentially one sine (IEEE Std 1241 sine fit). */
+    private static Optional<ToneReport> toneOf(Signal reference, Codes codes, LevelTable table) {
+        Signal ref = head(reference.unsafeSamples(), reference.sampleRateHz());
+        if (ref.length() < 256) {
+            return Optional.empty();
         }
-        return ErrorMetrics.alignedSnrDb(reference.unsafeSamples(), out);
+        SineFit.Result fit;
+        try {
+            fit = SineFit.fit(ref.unsafeSamples(), ref.sampleRateHz());
+        } catch (RuntimeException e) {
+            return Optional.empty();
+        }
+        if (!(fit.sinadDb() > TONE_THRESHOLD_DB)) {
+            return Optional.empty();
+        }
+        return Optional.of(ToneAnalysis.analyze(head(volts(codes, table), reference.sampleRateHz())));
+    }
+
+    private static double[] volts(Codes codes, LevelTable table) {
+        return AudioMetrics.volts(codes, table);
+    }
+
+    private static Signal head(double[] x, double rate) {
+        return Signal.wrap(Arrays.copyOf(x, Math.min(x.length, TONE_SAMPLES)), rate);
     }
 
     private static String describe(BuildPlan plan, Conditioner.Conditioned c) {
@@ -143,5 +242,21 @@ public final class Build {
                     1000 * plan.fadeOutSeconds()));
         }
         return String.join(", ", parts);
+    }
+
+    /** Wall-clock milliseconds per stage, in order. */
+    static final class Stopwatch {
+        private final Map<String, Double> laps = new LinkedHashMap<>();
+        private long last = System.nanoTime();
+
+        void lap(String stage) {
+            long now = System.nanoTime();
+            laps.merge(stage, (now - last) / 1e6, Double::sum);
+            last = now;
+        }
+
+        Map<String, Double> laps() {
+            return laps;
+        }
     }
 }

@@ -1,8 +1,11 @@
 package org.rungtone.project;
 
 import java.nio.file.Path;
+import java.util.Optional;
 import java.util.OptionalDouble;
+import org.rungtone.analysis.ReconstructionFilter;
 import org.rungtone.internal.Checks;
+import org.rungtone.ladder.LevelTable;
 import org.rungtone.quantize.Dither;
 import org.rungtone.quantize.ErrorFilter;
 
@@ -27,11 +30,16 @@ import org.rungtone.quantize.ErrorFilter;
  * @param resampler "kaiser" (default) or "tarsos"
  * @param fullScaleVolts the ideal DAC's reference voltage, for reports
  * @param flashQualifier attribute that keeps arrays in flash
+ * @param board the levels the real board produces (modelled ladder or measured unit profile), if known
+ * @param compensate quantize onto the board's real levels (true) or emit plain binary codes (false)
+ * @param filter the reconstruction filter after the DAC, for the preview and the in-band figures
+ * @param previewRateHz the preview WAV's sample rate (44.1 or 48 kHz)
  */
 public record BuildPlan(Path source, int channel, String symbol, Path outDir, int bits, OptionalDouble rateHz,
         Dither dither, ErrorFilter shaping, long seed, boolean removeDc, OptionalDouble trimDbfs,
         OptionalDouble gainDb, OptionalDouble normalizeDbfs, double fadeInSeconds, double fadeOutSeconds,
-        String resampler, double fullScaleVolts, String flashQualifier) {
+        String resampler, double fullScaleVolts, String flashQualifier, Optional<LevelTable> board,
+        boolean compensate, ReconstructionFilter filter, double previewRateHz) {
 
     /** Default sample rate when neither the user nor a script names one. */
     public static final double DEFAULT_RATE_HZ = 16_000;
@@ -46,5 +54,33 @@ public record BuildPlan(Path source, int channel, String symbol, Path outDir, in
                 "--resampler must be kaiser or tarsos: %s", resampler);
         Checks.checkInput(Double.isFinite(fullScaleVolts) && fullScaleVolts > 0,
                 "--full-scale must be a positive voltage: %s", fullScaleVolts);
+        board.ifPresent(t -> Checks.checkInput(t.bits() == bits, "the board's level table has %d bits but --bits"
+                + " is %d", t.bits(), bits));
+        Checks.checkInput(previewRateHz == 44_100 || previewRateHz == 48_000,
+                "--preview-rate must be 44.1k or 48k: %s", previewRateHz);
+    }
+
+    /** A plan for the ideal ladder, no reconstruction filter, preview at 44.1 kHz. */
+    public BuildPlan(Path source, int channel, String symbol, Path outDir, int bits, OptionalDouble rateHz,
+            Dither dither, ErrorFilter shaping, long seed, boolean removeDc, OptionalDouble trimDbfs,
+            OptionalDouble gainDb, OptionalDouble normalizeDbfs, double fadeInSeconds, double fadeOutSeconds,
+            String resampler, double fullScaleVolts, String flashQualifier) {
+        this(source, channel, symbol, outDir, bits, rateHz, dither, shaping, seed, removeDc, trimDbfs, gainDb,
+                normalizeDbfs, fadeInSeconds, fadeOutSeconds, resampler, fullScaleVolts, flashQualifier,
+                Optional.empty(), true, ReconstructionFilter.none(), 44_100);
+    }
+
+    /** The same plan on a board with these real levels. */
+    public BuildPlan withBoard(LevelTable levels, boolean compensateOnIt) {
+        return new BuildPlan(source, channel, symbol, outDir, bits, rateHz, dither, shaping, seed, removeDc,
+                trimDbfs, gainDb, normalizeDbfs, fadeInSeconds, fadeOutSeconds, resampler, fullScaleVolts,
+                flashQualifier, Optional.of(levels), compensateOnIt, filter, previewRateHz);
+    }
+
+    /** The same plan with another reconstruction filter and preview rate. */
+    public BuildPlan withPreview(ReconstructionFilter newFilter, double newPreviewRateHz) {
+        return new BuildPlan(source, channel, symbol, outDir, bits, rateHz, dither, shaping, seed, removeDc,
+                trimDbfs, gainDb, normalizeDbfs, fadeInSeconds, fadeOutSeconds, resampler, fullScaleVolts,
+                flashQualifier, board, compensate, newFilter, newPreviewRateHz);
     }
 }

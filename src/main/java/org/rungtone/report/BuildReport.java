@@ -1,10 +1,13 @@
 package org.rungtone.report;
 
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import org.rungtone.analysis.QualityReport;
+import org.rungtone.analysis.ToneReport;
 import org.rungtone.internal.Units;
 
 /** Renders a {@link BuildSummary} as text for people and as JSON for machines. */
@@ -12,43 +15,89 @@ public final class BuildReport {
     private BuildReport() {
     }
 
-    /** The text report: settings, figures, files, then warnings at the end. */
+    private static String f1(double v) {
+        return Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf") : String.format(Locale.ROOT, "%.1f", v);
+    }
+
+    /** The text report: settings, quality per ladder case, preview, files, then warnings at the end. */
     public static String text(BuildSummary s) {
         StringBuilder b = new StringBuilder();
         b.append("Rungtone ").append(s.toolVersion()).append(" build report: ").append(s.symbol()).append("\n\n");
-        TextTable t = new TextTable("item", "value");
+        TextTable t = new TextTable("setting", "value");
         t.row("source", s.source().getFileName() + "  (" + s.sourceLayout() + ")");
         t.row("conditioning", s.conditioning());
         t.row("resampler", s.resampler());
         t.row("target", s.bits() + " bits at " + Units.format(s.rateHz(), "Hz") + ", "
                 + s.samples() + " samples, " + String.format(Locale.ROOT, "%.3f s", s.durationSeconds()));
         t.row("dither / shaping", s.dither() + " / " + s.shaping() + "  (seed " + s.seed() + ")");
-        t.row("ladder", s.ladder());
+        t.row("levels played", s.ladder());
+        t.row("C files hold", s.emittedCase());
         t.row("clipped samples", s.clippedSamples() + (s.samples() > 0 ? String.format(Locale.ROOT,
                 "  (%.3f %%)", 100.0 * s.clippedSamples() / s.samples()) : ""));
-        t.row("error SNR", String.format(Locale.ROOT, "%.2f dB  (output vs conditioned source, gain and"
-                + " offset aligned)", s.snrDb()));
         t.row("flash", String.format(Locale.ROOT, "%,d bytes of samples", s.flashBytes()));
         b.append(t.render("  "));
+
+        b.append("\nQuality (output against the conditioned source, gain and offset aligned):\n");
+        QualityReport first = s.quality().get(0);
+        TextTable q = new TextTable("case", "SINAD dB",
+                "SNR dB <" + Units.format(first.inBandCutoffHz(), "Hz"), "A-wtd SNR dB", "ENOB bits");
+        for (QualityReport r : s.quality()) {
+            q.row(r.label(), f1(r.sinadDb()), f1(r.inBandSnrDb()), f1(r.aWeightedSnrDb()),
+                    String.format(Locale.ROOT, "%.2f", r.enobBits()));
+        }
+        b.append(q.render("  "));
+        s.shapingGainDb().ifPresent(g -> b.append(String.format(Locale.ROOT,
+                "  noise shaping (%s) %s %.1f dB of in-band SNR against flat quantization%n", s.shaping(),
+                g >= 0 ? "wins" : "loses", Math.abs(g))));
+        if (s.tone().isPresent()) {
+            ToneReport tr = s.tone().get();
+            b.append(String.format(Locale.ROOT, "  single tone at %s: SINAD %.1f dB, SNR %.1f dB, THD %.1f dB,"
+                    + " SFDR %.1f dB, ENOB %.2f bits (IEEE 1241 sine fit and spectrum)%n",
+                    Units.format(tr.fundamentalHz(), "Hz"), tr.sinadDb(), tr.snrDb(), tr.thdDb(), tr.sfdrDb(),
+                    tr.enobBits()));
+        }
+        BuildSummary.PreviewInfo p = s.preview();
+        String filter = p.filter().equals("none") ? "no reconstruction filter" : p.filter();
+        b.append(String.format(Locale.ROOT, "%nPreview (preview.wav at %s): the board's levels, zero-order hold,"
+                + " %s; the hold alone droops %.2f dB at %s%n", Units.format(p.rateHz(), "Hz"), filter,
+                p.zohDroopDb(), Units.format(p.passbandTopHz(), "Hz")));
         b.append("\nFiles:\n");
         for (Path f : s.files()) {
             b.append("  ").append(f).append('\n');
         }
-        if (!s.warnings().isEmpty()) {
+        List<String> warnings = new ArrayList<>(s.warnings());
+        if (p.peak() > 1) {
+            warnings.add(String.format(Locale.ROOT, "the preview's filter rings %.1f %% past full scale;"
+                    + " the preview WAV clips there", 100 * (p.peak() - 1)));
+        }
+        if (!warnings.isEmpty()) {
             b.append("\nWarnings:\n");
-            for (String w : s.warnings()) {
+            for (String w : warnings) {
                 b.append("  - ").append(w).append('\n');
             }
         }
         return b.toString();
     }
 
-    /** One line of stage timings, for --verbose: "decode 120 ms, condition 80 ms, ...". */
+    /** One line of stage timings, for --verbose: "stage timings: decode 120 ms, condition 80 ms, ...". */
     public static String timings(BuildSummary s) {
         StringBuilder b = new StringBuilder("stage timings:");
         s.stageMillis().forEach((k, v) -> b.append(String.format(Locale.ROOT, " %s %.0f ms,", k, v)));
         b.setLength(b.length() - 1);
         return b.toString();
+    }
+
+    static Map<String, Object> quality(QualityReport r) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("case", r.label());
+        m.put("sinad_db", r.sinadDb());
+        m.put("in_band_snr_db", r.inBandSnrDb());
+        m.put("in_band_cutoff_hz", r.inBandCutoffHz());
+        m.put("a_weighted_snr_db", r.aWeightedSnrDb());
+        m.put("enob_bits", r.enobBits());
+        m.put("error_rms_dbfs", r.errorRmsDbfs());
+        m.put("reference_rms_dbfs", r.referenceRmsDbfs());
+        return m;
     }
 
     /** The JSON report, with the stable field names documented in the README. */
@@ -69,8 +118,28 @@ public final class BuildReport {
         m.put("conditioning", s.conditioning());
         m.put("resampler", s.resampler());
         m.put("ladder", s.ladder());
+        m.put("emitted_case", s.emittedCase());
         m.put("clipped_samples", s.clippedSamples());
-        m.put("snr_db", s.snrDb());
+        m.put("snr_db", s.emitted().sinadDb());
+        m.put("quality", s.quality().stream().map(BuildReport::quality).toList());
+        s.shapingGainDb().ifPresent(g -> m.put("shaping_in_band_gain_db", g));
+        s.tone().ifPresent(t -> {
+            Map<String, Object> tm = new LinkedHashMap<>();
+            tm.put("fundamental_hz", t.fundamentalHz());
+            tm.put("sinad_db", t.sinadDb());
+            tm.put("snr_db", t.snrDb());
+            tm.put("thd_db", t.thdDb());
+            tm.put("sfdr_db", t.sfdrDb());
+            tm.put("enob_bits", t.enobBits());
+            m.put("tone", tm);
+        });
+        Map<String, Object> pm = new LinkedHashMap<>();
+        pm.put("filter", s.preview().filter());
+        pm.put("rate_hz", s.preview().rateHz());
+        pm.put("zoh_droop_db", s.preview().zohDroopDb());
+        pm.put("droop_at_hz", s.preview().passbandTopHz());
+        pm.put("peak", s.preview().peak());
+        m.put("preview", pm);
         m.put("flash_bytes", s.flashBytes());
         m.put("files", s.files().stream().map(Path::toString).toList());
         m.put("warnings", List.copyOf(s.warnings()));

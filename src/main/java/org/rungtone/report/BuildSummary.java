@@ -1,7 +1,13 @@
 package org.rungtone.report;
 
 import java.nio.file.Path;
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import org.rungtone.analysis.QualityReport;
+import org.rungtone.analysis.ToneReport;
 
 /**
  * What one build did, as the reports show it. Figures carry their units in their names.
@@ -19,9 +25,13 @@ import java.util.List;
  * @param seed random seed
  * @param conditioning one-line summary of conditioning
  * @param resampler resampler description
- * @param ladder where the level table came from
+ * @param ladder where the played level table came from
  * @param clippedSamples samples beyond full scale before quantization
- * @param snrDb aligned error SNR of the quantized output against the conditioned reference
+ * @param quality the figures of every ladder case, the emitted case last
+ * @param emittedCase label of the case whose codes the C files hold
+ * @param shapingGainDb in-band SNR won (positive) or lost by noise shaping against flat quantization
+ * @param tone single-tone figures, when the source is essentially one sine
+ * @param preview the analog preview's settings and figures
  * @param flashBytes bytes of sample data
  * @param files files written, in order
  * @param warnings what the user should know
@@ -29,13 +39,32 @@ import java.util.List;
  */
 public record BuildSummary(String toolVersion, Path source, String sourceLayout, String symbol, int bits,
         double rateHz, int samples, double durationSeconds, String dither, String shaping, long seed,
-        String conditioning, String resampler, String ladder, long clippedSamples, double snrDb,
-        long flashBytes, List<Path> files, List<String> warnings,
-        java.util.Map<String, Double> stageMillis) {
-    /** Copies the lists. */
+        String conditioning, String resampler, String ladder, long clippedSamples, List<QualityReport> quality,
+        String emittedCase, Optional<Double> shapingGainDb, Optional<ToneReport> tone, PreviewInfo preview,
+        long flashBytes, List<Path> files, List<String> warnings, Map<String, Double> stageMillis) {
+
+    /** Copies the collections. */
     public BuildSummary {
+        quality = List.copyOf(quality);
         files = List.copyOf(files);
         warnings = List.copyOf(warnings);
-        stageMillis = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(stageMillis));
+        stageMillis = Collections.unmodifiableMap(new LinkedHashMap<>(stageMillis));
+    }
+
+    /**
+     * The analog preview.
+     *
+     * @param filter reconstruction filter description
+     * @param rateHz preview WAV rate
+     * @param passbandTopHz top of the passband used for the droop figure
+     * @param zohDroopDb zero-order-hold droop at the passband top
+     * @param peak largest absolute preview sample (may exceed 1 by filter ringing)
+     */
+    public record PreviewInfo(String filter, double rateHz, double passbandTopHz, double zohDroopDb, double peak) {
+    }
+
+    /** The figures of the emitted case. */
+    public QualityReport emitted() {
+        return quality.get(quality.size() - 1);
     }
 }

@@ -33,15 +33,20 @@ class BuildCommandTest {
         Cli.Run r = Cli.run("build", fixture().toString(), "--bits", "6", "--rate", "16k", "--out", out.toString());
         assertEquals(0, r.exitCode(), r.err());
         assertEquals("", r.err());
-        for (String f : List.of("bell.h", "bell.c", "report.txt", "report.json")) {
+        List<String> expected = List.of("bell.h", "bell.c", "preview.wav", "error-spectrum.png", "spectrum.png",
+                "report.txt", "report.json");
+        for (String f : expected) {
             assertTrue(Files.size(out.resolve(f)) > 0, f);
         }
         assertTrue(r.out().contains("6 bits at 16kHz, 8000 samples, 0.500 s"), r.out());
         String json = Files.readString(out.resolve("report.json"));
         assertTrue(json.contains("\"samples\": 8000"), json);
         try (Stream<Path> s = Files.list(out)) {
-            assertEquals(4, s.count(), "no temporary files left behind");
+            assertEquals(expected.stream().sorted().toList(),
+                    s.map(p -> p.getFileName().toString()).sorted().toList(), "no temporary files left behind");
         }
+        // a single tone gets the IEEE 1241 figures: 6 bits with TPDF dither, about 6.02*6 + 1.76 - 4.77 dB
+        assertTrue(r.out().contains("single tone at 523.2Hz"), r.out());
     }
 
     @Test
