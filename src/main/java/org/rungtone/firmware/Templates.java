@@ -6,6 +6,7 @@ import com.samskivert.mustache.MustacheException;
 import com.samskivert.mustache.Template;
 import java.io.IOException;
 import java.io.InputStream;
+import java.io.StringReader;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -18,15 +19,17 @@ import org.rungtone.internal.InputError;
  * uses JMustache with no escaping (the output is C, not HTML) and fails on missing values.
  */
 public final class Templates {
-    private static final Mustache.Compiler COMPILER = Mustache.compiler()
-            .withEscaper(Escapers.NONE)
-            .strictSections(false)
-            .defaultValue(null);
-
     private final Optional<Path> userDir;
+    private final Mustache.Compiler compiler;
 
     private Templates(Optional<Path> userDir) {
         this.userDir = userDir;
+        // Partials ({{> common/engine_clip.c}}) resolve against the same root as the templates themselves.
+        this.compiler = Mustache.compiler()
+                .withEscaper(Escapers.NONE)
+                .strictSections(false)
+                .defaultValue(null)
+                .withLoader(partial -> new StringReader(loadPath(partial + ".mustache")));
     }
 
     /** The templates bundled with Rungtone. */
@@ -60,7 +63,12 @@ public final class Templates {
      * @throws InputError when the template is missing or refers to a value that is not there
      */
     public String render(String family, String name, Object context) {
-        Template t = COMPILER.compile(load(family, name));
+        Template t;
+        try {
+            t = compiler.compile(load(family, name));
+        } catch (MustacheException e) {
+            throw new InputError("template " + family + "/" + name + ": " + e.getMessage(), e);
+        }
         try {
             return t.execute(context);
         } catch (MustacheException e) {
@@ -69,23 +77,28 @@ public final class Templates {
     }
 
     private String load(String family, String name) {
+        return loadPath(family + "/" + name);
+    }
+
+    private String loadPath(String relative) {
         try {
             if (userDir.isPresent()) {
-                Path p = userDir.get().resolve(family).resolve(name);
+                Path p = userDir.get().resolve(relative);
                 if (!Files.isRegularFile(p)) {
-                    throw new InputError(p + ": template not found in --templates folder");
+                    throw new InputError(p + ": template not found in --templates folder (copy the bundled"
+                            + " templates folder and edit it)");
                 }
                 return Files.readString(p, StandardCharsets.UTF_8);
             }
             try (InputStream in = Templates.class.getClassLoader()
-                    .getResourceAsStream("templates/" + family + "/" + name)) {
+                    .getResourceAsStream("templates/" + relative)) {
                 if (in == null) {
-                    throw new InputError("no bundled template " + family + "/" + name);
+                    throw new InputError("no bundled template " + relative);
                 }
                 return new String(in.readAllBytes(), StandardCharsets.UTF_8);
             }
         } catch (IOException e) {
-            throw new InputError("cannot read template " + family + "/" + name + ": " + e.getMessage(), e);
+            throw new InputError("cannot read template " + relative + ": " + e.getMessage(), e);
         }
     }
 }
