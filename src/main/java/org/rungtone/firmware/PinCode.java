@@ -63,10 +63,21 @@ final class PinCode {
 
     /** The lookup table of {@code port}: its levels for every code 0 .. 2^N − 1. */
     static int[] table(PinMap map, String port) {
-        int[] t = new int[1 << map.bits()];
-        int index = map.ports().indexOf(port);
+        int bits = map.bits();
+        int[] pinOfBit = new int[bits];
+        for (int bit = 0; bit < bits; bit++) {
+            Pin p = map.pin(bit);
+            pinOfBit[bit] = p.port().equals(port) ? p.pin() : -1;
+        }
+        int[] t = new int[1 << bits];
         for (int code = 0; code < t.length; code++) {
-            t[code] = (int) map.encode(code).get(index).value();
+            int v = 0;
+            for (int bit = 0; bit < bits; bit++) {
+                if (pinOfBit[bit] >= 0 && (code >> bit & 1) != 0) {
+                    v |= 1 << pinOfBit[bit];
+                }
+            }
+            t[code] = v;
         }
         return t;
     }

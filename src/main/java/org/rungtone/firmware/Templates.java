@@ -10,7 +10,9 @@ import java.io.StringReader;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Map;
 import java.util.Optional;
+import java.util.concurrent.ConcurrentHashMap;
 import org.rungtone.internal.InputError;
 
 /**
@@ -21,6 +23,8 @@ import org.rungtone.internal.InputError;
 public final class Templates {
     private final Optional<Path> userDir;
     private final Mustache.Compiler compiler;
+    /** Compiled templates by family/name; partials are cached inside them once first used. */
+    private final Map<String, Template> compiled = new ConcurrentHashMap<>();
 
     private Templates(Optional<Path> userDir) {
         this.userDir = userDir;
@@ -34,7 +38,7 @@ public final class Templates {
 
     /** The templates bundled with Rungtone. */
     public static Templates bundled() {
-        return new Templates(Optional.empty());
+        return Bundled.INSTANCE;
     }
 
     /**
@@ -65,7 +69,7 @@ public final class Templates {
     public String render(String family, String name, Object context) {
         Template t;
         try {
-            t = compiler.compile(load(family, name));
+            t = compiled.computeIfAbsent(family + "/" + name, k -> compiler.compile(load(family, name)));
         } catch (MustacheException e) {
             throw new InputError("template " + family + "/" + name + ": " + e.getMessage(), e);
         }
@@ -100,5 +104,10 @@ public final class Templates {
         } catch (IOException e) {
             throw new InputError("cannot read template " + relative + ": " + e.getMessage(), e);
         }
+    }
+
+    /** The one bundled instance, made on first use, so its compiled templates are shared. */
+    private static final class Bundled {
+        static final Templates INSTANCE = new Templates(Optional.empty());
     }
 }

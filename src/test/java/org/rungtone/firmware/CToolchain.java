@@ -67,6 +67,22 @@ final class CToolchain {
         assertEquals("", out.strip(), "compiler printed diagnostics");
     }
 
+    /**
+     * Compiles {@code sources} with {@code base} in two compiler runs side by side (the files are
+     * independent), failing on any diagnostic.
+     */
+    static void compileClean(Path dir, List<String> base, List<String> sources) {
+        int half = sources.size() / 2;
+        List<List<String>> parts = List.of(sources.subList(0, half), sources.subList(half, sources.size()));
+        List<ProcessResult> results = parts.parallelStream().map(p -> exec(dir, cmd(base, p))).toList();
+        for (int i = 0; i < results.size(); i++) {
+            ProcessResult r = results.get(i);
+            if (r.exitCode != 0 || !r.output.isBlank()) {
+                fail(String.join(" ", cmd(base, parts.get(i))) + " exited " + r.exitCode + ":\n" + r.output);
+            }
+        }
+    }
+
     static ProcessResult exec(Path dir, List<String> command) {
         try {
             Path log = Files.createTempFile(dir, "run", ".log");
