@@ -173,7 +173,8 @@ final class EmitPlan {
             try {
                 sym = CNames.symbol(s.name());
             } catch (InputError e) {
-                throw new InputError("sound " + e.getMessage().replaceFirst("^--name ", ""), e);
+                throw new InputError("sound name '" + s.name() + "' cannot become a C identifier; use letters,"
+                        + " digits and underscores, not a C keyword, at most 40 characters, e.g. door_chime", e);
             }
             String before = seen.put(sym, s.name());
             Checks.checkInput(before == null, "sounds '%s' and '%s' both become the C name '%s'; rename one",

@@ -311,9 +311,12 @@ public final class PinMap {
                     pos++;
                     skipSpaces();
                     int secondColumn = pos + 1;
-                    Pin last = Character.isDigit(peek()) && !numberedPortAhead()
-                            ? new Pin(first.port(), pinNumber(first.port(), first.numberedPort()))
-                            : pin();
+                    Pin last;
+                    if (Character.isDigit(peek()) && !numberedPortAhead()) {
+                        last = new Pin(first.port(), pinNumber(first.port(), first.numberedPort(), secondColumn));
+                    } else {
+                        last = pin();
+                    }
                     if (!last.port().equals(first.port())) {
                         throw error("range at column " + itemColumn + " runs from port " + first.port()
                                 + " to port " + last.port() + "; a range stays on one port, e.g. "
@@ -391,18 +394,17 @@ public final class PinMap {
             } else {
                 throw error("expected a pin such as B3 or 1.3 at column " + column + ", found '" + c + "'");
             }
-            return new Pin(port, pinNumber(port, numbered));
+            return new Pin(port, pinNumber(port, numbered, column));
         }
 
-        private int pinNumber(String port, boolean numbered) {
-            int column = pos + 1;
+        private int pinNumber(String port, boolean numbered, int column) {
             int start = pos;
             while (Character.isDigit(peek())) {
                 pos++;
             }
             String portText = numbered ? port + "." : port;
             if (start == pos) {
-                throw error("expected a pin number after port " + portText + " at column " + column);
+                throw error("expected a pin number after port " + portText + " at column " + (pos + 1));
             }
             String digits = text.substring(start, pos);
             int n = digits.length() > 3 ? Integer.MAX_VALUE : Integer.parseInt(digits);
