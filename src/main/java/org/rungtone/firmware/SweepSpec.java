@@ -57,6 +57,17 @@ public final class SweepSpec {
         return new SweepSpec(bits, codes, 0, Optional.of(buttonPin.trim()));
     }
 
+    /**
+     * A sweep from the calibration plan: held for {@code holdMillis} per code, or, when {@code buttonPin} is
+     * present, advanced on each press of that button.
+     *
+     * @throws org.rungtone.internal.InputError when a code does not fit, or there is neither a positive hold
+     *     nor a button
+     */
+    public static SweepSpec of(int bits, int[] codes, double holdMillis, Optional<String> buttonPin) {
+        return buttonPin.isPresent() ? onButton(bits, codes, buttonPin.get()) : holding(bits, codes, holdMillis);
+    }
+
     /** Code width. */
     public int bits() {
         return bits;
