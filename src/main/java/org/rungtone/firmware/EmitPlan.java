@@ -176,6 +176,8 @@ final class EmitPlan {
                 throw new InputError("sound name '" + s.name() + "' cannot become a C identifier; use letters,"
                         + " digits and underscores, not a C keyword, at most 40 characters, e.g. door_chime", e);
             }
+            Checks.checkInput(!sym.equals("count"), "sound name '%s' would clash with %s_SOUND_COUNT; rename the"
+                    + " sound", s.name(), macro);
             String before = seen.put(sym, s.name());
             Checks.checkInput(before == null, "sounds '%s' and '%s' both become the C name '%s'; rename one",
                     before, s.name(), sym);

@@ -211,6 +211,8 @@ class FirmwareEmitterTest {
         assertRefused("sound name '!' cannot become a C identifier; use letters, digits and underscores, not a C"
                 + " keyword, at most 40 characters, e.g. door_chime", b -> b.sound("!", ramp(6, 16, 22050)),
                 avrProject());
+        assertRefused("sound name 'Count' would clash with DOOR_CHIME_SOUND_COUNT; rename the sound",
+                b -> b.sound("Count", ramp(4, 4, 8000)), chimeProject());
         assertRefused("sounds 'ding' and 'Ding' both become the C name 'ding'; rename one",
                 b -> b.sound("Ding", ramp(4, 4, 8000)), chimeProject());
     }
