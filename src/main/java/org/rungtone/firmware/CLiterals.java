@@ -6,6 +6,8 @@ import java.util.Locale;
 
 /** Number formatting for C source: fixed-width hex, decimal, and arrays wrapped a fixed count per line. */
 public final class CLiterals {
+    private static final char[] HEX = "0123456789ABCDEF".toCharArray();
+
     private CLiterals() {
     }
 
@@ -24,20 +26,21 @@ public final class CLiterals {
      * comma except the last, with the given indent.
      */
     public static List<String> arrayLines(int[] values, int digits, int perLine, String indent) {
+        String body = arrayBody(values, digits, perLine, indent);
         List<String> lines = new ArrayList<>((values.length + perLine - 1) / perLine);
-        String all = arrayBody(values, digits, perLine, indent);
-        if (!all.isEmpty()) {
-            lines.addAll(List.of(all.split("\n")));
+        if (!body.isEmpty()) {
+            lines.addAll(List.of(body.split("\n", -1)));
         }
         return lines;
     }
 
     /**
-     * The same as {@link #arrayLines} joined with {@code \n} (no final newline), built in one buffer: this is
-     * the hot path for large sample arrays.
+     * The array-initialiser lines of {@link #arrayLines} joined with {@code \n} (no final newline), built
+     * without per-value formatting so that millions of values take milliseconds. Values are taken as
+     * unsigned 32-bit.
      */
     public static String arrayBody(int[] values, int digits, int perLine, String indent) {
-        StringBuilder b = new StringBuilder(values.length * (digits + 4) + values.length / perLine * 8);
+        StringBuilder b = new StringBuilder(values.length * (digits + 4) + values.length / perLine * 8 + 16);
         for (int i = 0; i < values.length; i++) {
             if (i % perLine == 0) {
                 if (i > 0) {
@@ -47,11 +50,7 @@ public final class CLiterals {
             } else {
                 b.append(' ');
             }
-            b.append('0').append('x');
-            long v = values[i] & 0xFFFFFFFFL;
-            for (int d = digits - 1; d >= 0; d--) {
-                b.append(HEX[(int) ((v >>> (4 * d)) & 0xF)]);
-            }
+            appendHex(b, values[i] & 0xFFFFFFFFL, digits);
             if (i < values.length - 1) {
                 b.append(',');
             }
@@ -59,7 +58,22 @@ public final class CLiterals {
         return b.toString();
     }
 
-    private static final char[] HEX = "0123456789ABCDEF".toCharArray();
+    /** {@link #arrayBody} for bytes, two hex digits each, taken as unsigned. */
+    public static String arrayBody(byte[] values, int perLine, String indent) {
+        int[] v = new int[values.length];
+        for (int i = 0; i < v.length; i++) {
+            v[i] = values[i] & 0xFF;
+        }
+        return arrayBody(v, 2, perLine, indent);
+    }
+
+    private static void appendHex(StringBuilder b, long value, int digits) {
+        b.append('0').append('x');
+        int shown = Math.max(digits, (64 - Long.numberOfLeadingZeros(value) + 3) / 4);
+        for (int d = shown - 1; d >= 0; d--) {
+            b.append(HEX[(int) (value >>> (4 * d)) & 0xF]);
+        }
+    }
 
     /** A C double literal with enough digits, e.g. {@code 16000.0}. */
     public static String real(double v) {

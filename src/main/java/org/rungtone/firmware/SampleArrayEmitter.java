@@ -80,7 +80,8 @@ public final class SampleArrayEmitter {
             settings.add(s.replace("*/", "* /"));
         }
         ctx.put("settings", settings);
-        ctx.put("data", CLiterals.arrayBody(codes.unsafeCodes(), CLiterals.hexDigits(bits), PER_LINE, "    "));
+        ctx.put("data", CLiterals.arrayBody(codes.unsafeCodes(), CLiterals.hexDigits(bits), PER_LINE,
+                "    "));
         ctx.put("durationMs", String.format(Locale.ROOT, "%.1f", 1000.0 * codes.length()
                 / codes.sampleRateHz()));
         return ctx;

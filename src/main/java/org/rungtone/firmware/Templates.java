@@ -6,10 +6,13 @@ import com.samskivert.mustache.MustacheException;
 import com.samskivert.mustache.Template;
 import java.io.IOException;
 import java.io.InputStream;
+import java.io.StringReader;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Map;
 import java.util.Optional;
+import java.util.concurrent.ConcurrentHashMap;
 import org.rungtone.internal.InputError;
 
 /**
@@ -18,20 +21,24 @@ import org.rungtone.internal.InputError;
  * uses JMustache with no escaping (the output is C, not HTML) and fails on missing values.
  */
 public final class Templates {
-    private static final Mustache.Compiler COMPILER = Mustache.compiler()
-            .withEscaper(Escapers.NONE)
-            .strictSections(false)
-            .defaultValue(null);
-
     private final Optional<Path> userDir;
+    private final Mustache.Compiler compiler;
+    /** Compiled templates by family/name; partials are cached inside them once first used. */
+    private final Map<String, Template> compiled = new ConcurrentHashMap<>();
 
     private Templates(Optional<Path> userDir) {
         this.userDir = userDir;
+        // Partials ({{> common/engine_clip.c}}) resolve against the same root as the templates themselves.
+        this.compiler = Mustache.compiler()
+                .withEscaper(Escapers.NONE)
+                .strictSections(false)
+                .defaultValue(null)
+                .withLoader(partial -> new StringReader(loadPath(partial + ".mustache")));
     }
 
     /** The templates bundled with Rungtone. */
     public static Templates bundled() {
-        return new Templates(Optional.empty());
+        return Bundled.INSTANCE;
     }
 
     /**
@@ -60,7 +67,12 @@ public final class Templates {
      * @throws InputError when the template is missing or refers to a value that is not there
      */
     public String render(String family, String name, Object context) {
-        Template t = COMPILER.compile(load(family, name));
+        Template t;
+        try {
+            t = compiled.computeIfAbsent(family + "/" + name, k -> compiler.compile(load(family, name)));
+        } catch (MustacheException e) {
+            throw new InputError("template " + family + "/" + name + ": " + e.getMessage(), e);
+        }
         try {
             return t.execute(context);
         } catch (MustacheException e) {
@@ -69,23 +81,33 @@ public final class Templates {
     }
 
     private String load(String family, String name) {
+        return loadPath(family + "/" + name);
+    }
+
+    private String loadPath(String relative) {
         try {
             if (userDir.isPresent()) {
-                Path p = userDir.get().resolve(family).resolve(name);
+                Path p = userDir.get().resolve(relative);
                 if (!Files.isRegularFile(p)) {
-                    throw new InputError(p + ": template not found in --templates folder");
+                    throw new InputError(p + ": template not found in --templates folder (copy the bundled"
+                            + " templates folder and edit it)");
                 }
                 return Files.readString(p, StandardCharsets.UTF_8);
             }
             try (InputStream in = Templates.class.getClassLoader()
-                    .getResourceAsStream("templates/" + family + "/" + name)) {
+                    .getResourceAsStream("templates/" + relative)) {
                 if (in == null) {
-                    throw new InputError("no bundled template " + family + "/" + name);
+                    throw new InputError("no bundled template " + relative);
                 }
                 return new String(in.readAllBytes(), StandardCharsets.UTF_8);
             }
         } catch (IOException e) {
-            throw new InputError("cannot read template " + family + "/" + name + ": " + e.getMessage(), e);
+            throw new InputError("cannot read template " + relative + ": " + e.getMessage(), e);
         }
+    }
+
+    /** The one bundled instance, made on first use, so its compiled templates are shared. */
+    private static final class Bundled {
+        static final Templates INSTANCE = new Templates(Optional.empty());
     }
 }

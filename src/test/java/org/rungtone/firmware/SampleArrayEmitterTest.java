@@ -73,4 +73,15 @@ class SampleArrayEmitterTest {
         assertTrue(h.contains("#define T_FLASH PROGMEM\n"), h);
         assertTrue(h.contains("Licence of this file: MIT."), h);
     }
+
+    @Test
+    void emitsTenBitCodesAsUint16InThreeHexDigits() throws Exception {
+        Codes codes = Codes.of(10, 8000, new int[] {0, 1023, 512, 17});
+        List<Path> files = new SampleArrayEmitter(Templates.bundled()).emit(new SampleArrayEmitter.Request(
+                "toy_beep", codes, "", "test", List.of("source: toy.wav")), dir);
+        String h = Files.readString(files.get(0));
+        assertTrue(h.contains("#define TOY_BEEP_LENGTH 4u"), h);
+        assertTrue(h.contains("extern const uint16_t toy_beep_samples[TOY_BEEP_LENGTH];"), h);
+        assertTrue(Files.readString(files.get(1)).contains("    0x000, 0x3FF, 0x200, 0x011\n"));
+    }
 }

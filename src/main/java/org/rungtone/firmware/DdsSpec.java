@@ -1,0 +1,26 @@
+package org.rungtone.firmware;
+
+import org.rungtone.internal.Checks;
+
+/**
+ * Settings of the DDS engine; the wavetable is the request's one sound, 2^k codes long.
+ *
+ * @param phaseBits accumulator width n, k..32
+ * @param frequencyHz the frequency the oscillator starts at (changeable at run time)
+ */
+public record DdsSpec(int phaseBits, double frequencyHz) {
+    /** Accumulator width used when none is given. */
+    public static final int DEFAULT_PHASE_BITS = 32;
+
+    /** Checks the fields. */
+    public DdsSpec {
+        Checks.checkInput(phaseBits >= 1 && phaseBits <= 32, "--dds-phase-bits must be 1..32: %d", phaseBits);
+        Checks.checkInput(Double.isFinite(frequencyHz) && frequencyHz >= 0,
+                "--dds-frequency must be zero or positive: %s", frequencyHz);
+    }
+
+    /** A 32-bit accumulator starting at {@code frequencyHz}. */
+    public static DdsSpec of(double frequencyHz) {
+        return new DdsSpec(DEFAULT_PHASE_BITS, frequencyHz);
+    }
+}

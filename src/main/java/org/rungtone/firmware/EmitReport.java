@@ -1,0 +1,212 @@
+package org.rungtone.firmware;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+/**
+ * The report of an emission, one line per topic: target, engine, tick rate and timer, pins and strategy,
+ * port update order and glitch, storage, flash, sounds, DDS tuning, sweep. The same lines head every
+ * emitted file as its parameters.
+ */
+final class EmitReport {
+    private EmitReport() {
+    }
+
+    static List<String> lines(EmitPlan p) {
+        List<String> out = new ArrayList<>();
+        out.add("name: " + p.symbol);
+        out.add(target(p));
+        out.add(engine(p));
+        out.add(tick(p));
+        out.add("pins: " + p.pins.notation() + " on " + p.pins.portWidth() + "-bit ports: "
+                + String.join(", ", p.pins.describeBits()));
+        out.add(strategy(p));
+        out.add(portUpdate(p));
+        if (p.engine != PlaybackEngine.SWEEP) {
+            out.add(storage(p));
+        }
+        out.add(flash(p));
+        for (int i = 0; i < p.sounds.size(); i++) {
+            out.add(sound(p, i));
+        }
+        if (p.engine == PlaybackEngine.DDS) {
+            out.add(dds(p));
+        }
+        if (p.engine == PlaybackEngine.SWEEP) {
+            out.add(sweep(p));
+        }
+        return out;
+    }
+
+    /**
+     * Estimated CPU cycles between the writes of two ports: AVR {@code in/andi/or/out} is 4 cycles, a plain
+     * {@code out} 1 (ATmega328P instruction timings); a Cortex-M3 store to BSRR with the value ready about 3
+     * (STR 2 cycles plus address set-up). Estimates; 0 when unknown (generic port hook).
+     */
+    static int portGapCycles(EmitPlan p, String port) {
+        switch (p.family) {
+            case AVR:
+                return p.pins.mask(port) == 0xFF ? 1 : 4;
+            case CORTEXM:
+                return 3;
+            default:
+                return 0;
+        }
+    }
+
+    private static String target(EmitPlan p) {
+        String clock = Double.isNaN(p.request.cpuClockHz()) ? "" : ", CPU clock " + Fmt.hz(p.request.cpuClockHz());
+        switch (p.family) {
+            case AVR:
+                return "target: avr (8-bit AVR, ATmega328P register names)" + clock;
+            case CORTEXM:
+                return "target: cortexm (32-bit Cortex-M, GPIO with BSRR, STM32F4 default addresses)" + clock;
+            default:
+                return p.folder.equals(TargetFamily.GENERIC.folder())
+                        ? "target: generic C99, pins through the port hook " + p.symbol + "_port_write()" + clock
+                        : "target: " + p.folder + " (templates from --templates, driven like generic)" + clock;
+        }
+    }
+
+    private static String engine(EmitPlan p) {
+        switch (p.engine) {
+            case CLIP:
+                return "engine: clip, one-shot playback of " + count(p.sounds.size(), "sound");
+            case LOOP:
+                return "engine: loop, playback of " + count(p.sounds.size(), "sound") + " with loop points";
+            case DDS:
+                return "engine: dds, wavetable oscillator";
+            default:
+                return "engine: sweep, measurement steps through a list of codes";
+        }
+    }
+
+    private static String tick(EmitPlan p) {
+        if (p.timer.isEmpty()) {
+            return "tick rate: " + Fmt.hz(p.tickRateHz) + " (call " + p.symbol + "_tick() from your timer"
+                    + " interrupt at this rate)";
+        }
+        String s = "tick rate: " + Fmt.hz(p.requestedRateHz) + " requested; " + p.timer.get().describe();
+        return p.family.timers().isEmpty() ? s + " (for your timer; the generic code does not program it)" : s;
+    }
+
+    private static String strategy(EmitPlan p) {
+        String forced = p.request.pinStrategy() == PinStrategy.AUTO ? "" : " (forced)";
+        switch (p.strategy) {
+            case SHIFT:
+                return "pin strategy: shift and mask, one per port" + forced;
+            case TABLE:
+                return "pin strategy: lookup table, " + p.pins.ports().size() + " port(s) x "
+                        + Fmt.bytes(1L << p.bits) + " entries x " + p.pins.portWidth() / 8 + " byte(s) = "
+                        + Fmt.bytes(p.pins.tableBytes()) + " bytes" + forced;
+            default:
+                String why = p.request.pinStrategy() == PinStrategy.AUTO ? " (no table above "
+                        + PinMap.AUTO_TABLE_MAX_BITS + " bits)" : forced;
+                return "pin strategy: bit scatter, " + PinCode.termCount(p.pins) + " mask-and-shift terms" + why;
+        }
+    }
+
+    private static String portUpdate(EmitPlan p) {
+        List<String> ports = p.pins.ports();
+        String how;
+        switch (p.family) {
+            case AVR:
+                how = "PORTx written directly where the ladder owns the whole port, else masked"
+                        + " read-modify-write; other pins keep their levels";
+                break;
+            case CORTEXM:
+                how = "one BSRR write per port sets and resets the ladder pins at once; other pins untouched";
+                break;
+            default:
+                how = "one port-hook call per port with the ladder-pin mask";
+        }
+        if (ports.size() == 1) {
+            return "port update: port " + ports.get(0) + ", " + how;
+        }
+        StringBuilder gaps = new StringBuilder();
+        for (int i = 1; i < ports.size(); i++) {
+            int cycles = portGapCycles(p, ports.get(i));
+            if (cycles == 0) {
+                gaps.setLength(0);
+                gaps.append("the gap between writes depends on your port hook");
+                break;
+            }
+            if (gaps.length() > 0) {
+                gaps.append(", ");
+            }
+            gaps.append(ports.get(i - 1)).append(" to ").append(ports.get(i)).append(" about ").append(cycles)
+                    .append(" cycles");
+            if (!Double.isNaN(p.request.cpuClockHz())) {
+                gaps.append(String.format(Locale.ROOT, " (%.0f ns)", cycles / p.request.cpuClockHz() * 1e9));
+            }
+        }
+        return "port update: ports " + String.join(" then ", ports) + " in this fixed order, " + gaps
+                + "; in between, the ladder shows a mix of the old and new code (a short glitch); " + how;
+    }
+
+    private static String storage(EmitPlan p) {
+        SampleStorage other = p.storage == SampleStorage.PACKED ? SampleStorage.UNPACKED : SampleStorage.PACKED;
+        return "storage: " + p.storage.describe(p.bits) + ", " + Fmt.bytes(p.sampleBytes) + " bytes for "
+                + Fmt.bytes(p.samples.length) + " samples (" + other.describe(p.bits) + ": "
+                + Fmt.bytes(other.bytes(p.samples.length, p.bits)) + " bytes)";
+    }
+
+    private static String flash(EmitPlan p) {
+        StringBuilder b = new StringBuilder("flash (tables, without code): ");
+        List<String> parts = new ArrayList<>();
+        if (p.sampleBytes > 0) {
+            parts.add("samples " + Fmt.bytes(p.sampleBytes));
+        }
+        if (p.soundTableBytes > 0) {
+            parts.add("sound table " + Fmt.bytes(p.soundTableBytes));
+        }
+        if (p.pinTableBytes > 0) {
+            parts.add("pin tables " + Fmt.bytes(p.pinTableBytes));
+        }
+        if (p.sweepBytes > 0) {
+            parts.add("sweep codes " + Fmt.bytes(p.sweepBytes));
+        }
+        b.append(String.join(" + ", parts)).append(" = ").append(Fmt.bytes(p.totalBytes())).append(" bytes");
+        long budget = p.request.flashBudgetBytes();
+        if (budget > 0) {
+            b.append("; --flash-budget ").append(Fmt.bytes(budget)).append(" bytes, ")
+                    .append(Fmt.bytes(budget - p.totalBytes())).append(" left");
+        }
+        return b.toString();
+    }
+
+    private static String sound(EmitPlan p, int i) {
+        SoundClip s = p.sounds.get(i);
+        String line = String.format(Locale.ROOT, "sound %d %s: %s samples, %.1f ms, from index %d", i,
+                p.soundSymbols.get(i), Fmt.bytes(s.codes().length()), 1000.0 * s.codes().length()
+                        / s.codes().sampleRateHz(), p.soundStarts[i]);
+        if (p.engine == PlaybackEngine.LOOP) {
+            line += ", loop " + s.loopStart() + " .. " + s.loopEnd() + (s.loopsWhole() ? " (whole sound)" : "");
+        }
+        return line;
+    }
+
+    private static String dds(EmitPlan p) {
+        DdsSpec d = p.request.dds();
+        double actual = Dds.actualHz(p.ddsTuningWord, p.tickRateHz, d.phaseBits());
+        return String.format(Locale.ROOT, "dds: %d-bit phase accumulator, %d-entry table, resolution f_s/2^%d"
+                + " = %s; %s requested: tuning word M = %d, actual %s (%s Hz off)", d.phaseBits(),
+                p.samples.length, d.phaseBits(), Fmt.hz(Dds.resolutionHz(p.tickRateHz, d.phaseBits()), 4),
+                Fmt.hz(d.frequencyHz()), p.ddsTuningWord, Fmt.hz(actual, 9),
+                String.format(Locale.ROOT, "%+.6f", actual - d.frequencyHz()));
+    }
+
+    private static String sweep(EmitPlan p) {
+        SweepSpec s = p.request.sweep().orElseThrow();
+        String mode = p.button.isPresent() ? "advancing on each press of " + p.button.get().name()
+                + " (active low, pull-up, " + SweepSpec.DEBOUNCE_MILLIS + " ms debounce)"
+                : "each held " + Fmt.plain(s.holdMillis(), 3) + " ms (" + s.holdTicks() + " ticks)";
+        return "sweep: " + count(s.codes().length, "code") + " at " + Fmt.hz(SweepSpec.TICK_HZ) + " ticks, "
+                + mode;
+    }
+
+    private static String count(int n, String what) {
+        return n + " " + what + (n == 1 ? "" : "s");
+    }
+}

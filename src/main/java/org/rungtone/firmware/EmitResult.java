@@ -1,0 +1,26 @@
+package org.rungtone.firmware;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * What {@link FirmwareEmitter#emit} wrote and found.
+ *
+ * @param files the files written: header, player source, data source
+ * @param report one line per topic (target, engine, tick rate and timer, pins, strategy, port update and
+ *     glitch, storage, flash, sounds, DDS, sweep), also the parameters in every file's header comment
+ * @param flashBytes bytes of the emitted tables (samples, sound table, pin tables, sweep codes), without code
+ * @param timer the solved timer, when the target programs one (or a hint for generic with --timer)
+ * @param pinStrategy the strategy used for the pins
+ * @param warnings problems that do not stop the build
+ */
+public record EmitResult(List<Path> files, List<String> report, long flashBytes, Optional<TimerSetting> timer,
+        PinStrategy pinStrategy, List<String> warnings) {
+    /** Copies the lists. */
+    public EmitResult {
+        files = List.copyOf(files);
+        report = List.copyOf(report);
+        warnings = List.copyOf(warnings);
+    }
+}

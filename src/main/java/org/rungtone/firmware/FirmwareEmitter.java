@@ -1,0 +1,80 @@
+package org.rungtone.firmware;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.rungtone.internal.AtomicFiles;
+
+/**
+ * Turns a {@link FirmwareRequest} into C99 for the target: {@code NAME.h} (the API, every sound's id, the
+ * pin and table declarations), {@code NAME.c} (pin output, sample fetch, the playback engine, and on avr and
+ * cortexm the pin, timer and interrupt set-up) and {@code NAME_data.c} (samples, sound table, pin tables,
+ * sweep codes), rendered from {@code templates/<family>/}. All checks run before anything is written; the
+ * output is byte-identical for the same request.
+ */
+public final class FirmwareEmitter {
+    private FirmwareEmitter() {
+    }
+
+    /**
+     * The rendered files and the report, without writing anything.
+     *
+     * @param files file name to content, header first
+     * @param result the report; its {@code files} list is empty
+     */
+    public record Rendered(Map<String, String> files, EmitResult result) {
+        /** Copies the map, keeping its order. */
+        public Rendered {
+            files = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(files));
+        }
+    }
+
+    /**
+     * Checks the request and renders the files.
+     *
+     * @throws org.rungtone.internal.InputError for the first problem with the request: unknown target, bad
+     *     pins, unreachable rate, over the flash budget, a name that cannot become a C symbol, ...
+     */
+    public static Rendered render(FirmwareRequest request) {
+        EmitPlan plan = EmitPlan.of(request);
+        List<String> report = EmitReport.lines(plan);
+        List<String> parameters = new ArrayList<>(report);
+        parameters.addAll(request.settings());
+        Map<String, Object> shared = EmitContext.build(plan, parameters);
+        Templates t = request.templates();
+        String h = plan.symbol + ".h";
+        String c = plan.symbol + ".c";
+        String d = plan.symbol + "_data.c";
+        Map<String, String> files = new LinkedHashMap<>();
+        files.put(h, t.render(plan.folder, "player.h.mustache",
+                EmitContext.forFile(shared, h, "ladder-DAC player interface", true)));
+        files.put(c, t.render(plan.folder, "player.c.mustache",
+                EmitContext.forFile(shared, c, "ladder-DAC player", true)));
+        files.put(d, t.render(plan.folder, "data.c.mustache",
+                EmitContext.forFile(shared, d, "ladder-DAC player tables", false)));
+        EmitResult result = new EmitResult(List.of(), report, plan.totalBytes(), plan.timer, plan.strategy,
+                plan.warnings);
+        return new Rendered(files, result);
+    }
+
+    /**
+     * Checks the request, renders the files and writes them into {@code outDir} (created if needed), each
+     * through a temporary file and an atomic move.
+     *
+     * @throws org.rungtone.internal.InputError for a bad request (nothing is written) or an unusable folder
+     */
+    public static EmitResult emit(FirmwareRequest request, Path outDir) {
+        Rendered r = render(request);
+        AtomicFiles.prepareFolder(outDir);
+        List<Path> written = new ArrayList<>();
+        for (Map.Entry<String, String> f : r.files().entrySet()) {
+            Path p = outDir.resolve(f.getKey());
+            AtomicFiles.writeString(p, f.getValue());
+            written.add(p);
+        }
+        EmitResult e = r.result();
+        return new EmitResult(written, e.report(), e.flashBytes(), e.timer(), e.pinStrategy(), e.warnings());
+    }
+}

@@ -1,0 +1,88 @@
+package org.rungtone.firmware;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import org.rungtone.internal.Checks;
+import org.rungtone.internal.InputError;
+
+/**
+ * Checks the emitted tables against the user's {@code --flash-budget} and, when they do not fit, names a
+ * setting that would.
+ */
+public final class FlashBudget {
+    /** Sample rates tried when proposing a smaller setting, highest first. */
+    private static final double[] RATES_HZ = {48000, 44100, 32000, 22050, 16000, 11025, 8000, 6000, 4000};
+    /** Proposals drop at most this many bits. */
+    private static final int MAX_BITS_DROPPED = 4;
+
+    private FlashBudget() {
+    }
+
+    /**
+     * A setting that could be proposed instead, and the bytes it would need.
+     *
+     * @param label how the message names it, e.g. {@code 6-bit packed at 8 kHz}
+     * @param bytes flash bytes it needs
+     */
+    public record Candidate(String label, long bytes) {
+    }
+
+    /**
+     * Checks that {@code neededBytes} fit the budget.
+     *
+     * @param candidates settings to propose, in order of preference: the message names the first that fits
+     * @throws InputError when over budget, e.g. "needs 12,345 bytes, 2,345 bytes over the 10,000-byte
+     *     --flash-budget; 6-bit packed at 8 kHz would fit (7,812 bytes)"
+     */
+    public static void check(long neededBytes, long budgetBytes, List<Candidate> candidates) {
+        Checks.checkInput(budgetBytes > 0, "--flash-budget must be positive: %d", budgetBytes);
+        if (neededBytes <= budgetBytes) {
+            return;
+        }
+        String head = "needs " + Fmt.bytes(neededBytes) + " bytes, " + Fmt.bytes(neededBytes - budgetBytes)
+                + " bytes over the " + Fmt.bytes(budgetBytes) + "-byte --flash-budget";
+        for (Candidate c : candidates) {
+            if (c.bytes() <= budgetBytes) {
+                throw new InputError(head + "; " + c.label() + " would fit (" + Fmt.bytes(c.bytes())
+                        + " bytes)");
+            }
+        }
+        throw new InputError(head + "; no smaller bit depth or rate fits either: shorten the sound or raise"
+                + " --flash-budget");
+    }
+
+    /**
+     * Proposals for a sound of {@code samples} codes at {@code rateHz} and {@code bits} bits: packed storage
+     * at the same or up to four fewer bits, at the same rate or a common lower one; largest first (so the
+     * first that fits keeps the most), ties broken by more bits. The current setting is left out.
+     *
+     * @param fixedBytes bytes that do not depend on the setting (sound tables, pin tables)
+     */
+    public static List<Candidate> alternatives(long samples, double rateHz, int bits, SampleStorage current,
+            long fixedBytes) {
+        List<double[]> grid = new ArrayList<>();
+        List<Double> rates = new ArrayList<>();
+        rates.add(rateHz);
+        for (double r : RATES_HZ) {
+            if (r < rateHz * (1 - 1e-9)) {
+                rates.add(r);
+            }
+        }
+        for (double r : rates) {
+            for (int b = bits; b >= Math.max(1, bits - MAX_BITS_DROPPED); b--) {
+                if (r == rateHz && b == bits && current == SampleStorage.PACKED) {
+                    continue;
+                }
+                long n = (long) Math.ceil(samples * r / rateHz - 1e-9);
+                grid.add(new double[] {r, b, SampleStorage.PACKED.bytes(n, b) + fixedBytes});
+            }
+        }
+        grid.sort(Comparator.comparingDouble((double[] g) -> -g[2]).thenComparingDouble(g -> -g[1]));
+        List<Candidate> out = new ArrayList<>(grid.size());
+        for (double[] g : grid) {
+            out.add(new Candidate((int) g[1] + "-bit packed at " + Fmt.hz(g[0]), (long) g[2]));
+        }
+        return out;
+    }
+}

@@ -1,0 +1,97 @@
+package org.rungtone.firmware;
+
+import java.util.List;
+import java.util.Locale;
+import org.rungtone.internal.InputError;
+
+/**
+ * A family of target parts with its own template folder: how ports are written, where tables live and
+ * which timers can raise the sample interrupt.
+ */
+public enum TargetFamily {
+    /** Portable C99: the user supplies the port write and calls the tick from a timer interrupt. */
+    GENERIC("generic", List.of(8, 16, 32), 8, List.of(), null),
+    /** 8-bit AVR-class parts (register names of the ATmega328P): PORTx/DDRx, CTC timers, PROGMEM tables. */
+    AVR("avr", List.of(8), 8, List.of(TimerKind.AVR_TIMER1, TimerKind.AVR_TIMER0, TimerKind.AVR_TIMER2),
+            TimerKind.AVR_TIMER1),
+    /** 32-bit Cortex-M-class parts: GPIO with a BSRR set/reset register, SysTick or a TIMx interrupt. */
+    CORTEXM("cortexm", List.of(16), 16, List.of(TimerKind.SYSTICK, TimerKind.TIM16, TimerKind.TIM32),
+            TimerKind.SYSTICK);
+
+    private final String folder;
+    private final List<Integer> portWidths;
+    private final int defaultPortWidth;
+    private final List<TimerKind> timers;
+    private final TimerKind defaultTimer;
+
+    TargetFamily(String folder, List<Integer> portWidths, int defaultPortWidth, List<TimerKind> timers,
+            TimerKind defaultTimer) {
+        this.folder = folder;
+        this.portWidths = portWidths;
+        this.defaultPortWidth = defaultPortWidth;
+        this.timers = timers;
+        this.defaultTimer = defaultTimer;
+    }
+
+    /** The option spelling and template folder name. */
+    public String folder() {
+        return folder;
+    }
+
+    /** Port register widths the family's templates handle. */
+    public List<Integer> portWidths() {
+        return portWidths;
+    }
+
+    /** The port width used when the user gives none. */
+    public int defaultPortWidth() {
+        return defaultPortWidth;
+    }
+
+    /** Timers the templates can program; empty for {@link #GENERIC}, whose user owns the timer. */
+    public List<TimerKind> timers() {
+        return timers;
+    }
+
+    /** The timer used when the user gives none; null for {@link #GENERIC}. */
+    public TimerKind defaultTimer() {
+        return defaultTimer;
+    }
+
+    /** True when port names must be letters (PORTB, GPIOB). */
+    public boolean letterPortsOnly() {
+        return this != GENERIC;
+    }
+
+    /** Flash bytes the family's part can address with its table reads; {@code Long.MAX_VALUE} if no limit. */
+    public long maxTableBytes() {
+        return this == AVR ? 65536 : Long.MAX_VALUE;
+    }
+
+    /**
+     * Parses the option spelling.
+     *
+     * @throws InputError naming the known families when the text names none
+     */
+    public static TargetFamily parse(String text) {
+        String t = text == null ? "" : text.trim().toLowerCase(Locale.ROOT);
+        for (TargetFamily f : values()) {
+            if (f.folder.equals(t)) {
+                return f;
+            }
+        }
+        throw new InputError("--target '" + text + "' is unknown; known target families: " + knownNames());
+    }
+
+    /** The known families as the option spells them: {@code generic, avr, cortexm}. */
+    public static String knownNames() {
+        StringBuilder b = new StringBuilder();
+        for (TargetFamily f : values()) {
+            if (b.length() > 0) {
+                b.append(", ");
+            }
+            b.append(f.folder);
+        }
+        return b.toString();
+    }
+}

@@ -1,0 +1,114 @@
+package org.rungtone.firmware;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.stream.Collectors;
+import java.util.stream.IntStream;
+import org.rungtone.internal.InputError;
+
+/**
+ * A hardware timer family that raises the sample-rate interrupt: its counter width, the prescalers it
+ * offers and the register that holds the reload value. In every family one interrupt period is
+ * {@code prescaler × (reload + 1)} clock cycles.
+ *
+ * <p>Prescaler sets and register names are those of the datasheets: ATmega328P Timer/Counter0/1/2 in CTC
+ * mode (Microchip ATmega328P datasheet, clock select bits CSn2:0); the ARMv7-M SysTick (24-bit, reload in
+ * SYST_RVR, clocked by the processor clock; ARMv7-M Architecture Reference Manual, B3.3); a general-purpose
+ * timer with a 16-bit prescaler register (PSC = prescaler − 1) and a 16- or 32-bit auto-reload register ARR,
+ * as on STM32 TIMx.
+ */
+public enum TimerKind {
+    /** AVR 8-bit Timer/Counter0, CTC on OCR0A. */
+    AVR_TIMER0("timer0", 8, new int[] {1, 8, 64, 256, 1024}, "OCR0A"),
+    /** AVR 16-bit Timer/Counter1, CTC on OCR1A. */
+    AVR_TIMER1("timer1", 16, new int[] {1, 8, 64, 256, 1024}, "OCR1A"),
+    /** AVR 8-bit Timer/Counter2 (asynchronous-capable), CTC on OCR2A. */
+    AVR_TIMER2("timer2", 8, new int[] {1, 8, 32, 64, 128, 256, 1024}, "OCR2A"),
+    /** Cortex-M SysTick: 24-bit down counter, no prescaler. */
+    SYSTICK("systick", 24, new int[] {1}, "SYST_RVR"),
+    /** General-purpose timer, 16-bit counter, prescaler 1..65536. */
+    TIM16("tim16", 16, null, "ARR"),
+    /** General-purpose timer, 32-bit counter, prescaler 1..65536. */
+    TIM32("tim32", 32, null, "ARR");
+
+    private static final int GENERAL_MAX_PRESCALER = 65536;
+
+    private final String optionName;
+    private final int counterBits;
+    private final int[] prescalers;
+    private final String reloadRegister;
+
+    TimerKind(String optionName, int counterBits, int[] prescalers, String reloadRegister) {
+        this.optionName = optionName;
+        this.counterBits = counterBits;
+        this.prescalers = prescalers;
+        this.reloadRegister = reloadRegister;
+    }
+
+    /** The option spelling, e.g. {@code timer1}, {@code systick}, {@code tim16}. */
+    public String optionName() {
+        return optionName;
+    }
+
+    /** Counter width in bits. */
+    public int counterBits() {
+        return counterBits;
+    }
+
+    /** The largest reload value: 2^bits − 1. */
+    public long maxReload() {
+        return (1L << counterBits) - 1;
+    }
+
+    /** Name of the reload register as the datasheet writes it. */
+    public String reloadRegister() {
+        return reloadRegister;
+    }
+
+    /** True for a free prescaler 1..65536 rather than a fixed set. */
+    public boolean continuousPrescaler() {
+        return prescalers == null;
+    }
+
+    /** The available prescalers in ascending order. */
+    public IntStream prescalers() {
+        return prescalers == null ? IntStream.rangeClosed(1, GENERAL_MAX_PRESCALER) : IntStream.of(prescalers);
+    }
+
+    /** The largest prescaler. */
+    public int maxPrescaler() {
+        return prescalers == null ? GENERAL_MAX_PRESCALER : prescalers[prescalers.length - 1];
+    }
+
+    /** A short description: {@code timer1 (16-bit, prescalers 1/8/64/256/1024)}. */
+    public String describe() {
+        String p;
+        if (prescalers == null) {
+            p = "prescaler 1..65536";
+        } else if (prescalers.length == 1) {
+            p = "no prescaler";
+        } else {
+            p = "prescalers " + IntStream.of(prescalers).mapToObj(Integer::toString)
+                    .collect(Collectors.joining("/"));
+        }
+        return optionName + " (" + counterBits + "-bit, " + p + ")";
+    }
+
+    /**
+     * Parses the option spelling.
+     *
+     * @throws InputError when the text names no timer
+     */
+    public static TimerKind parse(String text) {
+        String t = text == null ? "" : text.trim().toLowerCase(Locale.ROOT);
+        List<String> names = new ArrayList<>();
+        for (TimerKind k : values()) {
+            if (k.optionName.equals(t)) {
+                return k;
+            }
+            names.add(k.optionName);
+        }
+        throw new InputError("--timer '" + text + "' is unknown; use one of " + String.join(", ", names));
+    }
+}

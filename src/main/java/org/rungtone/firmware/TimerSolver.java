@@ -1,0 +1,91 @@
+package org.rungtone.firmware;
+
+import org.rungtone.internal.Checks;
+import org.rungtone.internal.InputError;
+
+/**
+ * Chooses the prescaler and reload value that bring a timer's interrupt rate closest to a requested sample
+ * rate.
+ *
+ * <p>For a clock f_clk, prescaler p and reload r the interrupt rate is f = f_clk / (p · (r + 1)). For each
+ * available p the best period is one of the two integers around f_clk / (p · f_req), clamped to
+ * [2, 2^bits]; the solver keeps the setting with the smallest |error|, and among equal errors the smallest
+ * prescaler (finest later adjustment). Error in ppm = (f − f_req) / f_req · 10^6.
+ */
+public final class TimerSolver {
+    /** Default tolerance for the achieved rate: 1000 ppm (0.1 %, a pitch shift of 1.7 cents). */
+    public static final double DEFAULT_TOLERANCE_PPM = 1000;
+
+    private TimerSolver() {
+    }
+
+    /**
+     * The best setting for {@code rateHz}.
+     *
+     * @param clockHz timer input clock in hertz
+     * @param kind timer family
+     * @param rateHz requested interrupt rate in hertz
+     * @param tolerancePpm largest acceptable |error| in ppm
+     * @throws InputError when the rate is outside what the timer can make from the clock, or no setting
+     *     comes within the tolerance (the message names the closest setting)
+     */
+    public static TimerSetting solve(double clockHz, TimerKind kind, double rateHz, double tolerancePpm) {
+        Checks.checkPositive(clockHz, "--cpu-clock");
+        Checks.checkPositive(rateHz, "--rate");
+        Checks.checkInput(Double.isFinite(tolerancePpm) && tolerancePpm >= 0,
+                "--rate-tolerance must be zero or positive: %s", tolerancePpm);
+        double fastest = clockHz / 2;
+        double slowest = clockHz / ((double) kind.maxPrescaler() * (kind.maxReload() + 1));
+        if (rateHz > fastest) {
+            throw new InputError("--rate " + Fmt.hz(rateHz) + " is too fast for " + kind.describe() + " at a "
+                    + Fmt.hz(clockHz) + " clock: the fastest is " + Fmt.hz(fastest)
+                    + "; lower --rate or raise --cpu-clock");
+        }
+        if (rateHz < slowest * (1 - tolerancePpm * 1e-6)) {
+            throw new InputError("--rate " + Fmt.hz(rateHz) + " is too slow for " + kind.describe() + " at a "
+                    + Fmt.hz(clockHz) + " clock: the slowest is " + Fmt.hz(slowest)
+                    + "; choose a wider --timer or a higher --rate");
+        }
+        TimerSetting best = closest(clockHz, kind, rateHz);
+        if (Math.abs(best.errorPpm()) > tolerancePpm) {
+            throw new InputError("--rate " + Fmt.hz(rateHz) + " cannot be made within " + Fmt.plain(tolerancePpm,
+                    1) + " ppm by " + kind.describe() + " at a " + Fmt.hz(clockHz) + " clock: the closest is "
+                    + Fmt.hz(best.achievedHz()) + " (" + Fmt.ppm(best.errorPpm()) + " ppm, prescaler "
+                    + best.prescaler() + ", " + kind.reloadRegister() + " = " + best.reload() + "); use --rate "
+                    + Fmt.plain(best.achievedHz(), 3) + " or raise --rate-tolerance");
+        }
+        return best;
+    }
+
+    /**
+     * The setting with the smallest error, whatever its size.
+     *
+     * @throws IllegalArgumentException when the clock or rate is not positive
+     */
+    public static TimerSetting closest(double clockHz, TimerKind kind, double rateHz) {
+        Checks.checkArgument(clockHz > 0 && rateHz > 0, "clock and rate must be positive: %s, %s", clockHz,
+                rateHz);
+        long maxPeriod = kind.maxReload() + 1;
+        int[] ps = kind.prescalers().toArray();
+        TimerSetting best = null;
+        double bestAbs = Double.POSITIVE_INFINITY;
+        for (int p : ps) {
+            double ideal = clockHz / (p * rateHz);
+            long lo = clamp((long) Math.floor(ideal), maxPeriod);
+            long hi = clamp((long) Math.ceil(ideal), maxPeriod);
+            for (long period : lo == hi ? new long[] {lo} : new long[] {lo, hi}) {
+                double achieved = clockHz / ((double) p * period);
+                double ppm = (achieved - rateHz) / rateHz * 1e6;
+                if (Math.abs(ppm) < bestAbs) {
+                    bestAbs = Math.abs(ppm);
+                    best = new TimerSetting(kind, clockHz, p, period - 1, rateHz, achieved, ppm);
+                }
+            }
+        }
+        return best;
+    }
+
+    private static long clamp(long period, long maxPeriod) {
+        return Math.max(2, Math.min(maxPeriod, period));
+    }
+}

@@ -1,0 +1,234 @@
+package org.rungtone.firmware;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.function.UnaryOperator;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.rungtone.internal.AtomicFiles;
+import org.rungtone.internal.InputError;
+import org.rungtone.quantize.Codes;
+
+class FirmwareEmitterTest {
+    @TempDir
+    Path dir;
+
+    private static Codes ramp(int bits, int n, double rate) {
+        int[] c = new int[n];
+        for (int i = 0; i < n; i++) {
+            c[i] = (i * 5) % (1 << bits);
+        }
+        return Codes.of(bits, rate, c);
+    }
+
+    /** A small door-chime project: two 4-bit sounds on scattered pins, looped, packed. */
+    private static FirmwareRequest.Builder chimeProject() {
+        return FirmwareRequest.builder().name("Door Chime").toolVersion("0.1.0-test").pins("A3,A7,C0,C1")
+                .storage(SampleStorage.PACKED).engine(PlaybackEngine.LOOP)
+                .sound("ding", ramp(4, 24, 8000), 4, 20).sound("dong", ramp(4, 10, 8000))
+                .setting("source: examples/greenhouse/chime.wav");
+    }
+
+    private static FirmwareRequest.Builder avrProject() {
+        return FirmwareRequest.builder().family("avr").name("alarm").toolVersion("0.1.0-test").pins("D2-D7")
+                .cpuClockHz(16e6).sound("warble", ramp(6, 16, 22050));
+    }
+
+    @Test
+    void genericHeaderMatchesGolden() throws IOException {
+        assertGolden("golden/generic_door_chime.h", FirmwareEmitter.render(chimeProject().build()).files()
+                .get("door_chime.h"));
+    }
+
+    @Test
+    void avrPlayerMatchesGolden() throws IOException {
+        assertGolden("golden/avr_alarm.c", FirmwareEmitter.render(avrProject().build()).files().get("alarm.c"));
+    }
+
+    private static void assertGolden(String resource, String actual) throws IOException {
+        String expected;
+        try (InputStream in = FirmwareEmitterTest.class.getClassLoader().getResourceAsStream(resource)) {
+            if (in == null) {
+                AtomicFiles.writeString(Path.of("target", "golden-actual", resource), actual);
+                throw new AssertionError(resource + " missing; actual output written under target/golden-actual");
+            }
+            expected = new String(in.readAllBytes(), StandardCharsets.UTF_8);
+        }
+        if (!expected.equals(actual)) {
+            AtomicFiles.writeString(Path.of("target", "golden-actual", resource), actual);
+        }
+        assertEquals(expected, actual);
+    }
+
+    @Test
+    void writesThreeFilesAndReports() {
+        EmitResult r = FirmwareEmitter.emit(avrProject().build(), dir);
+        assertEquals(List.of(dir.resolve("alarm.h"), dir.resolve("alarm.c"), dir.resolve("alarm_data.c")),
+                r.files());
+        r.files().forEach(f -> assertTrue(Files.isRegularFile(f)));
+        assertEquals(PinStrategy.SHIFT, r.pinStrategy());
+        assertEquals(725, r.timer().orElseThrow().reload());
+        // 16 uint8_t samples + start and end of one sound as uint16_t
+        assertEquals(16 + 4, r.flashBytes());
+        assertTrue(r.report().contains("tick rate: 22.05 kHz requested; timer1 at 16 MHz: prescaler 1, OCR1A = 725"
+                + " (726 cycles per tick), 22.0386 kHz (-518.5 ppm)"), r.report().toString());
+        assertTrue(r.report().contains("pin strategy: shift and mask, one per port"));
+    }
+
+    @Test
+    void outputIsDeterministic() {
+        assertEquals(FirmwareEmitter.render(chimeProject().build()).files(),
+                FirmwareEmitter.render(chimeProject().build()).files());
+    }
+
+    @Test
+    void reportsTheGlitchBetweenPorts() {
+        FirmwareRequest r = avrProject().pins("B0-B2,D5-D7").build();
+        List<String> report = FirmwareEmitter.render(r).result().report();
+        // B is shared with other pins: in/andi/or/out, 4 cycles at 16 MHz = 250 ns before D follows
+        assertTrue(report.stream().anyMatch(l -> l.startsWith("port update: ports B then D in this fixed order,"
+                + " B to D about 4 cycles (250 ns);")), report.toString());
+    }
+
+    @Test
+    void reportsTableSizeAndDdsTuning() {
+        FirmwareRequest r = FirmwareRequest.builder().name("sweepgen").pins("A3,A7,C0,C1,B2,B1")
+                .engine(PlaybackEngine.DDS).sound("sine", Codes.of(6, 16000, Dds.sineTable(8, 6)))
+                .dds(DdsSpec.of(440)).build();
+        List<String> report = FirmwareEmitter.render(r).result().report();
+        assertTrue(report.contains("pin strategy: lookup table, 3 port(s) x 64 entries x 1 byte(s) = 192 bytes"),
+                report.toString());
+        // M = round(440 * 2^32 / 16000) = 118,111,601 (118,111,600.64); f = M * 16000 / 2^32
+        assertTrue(report.stream().anyMatch(l -> l.startsWith("dds: 32-bit phase accumulator, 256-entry table,"
+                + " resolution f_s/2^32 = 3.725 µHz; 440 Hz requested: tuning word M = 118111601, actual"
+                + " 440.000001 Hz")), report.toString());
+    }
+
+    @Test
+    void headerListsEveryParameterAndTheCaution() {
+        String h = FirmwareEmitter.render(chimeProject().build()).files().get("door_chime.h");
+        assertTrue(h.contains("Licence of this file: MIT"));
+        assertTrue(h.contains("generated by Rungtone 0.1.0-test"));
+        assertTrue(h.contains(" *   source: examples/greenhouse/chime.wav"));
+        assertTrue(h.contains("Never drive a speaker directly from the pins or from a bare op-amp output"));
+        assertTrue(h.contains("#define DOOR_CHIME_SOUND_DING 0u"));
+        assertTrue(h.contains("#define DOOR_CHIME_SOUND_DONG 1u"));
+    }
+
+    @Test
+    void userTemplatesCanAddAFamily() throws IOException {
+        Path t = dir.resolve("templates");
+        for (String f : List.of("player.h.mustache", "player.c.mustache", "data.c.mustache")) {
+            AtomicFiles.writeString(t.resolve("pic").resolve(f), "/* pic " + f + " for {{symbol}} */\n");
+        }
+        FirmwareRequest r = chimeProject().family("pic").templates(Templates.fromFolder(t)).build();
+        FirmwareEmitter.Rendered out = FirmwareEmitter.render(r);
+        assertEquals("/* pic player.c.mustache for door_chime */\n", out.files().get("door_chime.c"));
+        assertTrue(out.result().report().contains(
+                "target: pic (templates from --templates, driven like generic)"));
+    }
+
+    // Bad input: one clear line each, and nothing written.
+
+    private void assertRefused(String message, UnaryOperator<FirmwareRequest.Builder> change,
+            FirmwareRequest.Builder base) {
+        Path out = dir.resolve("out");
+        InputError e = assertThrows(InputError.class, () -> FirmwareEmitter.emit(change.apply(base).build(), out));
+        assertEquals(message, e.getMessage());
+        assertFalse(e.getMessage().contains("\n"));
+        assertFalse(Files.exists(out), "nothing may be written");
+    }
+
+    @Test
+    void refusesDuplicatePins() {
+        assertRefused("--pins 'D2-D6,D4': pin D4 at column 7 is already bit 2; each pin may appear once",
+                b -> b.pins("D2-D6,D4"), avrProject());
+    }
+
+    @Test
+    void refusesAPinBeyondThePortWidth() {
+        assertRefused("--pins 'D3-D8': pin D8 at column 4 is beyond the 8-bit port (pins 0-7)",
+                b -> b.pins("D3-D8"), avrProject());
+    }
+
+    @Test
+    void refusesMoreBitsThanPins() {
+        assertRefused("--pins D2-D6 lists 5 pins but the codes have 6 bits; list exactly one pin per bit, bit 0"
+                + " first", b -> b.pins("D2-D6"), avrProject());
+    }
+
+    @Test
+    void refusesAnUnknownTarget() {
+        assertRefused("--target 'pic' is unknown; known target families: generic, avr, cortexm",
+                b -> b.family("pic"), avrProject());
+    }
+
+    @Test
+    void refusesARateTheClockCannotMake() {
+        // timer0 at 16 MHz is no slower than 16 MHz / (1024 * 256) = 61.04 Hz
+        assertRefused("--rate 40 Hz is too slow for timer0 (8-bit, prescalers 1/8/64/256/1024) at a 16 MHz"
+                + " clock: the slowest is 61.0352 Hz; choose a wider --timer or a higher --rate",
+                b -> FirmwareRequest.builder().family("avr").name("alarm").pins("D2-D7").cpuClockHz(16e6)
+                        .timer(TimerKind.AVR_TIMER0).sound("hum", ramp(6, 16, 40)), avrProject());
+        assertRefused("--rate 22.05 kHz cannot be made within 100 ppm by timer1 (16-bit, prescalers"
+                + " 1/8/64/256/1024) at a 16 MHz clock: the closest is 22.0386 kHz (-518.5 ppm, prescaler 1,"
+                + " OCR1A = 725); use --rate 22038.567 or raise --rate-tolerance",
+                b -> b.rateTolerancePpm(100), avrProject());
+    }
+
+    @Test
+    void refusesATimerTheFamilyDoesNotHave() {
+        assertRefused("--timer systick is not available on target avr; use timer1, timer0, timer2",
+                b -> b.timer(TimerKind.SYSTICK), avrProject());
+        assertRefused("--cpu-clock is required for target avr (the clock that drives the timer, e.g. 16MHz)",
+                b -> b.cpuClockHz(Double.NaN), avrProject());
+    }
+
+    @Test
+    void refusesAnOverBudgetBuildAndProposesASetting() {
+        // 16,000 unpacked 8-bit samples at 16 kHz plus a 4-byte sound table. The largest smaller setting:
+        // 11,025 samples at 11.025 kHz, 7 bits packed: ceil(11,025 * 7 / 8) + 4 = 9,651 bytes.
+        assertRefused("needs 16,004 bytes, 6,004 bytes over the 10,000-byte --flash-budget; 7-bit packed at"
+                + " 11.025 kHz would fit (9,651 bytes)", b -> FirmwareRequest.builder().name("chime").pins("B0-B7")
+                        .sound("chime", ramp(8, 16000, 16000)).flashBudgetBytes(10000), avrProject());
+    }
+
+    @Test
+    void refusesNamesThatCannotBecomeCIdentifiers() {
+        assertRefused("--name '***' has no letters or digits to make a C symbol from; use e.g. --name door_chime",
+                b -> b.name("***"), avrProject());
+        assertRefused("--name 'int' would make the C keyword 'int'; choose another name, e.g. int_sound",
+                b -> b.name("int"), avrProject());
+        assertRefused("sound name '!' cannot become a C identifier; use letters, digits and underscores, not a C"
+                + " keyword, at most 40 characters, e.g. door_chime", b -> b.sound("!", ramp(6, 16, 22050)),
+                avrProject());
+        assertRefused("sound name 'Count' would clash with DOOR_CHIME_SOUND_COUNT; rename the sound",
+                b -> b.sound("Count", ramp(4, 4, 8000)), chimeProject());
+        assertRefused("sounds 'ding' and 'Ding' both become the C name 'ding'; rename one",
+                b -> b.sound("Ding", ramp(4, 4, 8000)), chimeProject());
+    }
+
+    @Test
+    void refusesMismatchedSounds() {
+        assertRefused("sounds 'ding' (8 kHz) and 'fast' (16 kHz) differ in sample rate; resample them to one --rate",
+                b -> b.sound("fast", ramp(4, 4, 16000)), chimeProject());
+        assertRefused("the dds wavetable 'wave' has 100 samples; it needs a power of two from 2 to 65536 (one"
+                + " period)", b -> FirmwareRequest.builder().name("osc").pins("B0-B5").engine(PlaybackEngine.DDS)
+                        .sound("wave", ramp(6, 100, 8000)), chimeProject());
+    }
+
+    @Test
+    void refusesAButtonOnALadderPin() {
+        assertRefused("--button D3 is also ladder bit 1 in --pins; choose a free pin",
+                b -> b.sweep(SweepSpec.onButton(6, new int[] {1, 2}, "D3")), avrProject());
+    }
+}

@@ -1,0 +1,194 @@
+package org.rungtone.firmware;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNull;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.Arguments;
+import org.junit.jupiter.params.provider.MethodSource;
+import org.rungtone.firmware.MockPortRun.Event;
+import org.rungtone.ladder.LevelTable;
+import org.rungtone.quantize.Codes;
+import org.rungtone.quantize.Dither;
+import org.rungtone.quantize.Quantizer;
+import org.rungtone.source.Signal;
+
+/**
+ * Runs the generic player on the host against a mock port: what reaches the pins must be exactly the
+ * quantizer's codes (clip, loop), the Java DDS reference model (dds), or the sweep list at the right ticks.
+ */
+class HostReplayTest {
+    @TempDir
+    Path dir;
+
+    /** A door-chime-like decaying two-tone clip, quantized with TPDF dither onto an ideal ladder. */
+    static Codes chime(int bits, int samples) {
+        double rate = 8000;
+        double[] x = new double[samples];
+        for (int i = 0; i < samples; i++) {
+            double t = i / rate;
+            x[i] = Math.exp(-6 * t) * (0.6 * Math.sin(2 * Math.PI * 659.3 * t) + 0.35 * Math.sin(
+                    2 * Math.PI * 523.3 * t));
+        }
+        Quantizer q = new Quantizer(LevelTable.ideal(bits, 5.0), Dither.TPDF, 42);
+        return q.apply(Signal.of(x, rate)).codes();
+    }
+
+    static Stream<Arguments> pinMaps() {
+        List<Arguments> out = new ArrayList<>();
+        String[][] maps = {
+            {"B0-B5", "8"},                  // contiguous: one shift
+            {"A3,A7,C0,C1,B2,B1", "8"},      // scattered over three ports: lookup tables
+            {"B2-B5,D6,D7", "8"},            // two ports, one shift each
+            {"A26-A31", "32"},               // the top of a 32-bit port
+            {"P1.7-P1.2", "16"},             // a numbered port, descending
+            {"A0-A5,B7,B5,B3,B1,C4,C0", "8"} // 12 bits over three ports: scatter code
+        };
+        for (String[] m : maps) {
+            for (SampleStorage s : SampleStorage.values()) {
+                out.add(Arguments.of(m[0], Integer.parseInt(m[1]), s));
+            }
+        }
+        return out.stream();
+    }
+
+    private static FirmwareRequest.Builder base(String pins, int width, SampleStorage storage) {
+        return FirmwareRequest.builder().name("mock").toolVersion("test").pins(pins).portWidth(width)
+                .storage(storage);
+    }
+
+    @ParameterizedTest(name = "{0} ({1}-bit ports), {2}")
+    @MethodSource("pinMaps")
+    void clipReachesThePinsExactly(String pins, int width, SampleStorage storage) {
+        int bits = PinMap.parse(pins, width).bits();
+        Codes codes = chime(bits, 700);
+        List<Event> events = MockPortRun.run(base(pins, width, storage).sound("chime", codes).build(), dir,
+                false, "0", "0", "0");
+        assertEquals(1 << (bits - 1), events.get(0).code(), "init parks the ladder at the mid code");
+        assertEquals(toList(codes.codes()), MockPortRun.tickCodes(events));
+        assertNull(events.get(events.size() - 1).code(), "nothing is written once the clip is done");
+    }
+
+    @Test
+    void playsTheChosenSoundOfAProject() {
+        Codes a = chime(6, 300);
+        Codes b = chime(6, 450);
+        int[] bc = b.codes();
+        for (int i = 0; i < bc.length; i++) {
+            bc[i] = 63 - bc[i];
+        }
+        Codes inverted = Codes.of(6, 8000, bc);
+        FirmwareRequest r = base("D2-D7", 8, SampleStorage.PACKED).sound("door", a).sound("alarm", inverted)
+                .build();
+        assertEquals(toList(bc), MockPortRun.tickCodes(MockPortRun.run(r, dir, false, "1", "0", "0")));
+    }
+
+    @Test
+    void loopRepeatsBetweenLoopPointsThenPlaysTheTailAfterRelease() {
+        Codes codes = chime(6, 100);
+        int loopStart = 20;
+        int loopEnd = 60;
+        int beforeRelease = 250;
+        FirmwareRequest r = base("A3,A7,C0,C1,B2,B1", 8, SampleStorage.PACKED).engine(PlaybackEngine.LOOP)
+                .sound("chime", codes, loopStart, loopEnd).build();
+        List<Integer> got = MockPortRun.tickCodes(MockPortRun.run(r, dir, true, "0", "1",
+                Integer.toString(beforeRelease)));
+        // Expected: samples 0..59, then 20..59 again and again; after 250 ticks the loop is released and
+        // playback runs on from where it is to sample 99.
+        List<Integer> want = new ArrayList<>();
+        int pos = 0;
+        boolean looping = true;
+        int[] c = codes.codes();
+        while (pos < c.length) {
+            want.add(c[pos]);
+            pos++;
+            if (want.size() == beforeRelease) {
+                looping = false;
+            }
+            if (looping && pos == loopEnd) {
+                pos = loopStart;
+            }
+        }
+        assertEquals(want, got);
+    }
+
+    static Stream<Arguments> ddsCases() {
+        return Stream.of(Arguments.of(32, 8, SampleStorage.UNPACKED, 441),
+                Arguments.of(24, 8, SampleStorage.PACKED, 1234),
+                Arguments.of(32, 12, SampleStorage.PACKED, 3001),
+                Arguments.of(16, 10, SampleStorage.UNPACKED, 97));
+    }
+
+    @ParameterizedTest(name = "{0}-bit phase, {1}-bit codes, {2}, {3} Hz")
+    @MethodSource("ddsCases")
+    void ddsMatchesTheReferenceModel(int phaseBits, int bits, SampleStorage storage, int hz) {
+        int[] table = Dds.sineTable(8, bits);
+        String pins = bits == 8 ? "B0-B7" : bits == 10 ? "B0-B7,C0,C1" : "A0-A5,B7,B5,B3,B1,C4,C0";
+        FirmwareRequest r = base(pins, 8, storage).engine(PlaybackEngine.DDS)
+                .sound("sine", Codes.of(bits, 8000, table)).dds(new DdsSpec(phaseBits, 1000)).build();
+        List<Event> events = MockPortRun.run(r, dir, false, Integer.toString(hz), "3000");
+        long m = events.stream().filter(e -> e.kind() == 'M').findFirst().orElseThrow().value();
+        // MT-085: M = round(f * 2^n / fs)
+        assertEquals(Dds.tuningWord(hz, 8000, phaseBits), m);
+        assertEquals(toList(new Dds(phaseBits, table).run(m, 3000)), MockPortRun.tickCodes(events));
+    }
+
+    @Test
+    void sweepHoldsEachCodeForTheGivenTicks() {
+        int[] codes = {0, 63, 1, 62, 32};
+        FirmwareRequest r = base("B0,B1,D7,D6,C0,C1", 8, SampleStorage.UNPACKED)
+                .sweep(SweepSpec.holding(6, codes, 3)).build();
+        List<Event> events = MockPortRun.run(r, dir, false);
+        Event start = events.stream().filter(e -> e.kind() == 'S').findFirst().orElseThrow();
+        assertEquals(codes[0], start.code());
+        List<int[]> writes = tickWrites(events);
+        // code k (k >= 1) goes out in tick 3k - 1 (0-based): each code is held exactly 3 ticks
+        assertEquals(List.of("2:63", "5:1", "8:62", "11:32"), format(writes));
+        assertEquals(15, events.stream().filter(e -> e.kind() == 'T').count(), "done after 5 x 3 ticks");
+    }
+
+    @Test
+    void sweepAdvancesOnDebouncedPresses() {
+        int[] codes = {5, 40, 17};
+        FirmwareRequest r = base("B0-B5", 8, SampleStorage.UNPACKED)
+                .sweep(SweepSpec.onButton(6, codes, "D2")).build();
+        // presses (tick ranges): long, a 5-tick bounce, long, long
+        List<Event> events = MockPortRun.run(r, dir, false, "100", "160", "300", "305", "400", "460", "600",
+                "700");
+        int debounce = SweepSpec.DEBOUNCE_MILLIS; // ticks at 1 kHz
+        assertEquals(List.of((100 + debounce - 1) + ":40", (400 + debounce - 1) + ":17"),
+                format(tickWrites(events)));
+        long ticks = events.stream().filter(e -> e.kind() == 'T').count();
+        assertEquals(600 + debounce, ticks, "the press after the last code ends the sweep");
+    }
+
+    private static List<int[]> tickWrites(List<Event> events) {
+        List<int[]> out = new ArrayList<>();
+        for (Event e : events) {
+            if (e.kind() == 'T' && e.code() != null) {
+                out.add(new int[] {e.tick(), e.code()});
+            }
+        }
+        return out;
+    }
+
+    private static List<String> format(List<int[]> writes) {
+        List<String> out = new ArrayList<>();
+        writes.forEach(w -> out.add(w[0] + ":" + w[1]));
+        return out;
+    }
+
+    private static List<Integer> toList(int[] a) {
+        List<Integer> out = new ArrayList<>(a.length);
+        for (int v : a) {
+            out.add(v);
+        }
+        return out;
+    }
+}

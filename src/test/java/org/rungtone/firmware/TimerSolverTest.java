@@ -1,0 +1,90 @@
+package org.rungtone.firmware;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+
+import org.junit.jupiter.api.Test;
+import org.rungtone.internal.InputError;
+
+class TimerSolverTest {
+    @Test
+    void avrTimer1At16MHzFor22050Hz() {
+        // Hand computation: f = 16 MHz / (p * (OCR1A + 1)).
+        //   p = 1: 16,000,000 / 22,050 = 725.62 -> period 726: 22,038.567 Hz, -518.48 ppm
+        //                                       period 725: 22,068.966 Hz, +860.11 ppm
+        //   p = 8: 90.70 -> period 91: 21,978.02 Hz, -3,264 ppm; larger prescalers are coarser still.
+        // Best: prescaler 1, OCR1A = 725, 22,038.567 Hz, -518.48 ppm.
+        TimerSetting s = TimerSolver.solve(16e6, TimerKind.AVR_TIMER1, 22050, 1000);
+        assertEquals(1, s.prescaler());
+        assertEquals(725, s.reload());
+        assertEquals(726, s.cyclesPerTick());
+        assertEquals(22038.5675, s.achievedHz(), 1e-4);
+        assertEquals(-518.481, s.errorPpm(), 1e-3);
+    }
+
+    @Test
+    void avrTimer0HitsEightKilohertzExactly() {
+        // 16 MHz / 8 kHz = 2000 cycles: too many for an 8-bit counter at p = 1; p = 8 gives 250 exactly.
+        TimerSetting s = TimerSolver.solve(16e6, TimerKind.AVR_TIMER0, 8000, 0);
+        assertEquals(8, s.prescaler());
+        assertEquals(249, s.reload());
+        assertEquals(0, s.errorPpm(), 1e-9);
+    }
+
+    @Test
+    void sysTickAt72MHzFor44100Hz() {
+        // 72,000,000 / 44,100 = 1632.65 -> period 1633 (SYST_RVR = 1632): 44,090.631 Hz, -212.45 ppm;
+        // period 1632 would give +400.2 ppm.
+        TimerSetting s = TimerSolver.solve(72e6, TimerKind.SYSTICK, 44100, 1000);
+        assertEquals(1, s.prescaler());
+        assertEquals(1632, s.reload());
+        assertEquals(-212.455, s.errorPpm(), 1e-3);
+    }
+
+    @Test
+    void generalTimerPicksTheSmallestExactPrescaler() {
+        // 1 Hz from 84 MHz needs p * period = 84,000,000 with period <= 65,536: the smallest divisor of
+        // 84,000,000 = 2^8 * 3 * 5^6 * 7 that leaves a period of at most 65,536 is 1,344 (period 62,500).
+        TimerSetting s = TimerSolver.solve(84e6, TimerKind.TIM16, 1, 0);
+        assertEquals(1344, s.prescaler());
+        assertEquals(62499, s.reload());
+        assertEquals(0, s.errorPpm(), 1e-9);
+    }
+
+    @Test
+    void refusesARateOutsideTheTimersRange() {
+        // slowest: 16 MHz / (1024 * 256) = 61.035 Hz
+        assertEquals("--rate 10 Hz is too slow for timer0 (8-bit, prescalers 1/8/64/256/1024) at a 16 MHz clock:"
+                + " the slowest is 61.0352 Hz; choose a wider --timer or a higher --rate",
+                assertThrows(InputError.class, () -> TimerSolver.solve(16e6, TimerKind.AVR_TIMER0, 10, 1000))
+                        .getMessage());
+        assertEquals("--rate 10 MHz is too fast for systick (24-bit, no prescaler) at a 16 MHz clock: the fastest"
+                + " is 8 MHz; lower --rate or raise --cpu-clock",
+                assertThrows(InputError.class, () -> TimerSolver.solve(16e6, TimerKind.SYSTICK, 10e6, 1000))
+                        .getMessage());
+    }
+
+    @Test
+    void refusesWhenNothingIsWithinTolerance() {
+        assertEquals("--rate 22.05 kHz cannot be made within 100 ppm by timer1 (16-bit, prescalers"
+                + " 1/8/64/256/1024) at a 16 MHz clock: the closest is 22.0386 kHz (-518.5 ppm, prescaler 1,"
+                + " OCR1A = 725); use --rate 22038.567 or raise --rate-tolerance",
+                assertThrows(InputError.class, () -> TimerSolver.solve(16e6, TimerKind.AVR_TIMER1, 22050, 100))
+                        .getMessage());
+    }
+
+    @Test
+    void describesTheSetting() {
+        assertEquals("timer1 at 16 MHz: prescaler 1, OCR1A = 725 (726 cycles per tick), 22.0386 kHz (-518.5 ppm)",
+                TimerSolver.solve(16e6, TimerKind.AVR_TIMER1, 22050, 1000).describe());
+        assertEquals("tim16 at 84 MHz: prescaler 1344 (PSC = 1343), ARR = 62499 (84000000 cycles per tick), 1 Hz"
+                + " (+0.0 ppm)", TimerSolver.solve(84e6, TimerKind.TIM16, 1, 0).describe());
+    }
+
+    @Test
+    void parsesTimerNames() {
+        assertEquals(TimerKind.AVR_TIMER2, TimerKind.parse("Timer2"));
+        assertEquals("--timer 'tc3' is unknown; use one of timer0, timer1, timer2, systick, tim16, tim32",
+                assertThrows(InputError.class, () -> TimerKind.parse("tc3")).getMessage());
+    }
+}
