@@ -113,6 +113,12 @@ public final class BuildCommand implements Callable<Integer> {
             description = "Attribute that keeps the sample array in flash, e.g. PROGMEM (default none).")
     String flashAttr;
 
+    @Mixin
+    FirmwareOptions firmware;
+
+    @Mixin
+    PreviewOptions preview;
+
     @Option(names = "--json", description = "Print the report as JSON instead of text.")
     boolean json;
 
@@ -141,11 +147,14 @@ public final class BuildCommand implements Callable<Integer> {
                 : OptionalDouble.empty();
         OptionalDouble norm = gain.isPresent() ? OptionalDouble.empty()
                 : OptionalDouble.of(level != null && level.normalizeDbfs != null ? level.normalizeDbfs : -1.0);
-        return new BuildPlan(source, channel, symbol, outDir, bits,
+        BuildPlan plan = new BuildPlan(source, channel, symbol, outDir, bits,
                 rateHz == null ? OptionalDouble.empty() : OptionalDouble.of(rateHz), dither,
                 errorFilter(shaping), seed, !keepDc,
                 trimDbfs == null ? OptionalDouble.empty() : OptionalDouble.of(trimDbfs), gain, norm, fadeIn,
                 fadeOut, resampler.toLowerCase(Locale.ROOT), fullScale, flashAttr);
+        return plan.withFirmware(firmware.request(), firmware.loopSpan(), firmware.flashBudgetBytes())
+                .withPreview(preview.filter(plan.rateHz().orElse(BuildPlan.DEFAULT_RATE_HZ)),
+                        preview.previewRateHz);
     }
 
     static ErrorFilter errorFilter(String text) {

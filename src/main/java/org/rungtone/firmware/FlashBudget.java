@@ -32,7 +32,7 @@ public final class FlashBudget {
      * Checks that {@code neededBytes} fit the budget.
      *
      * @param candidates settings to propose, in order of preference: the message names the first that fits
-     * @throws InputError when over budget, e.g. "needs 12,345 bytes, 2,345 bytes over the 10,000-byte
+     * @throws InputError when over budget, e.g. "the samples need 12,345 bytes, 2,345 bytes over the 10,000-byte
      *     --flash-budget; 6-bit packed at 8 kHz would fit (7,812 bytes)"
      */
     public static void check(long neededBytes, long budgetBytes, List<Candidate> candidates) {
@@ -40,7 +40,7 @@ public final class FlashBudget {
         if (neededBytes <= budgetBytes) {
             return;
         }
-        String head = "needs " + Fmt.bytes(neededBytes) + " bytes, " + Fmt.bytes(neededBytes - budgetBytes)
+        String head = "the samples need " + Fmt.bytes(neededBytes) + " bytes, " + Fmt.bytes(neededBytes - budgetBytes)
                 + " bytes over the " + Fmt.bytes(budgetBytes) + "-byte --flash-budget";
         for (Candidate c : candidates) {
             if (c.bytes() <= budgetBytes) {
@@ -81,7 +81,9 @@ public final class FlashBudget {
         grid.sort(Comparator.comparingDouble((double[] g) -> -g[2]).thenComparingDouble(g -> -g[1]));
         List<Candidate> out = new ArrayList<>(grid.size());
         for (double[] g : grid) {
-            out.add(new Candidate((int) g[1] + "-bit packed at " + Fmt.hz(g[0]), (long) g[2]));
+            int b = (int) g[1];
+            // 8- and 16-bit codes fill whole bytes: packing changes nothing, so do not call it packed
+            out.add(new Candidate(b + "-bit" + (b % 8 == 0 ? "" : " packed") + " at " + Fmt.hz(g[0]), (long) g[2]));
         }
         return out;
     }

@@ -19,7 +19,12 @@ import org.rungtone.condition.Conditioning;
 import org.rungtone.condition.KaiserResampler;
 import org.rungtone.condition.Resampler;
 import org.rungtone.condition.TarsosResampler;
+import org.rungtone.firmware.EmitResult;
+import org.rungtone.firmware.FirmwareEmitter;
+import org.rungtone.firmware.FirmwareRequest;
+import org.rungtone.firmware.FlashBudget;
 import org.rungtone.firmware.SampleArrayEmitter;
+import org.rungtone.firmware.SampleStorage;
 import org.rungtone.firmware.Templates;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.internal.InputError;
@@ -122,9 +127,33 @@ public final class Build {
         AnalogModel.Preview preview = model.render(emitted, played);
         watch.lap("preview");
 
-        List<Path> files = new ArrayList<>(new SampleArrayEmitter(Templates.bundled()).emit(
-                new SampleArrayEmitter.Request(plan.symbol(), emitted, plan.flashQualifier(), toolVersion,
-                        settings(plan, loaded, conditioned, played, rate)), plan.outDir()));
+        List<String> settings = settings(plan, loaded, conditioned, played, rate);
+        List<Path> files = new ArrayList<>();
+        List<String> firmwareLines = new ArrayList<>();
+        long flash;
+        if (plan.firmware().isPresent()) {
+            FirmwareRequest.Builder fb = plan.firmware().get().toBuilder().name(plan.symbol())
+                    .toolVersion(toolVersion).settings(settings);
+            if (plan.loop().isPresent()) {
+                int[] lp = plan.loop().get().samples(rate, emitted.length());
+                fb.sound(plan.symbol(), emitted, lp[0], lp[1]);
+            } else {
+                fb.sound(plan.symbol(), emitted);
+            }
+            EmitResult er = FirmwareEmitter.emit(fb.build(), plan.outDir());
+            files.addAll(er.files());
+            firmwareLines.addAll(er.report());
+            warnings.addAll(er.warnings());
+            flash = er.flashBytes();
+        } else {
+            flash = (long) emitted.length() * (plan.bits() <= 8 ? 1 : 2);
+            if (plan.flashBudgetBytes() > 0) {
+                FlashBudget.check(flash, plan.flashBudgetBytes(), FlashBudget.alternatives(emitted.length(),
+                        rate, plan.bits(), SampleStorage.UNPACKED, 0));
+            }
+            files.addAll(new SampleArrayEmitter(Templates.bundled()).emit(new SampleArrayEmitter.Request(
+                    plan.symbol(), emitted, plan.flashQualifier(), toolVersion, settings), plan.outDir()));
+        }
         watch.lap("emit");
 
         Path previewFile = plan.outDir().resolve("preview.wav");
@@ -142,7 +171,6 @@ public final class Build {
         }
         watch.lap("plots");
 
-        long flash = (long) emitted.length() * (plan.bits() <= 8 ? 1 : 2);
         Path txt = plan.outDir().resolve("report.txt");
         Path json = plan.outDir().resolve("report.json");
         files.add(txt);
@@ -153,7 +181,7 @@ public final class Build {
                 played.origin(), clipped, quality, emittedQuality.label(), shapingGain, tone,
                 new BuildSummary.PreviewInfo(plan.filter().describe(), plan.previewRateHz(),
                         preview.passbandTopHz(), preview.zohDroopDb(), preview.peak()),
-                flash, files, warnings, watch.laps());
+                firmwareLines, flash, files, warnings, watch.laps());
         AtomicFiles.writeString(txt, BuildReport.text(summary));
         Json.write(json, BuildReport.json(summary));
         return summary;
@@ -188,6 +216,7 @@ public final class Build {
     private static List<String> settings(BuildPlan plan, Sources.Loaded loaded, Conditioner.Conditioned c,
             LevelTable played, double rate) {
         return List.of(
+                "name: " + plan.symbol(),
                 "source: " + plan.source().getFileName() + " (" + loaded.layout() + ")",
                 "conditioning: " + describe(plan, c),
                 "target: " + plan.bits() + " bits at " + Units.format(rate, "Hz"),

@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import org.rungtone.analysis.ReconstructionFilter;
+import org.rungtone.firmware.FirmwareRequest;
 import org.rungtone.internal.Checks;
 import org.rungtone.ladder.LevelTable;
 import org.rungtone.quantize.Dither;
@@ -34,12 +35,17 @@ import org.rungtone.quantize.ErrorFilter;
  * @param compensate quantize onto the board's real levels (true) or emit plain binary codes (false)
  * @param filter the reconstruction filter after the DAC, for the preview and the in-band figures
  * @param previewRateHz the preview WAV's sample rate (44.1 or 48 kHz)
+ * @param firmware the player to emit around the samples (everything but the sounds), or empty for the
+ *     sample array alone
+ * @param loop loop points of a looped sound
+ * @param flashBudgetBytes the most flash the samples may take, 0 for no limit
  */
 public record BuildPlan(Path source, int channel, String symbol, Path outDir, int bits, OptionalDouble rateHz,
         Dither dither, ErrorFilter shaping, long seed, boolean removeDc, OptionalDouble trimDbfs,
         OptionalDouble gainDb, OptionalDouble normalizeDbfs, double fadeInSeconds, double fadeOutSeconds,
         String resampler, double fullScaleVolts, String flashQualifier, Optional<LevelTable> board,
-        boolean compensate, ReconstructionFilter filter, double previewRateHz) {
+        boolean compensate, ReconstructionFilter filter, double previewRateHz, Optional<FirmwareRequest> firmware,
+        Optional<LoopSpan> loop, long flashBudgetBytes) {
 
     /** Default sample rate when neither the user nor a script names one. */
     public static final double DEFAULT_RATE_HZ = 16_000;
@@ -56,6 +62,7 @@ public record BuildPlan(Path source, int channel, String symbol, Path outDir, in
                 "--full-scale must be a positive voltage: %s", fullScaleVolts);
         board.ifPresent(t -> Checks.checkInput(t.bits() == bits, "the board's level table has %d bits but --bits"
                 + " is %d", t.bits(), bits));
+        Checks.checkInput(flashBudgetBytes >= 0, "--flash-budget must be positive: %d", flashBudgetBytes);
         Checks.checkInput(previewRateHz == 44_100 || previewRateHz == 48_000,
                 "--preview-rate must be 44.1k or 48k: %s", previewRateHz);
     }
@@ -67,20 +74,29 @@ public record BuildPlan(Path source, int channel, String symbol, Path outDir, in
             String resampler, double fullScaleVolts, String flashQualifier) {
         this(source, channel, symbol, outDir, bits, rateHz, dither, shaping, seed, removeDc, trimDbfs, gainDb,
                 normalizeDbfs, fadeInSeconds, fadeOutSeconds, resampler, fullScaleVolts, flashQualifier,
-                Optional.empty(), true, ReconstructionFilter.none(), 44_100);
+                Optional.empty(), true, ReconstructionFilter.none(), 44_100, Optional.empty(), Optional.empty(), 0);
     }
 
     /** The same plan on a board with these real levels. */
     public BuildPlan withBoard(LevelTable levels, boolean compensateOnIt) {
         return new BuildPlan(source, channel, symbol, outDir, bits, rateHz, dither, shaping, seed, removeDc,
                 trimDbfs, gainDb, normalizeDbfs, fadeInSeconds, fadeOutSeconds, resampler, fullScaleVolts,
-                flashQualifier, Optional.of(levels), compensateOnIt, filter, previewRateHz);
+                flashQualifier, Optional.of(levels), compensateOnIt, filter, previewRateHz, firmware, loop,
+                flashBudgetBytes);
     }
 
     /** The same plan with another reconstruction filter and preview rate. */
     public BuildPlan withPreview(ReconstructionFilter newFilter, double newPreviewRateHz) {
         return new BuildPlan(source, channel, symbol, outDir, bits, rateHz, dither, shaping, seed, removeDc,
                 trimDbfs, gainDb, normalizeDbfs, fadeInSeconds, fadeOutSeconds, resampler, fullScaleVolts,
-                flashQualifier, board, compensate, newFilter, newPreviewRateHz);
+                flashQualifier, board, compensate, newFilter, newPreviewRateHz, firmware, loop, flashBudgetBytes);
+    }
+
+    /** The same plan with a player, loop points and flash budget. */
+    public BuildPlan withFirmware(Optional<FirmwareRequest> player, Optional<LoopSpan> loopPoints,
+            long budgetBytes) {
+        return new BuildPlan(source, channel, symbol, outDir, bits, rateHz, dither, shaping, seed, removeDc,
+                trimDbfs, gainDb, normalizeDbfs, fadeInSeconds, fadeOutSeconds, resampler, fullScaleVolts,
+                flashQualifier, board, compensate, filter, previewRateHz, player, loopPoints, budgetBytes);
     }
 }

@@ -61,6 +61,12 @@ public final class BuildReport {
         b.append(String.format(Locale.ROOT, "%nPreview (preview.wav at %s): the board's levels, zero-order hold,"
                 + " %s; the hold alone droops %.2f dB at %s%n", Units.format(p.rateHz(), "Hz"), filter,
                 p.zohDroopDb(), Units.format(p.passbandTopHz(), "Hz")));
+        if (!s.firmware().isEmpty()) {
+            b.append("\nFirmware:\n");
+            for (String line : s.firmware()) {
+                b.append("  ").append(line).append('\n');
+            }
+        }
         b.append("\nFiles:\n");
         for (Path f : s.files()) {
             b.append("  ").append(f).append('\n');
@@ -140,6 +146,7 @@ public final class BuildReport {
         pm.put("droop_at_hz", s.preview().passbandTopHz());
         pm.put("peak", s.preview().peak());
         m.put("preview", pm);
+        m.put("firmware", s.firmware());
         m.put("flash_bytes", s.flashBytes());
         m.put("files", s.files().stream().map(Path::toString).toList());
         m.put("warnings", List.copyOf(s.warnings()));

@@ -32,6 +32,7 @@ import org.rungtone.analysis.ToneReport;
  * @param shapingGainDb in-band SNR won (positive) or lost by noise shaping against flat quantization
  * @param tone single-tone figures, when the source is essentially one sine
  * @param preview the analog preview's settings and figures
+ * @param firmware the firmware emitter's report lines (pins, timer, storage), empty for a bare sample array
  * @param flashBytes bytes of sample data
  * @param files files written, in order
  * @param warnings what the user should know
@@ -41,11 +42,12 @@ public record BuildSummary(String toolVersion, Path source, String sourceLayout,
         double rateHz, int samples, double durationSeconds, String dither, String shaping, long seed,
         String conditioning, String resampler, String ladder, long clippedSamples, List<QualityReport> quality,
         String emittedCase, Optional<Double> shapingGainDb, Optional<ToneReport> tone, PreviewInfo preview,
-        long flashBytes, List<Path> files, List<String> warnings, Map<String, Double> stageMillis) {
+        List<String> firmware, long flashBytes, List<Path> files, List<String> warnings, Map<String, Double> stageMillis) {
 
     /** Copies the collections. */
     public BuildSummary {
         quality = List.copyOf(quality);
+        firmware = List.copyOf(firmware);
         files = List.copyOf(files);
         warnings = List.copyOf(warnings);
         stageMillis = Collections.unmodifiableMap(new LinkedHashMap<>(stageMillis));

@@ -120,6 +120,40 @@ class BuildCommandTest {
     }
 
     @Test
+    void emitsACompletePlayerForATarget() throws IOException {
+        Path out = dir.resolve("avr");
+        Cli.Run r = Cli.run("build", fixture().toString(), "--bits", "6", "--target", "avr", "--cpu-clock", "16MHz",
+                "--pins", "D2-D7", "--out", out.toString(), "--name", "bell");
+        assertEquals(0, r.exitCode(), r.err());
+        for (String f : List.of("bell.h", "bell.c", "bell_data.c")) {
+            assertTrue(Files.exists(out.resolve(f)), f);
+        }
+        // 16 MHz / 16 kHz = 1000 cycles: prescaler 1, compare value 999, exact (hand-computed)
+        assertTrue(r.out().contains("prescaler 1, OCR1A = 999"), r.out());
+    }
+
+    @Test
+    void flashBudgetOverflowIsBadInputWithAProposal() throws IOException {
+        Path out = dir.resolve("over");
+        Cli.Run r = Cli.run("build", fixture().toString(), "--bits", "8", "--flash-budget", "4000", "--out",
+                out.toString());
+        assertEquals(1, r.exitCode(), r.err());
+        assertTrue(r.err().startsWith("rungtone: error: the samples need 8,000 bytes"), r.err());
+        assertTrue(r.err().contains("would fit"), r.err());
+        assertFalse(Files.exists(out));
+    }
+
+    @Test
+    void badPinsAreBadInput() throws IOException {
+        Path out = dir.resolve("pins");
+        Cli.Run r = Cli.run("build", fixture().toString(), "--bits", "6", "--pins", "B0-B4", "--out",
+                out.toString());
+        assertEquals(1, r.exitCode(), r.err());
+        assertEquals(1, r.err().strip().split("\n").length, r.err());
+        assertFalse(Files.exists(out));
+    }
+
+    @Test
     void unknownOptionIsUsageError() throws IOException {
         Cli.Run r = Cli.run("build", fixture().toString(), "--bitz", "6");
         assertEquals(2, r.exitCode());

@@ -1,0 +1,136 @@
+package org.rungtone.cli;
+
+import java.nio.file.Path;
+import java.util.Optional;
+import org.rungtone.firmware.DdsSpec;
+import org.rungtone.firmware.FirmwareRequest;
+import org.rungtone.firmware.PinStrategy;
+import org.rungtone.firmware.PlaybackEngine;
+import org.rungtone.firmware.SampleStorage;
+import org.rungtone.firmware.Templates;
+import org.rungtone.firmware.TimerKind;
+import org.rungtone.project.LoopSpan;
+import picocli.CommandLine.Option;
+
+/**
+ * The firmware options shared by build and calibrate: target family, clock, timer, pins, storage, engine,
+ * flash budget. Without --target, --pins or --engine only the sample array is emitted.
+ */
+public final class FirmwareOptions {
+    @Option(names = "--target", paramLabel = "generic|avr|cortexm",
+            description = "Emit a complete player for this target family (default: only the sample array,"
+                    + " or 'generic' when --pins is given).")
+    String target;
+
+    @Option(names = "--pins", paramLabel = "<pins>",
+            description = "One pin per code bit, bit 0 (LSB) first: B0-B5, A3,A7,C0,C1, P1.0-P1.7.")
+    String pins;
+
+    @Option(names = "--cpu-clock", paramLabel = "<hz>", converter = Converters.Hertz.class,
+            description = "CPU or timer clock, e.g. 16MHz; the timer reload is computed from it.")
+    Double cpuClockHz;
+
+    @Option(names = "--timer", paramLabel = "<timer>",
+            description = "timer0, timer1, timer2 (avr); systick, tim16, tim32 (cortexm).")
+    String timer;
+
+    @Option(names = "--rate-tolerance", paramLabel = "<ppm>",
+            description = "Largest sample-rate error the timer may have, in ppm (default 1000).")
+    Double rateTolerancePpm;
+
+    @Option(names = "--port-width", paramLabel = "<bits>", description = "Port width for the generic target: 8,"
+            + " 16 or 32.")
+    Integer portWidth;
+
+    @Option(names = "--pin-strategy", paramLabel = "auto|shift|table|scatter",
+            description = "How codes become port values (default auto: shift when the pins allow it).")
+    String pinStrategy;
+
+    @Option(names = "--storage", paramLabel = "unpacked|packed",
+            description = "Samples one per byte/word, or bit-packed (default unpacked).")
+    String storage;
+
+    @Option(names = "--engine", paramLabel = "clip|loop|dds|sweep",
+            description = "Player engine: one-shot clip, looped clip, DDS wavetable oscillator (default clip).")
+    String engine;
+
+    @Option(names = "--loop", paramLabel = "START:END",
+            description = "Loop points of a looped sound, in samples (1200:9600) or times (0.25s:end).")
+    String loop;
+
+    @Option(names = "--dds-frequency", paramLabel = "<hz>", converter = Converters.Hertz.class,
+            description = "Start frequency of the DDS oscillator (default 1 kHz).")
+    Double ddsFrequencyHz;
+
+    @Option(names = "--dds-phase-bits", paramLabel = "<n>",
+            description = "Width of the DDS phase accumulator (default 32).")
+    Integer ddsPhaseBits;
+
+    @Option(names = "--flash-budget", paramLabel = "<bytes>", converter = Converters.Bytes.class,
+            description = "Refuse to build when the samples need more flash than this, e.g. 28k.")
+    Long flashBudget;
+
+    @Option(names = "--templates", paramLabel = "<dir>",
+            description = "Render from your own template folder (same layout as templates/).")
+    Path templates;
+
+    /** True when the user asked for a player, not only the sample array. */
+    boolean wantsPlayer() {
+        return target != null || pins != null || engine != null || timer != null || cpuClockHz != null;
+    }
+
+    /** The loop points, when given. */
+    Optional<LoopSpan> loopSpan() {
+        return Optional.ofNullable(loop).map(LoopSpan::parse);
+    }
+
+    /** The flash budget in bytes, 0 for none. */
+    long flashBudgetBytes() {
+        return flashBudget == null ? 0 : flashBudget;
+    }
+
+    /**
+     * A request template holding every firmware setting but the sounds, name and version, or empty when only
+     * the sample array is wanted.
+     */
+    Optional<FirmwareRequest> request() {
+        if (!wantsPlayer()) {
+            return Optional.empty();
+        }
+        FirmwareRequest.Builder b = FirmwareRequest.builder()
+                .family(target == null ? "generic" : target)
+                .templates(templates == null ? Templates.bundled() : Templates.fromFolder(templates));
+        if (cpuClockHz != null) {
+            b.cpuClockHz(cpuClockHz);
+        }
+        if (timer != null) {
+            b.timer(TimerKind.parse(timer));
+        }
+        if (rateTolerancePpm != null) {
+            b.rateTolerancePpm(rateTolerancePpm);
+        }
+        if (pins != null) {
+            b.pins(pins);
+        }
+        if (portWidth != null) {
+            b.portWidth(portWidth);
+        }
+        if (pinStrategy != null) {
+            b.pinStrategy(PinStrategy.parse(pinStrategy));
+        }
+        if (storage != null) {
+            b.storage(SampleStorage.parse(storage));
+        }
+        PlaybackEngine e = engine == null ? (loop != null ? PlaybackEngine.LOOP : PlaybackEngine.CLIP)
+                : PlaybackEngine.parse(engine);
+        b.engine(e);
+        if (e == PlaybackEngine.DDS) {
+            b.dds(new DdsSpec(ddsPhaseBits == null ? DdsSpec.DEFAULT_PHASE_BITS : ddsPhaseBits,
+                    ddsFrequencyHz == null ? 1000 : ddsFrequencyHz));
+        }
+        if (flashBudget != null) {
+            b.flashBudgetBytes(flashBudget);
+        }
+        return Optional.of(b.build());
+    }
+}

@@ -1,0 +1,61 @@
+package org.rungtone.project;
+
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import org.rungtone.internal.InputError;
+import org.rungtone.internal.Units;
+
+/**
+ * Loop points of a looped sound, written {@code START:END} in samples ({@code 1200:9600}) or as times
+ * ({@code 0.25s:1.2s}, {@code 250ms:end}); {@code end} means the last sample.
+ *
+ * @param start start, in samples or seconds
+ * @param end end (exclusive), in samples or seconds; infinite for "end"
+ * @param seconds whether the values are seconds
+ */
+public record LoopSpan(double start, double end, boolean seconds) {
+    private static final Pattern FORM = Pattern.compile("\\s*([^:]+?)\\s*:\\s*([^:]+?)\\s*");
+
+    /**
+     * Parses the text.
+     *
+     * @throws InputError with an example when the text is malformed
+     */
+    public static LoopSpan parse(String text) {
+        Matcher m = FORM.matcher(text == null ? "" : text);
+        if (!m.matches()) {
+            throw new InputError("--loop '" + text + "' must be START:END in samples (1200:9600) or times"
+                    + " (0.25s:end)");
+        }
+        boolean secs = m.group(1).matches(".*[a-z]s$") || m.group(1).endsWith("s")
+                || m.group(2).endsWith("s");
+        double start = value(m.group(1), secs, text);
+        double end = m.group(2).equals("end") ? Double.POSITIVE_INFINITY : value(m.group(2), secs, text);
+        if (!(start >= 0) || !(end > start)) {
+            throw new InputError("--loop '" + text + "' needs 0 <= START < END");
+        }
+        return new LoopSpan(start, end, secs);
+    }
+
+    private static double value(String s, boolean secs, String text) {
+        try {
+            return secs ? Units.parse(s, "s") : Units.parseCount(s);
+        } catch (InputError e) {
+            throw new InputError("--loop '" + text + "': " + e.getMessage());
+        }
+    }
+
+    /** Start and end in samples at {@code rateHz}, clamped to {@code length}. */
+    public int[] samples(double rateHz, int length) {
+        long s = seconds ? Math.round(start * rateHz) : (long) start;
+        long e = Double.isInfinite(end) ? length : seconds ? Math.round(end * rateHz) : (long) end;
+        if (e > length) {
+            throw new InputError(String.format(java.util.Locale.ROOT, "--loop end %s is past the sound's end"
+                    + " (%d samples)", seconds ? Units.format(end, "s") : Long.toString(e), length));
+        }
+        if (s >= e) {
+            throw new InputError("--loop start must come before its end");
+        }
+        return new int[] {(int) s, (int) e};
+    }
+}
