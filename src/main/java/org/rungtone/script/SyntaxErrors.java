@@ -45,7 +45,7 @@ final class SyntaxErrors implements RungParserConstants {
         if (bad.kind == IF && expression) {
             return "a conditional inside a larger expression needs parentheses: (if ... then ... else ...)";
         }
-        if (bad.kind == DB_NUMBER && operator) {
+        if (bad.kind == DB_NUMBER && operator && (bad.image.startsWith("-") || bad.image.startsWith("+"))) {
             char sign = bad.image.charAt(0);
             String verb = sign == '-' ? "subtract" : "add";
             return "expected an operator (write '" + sign + " " + bad.image.substring(1) + "' to " + verb

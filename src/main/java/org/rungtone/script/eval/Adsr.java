@@ -35,6 +35,11 @@ final class Adsr extends Eval {
         double[] r = release.run(b);
         double[] o = off.run(b);
         double[] t = frame.t;
+        if (attack.isConstant() && decay.isConstant() && sustain.isConstant() && release.isConstant()
+                && off.isConstant()) {
+            steady(t, b.length, a[0], d[0], s[0], r[0], o[0]);
+            return out;
+        }
         for (int i = 0; i < b.length; i++) {
             double ti = t[i];
             if (ti < o[i]) {
@@ -45,6 +50,19 @@ final class Adsr extends Eval {
             }
         }
         return out;
+    }
+
+    private void steady(double[] t, int n, double a, double d, double s, double r, double o) {
+        double atOff = held(o, a, d, s);
+        for (int i = 0; i < n; i++) {
+            double ti = t[i];
+            if (ti < o) {
+                out[i] = held(ti, a, d, s);
+            } else {
+                double x = r > 0 ? 1 - (ti - o) / r : 0;
+                out[i] = x > 0 ? x * atOff : 0;
+            }
+        }
     }
 
     /** The level at time {@code t} while the note is held. */

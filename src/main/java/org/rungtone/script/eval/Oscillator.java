@@ -134,16 +134,23 @@ final class Oscillator extends Eval {
                 }
                 break;
             case TRIANGLE:
+                if (s != null) {
+                    for (int i = 0; i < n; i++) {
+                        phases[i] += s[i];
+                    }
+                }
                 for (int i = 0; i < n; i++) {
-                    double x = phases[i] + 0.25 + (s == null ? 0 : s[i]);
+                    double x = phases[i] + 0.25;
                     x -= Math.floor(x);
                     out[i] = 1 - 4 * Math.abs(x - 0.5);
                 }
                 break;
             case SQUARE:
+                double duty = s == null ? 0.5 : Double.NaN;
                 for (int i = 0; i < n; i++) {
+                    double d = s == null ? duty : s[i];
                     // 0·phase keeps a NaN phase visible instead of turning it into a level
-                    out[i] = (phases[i] < (s == null ? 0.5 : s[i]) ? 1 : -1) + 0 * phases[i];
+                    out[i] = (phases[i] < d ? 1 : -1) + 0 * phases[i];
                 }
                 break;
             case SAW_UP:

@@ -15,6 +15,13 @@ import org.rungtone.script.ast.Stmt;
  */
 public final class Program {
     private static final int MAX_TABLE = 1 << 20;
+    private static final double[] RAMP = new double[Block.SIZE];
+
+    static {
+        for (int i = 0; i < Block.SIZE; i++) {
+            RAMP[i] = i;
+        }
+    }
 
     private final Eval out;
     private final Frame frame;
@@ -93,13 +100,16 @@ public final class Program {
         for (long start = 0; start < samples; start += Block.SIZE) {
             int length = (int) Math.min(Block.SIZE, samples - start);
             b.advance(start, length);
+            double first = start;
+            // Two simple loops over a precomputed ramp: both vectorize, and t stays correctly rounded.
             for (int i = 0; i < length; i++) {
-                double index = start + i;
-                frame.index[i] = index;
-                frame.t[i] = index / rateHz;
-                if (wavetable) {
-                    frame.phase[i] = index / rateHz;
-                }
+                frame.index[i] = first + RAMP[i];
+            }
+            for (int i = 0; i < length; i++) {
+                frame.t[i] = frame.index[i] / rateHz;
+            }
+            if (wavetable) {
+                System.arraycopy(frame.t, 0, frame.phase, 0, length);
             }
             double[] y = out.run(b);
             for (int i = 0; i < length; i++) {
