@@ -153,6 +153,9 @@ public final class RungScript {
             return Signal.wrap(program.render(samples), rate);
         } catch (ScriptProblem p) {
             throw source.error(p.pos(), p.getMessage());
+        } catch (StackOverflowError e) {
+            throw source.error(new Pos(1, 1), "the script is nested too deeply; expected fewer expressions inside "
+                    + "one another");
         }
     }
 
@@ -165,8 +168,11 @@ public final class RungScript {
                     at = s.pos();
                 }
             }
-            throw source.error(at, "the clip is " + SExpression.number(count) + " samples long at "
-                    + SExpression.number(rate) + " Hz; expected 1 to " + MAX_SAMPLES + " samples");
+            String hz = SExpression.number(rate) + " Hz";
+            throw source.error(at, count < 1
+                    ? "the clip is shorter than one sample at " + hz + "; expected a longer duration"
+                    : "the clip is more than " + MAX_SAMPLES + " samples long at " + hz
+                            + "; expected a shorter duration or a lower rate");
         }
         return (int) count;
     }

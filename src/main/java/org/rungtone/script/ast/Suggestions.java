@@ -12,13 +12,13 @@ public final class Suggestions {
     }
 
     /**
-     * The candidate nearest to {@code word}, or null when none is close: at most two edits, and fewer edits
-     * than the word has letters. Ties go to the candidate listed first.
+     * The candidate nearest to {@code word}, or null when none is close: one edit for words of up to three
+     * letters, two for longer ones. Ties go to the candidate listed first.
      */
     public static String nearest(String word, Collection<String> candidates) {
         String best = null;
         int bestDistance = Integer.MAX_VALUE;
-        int limit = Math.min(2, word.length() - 1);
+        int limit = word.length() <= 1 ? 0 : word.length() <= 3 ? 1 : 2;
         for (String c : candidates) {
             int d = distance(word, c);
             if (d <= limit && d < bestDistance) {
