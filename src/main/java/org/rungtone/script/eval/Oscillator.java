@@ -44,8 +44,11 @@ final class Oscillator extends Eval {
         double[] f = frequency.run(b);
         double[] t = frame.t;
         int n = b.length;
-        if (frequency.isConstant() && frame.monotonic && started && t[0] >= prevT) {
+        boolean running = frame.monotonic && started && t[0] >= prevT;
+        if (running && frequency.isConstant()) {
             steady(f[0], t, n);
+        } else if (running) {
+            glide(f, t, n);
         } else {
             integrate(f, t, n);
         }
@@ -67,6 +70,30 @@ final class Oscillator extends Eval {
         phase -= Math.floor(phase);
         prevT = t[n - 1];
         prevF = f;
+    }
+
+    /** A changing frequency on a clock that neither restarts nor starts within the block. */
+    private void glide(double[] f, double[] t, int n) {
+        double p = phase;
+        double c = compensation;
+        double lastT = prevT;
+        double lastF = prevF;
+        for (int i = 0; i < n; i++) {
+            double y = 0.5 * (lastF + f[i]) * (t[i] - lastT) - c;
+            double sum = p + y;
+            c = (sum - p) - y;
+            p = sum;
+            if (p >= 1 || p < 0) {
+                p -= Math.floor(p);
+            }
+            phases[i] = p;
+            lastT = t[i];
+            lastF = f[i];
+        }
+        phase = p;
+        compensation = c;
+        prevT = lastT;
+        prevF = lastF;
     }
 
     private void integrate(double[] f, double[] t, int n) {

@@ -46,7 +46,8 @@ final class Resolver {
         Stmt out = null;
         for (Stmt s : script.statements()) {
             if (out != null) {
-                throw new ScriptProblem(s.pos(), "'" + keyword(s) + "' after 'out'; expected 'out' to be the last line");
+                throw new ScriptProblem(s.pos(), "'" + keyword(s) + "' after 'out'; expected 'out' to be the "
+                        + "last line");
             }
             if (s instanceof Stmt.Duration d) {
                 kind = declare(kind, s);

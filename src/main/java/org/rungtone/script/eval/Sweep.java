@@ -5,8 +5,9 @@ import org.rungtone.script.ast.Pos;
 
 /**
  * A frequency that moves from {@code from} to {@code to} over {@code time} seconds of local time and holds
- * there: linear, f(t) = f₀ + (f₁ − f₀)·t/T, or exponential ("logarithmic sweep"), f(t) = f₀·(f₁/f₀)^(t/T),
- * which spends equal time in every octave. Feed it to an oscillator, which integrates it into a phase.
+ * there: linear, f(t) = f₀ + (f₁ − f₀)·t/T, or exponential ("logarithmic sweep"),
+ * f(t) = f₀·(f₁/f₀)^(t/T), which spends equal time in every octave. Feed it to an oscillator, which
+ * integrates it into a phase.
  */
 final class Sweep extends Eval {
     private final boolean exponential;
