@@ -1,5 +1,6 @@
 package org.rungtone.script.eval;
 
+import java.util.Arrays;
 import java.util.List;
 import org.rungtone.script.ast.Pos;
 
@@ -54,6 +55,14 @@ final class Adsr extends Eval {
 
     private void steady(double[] t, int n, double a, double d, double s, double r, double o) {
         double atOff = held(o, a, d, s);
+        if (frame.monotonic && t[0] >= a + d && t[n - 1] < o) {
+            Arrays.fill(out, 0, n, s);      // the whole block sustains
+            return;
+        }
+        if (frame.monotonic && t[0] >= o + Math.max(r, 0)) {
+            Arrays.fill(out, 0, n, 0.0);    // the whole block is after the release
+            return;
+        }
         for (int i = 0; i < n; i++) {
             double ti = t[i];
             if (ti < o) {

@@ -80,7 +80,7 @@ final class CallCompiler {
             case "adsr": {
                 Eval release = arg(a, 3, f);
                 Eval off = a.size() > 4 ? arg(a, 4, f)
-                        : arith(p, "adsr", Arith.Op.SUB, new Var(p, "dur", f.span), release);
+                        : arith(p, "adsr", Arith.Op.SUB, compiler.compile(new Expr.Name(p, "dur"), f), release);
                 return new Adsr(p, arg(a, 0, f), arg(a, 1, f), arg(a, 2, f), release, off, f);
             }
             case "decay":
@@ -178,7 +178,7 @@ final class CallCompiler {
         List<Frame> frames = new ArrayList<>();
         double[] lengths = new double[c.args().size()];
         for (int k = 0; k < lengths.length; k++) {
-            Frame inner = Frame.shifted(f);
+            Frame inner = Frame.shifted(f, Double.NaN);
             Eval part = compiler.compile(c.args().get(k), inner);
             lengths[k] = part.lengthSeconds;
             if (!(lengths[k] > 0) || Double.isInfinite(lengths[k])) {

@@ -120,7 +120,8 @@ final class Compiler {
                 return new Var(n.pos(), id, f.root.index);
             case "dur":
                 refuseInConstants(id);
-                return new Var(n.pos(), id, f.span);
+                // A fixed length becomes a constant, so envelopes that use it take their constant paths.
+                return Double.isNaN(f.fixedSpan) ? new Var(n.pos(), id, f.span) : new Const(n.pos(), id, f.fixedSpan);
             case "pitch":
                 refuseInConstants(id);
                 if (f.pitch == null) {
@@ -158,7 +159,7 @@ final class Compiler {
             case AT: {
                 double start = constant(e.amount(), f, "the start time after 'at'", "1.5s");
                 require(at, Double.isFinite(start), "the start time after 'at'", "finite", start);
-                Frame inner = Frame.shifted(f);
+                Frame inner = Frame.shifted(f, start);
                 return new AtPart(e.pos(), compile(e.part(), inner), f, inner, start);
             }
             case EVERY: {
@@ -172,7 +173,7 @@ final class Compiler {
                 double count = constant(e.amount(), f, "the count after 'repeat'", "3");
                 require(at, count == Math.rint(count) && count >= 1 && count <= 1_000_000,
                         "the count after 'repeat'", "a whole number from 1 to 1000000", count);
-                Frame inner = Frame.shifted(f);
+                Frame inner = Frame.shifted(f, Double.NaN);
                 Eval part = compile(e.part(), inner);
                 double length = part.lengthSeconds;
                 if (!(length > 0) || Double.isInfinite(length)) {

@@ -18,8 +18,12 @@ final class Frame {
     final double[] phase;
     /** True when {@code t} never decreases within the current block (no part restarted inside it). */
     boolean monotonic = true;
+    /** The part's length when it is the same for every sample and known while compiling, else NaN. */
+    final double fixedSpan;
 
-    private Frame(double[] t, double[] span, double[] pitch, Frame root, double[] index, double[] phase) {
+    private Frame(double[] t, double[] span, double[] pitch, Frame root, double[] index, double[] phase,
+            double fixedSpan) {
+        this.fixedSpan = fixedSpan;
         this.t = t;
         this.span = span;
         this.pitch = pitch;
@@ -33,32 +37,36 @@ final class Frame {
         double[] span = new double[Block.SIZE];
         Arrays.fill(span, spanSeconds);
         return new Frame(new double[Block.SIZE], span, null, null, new double[Block.SIZE],
-                wavetable ? new double[Block.SIZE] : null);
+                wavetable ? new double[Block.SIZE] : null, spanSeconds);
     }
 
     /** A part with its own clock and a fixed length. */
     static Frame child(Frame parent, double lengthSeconds) {
         double[] span = new double[Block.SIZE];
         Arrays.fill(span, lengthSeconds);
-        return new Frame(new double[Block.SIZE], span, parent.pitch, parent.root, null, null);
+        return new Frame(new double[Block.SIZE], span, parent.pitch, parent.root, null, null, lengthSeconds);
     }
 
-    /** A part with its own clock whose length follows the parent's, filled by the owner. */
-    static Frame shifted(Frame parent) {
-        return new Frame(new double[Block.SIZE], new double[Block.SIZE], parent.pitch, parent.root, null, null);
+    /**
+     * A part with its own clock starting {@code offset} seconds into the parent, its length filled by the
+     * owner; with a NaN offset the length is not known while compiling.
+     */
+    static Frame shifted(Frame parent, double offset) {
+        return new Frame(new double[Block.SIZE], new double[Block.SIZE], parent.pitch, parent.root, null, null,
+                parent.fixedSpan - offset);
     }
 
     /** A part sharing the parent's clock but with its own fixed length. */
     static Frame sameClock(Frame parent, double lengthSeconds) {
         double[] span = new double[Block.SIZE];
         Arrays.fill(span, lengthSeconds);
-        return new Frame(parent.t, span, parent.pitch, parent.root, null, null);
+        return new Frame(parent.t, span, parent.pitch, parent.root, null, null, lengthSeconds);
     }
 
     /** The voice frame of a note list: own clock, length and pitch, all filled by the owner. */
     static Frame voice(Frame parent) {
         return new Frame(new double[Block.SIZE], new double[Block.SIZE], new double[Block.SIZE], parent.root,
-                null, null);
+                null, null, Double.NaN);
     }
 
     /** Sets {@link #monotonic} from the first {@code n} local times, given the parent's flag. */
