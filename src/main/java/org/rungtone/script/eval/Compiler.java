@@ -117,6 +117,7 @@ final class Compiler {
                 return new Var(n.pos(), id, f.t);
             case "n":
                 refuseInConstants(id);
+                f.root.indexUsed = true;
                 return new Var(n.pos(), id, f.root.index);
             case "dur":
                 refuseInConstants(id);

@@ -16,6 +16,8 @@ final class Frame {
     /** Root frame only: the global sample index and, in a wavetable, the phase 0..1. */
     final double[] index;
     final double[] phase;
+    /** Root frame only: whether any node reads the sample index, so it must be filled. */
+    boolean indexUsed;
     /** True when {@code t} never decreases within the current block (no part restarted inside it). */
     boolean monotonic = true;
     /** The part's length when it is the same for every sample and known while compiling, else NaN. */

@@ -101,12 +101,14 @@ public final class Program {
             int length = (int) Math.min(Block.SIZE, samples - start);
             b.advance(start, length);
             double first = start;
-            // Two simple loops over a precomputed ramp: both vectorize, and t stays correctly rounded.
+            // Simple loops over a precomputed ramp vectorize, and t stays correctly rounded.
             for (int i = 0; i < length; i++) {
-                frame.index[i] = first + RAMP[i];
+                frame.t[i] = (first + RAMP[i]) / rateHz;
             }
-            for (int i = 0; i < length; i++) {
-                frame.t[i] = frame.index[i] / rateHz;
+            if (frame.indexUsed) {
+                for (int i = 0; i < length; i++) {
+                    frame.index[i] = first + RAMP[i];
+                }
             }
             if (wavetable) {
                 System.arraycopy(frame.t, 0, frame.phase, 0, length);
