@@ -34,8 +34,10 @@ class NoiseTest {
 
     @Test
     void uniformWhiteNoiseHasZeroMeanAndVarianceOneThirdOfLevelSquared() {
-        // Uniform on [−a, a]: mean 0, variance a²/3, fourth central moment a⁴/5. Bounds are 5 standard
-        // errors: sqrt(σ²/N) for the mean and sqrt((μ4 − σ⁴)/N) for the variance.
+        // Uniform on [−a, a]: mean 0, variance a²/3, fourth central moment a⁴/5 (moments of the uniform
+        // distribution, A. Papoulis, S. U. Pillai, Probability, Random Variables and Stochastic Processes,
+        // 4th ed., 2002). Bounds are 5 standard errors: sqrt(σ²/N) for the mean, sqrt((μ4 − σ⁴)/N) for the
+        // variance.
         double a = 0.5;
         double[] y = Scripts.clip("", "white(0.5)", N / 10000.0, 10000, 3);
         double var = a * a / 3;
@@ -46,7 +48,7 @@ class NoiseTest {
 
     @Test
     void gaussianWhiteNoiseHasTheRequestedStandardDeviation() {
-        // Normal: standard error of the mean σ/√N, of the variance σ²·sqrt(2/N).
+        // Normal: standard error of the mean σ/√N, of the variance σ²·sqrt(2/N) (same source as above).
         double sigma = 0.25;
         double[] y = Scripts.clip("", "gauss(0.25)", N / 10000.0, 10000, 5);
         assertEquals(0, mean(y), 5 * sigma / Math.sqrt(N));
@@ -55,9 +57,10 @@ class NoiseTest {
 
     @Test
     void pinkNoiseFallsThreeDecibelsPerOctave() {
-        // 1/f power: 10·log10(2) = 3.01 dB less power density per octave. Welch estimate (Hann window,
-        // 4096 points, half overlap) averaged in 12 log-spaced bands over 100 Hz to 5 kHz, then a
-        // least-squares line of band level against octaves.
+        // 1/f power: 10·log10(2) = 3.01 dB less power density per octave. Welch estimate (P. D. Welch,
+        // IEEE Trans. Audio Electroacoust. 15(2), 1967; Hann window, 4096 points, half overlap) with the
+        // Commons Math FFT, averaged in 12 log-spaced bands over 100 Hz to 5 kHz, then a least-squares line
+        // of band level against octaves.
         double rate = 16000;
         double[] y = Scripts.clip("", "pink(0.2)", 8, rate, 11);
         double[] psd = welch(y, 4096);

@@ -19,7 +19,7 @@ import org.rungtone.script.ast.Stmt;
  */
 final class Compiler {
     /** Upper bound on compiled nodes, against scripts whose named values expand without end. */
-    static final int MAX_NODES = 20_000;
+    static final int MAX_NODES = 10_000;
 
     private final Map<String, Stmt.Let> lets;
     final double rateHz;

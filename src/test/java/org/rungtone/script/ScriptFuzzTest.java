@@ -11,7 +11,7 @@ import net.jqwik.api.Provide;
 import net.jqwik.api.constraints.Size;
 
 /** Whatever the input, parsing and rendering fail only with {@link ScriptError}. */
-class ScriptFuzzProperties {
+class ScriptFuzzTest {
     private static final List<String> VOCABULARY = List.of(
             "duration", "wavetable", "samples", "rate", "let", "out", "if", "then", "else", "and", "or", "not",
             "for", "at", "every", "repeat", "rest", "x", "y", "t", "n", "fs", "phase", "pitch", "dur", "pi",
