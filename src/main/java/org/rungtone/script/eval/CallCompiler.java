@@ -1,10 +1,12 @@
 package org.rungtone.script.eval;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import org.rungtone.script.ast.Expr;
 import org.rungtone.script.ast.Pos;
+import org.rungtone.script.ast.SExpression;
 import org.rungtone.script.ast.ScriptProblem;
 
 /**
@@ -167,7 +169,7 @@ final class CallCompiler {
             Compiler.require(point.first().pos(), Double.isFinite(times[i]), "a segment time", "finite", times[i]);
             if (i > 0 && times[i] < times[i - 1]) {
                 throw new ScriptProblem(point.first().pos(), "segment times must not decrease; expected at least "
-                        + org.rungtone.script.ast.SExpression.number(times[i - 1]) + " s here");
+                        + SExpression.number(times[i - 1]) + " s here");
             }
         }
         return new Segments(c.pos(), times, levels, f);
@@ -185,7 +187,7 @@ final class CallCompiler {
                 throw new ScriptProblem(c.args().get(k).pos(), "part " + (k + 1) + " of sequence(...) has no known "
                         + "length; expected one made with 'for', e.g. tone for 300ms");
             }
-            java.util.Arrays.fill(inner.span, lengths[k]);
+            Arrays.fill(inner.span, lengths[k]);
             parts.add(part);
             frames.add(inner);
         }

@@ -1,5 +1,7 @@
 package org.rungtone.script.eval;
 
+import java.util.Arrays;
+import java.util.HashMap;
 import java.util.IdentityHashMap;
 import java.util.List;
 import java.util.Map;
@@ -98,7 +100,7 @@ final class Compiler {
         String id = n.id();
         Stmt.Let let = lets.get(id);
         if (let != null) {
-            Map<String, Eval> inFrame = instances.computeIfAbsent(f, k -> new java.util.HashMap<>());
+            Map<String, Eval> inFrame = instances.computeIfAbsent(f, k -> new HashMap<>());
             Eval known = inFrame.get(id);
             if (known == null) {
                 known = compile(let.value(), f);
@@ -181,7 +183,7 @@ final class Compiler {
                     throw new ScriptProblem(e.pos(), "'repeat' needs a part with a known length; expected "
                             + "one made with 'for', e.g. (beep for 200ms) repeat 3");
                 }
-                java.util.Arrays.fill(inner.span, length);
+                Arrays.fill(inner.span, length);
                 return new RepeatPart(e.pos(), part, f, inner, length, (long) count);
             }
         }
