@@ -129,6 +129,13 @@ class ScriptErrorTest {
                         + "finite value, check the range of its inputs"),
                 Arguments.of("duration 1s\nout log(-1)", "t.rung:2:5: 'log' produced NaN (not a number) at t = 0s "
                         + "(sample 0); expected a finite value, check the range of its inputs"),
+                Arguments.of("duration 1s\nout if sqrt(0.5 - t) > 0.1 then 1 else 0", "t.rung:2:8: 'sqrt' produced "
+                        + "NaN (not a number) at t = 500.1ms (sample 8001); expected a finite value, check the range "
+                        + "of its inputs"),
+                // the first part is -infinity at 1 s too, but it has ended: the second part is to blame
+                Arguments.of("duration 2s\nrate 1kHz\nout sequence(log(1 - t) for 1s, sqrt(t - 10ms) for 1s)",
+                        "t.rung:3:33: 'sqrt' produced NaN (not a number) at t = 1s (sample 1000); expected a finite "
+                        + "value, check the range of its inputs"),
                 Arguments.of("wavetable 64\nout 1 / (phase - 0.5)", "t.rung:2:7: '/' produced infinity at sample 32 "
                         + "of the cycle; expected a finite value, check the range of its inputs"),
                 Arguments.of("duration 1e308s\nout 1", "t.rung:1:1: the clip is more than 100000000 samples long at "

@@ -4,8 +4,8 @@ import java.util.List;
 import org.rungtone.script.ast.Pos;
 
 /**
- * A two-input operation on samples: arithmetic, comparisons and logic (true is 1, false is 0), and the
- * two-argument maths functions. The four arithmetic operators have tight loops of their own, with a constant
+ * A two-input operation on samples: arithmetic, comparisons and logic (true is 1, false is 0; NaN stays
+ * NaN), and the two-argument maths functions. The four arithmetic operators have tight loops of their own, with a constant
  * operand read once per block.
  */
 final class Arith extends Eval {
@@ -14,6 +14,9 @@ final class Arith extends Eval {
         ADD, SUB, MUL, DIV, POW, LT, LE, GT, GE, EQ, NE, AND, OR, MIN, MAX, ATAN2, MOD, HYPOT;
 
         double apply(double a, double b) {
+            if (ordinal() >= LT.ordinal() && ordinal() <= OR.ordinal() && (a != a || b != b)) {
+                return Double.NaN;   // a comparison must not hide a NaN behind a 0 or 1
+            }
             switch (this) {
                 case ADD:
                     return a + b;

@@ -45,6 +45,11 @@ abstract class Eval {
     /** The nodes this one reads. */
     abstract List<Eval> inputs();
 
+    /** The inputs that can explain a non-finite result at sample {@code i} of the latest block. */
+    List<Eval> culprits(int i) {
+        return inputs();
+    }
+
     /** True for a node whose every sample is a function of its inputs' samples at the same index alone. */
     boolean pure() {
         return false;

@@ -15,7 +15,7 @@ final class MathCall extends Eval {
                 case NEG:
                     return -x;
                 case NOT:
-                    return x == 0 ? 1 : 0;
+                    return x == 0 ? 1 : x != x ? Double.NaN : 0;
                 case SIN:
                     return Math.sin(x);
                 case COS:

@@ -130,7 +130,7 @@ public final class Program {
         boolean deeper = true;
         while (deeper) {
             deeper = false;
-            for (Eval in : origin.inputs()) {
+            for (Eval in : origin.culprits(i)) {
                 if (in.ranIn(b) && !Double.isFinite(in.lastResult()[i])) {
                     origin = in;
                     deeper = true;

@@ -3,7 +3,10 @@ package org.rungtone.script.eval;
 import java.util.List;
 import org.rungtone.script.ast.Pos;
 
-/** {@code if test then a else b}, sample by sample; both branches keep running so oscillators stay in phase. */
+/**
+ * {@code if test then a else b}, sample by sample; both branches keep running so oscillators stay in phase.
+ * A NaN test gives NaN.
+ */
 final class Select extends Eval {
     private final Eval test;
     private final Eval then;
@@ -23,7 +26,7 @@ final class Select extends Eval {
         double[] x = then.run(b);
         double[] y = otherwise.run(b);
         for (int i = 0; i < b.length; i++) {
-            out[i] = c[i] != 0 ? x[i] : y[i];
+            out[i] = c[i] != c[i] ? c[i] : c[i] != 0 ? x[i] : y[i];
         }
         return out;
     }
@@ -31,6 +34,13 @@ final class Select extends Eval {
     @Override
     List<Eval> inputs() {
         return List.of(test, then, otherwise);
+    }
+
+    /** Only the test (when it is NaN) or the branch it picked can explain a non-finite output. */
+    @Override
+    List<Eval> culprits(int i) {
+        double c = test.lastResult()[i];
+        return List.of(c != c ? test : c != 0 ? then : otherwise);
     }
 
     @Override

@@ -12,6 +12,7 @@ final class SequencePart extends Eval {
     private final double[] lengths;
     private final Frame parent;
     private final double[] out = new double[Block.SIZE];
+    private Block lastBlock;
 
     /** Part k was compiled in {@code frames.get(k)}, a child frame of {@code parent} with its length. */
     SequencePart(Pos pos, List<Eval> parts, List<Frame> frames, double[] lengths, Frame parent) {
@@ -31,6 +32,7 @@ final class SequencePart extends Eval {
 
     @Override
     double[] compute(Block b) {
+        lastBlock = b;
         double[] t = parent.t;
         int n = b.length;
         Arrays.fill(out, 0, n, 0.0);
@@ -52,6 +54,18 @@ final class SequencePart extends Eval {
             }
         }
         return out;
+    }
+
+    /** Only the part playing at sample {@code i} can explain a non-finite output there. */
+    @Override
+    List<Eval> culprits(int i) {
+        for (int k = 0; k < parts.size(); k++) {
+            double local = frames.get(k).t[i];
+            if (parts.get(k).ranIn(lastBlock) && local >= 0 && local < lengths[k]) {
+                return List.of(parts.get(k));
+            }
+        }
+        return List.of();
     }
 
     @Override
