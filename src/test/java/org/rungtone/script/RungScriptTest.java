@@ -29,6 +29,16 @@ class RungScriptTest {
     }
 
     @Test
+    void declarationsMayUseConstantNamedValuesAndArithmetic() {
+        RungScript s = RungScript.parse("let beat = 250ms\nduration 6 * beat\nrate 2 * 8kHz\nout sine(A4) for beat",
+                "c.rung");
+        assertEquals(1.5, s.durationSeconds());
+        assertEquals(OptionalDouble.of(16000), s.declaredRateHz());
+        RungScript table = RungScript.parse("let bits = 8\nwavetable 2 ^ bits\nout phase", "w.rung");
+        assertEquals(256, table.tableLength());
+    }
+
+    @Test
     void clipRendersAtTheGivenTheDeclaredOrTheDefaultRate() {
         RungScript declared = RungScript.parse("duration 1.5s\nrate 8kHz\nout 0.25", "c.rung");
         Signal atDeclared = declared.render(Double.NaN, 0);
