@@ -1,0 +1,59 @@
+package org.rungtone.script;
+
+import java.util.List;
+import org.rungtone.internal.InputError;
+
+/**
+ * A problem in a {@code .rung} script: its one-line message reads
+ * {@code FILE:LINE:COL: what is wrong; what was expected} (or {@code did you mean 'x'?}), and
+ * {@link #excerpt()} gives the source line with a caret under the column.
+ */
+public final class ScriptError extends InputError {
+    private static final long serialVersionUID = 1L;
+
+    private final String fileName;
+    private final int line;
+    private final int column;
+    private final String sourceLine;
+
+    /**
+     * An error at {@code line}:{@code column} (1-based) of {@code fileName}.
+     *
+     * @param problem what is wrong and what was expected, one line, without the position prefix
+     * @param sourceLine the text of that line, for the excerpt
+     */
+    public ScriptError(String fileName, int line, int column, String problem, String sourceLine) {
+        super(fileName + ":" + line + ":" + column + ": " + problem);
+        this.fileName = fileName;
+        this.line = line;
+        this.column = column;
+        this.sourceLine = sourceLine;
+    }
+
+    /** The script's file name as given. */
+    public String fileName() {
+        return fileName;
+    }
+
+    /** 1-based line. */
+    public int line() {
+        return line;
+    }
+
+    /** 1-based column; a tab counts as one column. */
+    public int column() {
+        return column;
+    }
+
+    /**
+     * Two lines: the source line, and a line with a caret under the column (tabs in the source are kept
+     * so the caret lines up in a terminal).
+     */
+    public List<String> excerpt() {
+        StringBuilder caret = new StringBuilder();
+        for (int i = 0; i < column - 1; i++) {
+            caret.append(i < sourceLine.length() && sourceLine.charAt(i) == '\t' ? '\t' : ' ');
+        }
+        return List.of(sourceLine, caret.append('^').toString());
+    }
+}
