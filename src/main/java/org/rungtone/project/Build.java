@@ -70,9 +70,9 @@ public final class Build {
     public BuildSummary run(BuildPlan plan) {
         AtomicFiles.checkFolderUsable(plan.outDir());
         Stopwatch watch = new Stopwatch();
-        double rate = plan.rateHz().orElse(BuildPlan.DEFAULT_RATE_HZ);
-        Prepared prepared = prepare(plan, rate, watch);
+        Prepared prepared = prepare(plan, watch);
         Sources.Loaded loaded = prepared.loaded();
+        double rate = prepared.rateHz();
         Conditioner.Conditioned conditioned = prepared.conditioned();
         Signal reference = conditioned.signal();
         if (reference.length() < 2) {
@@ -187,26 +187,38 @@ public final class Build {
         return summary;
     }
 
-    /** The source's description (its samples dropped) and the conditioned reference. */
-    private record Prepared(Sources.Loaded loaded, Conditioner.Conditioned conditioned) {
+    /** The source's description (its samples dropped), the conditioned reference and the target rate. */
+    private record Prepared(Sources.Loaded loaded, Conditioner.Conditioned conditioned, double rateHz) {
     }
 
     /**
      * Loads and conditions the source. The decoded source lives only inside this method, so its memory can be
      * reclaimed before quantizing a long clip.
      */
-    private static Prepared prepare(BuildPlan plan, double rate, Stopwatch watch) {
+    private static Prepared prepare(BuildPlan plan, Stopwatch watch) {
         Sources.Loaded loaded = Sources.load(plan.source(), plan.channel(), plan.rateHz().orElse(Double.NaN),
                 plan.seed());
         watch.lap("decode");
-        Conditioning conditioning = new Conditioning(plan.removeDc(), plan.trimDbfs(), rate, plan.gainDb(),
-                plan.normalizeDbfs(), plan.fadeInSeconds(), plan.fadeOutSeconds());
-        Resampler resampler = plan.resampler().equals("tarsos") ? new TarsosResampler()
-                : KaiserResampler.forBits(plan.bits());
-        Conditioner.Conditioned conditioned = new Conditioner(resampler).apply(loaded.signal(), conditioning);
+        double rate = plan.rateHz().orElse(Double.isNaN(loaded.preferredRateHz()) ? BuildPlan.DEFAULT_RATE_HZ
+                : loaded.preferredRateHz());
+        Conditioner.Conditioned conditioned;
+        if (loaded.wavetable()) {
+            // One cycle: its samples are the table as it is, played at any rate by the DDS engine. Only DC
+            // removal and level apply; the codes are labelled with the playback rate.
+            Signal table = Signal.wrap(loaded.signal().samples(), rate);
+            Conditioning c = new Conditioning(plan.removeDc(), java.util.OptionalDouble.empty(), rate,
+                    plan.gainDb(), plan.normalizeDbfs(), 0, 0);
+            conditioned = new Conditioner(KaiserResampler.forBits(plan.bits())).apply(table, c);
+        } else {
+            Conditioning conditioning = new Conditioning(plan.removeDc(), plan.trimDbfs(), rate, plan.gainDb(),
+                    plan.normalizeDbfs(), plan.fadeInSeconds(), plan.fadeOutSeconds());
+            Resampler resampler = plan.resampler().equals("tarsos") ? new TarsosResampler()
+                    : KaiserResampler.forBits(plan.bits());
+            conditioned = new Conditioner(resampler).apply(loaded.signal(), conditioning);
+        }
         watch.lap("condition");
-        return new Prepared(new Sources.Loaded(Signal.wrap(new double[0], 1), loaded.layout(), loaded.warnings()),
-                conditioned);
+        return new Prepared(new Sources.Loaded(Signal.wrap(new double[0], 1), loaded.layout(), loaded.warnings(),
+                loaded.preferredRateHz(), loaded.wavetable()), conditioned, rate);
     }
 
     private static Quantizer quantizer(LevelTable table, BuildPlan plan) {

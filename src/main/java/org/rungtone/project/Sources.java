@@ -4,6 +4,8 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.Units;
+import org.rungtone.script.RungScript;
 import org.rungtone.source.Signal;
 import org.rungtone.source.WavReader;
 
@@ -18,8 +20,11 @@ public final class Sources {
      * @param signal the mono signal at the source's own rate
      * @param layout a one-line description of what was read
      * @param warnings non-fatal problems
+     * @param preferredRateHz the rate the source asks to be played at (a script's declared rate), NaN if none
+     * @param wavetable true for a single-cycle wavetable: no resampling, trimming or fades apply
      */
-    public record Loaded(Signal signal, String layout, List<String> warnings) {
+    public record Loaded(Signal signal, String layout, List<String> warnings, double preferredRateHz,
+            boolean wavetable) {
         /** Copies the warnings. */
         public Loaded {
             warnings = List.copyOf(warnings);
@@ -38,7 +43,17 @@ public final class Sources {
             WavReader.Decoded d = WavReader.read(source, channel);
             String layout = d.format().describe() + (d.format().channels() > 1
                     ? (channel == 0 ? ", mixed down" : ", channel " + channel) : "");
-            return new Loaded(d.signal(), layout, d.warnings());
+            return new Loaded(d.signal(), layout, d.warnings(), Double.NaN, false);
+        }
+        if (name.endsWith(".rung")) {
+            RungScript script = RungScript.load(source);
+            Signal s = script.render(scriptRateHz, seed);
+            String layout = script.kind() == RungScript.Kind.CLIP
+                    ? String.format(Locale.ROOT, "rung script, clip of %.3f s rendered at %s", script.durationSeconds(),
+                            Units.format(s.sampleRateHz(), "Hz"))
+                    : "rung script, single-cycle wavetable of " + script.tableLength() + " samples";
+            return new Loaded(s, layout, List.of(), script.declaredRateHz().orElse(Double.NaN),
+                    script.kind() == RungScript.Kind.WAVETABLE);
         }
         throw InputError.inFile(source, "is not a source Rungtone reads; give a .wav file or a .rung script");
     }
