@@ -14,6 +14,7 @@ import picocli.CommandLine.ParseResult;
             "Turns sounds and waveform scripts into firmware for resistor-ladder DACs on GPIO pins,",
             "and tells you how the result will sound on your board."},
         subcommands = {
+            LadderCommand.class,
             CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {

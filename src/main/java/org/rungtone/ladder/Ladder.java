@@ -90,14 +90,42 @@ public final class Ladder {
 
     /** The worst source and sink current of every pin over all codes, bit 0 first. */
     public List<PinCurrent> pinCurrents() {
+        return scan().pins();
+    }
+
+    /** The lowest and highest Thévenin resistance at the ladder output over all codes, ohms. */
+    public double[] outputOhmsRange() {
+        DcScan s = scan();
+        return new double[] {s.minOutputOhms(), s.maxOutputOhms()};
+    }
+
+    /** Pin currents and output resistance of every code, in one pass. */
+    record DcScan(List<PinCurrent> pins, double minOutputOhms, double maxOutputOhms) {
+    }
+
+    DcScan scan() {
         int bits = spec.bits();
         double[] source = new double[bits];
         double[] sink = new double[bits];
         int[] sourceCode = new int[bits];
         int[] sinkCode = new int[bits];
-        double[] summingNode = spec.topology().isSumming() ? ladderVolts() : null;
+        double minOut = Double.POSITIVE_INFINITY;
+        double maxOut = 0;
+        boolean summing = spec.topology().isSumming();
+        double[] node = summing ? ladderVolts() : null;
         for (int code = 0; code < 1 << bits; code++) {
-            double[] amps = summingNode != null ? summingAmps(code, summingNode[code]) : pinAmps(code);
+            double[] amps;
+            double outOhms;
+            if (summing) {
+                amps = summingAmps(code, node[code]);
+                outOhms = summingOutputOhms(code);
+            } else {
+                NodalSolver solver = new NodalSolver(spec, ohms, code);
+                amps = solver.pinAmps();
+                outOhms = solver.outputOhms();
+            }
+            minOut = Math.min(minOut, outOhms);
+            maxOut = Math.max(maxOut, outOhms);
             for (int bit = 0; bit < bits; bit++) {
                 if (amps[bit] > source[bit]) {
                     source[bit] = amps[bit];
@@ -109,11 +137,20 @@ public final class Ladder {
                 }
             }
         }
-        List<PinCurrent> out = new ArrayList<>();
+        List<PinCurrent> pins = new ArrayList<>();
         for (int bit = 0; bit < bits; bit++) {
-            out.add(new PinCurrent(bit, source[bit], sourceCode[bit], sink[bit], sinkCode[bit]));
+            pins.add(new PinCurrent(bit, source[bit], sourceCode[bit], sink[bit], sinkCode[bit]));
         }
-        return out;
+        return new DcScan(List.copyOf(pins), minOut, maxOut);
+    }
+
+    private double summingOutputOhms(int code) {
+        double g = Double.isInfinite(spec.loadOhms()) ? 0 : 1 / spec.loadOhms();
+        for (int bit = 0; bit < spec.bits(); bit++) {
+            boolean high = ((code >> bit) & 1) != 0;
+            g += 1 / (ohms[bit] + (high ? spec.pinROhmsHigh() : spec.pinROhmsLow()));
+        }
+        return 1 / g;
     }
 
     private double[] summingAmps(int code, double node) {

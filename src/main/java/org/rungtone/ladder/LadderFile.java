@@ -1,11 +1,16 @@
 package org.rungtone.ladder;
 
+import java.io.IOException;
+import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.Units;
+import org.tomlj.Toml;
 import org.tomlj.TomlArray;
+import org.tomlj.TomlParseError;
+import org.tomlj.TomlParseResult;
 import org.tomlj.TomlPosition;
 import org.tomlj.TomlTable;
 
@@ -112,6 +117,30 @@ public final class LadderFile {
     }
 
     /**
+     * Reads a TOML file and returns its {@code [ladder]} table.
+     *
+     * @throws InputError when the file cannot be read, is not valid TOML or has no {@code [ladder]} table
+     */
+    public static TomlTable readTable(Path file) {
+        TomlParseResult result;
+        try {
+            result = Toml.parse(file);
+        } catch (NoSuchFileException e) {
+            throw new InputError(file + ": no such file", e);
+        } catch (IOException e) {
+            throw new InputError(file + ": cannot read (" + e.getMessage() + ")", e);
+        }
+        if (result.hasErrors()) {
+            TomlParseError e = result.errors().get(0);
+            throw new InputError(location(file, e.position()) + ": not valid TOML: " + e.getMessage(), e);
+        }
+        if (!result.isTable("ladder")) {
+            throw new InputError(file + ": no [ladder] table; a ladder file holds its keys under [ladder]");
+        }
+        return result.getTable("ladder");
+    }
+
+    /**
      * Turns a validation error of a builder read from {@code table} into one line that names the file and
      * the line of the key at fault.
      */
@@ -198,8 +227,11 @@ public final class LadderFile {
         return new InputError(where(table, file, key) + ": " + detail);
     }
 
-    /** "board.toml:7: ladder.key" with the line of the key, of its parent, or of the table's first key. */
-    private static String where(TomlTable table, Path file, String key) {
+    /**
+     * Where a key sits: {@code "board.toml:7: ladder.key"} with the line of the key, of its parent table, or
+     * of the table's first key.
+     */
+    public static String where(TomlTable table, Path file, String key) {
         TomlPosition pos = table.inputPositionOf(key);
         if (pos == null && key.contains(".")) {
             pos = table.inputPositionOf(key.substring(0, key.indexOf('.')));

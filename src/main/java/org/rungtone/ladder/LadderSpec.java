@@ -7,7 +7,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
 import java.util.Optional;
-import org.rungtone.internal.Units;
 import org.tomlj.TomlTable;
 
 /**
@@ -276,7 +275,7 @@ public final class LadderSpec {
     /** A short description for reports: "r2r 8-bit, 1% parts". */
     public String describe() {
         return String.format(Locale.ROOT, "%s %d-bit, %s parts", topology.key(), bits,
-                Units.format(tolerance * 100, "%"));
+                SpecChecks.percent(tolerance));
     }
 
     @Override

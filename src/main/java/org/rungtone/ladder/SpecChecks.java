@@ -32,7 +32,7 @@ final class SpecChecks {
         require(Double.isFinite(s.baseROhms()) && s.baseROhms() > 0, "base_r",
                 "must be a positive, finite resistance, got %s", ohms(s.baseROhms()));
         require(s.tolerance() >= 0 && s.tolerance() <= 0.5, "tolerance", "must be 0%% to 50%%, got %s",
-                Units.format(s.tolerance() * 100, "%"));
+                percent(s.tolerance()));
         require(Double.isFinite(s.logicLowVolts()), "logic_low", "must be a finite voltage");
         require(Double.isFinite(s.logicHighVolts()) && s.logicHighVolts() > s.logicLowVolts(), "logic_high",
                 "must be above logic_low (%s), got %s", volts(s.logicLowVolts()), volts(s.logicHighVolts()));
@@ -112,6 +112,13 @@ final class SpecChecks {
         if (!ok) {
             throw new LadderSpecError(key, String.format(Locale.ROOT, format, args));
         }
+    }
+
+    /** A fraction as a percentage with up to three significant digits: "5%", "0.5%", "0.25%". */
+    static String percent(double fraction) {
+        String t = new java.math.BigDecimal(100 * fraction).round(new java.math.MathContext(3))
+                .stripTrailingZeros().toPlainString();
+        return t + "%";
     }
 
     static String ohms(double r) {

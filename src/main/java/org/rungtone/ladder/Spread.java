@@ -45,10 +45,10 @@ public record Spread(Kind kind, double sigma) {
         return sigma * random.nextGaussian();
     }
 
-    /** A short description: "uniform ±5%" or "gaussian σ=1.7%". */
+    /** A short description: "uniform within ±5%" or "gaussian, sigma 1.7%". */
     public String describe(double tolerance) {
         return kind == Kind.UNIFORM
-                ? "uniform ±" + org.rungtone.internal.Units.format(100 * tolerance, "%")
-                : "gaussian sigma " + org.rungtone.internal.Units.format(100 * sigma, "%");
+                ? "uniform within ±" + SpecChecks.percent(tolerance)
+                : "gaussian, sigma " + SpecChecks.percent(sigma);
     }
 }

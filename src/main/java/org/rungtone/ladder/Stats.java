@@ -10,12 +10,15 @@ import org.rungtone.internal.Checks;
  * @param mean arithmetic mean
  * @param stdDev sample standard deviation (n − 1); 0 for one value
  * @param min smallest value
+ * @param p01 1st percentile
+ * @param p10 10th percentile
  * @param p50 median
  * @param p90 90th percentile
  * @param p99 99th percentile
  * @param max largest value
  */
-public record Stats(double mean, double stdDev, double min, double p50, double p90, double p99, double max) {
+public record Stats(double mean, double stdDev, double min, double p01, double p10, double p50, double p90,
+        double p99, double max) {
     /**
      * Summarises {@code values}.
      *
@@ -35,7 +38,8 @@ public record Stats(double mean, double stdDev, double min, double p50, double p
             ss += (v - mean) * (v - mean);
         }
         double sd = s.length > 1 ? Math.sqrt(ss / (s.length - 1)) : 0;
-        return new Stats(mean, sd, s[0], rank(s, 0.50), rank(s, 0.90), rank(s, 0.99), s[s.length - 1]);
+        return new Stats(mean, sd, s[0], rank(s, 0.01), rank(s, 0.10), rank(s, 0.50), rank(s, 0.90), rank(s, 0.99),
+                s[s.length - 1]);
     }
 
     private static double rank(double[] sorted, double p) {
