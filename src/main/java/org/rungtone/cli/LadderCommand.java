@@ -117,7 +117,8 @@ public final class LadderCommand implements Callable<Integer> {
         List<String> pins = pins(ladderSpec.bits());
         LadderAnalysis analysis = LadderAnalysis.of(ladderSpec, limit);
         MonteCarloResult mc = boards == null ? null
-                : new MonteCarlo(boards, seed, spread).run(Ladder.nominal(ladderSpec), new Progress(boards));
+                : new MonteCarlo(boards, seed, spread).run(Ladder.nominal(ladderSpec),
+                        new Progress(boards, (long) boards << ladderSpec.bits()));
         DesignProposal proposal = design
                 ? LadderDesigner.propose(ladderSpec, ladderSpec.series().orElse(ESeries.E24)) : null;
         LadderAnalysis proposed = proposal == null ? null : LadderAnalysis.of(proposal.proposedLadder(), limit);
@@ -133,12 +134,12 @@ public final class LadderCommand implements Callable<Integer> {
     }
 
     private Spread gaussian() {
+        if (!gaussianSigma.trim().endsWith("%")) {
+            throw new InputError("--gaussian-sigma: write it as a percentage, e.g. 1.7%");
+        }
         double sigma = positive("--gaussian-sigma", gaussianSigma, "%");
         if (sigma > 0.5) {
             throw new InputError("--gaussian-sigma: must be at most 50%, got " + gaussianSigma);
-        }
-        if (!gaussianSigma.trim().endsWith("%")) {
-            throw new InputError("--gaussian-sigma: write it as a percentage, e.g. 1.7%");
         }
         return Spread.gaussian(sigma);
     }
@@ -213,9 +214,10 @@ public final class LadderCommand implements Callable<Integer> {
         private final boolean show;
         private int shownPercent = -1;
 
-        Progress(int total) {
+        /** Shows progress when the run is long: about a second or more of level evaluations. */
+        Progress(int total, long codeEvaluations) {
             this.total = total;
-            this.show = System.console() != null && !common.quiet && !json && total >= 20_000;
+            this.show = System.console() != null && !common.quiet && !json && codeEvaluations >= 1L << 26;
         }
 
         @Override
@@ -592,28 +594,56 @@ public final class LadderCommand implements Callable<Integer> {
 
         static List<Plots.Chart> of(LadderAnalysis a, MonteCarloResult mc) {
             int n = a.levels().size();
-            double[] codes = new double[n];
-            for (int k = 0; k < n; k++) {
-                codes[k] = k;
-            }
             Plots.Style style = n <= 64 ? Plots.Style.LINE_AND_MARKERS : Plots.Style.LINE;
             Linearity lin = a.linearity();
             String what = " (" + a.spec().describe() + ")";
             List<Plots.Chart> charts = new ArrayList<>();
             charts.add(new Plots.Chart("Transfer curve" + what, "code", "output (V)", false, List.of(
-                    new Plots.Series("modelled", codes, a.levels().levels(), style),
-                    new Plots.Series("ideal", codes, a.ideal().levels(), Plots.Style.DASHED))));
+                    envelope("modelled", a.levels().levels(), style),
+                    envelope("ideal", a.ideal().levels(), Plots.Style.DASHED))));
             charts.add(new Plots.Chart("DNL" + what, "code", "DNL (LSB)", false, List.of(
-                    new Plots.Series("DNL", codes, lin.dnlLsb(), style))));
+                    envelope("DNL", lin.dnlLsb(), style))));
             charts.add(new Plots.Chart("INL" + what, "code", "INL (LSB)", false, List.of(
-                    new Plots.Series("endpoint line", codes, lin.inlLsb(), style),
-                    new Plots.Series("best-fit line", codes, lin.inlBestFitLsb(), Plots.Style.DASHED))));
+                    envelope("endpoint line", lin.inlLsb(), style),
+                    envelope("best-fit line", lin.inlBestFitLsb(), Plots.Style.DASHED))));
             if (mc != null) {
                 charts.add(new Plots.Chart("Monte Carlo, " + mc.boards() + " boards" + what, "worst |error| (LSB)",
                         "boards at or below (%)", false, List.of(
                         share("worst |INL|", mc.worstInlLsb()), share("worst |DNL|", mc.worstDnlLsb()))));
             }
             return charts;
+        }
+
+        /**
+         * A series over codes; above 2048 codes, each of 1024 runs of codes keeps only its lowest and highest
+         * point, so spikes survive and the chart stays quick to draw.
+         */
+        static Plots.Series envelope(String name, double[] y, Plots.Style style) {
+            int n = y.length;
+            if (n <= 2048) {
+                double[] x = new double[n];
+                for (int k = 0; k < n; k++) {
+                    x[k] = k;
+                }
+                return new Plots.Series(name, x, y, style);
+            }
+            int run = (n + 1023) / 1024;
+            double[] xs = new double[2 * ((n + run - 1) / run)];
+            double[] ys = new double[xs.length];
+            int m = 0;
+            for (int start = 0; start < n; start += run) {
+                int lo = start;
+                int hi = start;
+                for (int k = start; k < Math.min(n, start + run); k++) {
+                    lo = y[k] < y[lo] ? k : lo;
+                    hi = y[k] > y[hi] ? k : hi;
+                }
+                for (int k : lo == hi ? new int[] {lo} : new int[] {Math.min(lo, hi), Math.max(lo, hi)}) {
+                    xs[m] = k;
+                    ys[m++] = y[k];
+                }
+            }
+            return new Plots.Series(name, java.util.Arrays.copyOf(xs, m), java.util.Arrays.copyOf(ys, m), style);
         }
 
         /** Percent of boards: uneven steps that show the tails (and keep XChart's ticks readable). */

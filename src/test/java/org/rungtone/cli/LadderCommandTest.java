@@ -142,6 +142,36 @@ class LadderCommandTest {
     }
 
     @Test
+    void optionsOverrideTheLadderFileWhichReplacesTheProjectTable() throws IOException {
+        org.tomlj.TomlTable project = org.tomlj.Toml.parse("[ladder]\ntopology = \"r2r\"\nbits = 10\n")
+                .getTable("ladder");
+        LadderOptions opts = new LadderOptions();
+        opts.tolerance = "0.1%";
+        LadderSpec fromProject = opts.toSpec(project, Path.of("project.toml"), 0);
+        assertEquals(Topology.R2R, fromProject.topology());
+        assertEquals(10, fromProject.bits());
+        assertEquals(0.001, fromProject.tolerance(), 1e-15);
+        Path file = dir.resolve("chime.toml");
+        Files.writeString(file, "[ladder]\nbits = 4\nlogic_high = \"3.3V\"\n");
+        opts.ladderFile = file;
+        LadderSpec fromFile = opts.toSpec(project, Path.of("project.toml"), 6);
+        assertEquals(Topology.WEIGHTED, fromFile.topology());
+        assertEquals(6, fromFile.bits());
+        assertEquals(3.3, fromFile.logicHighVolts());
+        assertEquals(0.001, fromFile.tolerance(), 1e-15);
+    }
+
+    @Test
+    void gaussianSpreadIsReported() {
+        Run r = run("--bits", "6", "--monte-carlo", "50", "--gaussian-sigma", "1.5%", "--json");
+        assertEquals(0, r.exit(), r.err());
+        JsonObject mc = JsonParser.parseString(r.out()).getAsJsonObject().getAsJsonObject("monte_carlo");
+        assertEquals("gaussian, sigma 1.5%", mc.get("spread").getAsString());
+        assertBadInput("--gaussian-sigma: write it as a percentage, e.g. 1.7%", "--monte-carlo", "5",
+                "--gaussian-sigma", "0.02");
+    }
+
+    @Test
     void optionsGiveNoLadderWhenNothingIsSaid() {
         LadderOptions none = new LadderOptions();
         assertEquals(Optional.empty(), none.specIfGiven(8));
