@@ -448,7 +448,7 @@ public final class LadderCommand implements Callable<Integer> {
             Map<String, Object> desc = new LinkedHashMap<>();
             desc.put("topology", s.topology().key());
             desc.put("bits", s.bits());
-            desc.put("series", s.series().map(Enum::name).orElse(null));
+            desc.put("series", s.series().map(Enum::name).orElse("none"));
             desc.put("tolerance", s.tolerance());
             desc.put("logic_high_v", s.logicHighVolts());
             desc.put("logic_low_v", s.logicLowVolts());
@@ -478,7 +478,7 @@ public final class LadderCommand implements Callable<Integer> {
             outOhm.put("min", a.minOutputOhms());
             outOhm.put("max", a.maxOutputOhms());
             root.put("output_ohm", outOhm);
-            root.put("pin_limit_a", Double.isInfinite(a.pinLimitAmps()) ? null : a.pinLimitAmps());
+            root.put("pin_limit_a", a.pinLimitAmps());
             root.put("pin_currents", pinJson(a.pinCurrents(), pins));
             if (mc != null) {
                 root.put("monte_carlo", monteCarlo(mc));

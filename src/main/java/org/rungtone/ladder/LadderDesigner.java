@@ -31,6 +31,9 @@ public final class LadderDesigner {
     /** A pair must cut the worst INL by at least this many LSB. */
     public static final double PAIR_MIN_GAIN_LSB = 0.02;
 
+    /** Scores closer than this (LSB) are a tie, which the earlier candidate wins (rounding noise). */
+    private static final double TIE_LSB = 1e-9;
+
     private final LadderSpec spec;
     private final ESeries series;
     private final double[] ideal;
@@ -100,7 +103,7 @@ public final class LadderDesigner {
             }
             PartChoice[] start = starts(lambda, false);
             double score = descend(start, false);
-            if (score < singlesScore) {
+            if (score < singlesScore - TIE_LSB) {
                 singlesScore = score;
                 singles = start;
             }
@@ -114,7 +117,7 @@ public final class LadderDesigner {
             }
             PartChoice[] start = starts(lambda, true);
             double score = descend(start, true);
-            if (score < pairedScore) {
+            if (score < pairedScore - TIE_LSB) {
                 pairedScore = score;
                 paired = start;
             }
@@ -225,7 +228,7 @@ public final class LadderDesigner {
                     }
                     ohms[p] = c.ohms();
                     double s = score(ohms);
-                    if (s < score - 1e-12) {
+                    if (s < score - TIE_LSB) {
                         score = s;
                         choice[p] = c;
                         current = c.ohms();

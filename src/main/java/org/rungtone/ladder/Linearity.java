@@ -78,11 +78,15 @@ public final class Linearity {
     /**
      * The linearity of {@code actual} against the {@code ideal} transfer (for offset and gain error).
      *
-     * @throws IllegalArgumentException when the bit depths differ
+     * @throws IllegalArgumentException when the bit depths differ, or the first and last levels of either
+     *     table are equal (no span to measure an LSB against)
      */
     public static Linearity of(LevelTable actual, LevelTable ideal) {
         Checks.checkArgument(actual.bits() == ideal.bits(), "bit depths differ: %d and %d", actual.bits(),
                 ideal.bits());
+        int last = actual.size() - 1;
+        Checks.checkArgument(actual.volts(last) != actual.volts(0) && ideal.volts(last) != ideal.volts(0),
+                "the first and last levels are equal: no span");
         return new Linearity(actual.levels(), ideal.levels());
     }
 
