@@ -159,14 +159,16 @@ final class LevelSolver {
             double il = gl * vl;
             int half = 1 << j;
             for (int c = 0; c < half; c++) {
-                double gt = 1 / (rt[c] + rung);
-                double it = vt[c] * gt;
-                double rHigh = 1 / (gt + gh);
-                double rLow = 1 / (gt + gl);
-                rt[c + half] = rHigh;
-                vt[c + half] = (it + ih) * rHigh;
-                rt[c] = rLow;
-                vt[c] = (it + il) * rLow;
+                // Source (V, R) through the rung, then in parallel with the leg (g, i = g·V_pin):
+                // t = R + rung, R' = t/(1 + g·t), V' = (V + i·t)/(1 + g·t): one division per new state.
+                double t = rt[c] + rung;
+                double v = vt[c];
+                double dHigh = 1 / (1 + gh * t);
+                double dLow = 1 / (1 + gl * t);
+                rt[c + half] = t * dHigh;
+                vt[c + half] = (v + ih * t) * dHigh;
+                rt[c] = t * dLow;
+                vt[c] = (v + il * t) * dLow;
             }
         }
         double load = spec.loadOhms();
