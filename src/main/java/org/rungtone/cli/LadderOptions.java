@@ -1,0 +1,234 @@
+package org.rungtone.cli;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import org.rungtone.internal.InputError;
+import org.rungtone.internal.Units;
+import org.rungtone.ladder.ESeries;
+import org.rungtone.ladder.LadderFile;
+import org.rungtone.ladder.LadderSpec;
+import org.rungtone.ladder.LadderSpecError;
+import org.rungtone.ladder.Topology;
+import org.tomlj.TomlTable;
+import picocli.CommandLine.Option;
+
+/**
+ * The ladder description on the command line: {@code --ladder FILE} (a TOML file with a {@code [ladder]}
+ * table) and one option per key of that table, which overrides the file. The bit depth is the core option
+ * {@code --bits} of each command, passed in. Shared by every command that models a ladder.
+ */
+public final class LadderOptions {
+    @Option(names = "--ladder", paramLabel = "FILE",
+            description = "Read the ladder from the [ladder] table of this TOML file; the options below"
+                    + " override its keys.")
+    Path ladderFile;
+
+    @Option(names = "--topology", paramLabel = "weighted|r2r|custom",
+            description = "Network: binary-weighted summing, R-2R, or your own per-bit values (default weighted).")
+    String topology;
+
+    @Option(names = "--resistors", split = ",", paramLabel = "R",
+            description = "Per-bit resistors, bit 0 (LSB) first, e.g. 100k,47k,24k,12k (weighted, custom).")
+    List<String> resistors;
+
+    @Option(names = "--base-r", paramLabel = "<ohms>",
+            description = "MSB resistor of a derived weighted ladder, or R of an R-2R ladder (default 10k).")
+    String baseR;
+
+    @Option(names = "--series", paramLabel = "E6..E192",
+            description = "Preferred-value series to snap derived values to and to propose values from.")
+    String series;
+
+    @Option(names = "--tolerance", paramLabel = "<percent>",
+            description = "Resistor tolerance, e.g. 1%% (default 5%%).")
+    String tolerance;
+
+    @Option(names = "--logic-high", paramLabel = "<volts>",
+            description = "Pin output level of a 1 bit (default 5V).")
+    String logicHigh;
+
+    @Option(names = "--logic-low", paramLabel = "<volts>",
+            description = "Pin output level of a 0 bit (default 0V).")
+    String logicLow;
+
+    @Option(names = "--pin-r-high", paramLabel = "<ohms>",
+            description = "Pin output resistance while high (default 25).")
+    String pinRHigh;
+
+    @Option(names = "--pin-r-low", paramLabel = "<ohms>",
+            description = "Pin output resistance while low (default 20).")
+    String pinRLow;
+
+    @Option(names = "--load", paramLabel = "<ohms>",
+            description = "Load from the ladder output to ground, or inf (default inf).")
+    String load;
+
+    @Option(names = "--buffer-gain", paramLabel = "<gain>",
+            description = "Voltage gain of the buffer after the ladder (default 1).")
+    String bufferGain;
+
+    @Option(names = "--out-min", paramLabel = "<volts>",
+            description = "Lowest output the buffer reaches (default 0V).")
+    String outMin;
+
+    @Option(names = "--out-max", paramLabel = "<volts>",
+            description = "Highest output the buffer reaches (default: logic high).")
+    String outMax;
+
+    /** True when a ladder file or any ladder option was given. */
+    public boolean given() {
+        return ladderFile != null || !overrides().isEmpty();
+    }
+
+    /** The ladder described by the file and options, defaults filling the rest; bits 0 keeps the file's. */
+    public LadderSpec toSpec(int bitsOrZero) {
+        return toSpec(null, null, bitsOrZero);
+    }
+
+    /**
+     * The ladder described by a project file's {@code [ladder]} table (may be null), replaced by
+     * {@code --ladder FILE} when given, with the command-line options on top.
+     *
+     * @throws InputError naming the option, or the file and line, at fault
+     */
+    public LadderSpec toSpec(TomlTable projectTable, Path projectFile, int bitsOrZero) {
+        TomlTable table = projectTable;
+        Path file = projectFile;
+        if (ladderFile != null) {
+            table = LadderFile.readTable(ladderFile);
+            file = ladderFile;
+        }
+        LadderSpec.Builder b = table == null ? LadderSpec.builder() : LadderFile.read(table, file);
+        Map<String, String> cli = overrides();
+        applyOverrides(b);
+        if (bitsOrZero != 0) {
+            b.bits(bitsOrZero);
+        }
+        try {
+            return b.build();
+        } catch (LadderSpecError e) {
+            boolean bitsFromCli = bitsOrZero != 0;
+            if (e.key().equals("bits") && bitsFromCli) {
+                throw new InputError("--bits: " + e.detail(), e);
+            }
+            if (cli.containsKey(e.key())) {
+                throw new InputError(cli.get(e.key()) + ": " + e.detail(), e);
+            }
+            String hint = bitsFromCli && e.key().equals("resistors") ? " (bits from --bits)" : "";
+            if (table != null) {
+                throw new InputError(LadderFile.where(table, file, e.key()) + ": " + e.detail() + hint, e);
+            }
+            throw new InputError(e.getMessage() + hint, e);
+        }
+    }
+
+    /** The described ladder, or empty when neither a file nor any ladder option was given. */
+    public Optional<LadderSpec> specIfGiven(int bitsOrZero) {
+        return given() ? Optional.of(toSpec(bitsOrZero)) : Optional.empty();
+    }
+
+    /** Ladder-file key to option name, for the options given. */
+    private Map<String, String> overrides() {
+        Map<String, String> m = new LinkedHashMap<>();
+        put(m, topology, "topology", "--topology");
+        put(m, resistors, "resistors", "--resistors");
+        put(m, baseR, "base_r", "--base-r");
+        put(m, series, "series", "--series");
+        put(m, tolerance, "tolerance", "--tolerance");
+        put(m, logicHigh, "logic_high", "--logic-high");
+        put(m, logicLow, "logic_low", "--logic-low");
+        put(m, pinRHigh, "pin_r_high", "--pin-r-high");
+        put(m, pinRLow, "pin_r_low", "--pin-r-low");
+        put(m, load, "load", "--load");
+        put(m, bufferGain, "buffer.gain", "--buffer-gain");
+        put(m, outMin, "buffer.out_min", "--out-min");
+        put(m, outMax, "buffer.out_max", "--out-max");
+        return m;
+    }
+
+    private static void put(Map<String, String> m, Object value, String key, String option) {
+        if (value != null) {
+            m.put(key, option);
+        }
+    }
+
+    private void applyOverrides(LadderSpec.Builder b) {
+        if (topology != null) {
+            b.topology(parse("--topology", () -> Topology.parse(topology)));
+        }
+        if (resistors != null) {
+            List<Double> values = new ArrayList<>();
+            for (int i = 0; i < resistors.size(); i++) {
+                String text = resistors.get(i);
+                int bit = i;
+                values.add(parse("--resistors", () -> quantity("bit " + bit + ": ", text, "ohm")));
+            }
+            b.resistors(values);
+        }
+        if (baseR != null) {
+            b.baseROhms(parse("--base-r", () -> Units.parse(baseR, "ohm")));
+        }
+        if (series != null) {
+            b.series(parse("--series", () -> ESeries.parse(series)));
+        }
+        if (tolerance != null) {
+            b.tolerance(parse("--tolerance", () -> percent(tolerance)));
+        }
+        if (logicHigh != null) {
+            b.logicHighVolts(parse("--logic-high", () -> Units.parse(logicHigh, "V")));
+        }
+        if (logicLow != null) {
+            b.logicLowVolts(parse("--logic-low", () -> Units.parse(logicLow, "V")));
+        }
+        if (pinRHigh != null) {
+            b.pinROhmsHigh(parse("--pin-r-high", () -> Units.parse(pinRHigh, "ohm")));
+        }
+        if (pinRLow != null) {
+            b.pinROhmsLow(parse("--pin-r-low", () -> Units.parse(pinRLow, "ohm")));
+        }
+        if (load != null) {
+            b.loadOhms(parse("--load", () -> Units.parse(load, "ohm")));
+        }
+        if (bufferGain != null) {
+            b.bufferGain(parse("--buffer-gain", () -> Units.parse(bufferGain, "")));
+        }
+        if (outMin != null) {
+            b.outMinVolts(parse("--out-min", () -> Units.parse(outMin, "V")));
+        }
+        if (outMax != null) {
+            b.outMaxVolts(parse("--out-max", () -> Units.parse(outMax, "V")));
+        }
+    }
+
+    private static double quantity(String prefix, String text, String unit) {
+        try {
+            return Units.parse(text, unit);
+        } catch (InputError e) {
+            throw new InputError(prefix + e.getMessage(), e);
+        }
+    }
+
+    /** Parses a percentage that must carry its % sign: "5%" is 0.05. */
+    static double percent(String text) {
+        if (!text.trim().endsWith("%")) {
+            throw new InputError("write it as a percentage, e.g. 5% or 0.1%, got '" + text + "'");
+        }
+        return Units.parse(text, "%");
+    }
+
+    private interface Parse<T> {
+        T get();
+    }
+
+    private static <T> T parse(String option, Parse<T> parse) {
+        try {
+            return parse.get();
+        } catch (InputError e) {
+            throw new InputError(option + ": " + e.getMessage(), e);
+        }
+    }
+}

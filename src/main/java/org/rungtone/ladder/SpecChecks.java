@@ -1,0 +1,131 @@
+package org.rungtone.ladder;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.rungtone.internal.Units;
+
+/** The validation rules and warnings of a {@link LadderSpec}, with their messages in one place. */
+final class SpecChecks {
+    private SpecChecks() {
+    }
+
+    /** Checks every setting on its own and the per-bit list against the bit depth. */
+    static void check(LadderSpec s) {
+        int bits = s.bits();
+        require(bits >= 1 && bits <= 16, "bits", "bit depth must be 1..16, got %d", bits);
+        List<Double> rs = s.resistors();
+        if (s.topology() == Topology.R2R) {
+            require(rs.isEmpty(), "resistors", "not used by topology r2r, whose values come from base_r;"
+                    + " remove it, or use topology custom for a summing network of your own values");
+        } else {
+            require(!rs.isEmpty() || s.topology() != Topology.CUSTOM, "resistors",
+                    "topology custom needs one value per bit, bit 0 (LSB) first");
+            require(rs.isEmpty() || rs.size() == bits, "resistors", "expected %d values for %d bits, got %d",
+                    bits, bits, rs.size());
+            for (int i = 0; i < rs.size(); i++) {
+                double r = rs.get(i);
+                require(Double.isFinite(r) && r > 0, "resistors",
+                        "bit %d needs a positive, finite resistance, got %s", i, ohms(r));
+            }
+        }
+        require(Double.isFinite(s.baseROhms()) && s.baseROhms() > 0, "base_r",
+                "must be a positive, finite resistance, got %s", ohms(s.baseROhms()));
+        require(s.tolerance() >= 0 && s.tolerance() <= 0.5, "tolerance", "must be 0%% to 50%%, got %s",
+                percent(s.tolerance()));
+        require(Double.isFinite(s.logicLowVolts()), "logic_low", "must be a finite voltage");
+        require(Double.isFinite(s.logicHighVolts()) && s.logicHighVolts() > s.logicLowVolts(), "logic_high",
+                "must be above logic_low (%s), got %s", volts(s.logicLowVolts()), volts(s.logicHighVolts()));
+        require(Double.isFinite(s.pinROhmsHigh()) && s.pinROhmsHigh() >= 0, "pin_r_high",
+                "must be 0 or a positive, finite resistance, got %s", ohms(s.pinROhmsHigh()));
+        require(Double.isFinite(s.pinROhmsLow()) && s.pinROhmsLow() >= 0, "pin_r_low",
+                "must be 0 or a positive, finite resistance, got %s", ohms(s.pinROhmsLow()));
+        require(s.loadOhms() > 0 && !Double.isNaN(s.loadOhms()), "load",
+                "must be a positive resistance, or inf for none, got %s", ohms(s.loadOhms()));
+        require(Double.isFinite(s.bufferGain()) && s.bufferGain() > 0, "buffer.gain",
+                "must be a positive number, got %s", Units.format(s.bufferGain(), ""));
+        require(!Double.isNaN(s.outMinVolts()) && s.outMinVolts() < Double.POSITIVE_INFINITY, "buffer.out_min",
+                "must be a voltage, got %s", volts(s.outMinVolts()));
+        require(s.outMaxVolts() > s.outMinVolts(), "buffer.out_max", "%s must be above out_min (%s)",
+                volts(s.outMaxVolts()), volts(s.outMinVolts()));
+    }
+
+    /** Checks that the buffer swing leaves at least two distinct output levels. */
+    static void checkSpan(LadderSpec s, double[] ladderVolts) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        for (double v : ladderVolts) {
+            lo = Math.min(lo, v);
+            hi = Math.max(hi, v);
+        }
+        double g = s.bufferGain();
+        require(g * hi > s.outMinVolts(), "buffer.out_min",
+                "%s is at or above the highest buffered ladder level (%s); no usable span is left",
+                volts(s.outMinVolts()), volts(g * hi));
+        require(g * lo < s.outMaxVolts(), "buffer.out_max",
+                "%s is at or below the lowest buffered ladder level (%s); no usable span is left",
+                volts(s.outMaxVolts()), volts(g * lo));
+    }
+
+    /** Warnings of the nominal network: pins as strong as the ladder, buffer clipping. */
+    static List<String> warnings(LadderSpec s, double[] ladderVolts) {
+        List<String> out = new ArrayList<>();
+        Part smallest = null;
+        for (Part p : s.parts()) {
+            if (smallest == null || p.ohms() < smallest.ohms()) {
+                smallest = p;
+            }
+        }
+        double pin = Math.max(s.pinROhmsHigh(), s.pinROhmsLow());
+        if (smallest != null && pin > smallest.ohms()) {
+            out.add(String.format(Locale.ROOT, "pin resistance (%s high, %s low) is larger than the smallest"
+                    + " ladder resistor (%s, %s): the pins, not the resistors, set the levels; use larger"
+                    + " resistors", ohms(s.pinROhmsHigh()), ohms(s.pinROhmsLow()), ohms(smallest.ohms()),
+                    smallest.label()));
+        }
+        clipWarning(s, ladderVolts, true, out);
+        clipWarning(s, ladderVolts, false, out);
+        return out;
+    }
+
+    private static void clipWarning(LadderSpec s, double[] ladderVolts, boolean top, List<String> out) {
+        double g = s.bufferGain();
+        int count = 0;
+        int first = -1;
+        int last = -1;
+        for (int k = 0; k < ladderVolts.length; k++) {
+            double v = g * ladderVolts[k];
+            if (top ? v > s.outMaxVolts() : v < s.outMinVolts()) {
+                count++;
+                first = first < 0 ? k : first;
+                last = k;
+            }
+        }
+        if (count > 0) {
+            out.add(String.format(Locale.ROOT, "the buffer clips %d code%s at %s %s (codes %d..%d);"
+                    + " lower the gain or widen the swing", count, count == 1 ? "" : "s",
+                    top ? "out_max" : "out_min", volts(top ? s.outMaxVolts() : s.outMinVolts()), first, last));
+        }
+    }
+
+    private static void require(boolean ok, String key, String format, Object... args) {
+        if (!ok) {
+            throw new LadderSpecError(key, String.format(Locale.ROOT, format, args));
+        }
+    }
+
+    /** A fraction as a percentage with up to three significant digits: "5%", "0.5%", "0.25%". */
+    static String percent(double fraction) {
+        String t = new java.math.BigDecimal(100 * fraction).round(new java.math.MathContext(3))
+                .stripTrailingZeros().toPlainString();
+        return t + "%";
+    }
+
+    static String ohms(double r) {
+        return Units.format(r, "");
+    }
+
+    static String volts(double v) {
+        return Units.format(v, "V");
+    }
+}
