@@ -3,9 +3,11 @@ package org.rungtone.cli;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 import org.rungtone.firmware.CNames;
+import org.rungtone.ladder.LadderSpec;
 import org.rungtone.project.Build;
 import org.rungtone.project.BuildPlan;
 import org.rungtone.quantize.Dither;
@@ -39,9 +41,9 @@ public final class BuildCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "SOURCE", description = "A .wav file or a .rung script.")
     Path source;
 
-    @Option(names = "--bits", paramLabel = "<n>", defaultValue = "8",
-            description = "DAC bit depth, 1..16 (default ${DEFAULT-VALUE}).")
-    int bits;
+    @Option(names = "--bits", paramLabel = "<n>",
+            description = "DAC bit depth, 1..16 (default: the ladder's, else 8).")
+    Integer bits;
 
     @Option(names = "--rate", paramLabel = "<hz>", converter = Converters.Hertz.class,
             description = "Target sample rate, e.g. 16k, 8000 (default: the script's own rate, else 16 kHz).")
@@ -114,6 +116,14 @@ public final class BuildCommand implements Callable<Integer> {
     String flashAttr;
 
     @Mixin
+    LadderOptions ladder;
+
+    @Option(names = "--compensation", paramLabel = "on|off", defaultValue = "on",
+            description = "With a ladder or unit profile: quantize onto the board's real levels (on, default) or"
+                    + " emit plain binary codes (off).")
+    String compensation;
+
+    @Mixin
     FirmwareOptions firmware;
 
     @Mixin
@@ -147,14 +157,35 @@ public final class BuildCommand implements Callable<Integer> {
                 : OptionalDouble.empty();
         OptionalDouble norm = gain.isPresent() ? OptionalDouble.empty()
                 : OptionalDouble.of(level != null && level.normalizeDbfs != null ? level.normalizeDbfs : -1.0);
-        BuildPlan plan = new BuildPlan(source, channel, symbol, outDir, bits,
+        Optional<LadderSpec> spec = ladder.specIfGiven(bits == null ? 0 : bits);
+        int effectiveBits = bits != null ? bits : spec.map(LadderSpec::bits).orElse(8);
+        BuildPlan plan = new BuildPlan(source, channel, symbol, outDir, effectiveBits,
                 rateHz == null ? OptionalDouble.empty() : OptionalDouble.of(rateHz), dither,
                 errorFilter(shaping), seed, !keepDc,
                 trimDbfs == null ? OptionalDouble.empty() : OptionalDouble.of(trimDbfs), gain, norm, fadeIn,
                 fadeOut, resampler.toLowerCase(Locale.ROOT), fullScale, flashAttr);
+        if (spec.isPresent()) {
+            plan = plan.withBoard(spec.get().levels().withOrigin("modelled " + spec.get().describe()),
+                    onOff(compensation, "--compensation"));
+        }
         return plan.withFirmware(firmware.request(), firmware.loopSpan(), firmware.flashBudgetBytes())
                 .withPreview(preview.filter(plan.rateHz().orElse(BuildPlan.DEFAULT_RATE_HZ)),
                         preview.previewRateHz);
+    }
+
+    static boolean onOff(String text, String option) {
+        switch (text.toLowerCase(Locale.ROOT)) {
+            case "on":
+            case "true":
+            case "yes":
+                return true;
+            case "off":
+            case "false":
+            case "no":
+                return false;
+            default:
+                throw new org.rungtone.internal.InputError(option + " must be on or off: " + text);
+        }
     }
 
     static ErrorFilter errorFilter(String text) {
