@@ -12,6 +12,7 @@ import org.rungtone.analysis.AnalogModel;
 import org.rungtone.analysis.AudioMetrics;
 import org.rungtone.analysis.QualityReport;
 import org.rungtone.analysis.SineFit;
+import org.rungtone.analysis.Spectrum;
 import org.rungtone.analysis.ToneAnalysis;
 import org.rungtone.analysis.ToneReport;
 import org.rungtone.condition.Conditioner;
@@ -25,6 +26,7 @@ import org.rungtone.firmware.FirmwareRequest;
 import org.rungtone.firmware.FlashBudget;
 import org.rungtone.firmware.SampleArrayEmitter;
 import org.rungtone.firmware.SampleStorage;
+import org.rungtone.firmware.SoundClip;
 import org.rungtone.firmware.Templates;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.internal.InputError;
@@ -63,12 +65,137 @@ public final class Build {
     }
 
     /**
+     * One sound computed in memory: its codes and every figure, the preview and the plots' data, before any
+     * file is written.
+     *
+     * @param plan the plan it came from
+     * @param layout the source's description
+     * @param rateHz the target rate
+     * @param conditioned what conditioning did
+     * @param emitted the codes the firmware holds
+     * @param played the levels the board plays
+     * @param quality figures per ladder case, emitted case last
+     * @param shapingGainDb in-band gain of noise shaping, if used
+     * @param tone single-tone figures, if the source is one sine
+     * @param preview the analog preview
+     * @param errorSpectrum the error's spectrum, for its plot
+     * @param toneSpectrum the output spectrum, for tones
+     * @param inBandCutoffHz top of the in-band figures
+     * @param clippedSamples samples beyond full scale
+     * @param settings "key: value" lines for the C header comment
+     * @param warnings what the user should know
+     * @param stageMillis timings so far
+     */
+    public record Rendered(BuildPlan plan, String layout, double rateHz, Conditioner.Conditioned conditioned,
+            Codes emitted, LevelTable played, List<QualityReport> quality, Optional<Double> shapingGainDb,
+            Optional<ToneReport> tone, AnalogModel.Preview preview, Spectrum errorSpectrum,
+            Optional<Spectrum> toneSpectrum, double inBandCutoffHz, long clippedSamples, List<String> settings,
+            List<String> warnings, Map<String, Double> stageMillis) {
+    }
+
+    /**
      * Runs the plan and writes every output into the plan's folder.
      *
      * @throws InputError for anything the user can fix; no output file is left half-written
      */
     public BuildSummary run(BuildPlan plan) {
         AtomicFiles.checkFolderUsable(plan.outDir());
+        Rendered r = render(plan);
+        Stopwatch watch = new Stopwatch();
+        List<Path> files = new ArrayList<>();
+        List<String> firmwareLines = new ArrayList<>();
+        List<String> warnings = new ArrayList<>(r.warnings());
+        long flash;
+        if (plan.firmware().isPresent()) {
+            FirmwareRequest.Builder fb = plan.firmware().get().toBuilder().name(plan.symbol())
+                    .toolVersion(toolVersion).settings(r.settings());
+            fb.sound(clip(plan.symbol(), r));
+            EmitResult er = FirmwareEmitter.emit(fb.build(), plan.outDir());
+            files.addAll(er.files());
+            firmwareLines.addAll(er.report());
+            warnings.addAll(er.warnings());
+            flash = er.flashBytes();
+        } else {
+            flash = arrayBytes(r);
+            if (plan.flashBudgetBytes() > 0) {
+                FlashBudget.check(flash, plan.flashBudgetBytes(), FlashBudget.alternatives(r.emitted().length(),
+                        r.rateHz(), plan.bits(), SampleStorage.UNPACKED, 0));
+            }
+            files.addAll(emitArray(plan.symbol(), r, plan.outDir()));
+        }
+        watch.lap("emit");
+        files.addAll(writeAssets(r, plan.outDir()));
+        watch.lap("plots");
+        Path txt = plan.outDir().resolve("report.txt");
+        Path json = plan.outDir().resolve("report.json");
+        files.add(txt);
+        files.add(json);
+        Map<String, Double> laps = new LinkedHashMap<>(r.stageMillis());
+        laps.putAll(watch.laps());
+        BuildSummary summary = summary(r, firmwareLines, flash, files, warnings, laps);
+        AtomicFiles.writeString(txt, BuildReport.text(summary));
+        Json.write(json, BuildReport.json(summary));
+        return summary;
+    }
+
+    /** The firmware clip of a rendered sound, with its loop points. */
+    public static SoundClip clip(String name, Rendered r) {
+        if (r.plan().loop().isPresent()) {
+            int[] lp = r.plan().loop().get().samples(r.rateHz(), r.emitted().length());
+            return new SoundClip(name, r.emitted(), lp[0], lp[1]);
+        }
+        return SoundClip.of(name, r.emitted());
+    }
+
+    /** Flash bytes of a plain sample array. */
+    public static long arrayBytes(Rendered r) {
+        return (long) r.emitted().length() * (r.plan().bits() <= 8 ? 1 : 2);
+    }
+
+    /** Emits the plain sample array of a rendered sound. */
+    public List<Path> emitArray(String symbol, Rendered r, Path dir) {
+        return new SampleArrayEmitter(Templates.bundled()).emit(new SampleArrayEmitter.Request(symbol,
+                r.emitted(), r.plan().flashQualifier(), toolVersion, r.settings()), dir);
+    }
+
+    /** The summary of a rendered sound with what emission added. */
+    public BuildSummary summary(Rendered r, List<String> firmwareLines, long flash, List<Path> files,
+            List<String> warnings, Map<String, Double> stageMillis) {
+        BuildPlan plan = r.plan();
+        return new BuildSummary(toolVersion, plan.source(), r.layout(), plan.symbol(), plan.bits(), r.rateHz(),
+                r.emitted().length(), r.emitted().length() / r.rateHz(), plan.dither().label(),
+                plan.shaping().name(), plan.seed(), describe(plan, r.conditioned()), r.conditioned().resampler(),
+                r.played().origin(), r.clippedSamples(), r.quality(), r.quality().get(r.quality().size() - 1)
+                        .label(), r.shapingGainDb(), r.tone(),
+                new BuildSummary.PreviewInfo(plan.filter().describe(), plan.previewRateHz(),
+                        r.preview().passbandTopHz(), r.preview().zohDroopDb(), r.preview().peak()),
+                firmwareLines, flash, files, warnings, stageMillis);
+    }
+
+    /** Writes preview.wav and the plots of a rendered sound into {@code dir}. */
+    public static List<Path> writeAssets(Rendered r, Path dir) {
+        List<Path> files = new ArrayList<>();
+        Path previewFile = dir.resolve("preview.wav");
+        WavWriter.write(previewFile, r.preview().signal(), WavWriter.Format.PCM16);
+        files.add(previewFile);
+        Path errPlot = dir.resolve("error-spectrum.png");
+        AnalysisPlots.writeErrorSpectrum(errPlot, r.errorSpectrum(), r.inBandCutoffHz());
+        files.add(errPlot);
+        if (r.tone().isPresent() && r.toneSpectrum().isPresent()) {
+            Path specPlot = dir.resolve("spectrum.png");
+            AnalysisPlots.writeSpectrum(specPlot, r.toneSpectrum().get(), r.tone().get(), r.plan().bits());
+            files.add(specPlot);
+        }
+        return files;
+    }
+
+    /**
+     * Computes one sound without writing anything: load, condition, quantize for every ladder case, measure,
+     * render the preview.
+     *
+     * @throws InputError for anything the user can fix
+     */
+    public Rendered render(BuildPlan plan) {
         Stopwatch watch = new Stopwatch();
         Prepared prepared = prepare(plan, watch);
         Sources.Loaded loaded = prepared.loaded();
@@ -121,70 +248,16 @@ public final class Build {
             shapingGain = Optional.of(emittedQuality.inBandSnrDb() - flatInBand);
         }
         Optional<ToneReport> tone = toneOf(reference, emitted, played);
+        Optional<Spectrum> toneSpectrum = tone.isPresent()
+                ? Optional.of(ToneAnalysis.spectrum(head(volts(emitted, played), rate))) : Optional.empty();
+        Spectrum errorSpectrum = metrics.errorSpectrum(AudioMetrics.volts(emitted, played));
         watch.lap("analyze");
 
-        AnalogModel model = new AnalogModel(plan.filter(), plan.previewRateHz());
-        AnalogModel.Preview preview = model.render(emitted, played);
+        AnalogModel.Preview preview = new AnalogModel(plan.filter(), plan.previewRateHz()).render(emitted, played);
         watch.lap("preview");
-
-        List<String> settings = settings(plan, loaded, conditioned, played, rate);
-        List<Path> files = new ArrayList<>();
-        List<String> firmwareLines = new ArrayList<>();
-        long flash;
-        if (plan.firmware().isPresent()) {
-            FirmwareRequest.Builder fb = plan.firmware().get().toBuilder().name(plan.symbol())
-                    .toolVersion(toolVersion).settings(settings);
-            if (plan.loop().isPresent()) {
-                int[] lp = plan.loop().get().samples(rate, emitted.length());
-                fb.sound(plan.symbol(), emitted, lp[0], lp[1]);
-            } else {
-                fb.sound(plan.symbol(), emitted);
-            }
-            EmitResult er = FirmwareEmitter.emit(fb.build(), plan.outDir());
-            files.addAll(er.files());
-            firmwareLines.addAll(er.report());
-            warnings.addAll(er.warnings());
-            flash = er.flashBytes();
-        } else {
-            flash = (long) emitted.length() * (plan.bits() <= 8 ? 1 : 2);
-            if (plan.flashBudgetBytes() > 0) {
-                FlashBudget.check(flash, plan.flashBudgetBytes(), FlashBudget.alternatives(emitted.length(),
-                        rate, plan.bits(), SampleStorage.UNPACKED, 0));
-            }
-            files.addAll(new SampleArrayEmitter(Templates.bundled()).emit(new SampleArrayEmitter.Request(
-                    plan.symbol(), emitted, plan.flashQualifier(), toolVersion, settings), plan.outDir()));
-        }
-        watch.lap("emit");
-
-        Path previewFile = plan.outDir().resolve("preview.wav");
-        WavWriter.write(previewFile, preview.signal(), WavWriter.Format.PCM16);
-        files.add(previewFile);
-        Path errPlot = plan.outDir().resolve("error-spectrum.png");
-        AnalysisPlots.writeErrorSpectrum(errPlot, metrics.errorSpectrum(AudioMetrics.volts(emitted, played)),
-                cutoff);
-        files.add(errPlot);
-        if (tone.isPresent()) {
-            Path specPlot = plan.outDir().resolve("spectrum.png");
-            AnalysisPlots.writeSpectrum(specPlot, ToneAnalysis.spectrum(head(volts(emitted, played), rate)),
-                    tone.get(), plan.bits());
-            files.add(specPlot);
-        }
-        watch.lap("plots");
-
-        Path txt = plan.outDir().resolve("report.txt");
-        Path json = plan.outDir().resolve("report.json");
-        files.add(txt);
-        files.add(json);
-        BuildSummary summary = new BuildSummary(toolVersion, plan.source(), loaded.layout(), plan.symbol(),
-                plan.bits(), rate, emitted.length(), emitted.length() / rate, plan.dither().label(),
-                plan.shaping().name(), plan.seed(), describe(plan, conditioned), conditioned.resampler(),
-                played.origin(), clipped, quality, emittedQuality.label(), shapingGain, tone,
-                new BuildSummary.PreviewInfo(plan.filter().describe(), plan.previewRateHz(),
-                        preview.passbandTopHz(), preview.zohDroopDb(), preview.peak()),
-                firmwareLines, flash, files, warnings, watch.laps());
-        AtomicFiles.writeString(txt, BuildReport.text(summary));
-        Json.write(json, BuildReport.json(summary));
-        return summary;
+        return new Rendered(plan, loaded.layout(), rate, conditioned, emitted, played, quality, shapingGain, tone,
+                preview, errorSpectrum, toneSpectrum, cutoff, clipped,
+                settings(plan, loaded, conditioned, played, rate), warnings, watch.laps());
     }
 
     /** The source's description (its samples dropped), the conditioned reference and the target rate. */
