@@ -1,0 +1,110 @@
+package org.rungtone.project;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import org.tomlj.TomlTable;
+
+/**
+ * A project file as read: every value the user wrote, with nothing defaulted yet, so that command-line
+ * overrides and defaults are applied in one place ({@link ProjectBuild}). Positions for error messages stay
+ * with {@code file} and the raw ladder table.
+ *
+ * @param file the project file
+ * @param name project name: the C symbol prefix of the shared code
+ * @param outDir output folder, resolved against the file's folder
+ * @param seed random seed
+ * @param unitProfile measured unit profile, resolved against the file's folder
+ * @param compensation quantize onto the board's real levels
+ * @param target target settings
+ * @param ladder the raw [ladder] table, if any
+ * @param quantize quantization settings
+ * @param preview preview settings
+ * @param sounds the sounds, in file order
+ */
+public record Project(Path file, String name, Optional<Path> outDir, Optional<Long> seed, Optional<Path> unitProfile,
+        Optional<Boolean> compensation, Target target, Optional<TomlTable> ladder, Quantize quantize,
+        Preview preview, List<Sound> sounds) {
+
+    /** Copies the sound list. */
+    public Project {
+        sounds = List.copyOf(sounds);
+    }
+
+    /**
+     * The [target] table.
+     *
+     * @param family generic, avr or cortexm; empty: sample arrays only
+     * @param cpuClockHz CPU clock
+     * @param timer timer name
+     * @param pins pin list
+     * @param portWidth port width for generic
+     * @param pinStrategy auto, shift, table, scatter
+     * @param storage unpacked or packed
+     * @param engine clip, loop, dds
+     * @param rateTolerancePpm allowed rate error
+     * @param flashBudgetBytes flash budget
+     * @param flashAttr attribute for bare arrays
+     * @param ddsFrequencyHz DDS start frequency
+     * @param ddsPhaseBits DDS accumulator width
+     * @param lines line of each key, for conflict messages
+     */
+    public record Target(Optional<String> family, OptionalDouble cpuClockHz, Optional<String> timer,
+            Optional<String> pins, Optional<Long> portWidth, Optional<String> pinStrategy, Optional<String> storage,
+            Optional<String> engine, OptionalDouble rateTolerancePpm, OptionalDouble flashBudgetBytes,
+            Optional<String> flashAttr, OptionalDouble ddsFrequencyHz, Optional<Long> ddsPhaseBits,
+            Map<String, Integer> lines) {
+    }
+
+    /**
+     * The [quantize] table.
+     *
+     * @param bits bit depth
+     * @param rateHz sample rate of every sound
+     * @param dither dither kind
+     * @param shaping none, first, second
+     * @param span full or nominal
+     * @param lines line of each key
+     */
+    public record Quantize(Optional<Long> bits, OptionalDouble rateHz, Optional<String> dither,
+            Optional<String> shaping, Optional<String> span, Map<String, Integer> lines) {
+    }
+
+    /**
+     * The [preview] table.
+     *
+     * @param filter none, rc, lp2
+     * @param cutoffHz filter cutoff
+     * @param q filter Q
+     * @param rateHz preview WAV rate
+     */
+    public record Preview(Optional<String> filter, OptionalDouble cutoffHz, OptionalDouble q,
+            OptionalDouble rateHz) {
+    }
+
+    /**
+     * One [[sound]] table.
+     *
+     * @param index 1-based position in the file
+     * @param line the line of the table's first key
+     * @param name the sound's name (C symbol part)
+     * @param source the source file, resolved against the project file's folder
+     * @param rateHz this sound's rate (only without a player)
+     * @param loop loop points
+     * @param channel channel choice
+     * @param gainDb fixed gain
+     * @param normalizeDbfs normalization target
+     * @param trimDbfs trim threshold
+     * @param fadeInSeconds fade-in
+     * @param fadeOutSeconds fade-out
+     * @param keepDc keep the mean
+     * @param resampler kaiser or tarsos
+     */
+    public record Sound(int index, int line, String name, Path source, OptionalDouble rateHz,
+            Optional<LoopSpan> loop, Optional<Long> channel, OptionalDouble gainDb, OptionalDouble normalizeDbfs,
+            OptionalDouble trimDbfs, OptionalDouble fadeInSeconds, OptionalDouble fadeOutSeconds,
+            Optional<Boolean> keepDc, Optional<String> resampler) {
+    }
+}

@@ -1,0 +1,280 @@
+package org.rungtone.project;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.OptionalInt;
+import java.util.function.UnaryOperator;
+import org.rungtone.analysis.ReconstructionFilter;
+import org.rungtone.firmware.CNames;
+import org.rungtone.firmware.DdsSpec;
+import org.rungtone.firmware.EmitResult;
+import org.rungtone.firmware.FirmwareEmitter;
+import org.rungtone.firmware.FirmwareRequest;
+import org.rungtone.firmware.FlashBudget;
+import org.rungtone.firmware.PinStrategy;
+import org.rungtone.firmware.PlaybackEngine;
+import org.rungtone.firmware.SampleStorage;
+import org.rungtone.firmware.TimerKind;
+import org.rungtone.internal.AtomicFiles;
+import org.rungtone.internal.InputError;
+import org.rungtone.internal.Units;
+import org.rungtone.ladder.LevelTable;
+import org.rungtone.quantize.Dither;
+import org.rungtone.quantize.ErrorFilter;
+import org.rungtone.report.BuildSummary;
+import org.rungtone.report.Json;
+import org.rungtone.report.ProjectReport;
+import org.tomlj.TomlTable;
+
+/**
+ * Builds every sound of a {@link Project} into one coherent set of outputs: one header exposing all sounds,
+ * shared player code and one pin map (or one sample array per sound without a player), each sound's preview
+ * and plots in a folder of its own, and one report covering all sounds and their total flash. Command-line
+ * overrides win over file values, which win over defaults; the report lists the effective settings and where
+ * each came from.
+ */
+public final class ProjectBuild {
+    private final String toolVersion;
+
+    /** A project build stamping {@code toolVersion} into its outputs. */
+    public ProjectBuild(String toolVersion) {
+        this.toolVersion = toolVersion;
+    }
+
+    /** Resolves the board's levels from the project's [ladder] table (or none) with command-line overrides. */
+    @FunctionalInterface
+    public interface BoardResolver {
+        /**
+         * The board's level table and its description, or empty for the ideal ladder.
+         *
+         * @param ladderTable the project's [ladder] table, or null
+         * @param file the project file
+         * @param bitsOrZero bits fixed by the command line or [quantize], 0 when open
+         */
+        Optional<LevelTable> resolve(TomlTable ladderTable, Path file, int bitsOrZero);
+    }
+
+    /**
+     * What the command line overrides. Empty values leave the file's settings alone.
+     *
+     * @param bits --bits
+     * @param rateHz --rate
+     * @param dither --dither
+     * @param shaping --shaping
+     * @param seed --seed
+     * @param outDir --out
+     * @param compensation --compensation
+     * @param board the board resolver (ladder options, unit profile)
+     * @param firmware applies the firmware options given on the command line to a request builder
+     * @param wantsPlayer the command line asked for a player
+     */
+    public record Overrides(OptionalInt bits, OptionalDouble rateHz, Optional<Dither> dither,
+            Optional<ErrorFilter> shaping, Optional<Long> seed, Optional<Path> outDir, Optional<Boolean> compensation,
+            BoardResolver board, UnaryOperator<FirmwareRequest.Builder> firmware, boolean wantsPlayer) {
+        /** No overrides, the project's ladder as written. */
+        public static Overrides none(BoardResolver board) {
+            return new Overrides(OptionalInt.empty(), OptionalDouble.empty(), Optional.empty(), Optional.empty(),
+                    Optional.empty(), Optional.empty(), Optional.empty(), board, b -> b, false);
+        }
+    }
+
+    /**
+     * The outcome.
+     *
+     * @param outDir the output folder
+     * @param sounds one summary per sound
+     * @param firmware the firmware report lines
+     * @param flashBytes total flash of all sounds (and tables)
+     * @param settings effective settings with their origin
+     * @param files every file written
+     * @param warnings project-level warnings
+     */
+    public record Result(Path outDir, List<BuildSummary> sounds, List<String> firmware, long flashBytes,
+            Map<String, String> settings, List<Path> files, List<String> warnings) {
+    }
+
+    /**
+     * Builds the project.
+     *
+     * @throws InputError naming the file, line and key, or the option, for anything the user can fix
+     */
+    public Result run(Project project, Overrides o) {
+        Map<String, String> settings = new LinkedHashMap<>();
+        Path outDir = o.outDir().or(project::outDir)
+                .orElse(project.file().toAbsolutePath().getParent().resolve("rungtone-out").resolve(project.name()));
+        settings.put("out", outDir + origin(o.outDir().isPresent(), project.outDir().isPresent()));
+        AtomicFiles.checkFolderUsable(outDir);
+        Project.Quantize q = project.quantize();
+        int fixedBits = o.bits().isPresent() ? o.bits().getAsInt() : q.bits().map(Long::intValue).orElse(0);
+        Optional<LevelTable> board = o.board().resolve(project.ladder().orElse(null), project.file(), fixedBits);
+        int bits = fixedBits != 0 ? fixedBits : board.map(LevelTable::bits).orElse(8);
+        settings.put("bits", bits + origin(o.bits().isPresent(), q.bits().isPresent()));
+        Dither dither = o.dither().orElse(q.dither().map(d -> Dither.valueOf(d.toUpperCase(Locale.ROOT)))
+                .orElse(Dither.TPDF));
+        settings.put("dither", dither.label() + origin(o.dither().isPresent(), q.dither().isPresent()));
+        ErrorFilter shaping = o.shaping().orElse(q.shaping().map(ProjectBuild::shaping).orElse(ErrorFilter.NONE));
+        settings.put("shaping", shaping.name() + origin(o.shaping().isPresent(), q.shaping().isPresent()));
+        long seed = o.seed().or(project::seed).orElse(1L);
+        settings.put("seed", seed + origin(o.seed().isPresent(), project.seed().isPresent()));
+        boolean compensate = o.compensation().or(project::compensation).orElse(true);
+        settings.put("levels", board.map(LevelTable::origin).orElse("ideal ladder"));
+        if (board.isPresent()) {
+            settings.put("compensation", (compensate ? "on" : "off")
+                    + origin(o.compensation().isPresent(), project.compensation().isPresent()));
+        }
+        OptionalDouble projectRate = o.rateHz().isPresent() ? o.rateHz() : q.rateHz();
+        Optional<FirmwareRequest> player = player(project, o, settings);
+        if (player.isPresent()) {
+            checkOneRate(project, o, projectRate);
+        }
+        Project.Preview pv = project.preview();
+        String prefix = CNames.symbol(project.name());
+
+        Build build = new Build(toolVersion);
+        List<Build.Rendered> rendered = new ArrayList<>();
+        for (Project.Sound s : project.sounds()) {
+            OptionalDouble rate = o.rateHz().isPresent() ? o.rateHz() : s.rateHz().isPresent() ? s.rateHz()
+                    : projectRate;
+            String symbol = prefix + "_" + CNames.symbol(s.name());
+            BuildPlan plan = new BuildPlan(s.source(), s.channel().map(Long::intValue).orElse(0), symbol,
+                    outDir.resolve(CNames.symbol(s.name())), bits, rate, dither, shaping, seed,
+                    !s.keepDc().orElse(false), s.trimDbfs(), s.gainDb(),
+                    s.gainDb().isPresent() ? OptionalDouble.empty() : OptionalDouble.of(s.normalizeDbfs().orElse(-1)),
+                    s.fadeInSeconds().orElse(0), s.fadeOutSeconds().orElse(0), s.resampler().orElse("kaiser"),
+                    5.0, project.target().flashAttr().orElse(""));
+            if (board.isPresent()) {
+                plan = plan.withBoard(board.get(), compensate);
+            }
+            double previewRate = pv.rateHz().orElse(44_100);
+            double r = rate.orElse(BuildPlan.DEFAULT_RATE_HZ);
+            double cutoff = pv.cutoffHz().orElse(0.4 * r);
+            ReconstructionFilter filter = switch (pv.filter().orElse("none")) {
+                case "rc" -> ReconstructionFilter.firstOrder(cutoff);
+                case "lp2" -> ReconstructionFilter.secondOrder(cutoff, pv.q().orElse(Math.sqrt(0.5)));
+                default -> ReconstructionFilter.none();
+            };
+            plan = plan.withPreview(filter, previewRate).withFirmware(Optional.empty(), s.loop(), 0);
+            rendered.add(build.render(plan));
+        }
+
+        List<Path> files = new ArrayList<>();
+        List<String> firmwareLines = new ArrayList<>();
+        List<String> warnings = new ArrayList<>();
+        long flash;
+        long budget = (long) project.target().flashBudgetBytes().orElse(0);
+        if (player.isPresent()) {
+            FirmwareRequest.Builder fb = player.get().toBuilder().name(prefix).toolVersion(toolVersion);
+            for (Map.Entry<String, String> e : settings.entrySet()) {
+                fb.setting(e.getKey() + ": " + e.getValue());
+            }
+            for (int i = 0; i < rendered.size(); i++) {
+                fb.sound(Build.clip(project.sounds().get(i).name(), rendered.get(i)));
+            }
+            EmitResult er = FirmwareEmitter.emit(fb.build(), outDir);
+            files.addAll(er.files());
+            firmwareLines.addAll(er.report());
+            warnings.addAll(er.warnings());
+            flash = er.flashBytes();
+        } else {
+            flash = 0;
+            for (Build.Rendered r : rendered) {
+                flash += Build.arrayBytes(r);
+            }
+            if (budget > 0) {
+                Build.Rendered first = rendered.get(0);
+                FlashBudget.check(flash, budget, FlashBudget.alternatives(flash * 8 / Math.max(8, bits <= 8 ? 8 : 16),
+                        first.rateHz(), bits, SampleStorage.UNPACKED, 0));
+            }
+            for (Build.Rendered r : rendered) {
+                files.addAll(build.emitArray(r.plan().symbol(), r, outDir));
+            }
+        }
+        List<BuildSummary> summaries = new ArrayList<>();
+        for (Build.Rendered r : rendered) {
+            List<Path> assets = Build.writeAssets(r, r.plan().outDir());
+            files.addAll(assets);
+            summaries.add(build.summary(r, List.of(), Build.arrayBytes(r), assets, r.warnings(), r.stageMillis()));
+        }
+        Path txt = outDir.resolve("report.txt");
+        Path json = outDir.resolve("report.json");
+        files.add(txt);
+        files.add(json);
+        Result result = new Result(outDir, summaries, firmwareLines, flash, settings, files, warnings);
+        ProjectReport.Input in = new ProjectReport.Input(toolVersion, project.file(), project.name(), settings,
+                summaries, firmwareLines, flash, budget, files, warnings);
+        AtomicFiles.writeString(txt, ProjectReport.text(in));
+        Json.write(json, ProjectReport.json(in));
+        return result;
+    }
+
+    private static String origin(boolean cli, boolean file) {
+        return cli ? "  (command line)" : file ? "  (project file)" : "  (default)";
+    }
+
+    private static ErrorFilter shaping(String s) {
+        return switch (s) {
+            case "first" -> ErrorFilter.FIRST_ORDER;
+            case "second" -> ErrorFilter.SECOND_ORDER;
+            default -> ErrorFilter.NONE;
+        };
+    }
+
+    private static void checkOneRate(Project p, Overrides o, OptionalDouble projectRate) {
+        if (o.rateHz().isPresent()) {
+            return;
+        }
+        Double first = null;
+        String firstName = null;
+        for (Project.Sound s : p.sounds()) {
+            double r = s.rateHz().isPresent() ? s.rateHz().getAsDouble()
+                    : projectRate.orElse(BuildPlan.DEFAULT_RATE_HZ);
+            if (first == null) {
+                first = r;
+                firstName = s.name();
+            } else if (r != first) {
+                throw new InputError(p.file() + ":" + s.line() + ": sound[" + s.index() + "].rate: "
+                        + Units.format(r, "Hz") + " conflicts with sound '" + firstName + "' at "
+                        + Units.format(first, "Hz") + "; one player has one sample rate: set [quantize] rate"
+                        + " and remove the per-sound rates, or build without [target]");
+            }
+        }
+    }
+
+    private static Optional<FirmwareRequest> player(Project p, Overrides o, Map<String, String> settings) {
+        Project.Target t = p.target();
+        boolean fileWants = t.family().isPresent() || t.pins().isPresent();
+        if (!fileWants && !o.wantsPlayer()) {
+            if (t.flashBudgetBytes().isPresent()) {
+                settings.put("flash budget", Units.format(t.flashBudgetBytes().getAsDouble(), "B"));
+            }
+            return Optional.empty();
+        }
+        FirmwareRequest.Builder b = FirmwareRequest.builder().family(t.family().orElse("generic"));
+        t.cpuClockHz().ifPresent(b::cpuClockHz);
+        t.timer().ifPresent(x -> b.timer(TimerKind.parse(x)));
+        t.rateTolerancePpm().ifPresent(b::rateTolerancePpm);
+        t.pins().ifPresent(b::pins);
+        t.portWidth().ifPresent(x -> b.portWidth(x.intValue()));
+        t.pinStrategy().ifPresent(x -> b.pinStrategy(PinStrategy.parse(x)));
+        t.storage().ifPresent(x -> b.storage(SampleStorage.parse(x)));
+        boolean anyLoop = p.sounds().stream().anyMatch(s -> s.loop().isPresent());
+        PlaybackEngine engine = t.engine().map(PlaybackEngine::parse)
+                .orElse(anyLoop ? PlaybackEngine.LOOP : PlaybackEngine.CLIP);
+        b.engine(engine);
+        if (engine == PlaybackEngine.DDS) {
+            b.dds(new DdsSpec(t.ddsPhaseBits().map(Long::intValue).orElse(DdsSpec.DEFAULT_PHASE_BITS),
+                    t.ddsFrequencyHz().orElse(1000)));
+        }
+        t.flashBudgetBytes().ifPresent(x -> b.flashBudgetBytes((long) x));
+        FirmwareRequest r = o.firmware().apply(b).build();
+        settings.put("target", r.family() + (r.pins().map(x -> ", pins " + x).orElse("")));
+        settings.put("engine", r.engine().name().toLowerCase(Locale.ROOT));
+        return Optional.of(r);
+    }
+}

@@ -1,0 +1,187 @@
+package org.rungtone.project;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+import org.rungtone.firmware.CNames;
+import org.rungtone.internal.InputError;
+import org.tomlj.Toml;
+import org.tomlj.TomlParseError;
+import org.tomlj.TomlParseResult;
+
+/**
+ * Reads a project file (TOML): {@code [project]}, {@code [target]}, {@code [ladder]}, {@code [quantize]},
+ * {@code [preview]} and one or more {@code [[sound]]} tables. Unknown keys, wrong types and conflicting
+ * settings are errors naming the file, the line and the key. Paths are relative to the file's folder.
+ */
+public final class ProjectFile {
+    private ProjectFile() {
+    }
+
+    /**
+     * Reads and checks a project file.
+     *
+     * @throws InputError naming file, line and key for every problem
+     */
+    public static Project load(Path file) {
+        String text;
+        try {
+            text = Files.readString(file);
+        } catch (NoSuchFileException e) {
+            throw InputError.inFile(file, "no such file", e);
+        } catch (IOException e) {
+            throw InputError.inFile(file, "cannot be read (" + e.getMessage() + ")", e);
+        }
+        return parse(text, file);
+    }
+
+    /**
+     * Parses project-file text that came from {@code file}.
+     *
+     * @throws InputError naming file, line and key for every problem
+     */
+    public static Project parse(String text, Path file) {
+        TomlParseResult toml = Toml.parse(text);
+        if (!toml.errors().isEmpty()) {
+            TomlParseError e = toml.errors().get(0);
+            throw new InputError(file + ":" + e.position().line() + ":" + e.position().column()
+                    + ": not valid TOML: " + e.getMessage().replaceAll(" \\(line \\d+, column \\d+\\)$", ""));
+        }
+        Path base = file.toAbsolutePath().getParent();
+        TomlFields root = new TomlFields(toml, file, "");
+        TomlFields project = root.table("project").orElseThrow(() -> new InputError(file
+                + ": a project file needs a [project] table with at least name = \"...\""));
+        String name = project.string("name").orElseThrow(() -> project.error("name", "is required, e.g."
+                + " name = \"greenhouse\""));
+        try {
+            CNames.symbol(name);
+        } catch (InputError e) {
+            throw project.error("name", e.getMessage().replace("--name", "the name"));
+        }
+        Optional<Path> out = project.string("out").map(base::resolve);
+        Optional<Long> seed = project.integer("seed", Long.MIN_VALUE, Long.MAX_VALUE);
+        Optional<Path> unit = project.string("unit").map(base::resolve);
+        Optional<Boolean> compensation = project.bool("compensation");
+        project.rejectUnknown();
+
+        Project.Target target = target(root.table("target"));
+        root.declare("ladder");
+        Optional<org.tomlj.TomlTable> ladder = root.table("ladder").map(TomlFields::table);
+        Project.Quantize quantize = quantize(root.table("quantize"));
+        Project.Preview preview = preview(root.table("preview"));
+        List<TomlFields> soundTables = root.tables("sound");
+        if (soundTables.isEmpty()) {
+            throw new InputError(file + ": the project has no sounds; add one or more [[sound]] tables with"
+                    + " name and source");
+        }
+        List<Project.Sound> sounds = new ArrayList<>();
+        Set<String> symbols = new HashSet<>();
+        for (int i = 0; i < soundTables.size(); i++) {
+            Project.Sound s = sound(soundTables.get(i), i + 1, base);
+            String symbol = CNames.symbol(s.name());
+            if (!symbols.add(symbol)) {
+                throw soundTables.get(i).error("name", "'" + s.name() + "' gives the C name '" + symbol
+                        + "', which another sound already has");
+            }
+            sounds.add(s);
+        }
+        root.rejectUnknown();
+        return new Project(file, name, out, seed, unit, compensation, target, ladder, quantize, preview, sounds);
+    }
+
+    private static Map<String, Integer> lines(TomlFields f) {
+        Map<String, Integer> m = new LinkedHashMap<>();
+        for (String k : f.table().keySet()) {
+            m.put(k, f.line(k));
+        }
+        return m;
+    }
+
+    private static Project.Target target(Optional<TomlFields> t) {
+        if (t.isEmpty()) {
+            return new Project.Target(Optional.empty(), java.util.OptionalDouble.empty(), Optional.empty(),
+                    Optional.empty(), Optional.empty(), Optional.empty(), Optional.empty(), Optional.empty(),
+                    java.util.OptionalDouble.empty(), java.util.OptionalDouble.empty(), Optional.empty(),
+                    java.util.OptionalDouble.empty(), Optional.empty(), Map.of());
+        }
+        TomlFields f = t.get();
+        Project.Target r = new Project.Target(f.choice("family", "generic", "avr", "cortexm"),
+                f.quantity("cpu_clock", "Hz"), f.string("timer"), f.string("pins"), f.integer("port_width", 8, 32),
+                f.choice("pin_strategy", "auto", "shift", "table", "scatter"),
+                f.choice("storage", "unpacked", "packed"), f.choice("engine", "clip", "loop", "dds"),
+                f.quantity("rate_tolerance", ""), bytes(f, "flash_budget"), f.string("flash_attr"),
+                f.quantity("dds_frequency", "Hz"), f.integer("dds_phase_bits", 8, 32), lines(f));
+        f.rejectUnknown();
+        if (r.flashAttr().isPresent() && (r.family().isPresent() || r.pins().isPresent())) {
+            throw f.error("flash_attr", "applies only to bare sample arrays; a player's family places its"
+                    + " tables in flash itself (remove flash_attr or family/pins)");
+        }
+        return r;
+    }
+
+    private static java.util.OptionalDouble bytes(TomlFields f, String key) {
+        java.util.OptionalDouble v = f.quantity(key, "");
+        if (v.isPresent() && !(v.getAsDouble() > 0)) {
+            throw f.error(key, "must be a positive number of bytes, e.g. \"28k\"");
+        }
+        return v;
+    }
+
+    private static Project.Quantize quantize(Optional<TomlFields> t) {
+        if (t.isEmpty()) {
+            return new Project.Quantize(Optional.empty(), java.util.OptionalDouble.empty(), Optional.empty(),
+                    Optional.empty(), Optional.empty(), Map.of());
+        }
+        TomlFields f = t.get();
+        Project.Quantize q = new Project.Quantize(f.integer("bits", 1, 16), f.quantity("rate", "Hz"),
+                f.choice("dither", "none", "rpdf", "tpdf"), f.choice("shaping", "none", "first", "second"),
+                f.choice("span", "full", "nominal"), lines(f));
+        f.rejectUnknown();
+        return q;
+    }
+
+    private static Project.Preview preview(Optional<TomlFields> t) {
+        if (t.isEmpty()) {
+            return new Project.Preview(Optional.empty(), java.util.OptionalDouble.empty(),
+                    java.util.OptionalDouble.empty(), java.util.OptionalDouble.empty());
+        }
+        TomlFields f = t.get();
+        Project.Preview p = new Project.Preview(f.choice("filter", "none", "rc", "lp2"), f.quantity("cutoff", "Hz"),
+                f.quantity("q", ""), f.quantity("rate", "Hz"));
+        f.rejectUnknown();
+        if (p.cutoffHz().isPresent() && p.filter().orElse("none").equals("none")) {
+            throw f.error("cutoff", "needs filter = \"rc\" or \"lp2\"");
+        }
+        return p;
+    }
+
+    private static Project.Sound sound(TomlFields f, int index, Path base) {
+        String name = f.string("name").orElseThrow(() -> f.error("name", "is required, e.g. name = \"door_chime\""));
+        String source = f.string("source").orElseThrow(() -> f.error("source", "is required: a .wav file or"
+                + " .rung script, relative to the project file"));
+        Optional<LoopSpan> loop = f.string("loop").map(text -> {
+            try {
+                return LoopSpan.parse(text);
+            } catch (InputError e) {
+                throw f.error("loop", e.getMessage().replace("--loop ", ""));
+            }
+        });
+        Project.Sound s = new Project.Sound(index, f.line("name"), name, base.resolve(source),
+                f.quantity("rate", "Hz"), loop, f.integer("channel", 0, 8), f.decibels("gain"),
+                f.decibels("normalize"), f.decibels("trim"), f.quantity("fade_in", "s"), f.quantity("fade_out", "s"),
+                f.bool("keep_dc"), f.choice("resampler", "kaiser", "tarsos"));
+        f.rejectUnknown();
+        if (s.gainDb().isPresent() && s.normalizeDbfs().isPresent()) {
+            throw f.error("gain", "conflicts with normalize (line " + f.line("normalize") + "); keep one");
+        }
+        return s;
+    }
+}

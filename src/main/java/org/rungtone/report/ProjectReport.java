@@ -1,0 +1,120 @@
+package org.rungtone.report;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.rungtone.analysis.QualityReport;
+
+/** The report of a whole project: effective settings, every sound's figures, firmware and total flash. */
+public final class ProjectReport {
+    private ProjectReport() {
+    }
+
+    /**
+     * What the report shows.
+     *
+     * @param toolVersion Rungtone version
+     * @param file the project file
+     * @param name the project name
+     * @param settings effective settings with where each came from
+     * @param sounds one summary per sound
+     * @param firmware firmware report lines
+     * @param flashBytes total flash
+     * @param flashBudgetBytes budget, 0 for none
+     * @param files every file written
+     * @param warnings project-level warnings
+     */
+    public record Input(String toolVersion, Path file, String name, Map<String, String> settings,
+            List<BuildSummary> sounds, List<String> firmware, long flashBytes, long flashBudgetBytes,
+            List<Path> files, List<String> warnings) {
+    }
+
+    private static String f1(double v) {
+        return Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf") : String.format(Locale.ROOT, "%.1f", v);
+    }
+
+    /** The text report. */
+    public static String text(Input in) {
+        StringBuilder b = new StringBuilder();
+        b.append("Rungtone ").append(in.toolVersion()).append(" project report: ").append(in.name())
+                .append("  (").append(in.file().getFileName()).append(")\n\nEffective settings:\n");
+        TextTable s = new TextTable("setting", "value");
+        in.settings().forEach(s::row);
+        b.append(s.render("  "));
+        b.append("\nSounds:\n");
+        TextTable t = new TextTable("sound", "source", "rate", "samples", "seconds", "case", "SINAD dB",
+                "A-wtd SNR dB", "ENOB");
+        for (BuildSummary x : in.sounds()) {
+            QualityReport q = x.emitted();
+            t.row(x.symbol(), x.source().getFileName(), String.format(Locale.ROOT, "%.0f", x.rateHz()),
+                    x.samples(), String.format(Locale.ROOT, "%.3f", x.durationSeconds()), q.label(),
+                    f1(q.sinadDb()), f1(q.aWeightedSnrDb()), String.format(Locale.ROOT, "%.2f", q.enobBits()));
+        }
+        b.append(t.render("  "));
+        for (BuildSummary x : in.sounds()) {
+            if (x.quality().size() > 1) {
+                b.append("\n").append(x.symbol()).append(" on the board:\n");
+                TextTable q = new TextTable("case", "SINAD dB", "in-band SNR dB", "A-wtd SNR dB", "ENOB bits");
+                for (QualityReport r : x.quality()) {
+                    q.row(r.label(), f1(r.sinadDb()), f1(r.inBandSnrDb()), f1(r.aWeightedSnrDb()),
+                            String.format(Locale.ROOT, "%.2f", r.enobBits()));
+                }
+                b.append(q.render("  "));
+            }
+        }
+        b.append(String.format(Locale.ROOT, "%nFlash: %,d bytes for all sounds%s%n", in.flashBytes(),
+                in.flashBudgetBytes() > 0 ? String.format(Locale.ROOT, " of a %,d-byte budget (%.0f %%)",
+                        in.flashBudgetBytes(), 100.0 * in.flashBytes() / in.flashBudgetBytes()) : ""));
+        if (!in.firmware().isEmpty()) {
+            b.append("\nFirmware:\n");
+            for (String line : in.firmware()) {
+                b.append("  ").append(line).append('\n');
+            }
+        }
+        b.append("\nFiles:\n");
+        for (Path f : in.files()) {
+            b.append("  ").append(f).append('\n');
+        }
+        List<String> warnings = warnings(in);
+        if (!warnings.isEmpty()) {
+            b.append("\nWarnings:\n");
+            for (String w : warnings) {
+                b.append("  - ").append(w).append('\n');
+            }
+        }
+        return b.toString();
+    }
+
+    /** Project warnings and each sound's warnings, prefixed with the sound. */
+    static List<String> warnings(Input in) {
+        List<String> w = new ArrayList<>(in.warnings());
+        for (BuildSummary x : in.sounds()) {
+            for (String s : x.warnings()) {
+                w.add(x.symbol() + ": " + s);
+            }
+        }
+        return w;
+    }
+
+    /** The JSON report: the project fields plus each sound's build JSON under "sounds". */
+    public static Map<String, Object> json(Input in) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("tool", "rungtone");
+        m.put("version", in.toolVersion());
+        m.put("project", in.name());
+        m.put("file", in.file().toString());
+        m.put("settings", in.settings());
+        m.put("sounds", in.sounds().stream().map(BuildReport::json).toList());
+        m.put("firmware", in.firmware());
+        m.put("flash_bytes", in.flashBytes());
+        if (in.flashBudgetBytes() > 0) {
+            m.put("flash_budget_bytes", in.flashBudgetBytes());
+        }
+        m.put("files", in.files().stream().map(Path::toString).toList());
+        m.put("warnings", warnings(in));
+        return m;
+    }
+}
