@@ -16,6 +16,7 @@ import picocli.CommandLine.ParseResult;
         subcommands = {
             BuildCommand.class,
             DemoCommand.class,
+            SurveyCommand.class,
             CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {
