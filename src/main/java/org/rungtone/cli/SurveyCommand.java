@@ -178,11 +178,7 @@ public final class SurveyCommand implements Callable<Integer> {
 
         List<Path> files = new ArrayList<>();
         Set<String> warnings = new LinkedHashSet<>(loaded.warnings());
-        for (double rate : rates) {
-            for (String w : references.get(rate).warnings()) {
-                warnings.add("at " + Units.format(rate, "Hz") + ": " + w);
-            }
-        }
+        warnings.addAll(conditioningWarnings(rates, references));
         if (previews) {
             Path folder = outDir.resolve("previews");
             double peak = writePreviews(result, surveySpec, references, tables, model, folder, progress);
@@ -198,17 +194,17 @@ public final class SurveyCommand implements Callable<Integer> {
         Path png = outDir.resolve("survey-sinad.png");
         files.addAll(0, List.of(txt, jsonFile, png));
         SurveyReport.Context context = new SurveyReport.Context(Version.get(), source, loaded.layout(),
-                conditioning.describe(), resampler.name(),
-                describeLevels(tables), dither.label(), surveySpec.shaping().name(), seed, filter.describe(),
-                previews, files, new ArrayList<>(warnings));
-        AnalysisPlots.writeSurvey(png, result);
-        Json.write(jsonFile, SurveyReport.json(result, context));
+                conditioning.describe(), resampler.name(), describeLevels(tables), dither.label(),
+                surveySpec.shaping().name(), seed, filter.describe(), previews, files, new ArrayList<>(warnings));
+        String jsonText = Json.toJson(SurveyReport.json(result, context));
         String text = SurveyReport.text(result, context);
+        AnalysisPlots.writeSurvey(png, result);
+        AtomicFiles.writeString(jsonFile, jsonText);
         AtomicFiles.writeString(txt, text);
 
         PrintWriter stdout = spec.commandLine().getOut();
         if (json) {
-            stdout.print(Json.toJson(SurveyReport.json(result, context)));
+            stdout.print(jsonText);
         } else if (!common.quiet) {
             stdout.print(text);
         }
@@ -269,6 +265,20 @@ public final class SurveyCommand implements Callable<Integer> {
         return peak;
     }
 
+    /** Conditioning warnings; one that several rates share is listed once, naming them all. */
+    private static List<String> conditioningWarnings(List<Double> rates,
+            Map<Double, Conditioner.Conditioned> references) {
+        Map<String, List<String>> ratesByWarning = new LinkedHashMap<>();
+        for (double rate : rates) {
+            for (String w : references.get(rate).warnings()) {
+                ratesByWarning.computeIfAbsent(w, k -> new ArrayList<>()).add(Units.format(rate, "Hz"));
+            }
+        }
+        List<String> out = new ArrayList<>();
+        ratesByWarning.forEach((w, at) -> out.add("at " + String.join(", ", at) + ": " + w));
+        return out;
+    }
+
     /** "ideal, 0V .. 4.999V at 12 bits": the origins of the tables and the span of the deepest one. */
     private static String describeLevels(TreeMap<Integer, LevelTable> tables) {
         Set<String> origins = new LinkedHashSet<>();
@@ -277,6 +287,7 @@ public final class SurveyCommand implements Callable<Integer> {
         return String.join(", ", origins) + ", " + Units.format(deepest.minVolts(), "V") + " .. "
                 + Units.format(deepest.maxVolts(), "V") + " at " + deepest.bits() + " bits";
     }
+
     /** A --bits-list value: ranges {@code a..b} and single depths, as written. */
     record BitList(String text, List<int[]> ranges) {
         /**

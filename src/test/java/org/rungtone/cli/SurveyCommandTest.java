@@ -118,6 +118,21 @@ class SurveyCommandTest {
     }
 
     @Test
+    void conditioningOptionsReachTheSurvey() throws IOException {
+        Path out = dir.resolve("out");
+        Cli.Run r = survey(out, "--bits-list", "8", "--rates", "8k", "--gain", "-6", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        JsonObject o = JsonParser.parseString(r.out()).getAsJsonObject();
+        assertEquals("DC removed, gain -6.0 dB", o.get("conditioning").getAsString());
+        // The fixture's 0.5 sine at -6 dB: amplitude 0.5·10^(-6/20); TPDF error power LSB²/4 as above.
+        double amplitude = 0.5 * Math.pow(10, -6 / 20.0);
+        double lsb = 2 / 255.0;
+        double expected = 10 * Math.log10(amplitude * amplitude / 2 / (lsb * lsb / 4));
+        assertEquals(expected, o.getAsJsonArray("rows").get(0).getAsJsonObject().get("sinad_db").getAsDouble(),
+                0.5);
+    }
+
+    @Test
     void jsonHasTheDocumentedStableFields() throws IOException {
         Path out = dir.resolve("out");
         Cli.Run r = survey(out, "--bits-list", "6", "--rates", "8k", "--target-enob", "5", "--flash-budget", "32k",
