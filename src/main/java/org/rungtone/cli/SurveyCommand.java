@@ -12,12 +12,12 @@ import java.util.Set;
 import java.util.TreeMap;
 import java.util.concurrent.Callable;
 import java.util.concurrent.ConcurrentHashMap;
+import java.util.concurrent.atomic.AtomicInteger;
 import java.util.function.IntFunction;
 import org.rungtone.analysis.AnalogModel;
 import org.rungtone.analysis.ReconstructionFilter;
 import org.rungtone.analysis.Survey;
 import org.rungtone.analysis.SurveyResult;
-import org.rungtone.analysis.SurveyRow;
 import org.rungtone.analysis.SurveySpec;
 import org.rungtone.analysis.SurveyTarget;
 import org.rungtone.condition.Conditioner;
@@ -165,6 +165,7 @@ public final class SurveyCommand implements Callable<Integer> {
         Map<Double, Conditioner.Conditioned> references = new ConcurrentHashMap<>();
         ProgressLine progress = new ProgressLine(spec.commandLine().getErr(),
                 System.console() != null && !common.quiet);
+        progress.show("survey", 0, bits.size() * rates.size());
         SurveyResult result = Survey.run(surveySpec, rate -> {
             Conditioner.Conditioned c = conditioner.apply(loaded.signal(), conditionings.get(rate));
             Checks.checkInput(c.signal().length() >= MIN_SAMPLES, "%s: only %d samples are left at %s after"
@@ -245,22 +246,26 @@ public final class SurveyCommand implements Callable<Integer> {
         return b.build();
     }
 
-    /** Renders and writes one preview per cell; returns the largest preview peak. */
+    /**
+     * Renders and writes one preview per cell, cells in parallel (each file is independent and written
+     * atomically); returns the largest preview peak.
+     */
     private static double writePreviews(SurveyResult result, SurveySpec surveySpec,
             Map<Double, Conditioner.Conditioned> references, Map<Integer, LevelTable> tables, AnalogModel model,
             Path folder, ProgressLine progress) {
-        double peak = 0;
-        int done = 0;
-        for (SurveyRow row : result.rows()) {
+        AtomicFiles.prepareFolder(folder);
+        AtomicInteger done = new AtomicInteger();
+        int total = result.rows().size();
+        double peak = result.rows().parallelStream().mapToDouble(row -> {
             LevelTable table = tables.get(row.bits());
             Signal reference = references.get(row.rateHz()).signal();
             Codes codes = Survey.quantize(surveySpec, reference, table).codes();
             AnalogModel.Preview p = model.render(codes, table);
             WavWriter.write(folder.resolve(SurveyReport.previewFileName(row)), p.signal(),
                     WavWriter.Format.PCM16);
-            peak = Math.max(peak, p.peak());
-            progress.show("previews", ++done, result.rows().size());
-        }
+            progress.show("previews", done.incrementAndGet(), total);
+            return p.peak();
+        }).max().orElse(0);
         progress.clear();
         return peak;
     }
@@ -416,7 +421,7 @@ public final class SurveyCommand implements Callable<Integer> {
             this.on = on;
         }
 
-        void show(String what, int done, int total) {
+        synchronized void show(String what, int done, int total) {
             if (on) {
                 String line = String.format(Locale.ROOT, "%s: %d/%d (%d%%)", what, done, total,
                         total == 0 ? 100 : 100 * done / total);
@@ -426,7 +431,7 @@ public final class SurveyCommand implements Callable<Integer> {
             }
         }
 
-        void clear() {
+        synchronized void clear() {
             if (on && width > 0) {
                 err.print("\r" + " ".repeat(width) + "\r");
                 err.flush();
