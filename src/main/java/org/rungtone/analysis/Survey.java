@@ -119,11 +119,18 @@ public final class Survey {
         }
     }
 
+    /**
+     * Quantizes one cell exactly as the survey measures it: {@code reference} onto the table's full span
+     * with the spec's dither, shaping and seed. For previews of a cell.
+     */
+    public static Quantizer.Quantized quantize(SurveySpec spec, Signal reference, LevelTable table) {
+        return new Quantizer(table, table.minVolts(), table.maxVolts(), spec.dither(), spec.shaping(),
+                spec.seed()).apply(reference);
+    }
+
     private static SurveyRow cell(SurveySpec spec, AudioMetrics metrics, LevelTable table) {
         Signal ref = metrics.reference();
-        Quantizer q = new Quantizer(table, table.minVolts(), table.maxVolts(), spec.dither(), spec.shaping(),
-                spec.seed());
-        Quantizer.Quantized quantized = q.apply(ref);
+        Quantizer.Quantized quantized = quantize(spec, ref, table);
         QualityReport r = metrics.measure("survey", quantized.codes(), table);
         int n = ref.length();
         int bits = table.bits();

@@ -15,7 +15,6 @@ import org.rungtone.quantize.ErrorFilter;
 import org.rungtone.report.BuildReport;
 import org.rungtone.report.BuildSummary;
 import org.rungtone.report.Json;
-import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -73,39 +72,8 @@ public final class BuildCommand implements Callable<Integer> {
             description = "0 mixes all channels down (default); 1..8 picks one.")
     int channel;
 
-    @ArgGroup(exclusive = true)
-    Level level;
-
-    /** Either a fixed gain or a normalization target. */
-    static final class Level {
-        @Option(names = "--gain", paramLabel = "<dB>", converter = Converters.Decibels.class,
-                description = "Fixed gain in dB instead of normalizing.")
-        Double gainDb;
-
-        @Option(names = "--normalize", paramLabel = "<dBFS>", converter = Converters.Decibels.class,
-                description = "Scale so the peak reaches this level (default -1 dBFS).")
-        Double normalizeDbfs;
-    }
-
-    @Option(names = "--keep-dc", description = "Do not subtract the source's mean.")
-    boolean keepDc;
-
-    @Option(names = "--trim", paramLabel = "<dBFS>", converter = Converters.Decibels.class,
-            description = "Trim leading and trailing audio quieter than this, e.g. -50.")
-    Double trimDbfs;
-
-    @Option(names = "--fade-in", paramLabel = "<time>", converter = Converters.Seconds.class, defaultValue = "0",
-            description = "Linear fade-in, e.g. 20ms.")
-    double fadeIn;
-
-    @Option(names = "--fade-out", paramLabel = "<time>", converter = Converters.Seconds.class, defaultValue = "0",
-            description = "Linear fade-out, e.g. 50ms.")
-    double fadeOut;
-
-    @Option(names = "--resampler", paramLabel = "kaiser|tarsos", defaultValue = "kaiser",
-            description = "kaiser: polyphase filter with its stopband below the target's quantization noise"
-                    + " (default); tarsos: TarsosDSP's resampler, about 70 dB stopband.")
-    String resampler;
+    @Mixin
+    ConditioningOptions conditioning;
 
     @Option(names = "--full-scale", paramLabel = "<volts>", converter = Converters.Volts.class,
             defaultValue = "5V", description = "Reference voltage of the ideal ladder (default ${DEFAULT-VALUE}).")
@@ -153,24 +121,19 @@ public final class BuildCommand implements Callable<Integer> {
         String base = name != null ? name : stem(source);
         String symbol = CNames.symbol(base);
         Path outDir = out != null ? out : Path.of("rungtone-out", symbol);
-        OptionalDouble gain = level != null && level.gainDb != null ? OptionalDouble.of(level.gainDb)
-                : OptionalDouble.empty();
-        OptionalDouble norm = gain.isPresent() ? OptionalDouble.empty()
-                : OptionalDouble.of(level != null && level.normalizeDbfs != null ? level.normalizeDbfs : -1.0);
         Optional<LadderSpec> spec = ladder.specIfGiven(bits == null ? 0 : bits);
         int effectiveBits = bits != null ? bits : spec.map(LadderSpec::bits).orElse(8);
         BuildPlan plan = new BuildPlan(source, channel, symbol, outDir, effectiveBits,
                 rateHz == null ? OptionalDouble.empty() : OptionalDouble.of(rateHz), dither,
-                errorFilter(shaping), seed, !keepDc,
-                trimDbfs == null ? OptionalDouble.empty() : OptionalDouble.of(trimDbfs), gain, norm, fadeIn,
-                fadeOut, resampler.toLowerCase(Locale.ROOT), fullScale, flashAttr);
+                errorFilter(shaping), seed, conditioning.removeDc(), conditioning.trimDbfs(), conditioning.gainDb(),
+                conditioning.normalizeDbfs(), conditioning.fadeIn, conditioning.fadeOut,
+                conditioning.resamplerName(), fullScale, flashAttr);
         if (spec.isPresent()) {
             plan = plan.withBoard(spec.get().levels().withOrigin("modelled " + spec.get().describe()),
                     onOff(compensation, "--compensation"));
         }
         return plan.withFirmware(firmware.request(), firmware.loopSpan(), firmware.flashBudgetBytes())
-                .withPreview(preview.filter(plan.rateHz().orElse(BuildPlan.DEFAULT_RATE_HZ)),
-                        preview.previewRateHz);
+                .withPreview(preview.filter(), preview.previewRateHz);
     }
 
     static boolean onOff(String text, String option) {

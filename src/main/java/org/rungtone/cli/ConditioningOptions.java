@@ -1,0 +1,120 @@
+package org.rungtone.cli;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.OptionalDouble;
+import org.rungtone.condition.Conditioning;
+import org.rungtone.condition.KaiserResampler;
+import org.rungtone.condition.Resampler;
+import org.rungtone.condition.TarsosResampler;
+import org.rungtone.internal.Checks;
+import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.Option;
+
+/**
+ * The conditioning options that {@code build} and {@code survey} share: level (--gain or --normalize),
+ * --keep-dc, --trim, --fade-in, --fade-out and --resampler.
+ */
+public final class ConditioningOptions {
+    /** Peak level when neither --gain nor --normalize is given, in dBFS. */
+    static final double DEFAULT_NORMALIZE_DBFS = -1.0;
+
+    @ArgGroup(exclusive = true)
+    Level level;
+
+    /** Either a fixed gain or a normalization target. */
+    static final class Level {
+        @Option(names = "--gain", paramLabel = "<dB>", converter = Converters.Decibels.class,
+                description = "Fixed gain in dB instead of normalizing.")
+        Double gainDb;
+
+        @Option(names = "--normalize", paramLabel = "<dBFS>", converter = Converters.Decibels.class,
+                description = "Scale so the peak reaches this level (default -1 dBFS).")
+        Double normalizeDbfs;
+    }
+
+    @Option(names = "--keep-dc", description = "Do not subtract the source's mean.")
+    boolean keepDc;
+
+    @Option(names = "--trim", paramLabel = "<dBFS>", converter = Converters.Decibels.class,
+            description = "Trim leading and trailing audio quieter than this, e.g. -50.")
+    Double trimDbfs;
+
+    @Option(names = "--fade-in", paramLabel = "<time>", converter = Converters.Seconds.class, defaultValue = "0",
+            description = "Linear fade-in, e.g. 20ms.")
+    double fadeIn;
+
+    @Option(names = "--fade-out", paramLabel = "<time>", converter = Converters.Seconds.class, defaultValue = "0",
+            description = "Linear fade-out, e.g. 50ms.")
+    double fadeOut;
+
+    @Option(names = "--resampler", paramLabel = "kaiser|tarsos", defaultValue = "kaiser",
+            description = "kaiser: polyphase filter with its stopband below the target's quantization noise"
+                    + " (default); tarsos: TarsosDSP's resampler, about 70 dB stopband.")
+    String resampler;
+
+    /** True unless --keep-dc. */
+    boolean removeDc() {
+        return !keepDc;
+    }
+
+    /** The --gain value, if given. */
+    OptionalDouble gainDb() {
+        return level != null && level.gainDb != null ? OptionalDouble.of(level.gainDb) : OptionalDouble.empty();
+    }
+
+    /** The --normalize value, its default when no --gain is given, or empty with --gain. */
+    OptionalDouble normalizeDbfs() {
+        if (gainDb().isPresent()) {
+            return OptionalDouble.empty();
+        }
+        return OptionalDouble.of(level != null && level.normalizeDbfs != null ? level.normalizeDbfs
+                : DEFAULT_NORMALIZE_DBFS);
+    }
+
+    /** The --trim threshold, if given. */
+    OptionalDouble trimDbfs() {
+        return trimDbfs == null ? OptionalDouble.empty() : OptionalDouble.of(trimDbfs);
+    }
+
+    /** The --resampler name in lower case, as written (checked where it is used). */
+    String resamplerName() {
+        return resampler.toLowerCase(Locale.ROOT);
+    }
+
+    /**
+     * The conditioning to one target rate.
+     *
+     * @throws org.rungtone.internal.InputError when a value is out of range
+     */
+    Conditioning toRate(double targetRateHz) {
+        return new Conditioning(removeDc(), trimDbfs(), targetRateHz, gainDb(), normalizeDbfs(), fadeIn, fadeOut);
+    }
+
+    /**
+     * The resampler for targets of up to {@code maxBits} bits: the Kaiser filter's stopband sits below
+     * their quantization noise.
+     *
+     * @throws org.rungtone.internal.InputError when --resampler names neither kaiser nor tarsos
+     */
+    Resampler resamplerFor(int maxBits) {
+        String name = resamplerName();
+        Checks.checkInput(name.equals("kaiser") || name.equals("tarsos"),
+                "--resampler must be kaiser or tarsos: %s", resampler);
+        return name.equals("tarsos") ? new TarsosResampler() : KaiserResampler.forBits(maxBits);
+    }
+
+    /** The settings in words, for reports: "DC removed, normalized to -1.0 dBFS, trim below -50.0 dBFS". */
+    String describe() {
+        List<String> parts = new ArrayList<>();
+        parts.add(removeDc() ? "DC removed" : "DC kept");
+        trimDbfs().ifPresent(t -> parts.add(String.format(Locale.ROOT, "trim below %.1f dBFS", t)));
+        gainDb().ifPresent(g -> parts.add(String.format(Locale.ROOT, "gain %+.1f dB", g)));
+        normalizeDbfs().ifPresent(n -> parts.add(String.format(Locale.ROOT, "normalized to %.1f dBFS", n)));
+        if (fadeIn > 0 || fadeOut > 0) {
+            parts.add(String.format(Locale.ROOT, "fades %.0f/%.0f ms", 1000 * fadeIn, 1000 * fadeOut));
+        }
+        return String.join(", ", parts);
+    }
+}
