@@ -39,6 +39,38 @@ public record ReconstructionFilter(Kind kind, double cutoffHz, double q) {
         }
     }
 
+    /** Q of the second-order filter when none is given: 1/sqrt(2), the maximally flat (Butterworth) Q. */
+    public static final double DEFAULT_Q = Math.sqrt(0.5);
+
+    /**
+     * Parses the filter notation shared by the command line and project files: {@code none}, {@code rc:HZ}
+     * or {@code lp2:HZ[:Q]}, e.g. {@code lp2:6k}.
+     *
+     * @throws org.rungtone.internal.InputError with an example when the text is not a filter
+     */
+    public static ReconstructionFilter parse(String text) {
+        String[] parts = text.trim().toLowerCase(java.util.Locale.ROOT).split(":", -1);
+        try {
+            if (parts.length == 1 && parts[0].equals("none")) {
+                return none();
+            }
+            if (parts.length == 2 && parts[0].equals("rc")) {
+                return firstOrder(org.rungtone.internal.Checks.checkPositive(
+                        org.rungtone.internal.Units.parse(parts[1], "Hz"), "filter cutoff"));
+            }
+            if ((parts.length == 2 || parts.length == 3) && parts[0].equals("lp2")) {
+                double q = parts.length == 3 ? org.rungtone.internal.Checks.checkPositive(
+                        org.rungtone.internal.Units.parse(parts[2], ""), "filter Q") : DEFAULT_Q;
+                return secondOrder(org.rungtone.internal.Checks.checkPositive(
+                        org.rungtone.internal.Units.parse(parts[1], "Hz"), "filter cutoff"), q);
+            }
+        } catch (org.rungtone.internal.InputError e) {
+            throw new org.rungtone.internal.InputError("'" + text + "': " + e.getMessage(), e);
+        }
+        throw new org.rungtone.internal.InputError("'" + text + "' is not a filter; write none, rc:3.4k or"
+                + " lp2:3.4k[:0.707]");
+    }
+
     /** No reconstruction filter. */
     public static ReconstructionFilter none() {
         return new ReconstructionFilter(Kind.NONE, 0, 0);

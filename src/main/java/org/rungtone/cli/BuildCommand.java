@@ -5,6 +5,13 @@ import java.nio.file.Path;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import java.util.OptionalInt;
+import org.rungtone.internal.InputError;
+import org.rungtone.project.Project;
+import org.rungtone.project.ProjectBuild;
+import org.rungtone.project.ProjectFile;
+import org.rungtone.report.ProjectReport;
+import picocli.CommandLine;
 import java.util.concurrent.Callable;
 import org.rungtone.firmware.CNames;
 import org.rungtone.ladder.LadderSpec;
@@ -37,7 +44,8 @@ public final class BuildCommand implements Callable<Integer> {
     @Mixin
     CommonOptions common;
 
-    @Parameters(index = "0", paramLabel = "SOURCE", description = "A .wav file or a .rung script.")
+    @Parameters(index = "0", paramLabel = "SOURCE",
+            description = "A .wav file, a .rung script, or a project file (.toml) describing a board and its sounds.")
     Path source;
 
     @Option(names = "--bits", paramLabel = "<n>",
@@ -102,6 +110,10 @@ public final class BuildCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        if (source.getFileName() != null && source.getFileName().toString().toLowerCase(Locale.ROOT)
+                .endsWith(".toml")) {
+            return buildProject();
+        }
         BuildPlan plan = plan();
         BuildSummary summary = new Build(Version.get()).run(plan);
         PrintWriter out = spec.commandLine().getOut();
@@ -114,6 +126,44 @@ public final class BuildCommand implements Callable<Integer> {
             spec.commandLine().getErr().println(BuildReport.timings(summary));
         }
         out.flush();
+        return 0;
+    }
+
+    private int buildProject() {
+        CommandLine.ParseResult pr = spec.commandLine().getParseResult();
+        for (String single : new String[] {"--name", "--channel", "--loop", "--flash-attr", "--gain", "--normalize",
+            "--trim", "--fade-in", "--fade-out", "--keep-dc", "--resampler"}) {
+            if (pr.hasMatchedOption(single)) {
+                throw new InputError(single + " sets one sound; in a project file put it in that sound's"
+                        + " [[sound]] table");
+            }
+        }
+        Project project = ProjectFile.load(source);
+        ProjectBuild.BoardResolver board = (table, file, b) -> {
+            if (table == null && !ladder.given()) {
+                return Optional.empty();
+            }
+            LadderSpec s = ladder.toSpec(table, file, b);
+            return Optional.of(s.levels().withOrigin("modelled " + s.describe()));
+        };
+        ProjectBuild.Overrides o = new ProjectBuild.Overrides(
+                bits == null ? OptionalInt.empty() : OptionalInt.of(bits),
+                rateHz == null ? OptionalDouble.empty() : OptionalDouble.of(rateHz),
+                pr.hasMatchedOption("--dither") ? Optional.of(dither) : Optional.empty(),
+                pr.hasMatchedOption("--shaping") ? Optional.of(errorFilter(shaping)) : Optional.empty(),
+                pr.hasMatchedOption("--seed") ? Optional.of(seed) : Optional.empty(), Optional.ofNullable(out),
+                pr.hasMatchedOption("--compensation") ? Optional.of(onOff(compensation, "--compensation"))
+                        : Optional.empty(),
+                board, firmware::applyGiven, firmware.wantsPlayer());
+        ProjectBuild.Result r = new ProjectBuild(Version.get()).run(project, o);
+        PrintWriter w = spec.commandLine().getOut();
+        ProjectReport.Input in = r.report();
+        if (json) {
+            w.print(Json.toJson(ProjectReport.json(in)));
+        } else if (!common.quiet) {
+            w.print(ProjectReport.text(in));
+        }
+        w.flush();
         return 0;
     }
 

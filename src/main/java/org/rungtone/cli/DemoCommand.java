@@ -4,16 +4,13 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.internal.InputError;
-import org.rungtone.project.Build;
-import org.rungtone.project.BuildPlan;
-import org.rungtone.quantize.Dither;
-import org.rungtone.quantize.ErrorFilter;
-import org.rungtone.report.BuildReport;
-import org.rungtone.report.BuildSummary;
+import org.rungtone.project.Project;
+import org.rungtone.project.ProjectBuild;
+import org.rungtone.project.ProjectFile;
+import org.rungtone.report.ProjectReport;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -21,13 +18,15 @@ import picocli.CommandLine.Spec;
 
 /** {@code rungtone demo}: builds the bundled greenhouse scenario end to end. */
 @Command(name = "demo", mixinStandardHelpOptions = true,
-        description = {"Build the bundled example: the door chime of a greenhouse controller, played by a 6-bit",
-            "ladder at 16 kHz. Copies the scenario's sources next to the outputs so you can rerun it by hand."},
+        description = {"Build the bundled example: a greenhouse controller (8-bit AVR) that plays a door chime",
+            "and a looping frost alarm through a 6-bit R-2R ladder of 5 % resistors on pins D2-D7.",
+            "The scenario's files are copied next to the outputs so you can change and rebuild them."},
         footerHeading = "%nExample:%n",
-        footer = {"  rungtone demo --out /tmp/demo"})
+        footer = {"  rungtone demo --out /tmp/demo",
+            "  rungtone build /tmp/demo/scenario/greenhouse.toml   (after editing the copy)"})
 public final class DemoCommand implements Callable<Integer> {
     static final String SCENARIO = "greenhouse";
-    static final String[] FILES = {"door-chime.wav"};
+    static final String[] FILES = {"greenhouse.toml", "door-chime.wav", "frost-alarm.rung"};
 
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
@@ -44,18 +43,25 @@ public final class DemoCommand implements Callable<Integer> {
         Path scenario = out.resolve("scenario");
         AtomicFiles.checkFolderUsable(out);
         for (String f : FILES) {
-            AtomicFiles.writeBytes(scenario.resolve(f), resource("examples/" + SCENARIO + "/" + f));
+            byte[] bytes = resource("examples/" + SCENARIO + "/" + f);
+            if (f.endsWith(".toml")) {
+                // the copy builds into the demo folder, not next to the bundled original
+                bytes = new String(bytes, java.nio.charset.StandardCharsets.UTF_8)
+                        .replaceFirst("(?m)^out\\s*=.*$", "out  = \"..\"")
+                        .getBytes(java.nio.charset.StandardCharsets.UTF_8);
+            }
+            AtomicFiles.writeBytes(scenario.resolve(f), bytes);
         }
-        BuildPlan plan = new BuildPlan(scenario.resolve("door-chime.wav"), 0, "door_chime", out.resolve("door_chime"),
-                6, OptionalDouble.of(16_000), Dither.TPDF, ErrorFilter.NONE, 1, true, OptionalDouble.of(-60),
-                OptionalDouble.empty(), OptionalDouble.of(-1), 0.002, 0.02, "kaiser", 5.0, "");
-        BuildSummary s = new Build(Version.get()).run(plan);
+        Project project = ProjectFile.load(scenario.resolve("greenhouse.toml"));
+        ProjectBuild.Result r = new ProjectBuild(Version.get()).run(project,
+                ProjectBuild.Overrides.none(ProjectBoards.fromLadderTable()));
         PrintWriter w = spec.commandLine().getOut();
         if (!common.quiet) {
-            w.print(BuildReport.text(s));
+            w.print(ProjectReport.text(r.report()));
             w.println();
-            w.println("Demo done. Outputs are in " + out.resolve("door_chime").toAbsolutePath());
-            w.println("The scenario's sources were copied to " + scenario.toAbsolutePath());
+            w.println("Demo done. Outputs are in " + r.outDir());
+            w.println("Open report.html there, listen to the preview.wav files (start with the volume low),");
+            w.println("and look at greenhouse.h for the player's API. The scenario is in " + scenario.toAbsolutePath());
         }
         w.flush();
         return 0;

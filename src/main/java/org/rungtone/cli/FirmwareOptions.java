@@ -89,6 +89,49 @@ public final class FirmwareOptions {
         return flashBudget == null ? 0 : flashBudget;
     }
 
+    /** Applies only the options given on the command line to {@code b} (project files: the options win). */
+    FirmwareRequest.Builder applyGiven(FirmwareRequest.Builder b) {
+        if (target != null) {
+            b.family(target);
+        }
+        if (templates != null) {
+            b.templates(Templates.fromFolder(templates));
+        }
+        if (cpuClockHz != null) {
+            b.cpuClockHz(cpuClockHz);
+        }
+        if (timer != null) {
+            b.timer(TimerKind.parse(timer));
+        }
+        if (rateTolerancePpm != null) {
+            b.rateTolerancePpm(rateTolerancePpm);
+        }
+        if (pins != null) {
+            b.pins(pins);
+        }
+        if (portWidth != null) {
+            b.portWidth(portWidth);
+        }
+        if (pinStrategy != null) {
+            b.pinStrategy(PinStrategy.parse(pinStrategy));
+        }
+        if (storage != null) {
+            b.storage(SampleStorage.parse(storage));
+        }
+        if (engine != null) {
+            PlaybackEngine e = PlaybackEngine.parse(engine);
+            b.engine(e);
+            if (e == PlaybackEngine.DDS) {
+                b.dds(new DdsSpec(ddsPhaseBits == null ? DdsSpec.DEFAULT_PHASE_BITS : ddsPhaseBits,
+                        ddsFrequencyHz == null ? 1000 : ddsFrequencyHz));
+            }
+        }
+        if (flashBudget != null) {
+            b.flashBudgetBytes(flashBudget);
+        }
+        return b;
+    }
+
     /**
      * A request template holding every firmware setting but the sounds, name and version, or empty when only
      * the sample array is wanted.

@@ -380,33 +380,15 @@ public final class SurveyCommand implements Callable<Integer> {
         }
     }
 
-    /** Reads --filter: none, rc:HZ or lp2:HZ[:Q]. */
+    /** Reads --filter: none, rc:HZ or lp2:HZ[:Q] (see {@link ReconstructionFilter#parse}). */
     static final class FilterParser implements ITypeConverter<ReconstructionFilter> {
-        /** Q of the second-order filter when none is given: 1/sqrt(2), the maximally flat (Butterworth) Q. */
-        static final double DEFAULT_Q = Math.sqrt(0.5);
-
         @Override
         public ReconstructionFilter convert(String value) {
-            String[] parts = value.trim().toLowerCase(Locale.ROOT).split(":", -1);
             try {
-                if (parts.length == 1 && parts[0].equals("none")) {
-                    return ReconstructionFilter.none();
-                }
-                if (parts.length == 2 && parts[0].equals("rc")) {
-                    return ReconstructionFilter.firstOrder(Checks.checkPositive(Units.parse(parts[1], "Hz"),
-                            "filter cutoff"));
-                }
-                if ((parts.length == 2 || parts.length == 3) && parts[0].equals("lp2")) {
-                    double q = parts.length == 3 ? Checks.checkPositive(Units.parse(parts[2], ""), "filter Q")
-                            : DEFAULT_Q;
-                    return ReconstructionFilter.secondOrder(Checks.checkPositive(Units.parse(parts[1], "Hz"),
-                            "filter cutoff"), q);
-                }
+                return ReconstructionFilter.parse(value);
             } catch (InputError e) {
-                throw new TypeConversionException("'" + value + "': " + e.getMessage());
+                throw new TypeConversionException(e.getMessage());
             }
-            throw new TypeConversionException("'" + value + "' is not a filter; write none, rc:3.4k or"
-                    + " lp2:3.4k[:0.707]");
         }
     }
 

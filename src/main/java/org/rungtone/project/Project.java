@@ -75,13 +75,10 @@ public record Project(Path file, String name, Optional<Path> outDir, Optional<Lo
     /**
      * The [preview] table.
      *
-     * @param filter none, rc, lp2
-     * @param cutoffHz filter cutoff
-     * @param q filter Q
+     * @param filter the reconstruction filter
      * @param rateHz preview WAV rate
      */
-    public record Preview(Optional<String> filter, OptionalDouble cutoffHz, OptionalDouble q,
-            OptionalDouble rateHz) {
+    public record Preview(Optional<org.rungtone.analysis.ReconstructionFilter> filter, OptionalDouble rateHz) {
     }
 
     /**

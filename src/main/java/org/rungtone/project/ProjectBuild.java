@@ -94,9 +94,10 @@ public final class ProjectBuild {
      * @param settings effective settings with their origin
      * @param files every file written
      * @param warnings project-level warnings
+     * @param report what the reports show
      */
     public record Result(Path outDir, List<BuildSummary> sounds, List<String> firmware, long flashBytes,
-            Map<String, String> settings, List<Path> files, List<String> warnings) {
+            Map<String, String> settings, List<Path> files, List<String> warnings, ProjectReport.Input report) {
     }
 
     /**
@@ -107,14 +108,16 @@ public final class ProjectBuild {
     public Result run(Project project, Overrides o) {
         Map<String, String> settings = new LinkedHashMap<>();
         Path outDir = o.outDir().or(project::outDir)
-                .orElse(project.file().toAbsolutePath().getParent().resolve("rungtone-out").resolve(project.name()));
+                .orElse(project.file().toAbsolutePath().getParent().resolve("rungtone-out").resolve(project.name()))
+                .toAbsolutePath().normalize();
         settings.put("out", outDir + origin(o.outDir().isPresent(), project.outDir().isPresent()));
         AtomicFiles.checkFolderUsable(outDir);
         Project.Quantize q = project.quantize();
         int fixedBits = o.bits().isPresent() ? o.bits().getAsInt() : q.bits().map(Long::intValue).orElse(0);
         Optional<LevelTable> board = o.board().resolve(project.ladder().orElse(null), project.file(), fixedBits);
         int bits = fixedBits != 0 ? fixedBits : board.map(LevelTable::bits).orElse(8);
-        settings.put("bits", bits + origin(o.bits().isPresent(), q.bits().isPresent()));
+        settings.put("bits", bits + (fixedBits == 0 && board.isPresent() ? "  (ladder)"
+                : origin(o.bits().isPresent(), q.bits().isPresent())));
         Dither dither = o.dither().orElse(q.dither().map(d -> Dither.valueOf(d.toUpperCase(Locale.ROOT)))
                 .orElse(Dither.TPDF));
         settings.put("dither", dither.label() + origin(o.dither().isPresent(), q.dither().isPresent()));
@@ -151,15 +154,7 @@ public final class ProjectBuild {
             if (board.isPresent()) {
                 plan = plan.withBoard(board.get(), compensate);
             }
-            double previewRate = pv.rateHz().orElse(44_100);
-            double r = rate.orElse(BuildPlan.DEFAULT_RATE_HZ);
-            double cutoff = pv.cutoffHz().orElse(0.4 * r);
-            ReconstructionFilter filter = switch (pv.filter().orElse("none")) {
-                case "rc" -> ReconstructionFilter.firstOrder(cutoff);
-                case "lp2" -> ReconstructionFilter.secondOrder(cutoff, pv.q().orElse(Math.sqrt(0.5)));
-                default -> ReconstructionFilter.none();
-            };
-            plan = plan.withPreview(filter, previewRate).withFirmware(Optional.empty(), s.loop(), 0);
+            plan = plan.withPreview(pv.filter().orElse(ReconstructionFilter.none()), pv.rateHz().orElse(44_100)).withFirmware(Optional.empty(), s.loop(), 0);
             rendered.add(build.render(plan));
         }
 
@@ -205,9 +200,9 @@ public final class ProjectBuild {
         Path json = outDir.resolve("report.json");
         files.add(txt);
         files.add(json);
-        Result result = new Result(outDir, summaries, firmwareLines, flash, settings, files, warnings);
         ProjectReport.Input in = new ProjectReport.Input(toolVersion, project.file(), project.name(), settings,
                 summaries, firmwareLines, flash, budget, files, warnings);
+        Result result = new Result(outDir, summaries, firmwareLines, flash, settings, files, warnings, in);
         AtomicFiles.writeString(txt, ProjectReport.text(in));
         Json.write(json, ProjectReport.json(in));
         return result;

@@ -150,17 +150,22 @@ public final class ProjectFile {
 
     private static Project.Preview preview(Optional<TomlFields> t) {
         if (t.isEmpty()) {
-            return new Project.Preview(Optional.empty(), java.util.OptionalDouble.empty(),
-                    java.util.OptionalDouble.empty(), java.util.OptionalDouble.empty());
+            return new Project.Preview(Optional.empty(), java.util.OptionalDouble.empty());
         }
         TomlFields f = t.get();
-        Project.Preview p = new Project.Preview(f.choice("filter", "none", "rc", "lp2"), f.quantity("cutoff", "Hz"),
-                f.quantity("q", ""), f.quantity("rate", "Hz"));
+        Optional<org.rungtone.analysis.ReconstructionFilter> filter = f.string("filter").map(text -> {
+            try {
+                return org.rungtone.analysis.ReconstructionFilter.parse(text);
+            } catch (InputError e) {
+                throw f.error("filter", e.getMessage());
+            }
+        });
+        java.util.OptionalDouble rate = f.quantity("rate", "Hz");
         f.rejectUnknown();
-        if (p.cutoffHz().isPresent() && p.filter().orElse("none").equals("none")) {
-            throw f.error("cutoff", "needs filter = \"rc\" or \"lp2\"");
+        if (rate.isPresent() && rate.getAsDouble() != 44_100 && rate.getAsDouble() != 48_000) {
+            throw f.error("rate", "must be \"44.1k\" or \"48k\"");
         }
-        return p;
+        return new Project.Preview(filter, rate);
     }
 
     private static Project.Sound sound(TomlFields f, int index, Path base) {
