@@ -16,6 +16,7 @@ import picocli.CommandLine.ParseResult;
         subcommands = {
             BuildCommand.class,
             DemoCommand.class,
+            InitCommand.class,
             LadderCommand.class,
             SurveyCommand.class,
             CommandLine.HelpCommand.class},

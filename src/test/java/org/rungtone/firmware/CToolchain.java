@@ -18,15 +18,15 @@ import org.junit.jupiter.api.Assumptions;
  * its tests with a printed reason, unless the environment variable RUNGTONE_REQUIRE_CROSS is set (CI), in
  * which case it fails them.
  */
-final class CToolchain {
+public final class CToolchain {
     /** Warning flags every emitted file must pass without a warning. */
-    static final List<String> STRICT = List.of("-std=c99", "-Wall", "-Wextra", "-Werror", "-pedantic");
+    public static final List<String> STRICT = List.of("-std=c99", "-Wall", "-Wextra", "-Werror", "-pedantic");
 
     private CToolchain() {
     }
 
     /** Skips (or, with RUNGTONE_REQUIRE_CROSS, fails) the calling test when {@code compiler} is absent. */
-    static void require(String compiler) {
+    public static void require(String compiler) {
         if (onPath(compiler)) {
             return;
         }
@@ -62,7 +62,7 @@ final class CToolchain {
     }
 
     /** Compiles, failing on any diagnostic at all (warnings are errors, and nothing else may be printed). */
-    static void compileClean(Path dir, List<String> command) {
+    public static void compileClean(Path dir, List<String> command) {
         String out = run(dir, command);
         assertEquals("", out.strip(), "compiler printed diagnostics");
     }
@@ -71,7 +71,7 @@ final class CToolchain {
      * Compiles {@code sources} with {@code base} in two compiler runs side by side (the files are
      * independent), failing on any diagnostic.
      */
-    static void compileClean(Path dir, List<String> base, List<String> sources) {
+    public static void compileClean(Path dir, List<String> base, List<String> sources) {
         int half = sources.size() / 2;
         List<List<String>> parts = List.of(sources.subList(0, half), sources.subList(half, sources.size()));
         List<ProcessResult> results = parts.parallelStream().map(p -> exec(dir, cmd(base, p))).toList();
@@ -104,7 +104,7 @@ final class CToolchain {
     }
 
     /** {@code base} followed by {@code more}. */
-    static List<String> cmd(List<String> base, List<String> more) {
+    public static List<String> cmd(List<String> base, List<String> more) {
         List<String> all = new ArrayList<>(base);
         all.addAll(more);
         return all;

@@ -1,0 +1,114 @@
+package org.rungtone.project;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.rungtone.firmware.CToolchain;
+import org.rungtone.testing.Cli;
+
+/** Project files built end to end through the command line, as users run them. */
+class ProjectBuildTest {
+    @TempDir
+    Path dir;
+
+    Path copyExample(String folder) throws IOException {
+        Path src = Path.of("examples", folder);
+        Path dst = dir.resolve(folder);
+        Files.createDirectories(dst);
+        try (var s = Files.list(src)) {
+            for (Path p : s.toList()) {
+                Files.copy(p, dst.resolve(p.getFileName()));
+            }
+        }
+        return dst;
+    }
+
+    @Test
+    void greenhouseExampleBuildsAndItsAvrCodeCompiles() throws Exception {
+        Path g = copyExample("greenhouse");
+        Path out = dir.resolve("out");
+        Cli.Run r = Cli.run("build", g.resolve("greenhouse.toml").toString(), "--out", out.toString());
+        assertEquals(0, r.exitCode(), r.err());
+        for (String f : List.of("greenhouse.h", "greenhouse.c", "greenhouse_data.c", "report.txt", "report.json",
+                "door_chime/preview.wav", "frost_alarm/preview.wav", "door_chime/error-spectrum.png")) {
+            assertTrue(Files.exists(out.resolve(f)), f);
+        }
+        String report = Files.readString(out.resolve("report.txt"));
+        assertTrue(report.contains("greenhouse_door_chime"), report);
+        assertTrue(report.contains("out of") || report.contains("Flash: "), report);
+        CToolchain.require("avr-gcc");
+        CToolchain.compileClean(out, CToolchain.cmd(List.of("avr-gcc", "-mmcu=atmega328p", "-Os"),
+                CToolchain.cmd(CToolchain.STRICT, List.of("-c", "greenhouse.c", "greenhouse_data.c"))));
+    }
+
+    @Test
+    void commandLineOverridesTheFileAndTheReportSaysSo() throws IOException {
+        Path g = copyExample("greenhouse");
+        Path out = dir.resolve("o2");
+        Cli.Run r = Cli.run("build", g.resolve("greenhouse.toml").toString(), "--out", out.toString(), "--bits",
+                "5", "--dither", "none", "--target", "generic", "--pins", "A0-A4", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        assertTrue(r.out().contains("\"bits\": \"5  (command line)\""), r.out());
+        assertTrue(r.out().contains("\"dither\": \"none  (command line)\""), r.out());
+        assertTrue(r.out().contains("\"seed\": \"1  (project file)\""), r.out());
+        assertTrue(r.out().contains("\"shaping\": \"none  (default)\""), r.out());
+        assertTrue(Files.readString(out.resolve("greenhouse.h")).contains("generic"));
+    }
+
+    @Test
+    void soundsAtDifferentRatesConflictWithOnePlayer() throws IOException {
+        Path g = copyExample("greenhouse");
+        Path toml = g.resolve("greenhouse.toml");
+        Files.writeString(toml, Files.readString(toml).replace("loop   = \"0:end\"",
+                "loop   = \"0:end\"\nrate   = \"8k\""));
+        Path out = dir.resolve("o3");
+        Cli.Run r = Cli.run("build", toml.toString(), "--out", out.toString());
+        assertEquals(1, r.exitCode(), r.err());
+        assertTrue(r.err().contains("greenhouse.toml:") && r.err().contains("sound[2].rate: 8kHz conflicts with"
+                + " sound 'door_chime' at 16kHz"), r.err());
+        assertFalse(Files.exists(out));
+    }
+
+    @Test
+    void singleSoundOptionsAreRefusedForProjects() throws IOException {
+        Path g = copyExample("greenhouse");
+        Cli.Run r = Cli.run("build", g.resolve("greenhouse.toml").toString(), "--trim", "-50");
+        assertEquals(1, r.exitCode());
+        assertEquals("rungtone: error: --trim sets one sound; in a project file put it in that sound's [[sound]]"
+                + " table\n", r.err());
+    }
+
+    @Test
+    void initWritesAProjectThatBuildsAndRefusesToClobber() throws IOException {
+        Path toml = dir.resolve("bell.toml");
+        Files.copy(Path.of("examples/greenhouse/door-chime.wav"), dir.resolve("sound.wav"));
+        for (String target : List.of("generic", "avr", "cortexm")) {
+            Cli.Run init = Cli.run("init", toml.toString(), "--target", target, "--force", "--quiet");
+            assertEquals(0, init.exitCode(), init.err());
+            Project p = ProjectFile.load(toml);
+            assertEquals("bell", p.name());
+            Cli.Run b = Cli.run("build", toml.toString(), "--out", dir.resolve("out-" + target).toString(), "-q");
+            assertEquals(0, b.exitCode(), target + ": " + b.err());
+        }
+        Cli.Run again = Cli.run("init", toml.toString());
+        assertEquals(1, again.exitCode());
+        assertEquals("rungtone: error: " + toml + ": already exists; use --force to overwrite it\n", again.err());
+    }
+
+    @Test
+    void demoRunsEndToEnd() throws IOException {
+        Path out = dir.resolve("demo");
+        Cli.Run r = Cli.run("demo", "--out", out.toString());
+        assertEquals(0, r.exitCode(), r.err());
+        assertTrue(Files.exists(out.resolve("greenhouse.h")));
+        assertTrue(Files.exists(out.resolve("scenario/greenhouse.toml")));
+        assertTrue(r.out().contains("Demo done."), r.out());
+    }
+}
