@@ -17,6 +17,7 @@ import picocli.CommandLine.ParseResult;
             BuildCommand.class,
             DemoCommand.class,
             LadderCommand.class,
+            CompletionCommand.class,
             CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {
