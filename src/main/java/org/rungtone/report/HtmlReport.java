@@ -72,6 +72,9 @@ public final class HtmlReport {
                     "flash budget must be > 0 bytes: %d", flashBudgetBytes.orElse(0));
             settings = List.copyOf(settings);
             sounds = List.copyOf(sounds);
+            for (BuildSummary s : sounds) {
+                Checks.checkArgument(!s.quality().isEmpty(), "sound %s has no quality figures", s.symbol());
+            }
             sections = List.copyOf(sections);
             warnings = List.copyOf(warnings);
         }
@@ -248,6 +251,7 @@ public final class HtmlReport {
             List<String> warnings = soundWarnings(s);
             m.put("warnings", warnings);
             m.put("hasWarnings", !warnings.isEmpty());
+            m.put("warningsAnchor", anchor("sound-" + s.symbol() + "-warnings"));
             m.put("warningCount", Integer.toString(warnings.size()));
             m.put("warningPhrase", warnings.size() == 1 ? "1 warning" : warnings.size() + " warnings");
             return m;

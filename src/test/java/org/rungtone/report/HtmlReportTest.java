@@ -234,6 +234,21 @@ class HtmlReportTest {
     }
 
     @Test
+    void keepsEveryIdUniqueAndEveryLinkResolved() {
+        HtmlReport.Page p = new HtmlReport.Page("board", "0.1.0", List.of(), List.of(chime, chime, alarm),
+                List.of(new HtmlReport.Section("Ladder", "a"), new HtmlReport.Section("ladder!", "b")), 0,
+                OptionalLong.empty(), List.of(), Optional.empty());
+        Document doc = Jsoup.parse(HtmlReport.render(p));
+        List<String> ids = doc.select("[id]").eachAttr("id");
+        assertEquals(ids.size(), ids.stream().distinct().count(), ids.toString());
+        assertTrue(ids.containsAll(List.of("sound-door-chime", "sound-door-chime-2", "section-ladder",
+                "section-ladder-2")), ids.toString());
+        for (Element e : doc.select("[href]")) {
+            assertNotNull(doc.getElementById(e.attr("href").substring(1)), e.attr("href"));
+        }
+    }
+
+    @Test
     void escapesText() {
         String evil = "<script>alert(\"x\")</script> & <b>";
         BuildSummary s = new BuildSummary("0.1.0", Path.of("a.wav"), evil, "snd", 4, 8000, 8, 0.001, "none",
