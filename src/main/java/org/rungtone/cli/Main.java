@@ -19,6 +19,7 @@ import picocli.CommandLine.ParseResult;
             InitCommand.class,
             LadderCommand.class,
             SurveyCommand.class,
+            CompletionCommand.class,
             CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {

@@ -1,0 +1,446 @@
+package org.rungtone.report;
+
+import com.samskivert.mustache.Mustache;
+import com.samskivert.mustache.Template;
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Base64;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalLong;
+import java.util.Set;
+import org.rungtone.analysis.QualityReport;
+import org.rungtone.analysis.ToneReport;
+import org.rungtone.internal.AtomicFiles;
+import org.rungtone.internal.Checks;
+import org.rungtone.internal.InputError;
+import org.rungtone.internal.Units;
+
+/**
+ * The build report as one self-contained HTML page: effective settings, the figures of every sound, the
+ * analog preview, the firmware summary, every PNG plot embedded as a {@code data:} URI, and the warnings.
+ * The page loads nothing from anywhere (a Content-Security-Policy says so), needs no script, prints cleanly,
+ * and is byte-identical for the same page. Layout lives in the JMustache template
+ * {@code report.html.mustache} beside this class; every text value is HTML-escaped by the template engine.
+ */
+public final class HtmlReport {
+    private static final byte[] PNG_SIGNATURE = {(byte) 0x89, 'P', 'N', 'G', '\r', '\n', 0x1a, '\n'};
+    private static final Map<String, String> KNOWN_PLOTS = Map.of(
+            "error-spectrum", "Error spectrum: what the board adds to the sound (output minus the aligned source),"
+                    + " as a density per hertz, with the in-band cutoff marked",
+            "spectrum", "Output spectrum of the single tone, with its harmonics and the ideal quantizer's"
+                    + " noise floor",
+            "transfer", "Ladder transfer: output volts for every code",
+            "dnl", "Differential non-linearity of every code step (LSB)",
+            "inl", "Integral non-linearity of every code (LSB)",
+            "monte-carlo", "Monte Carlo spread of boards built from toleranced parts",
+            "survey", "SINAD against bit depth, one line per sample rate");
+
+    private HtmlReport() {
+    }
+
+    /**
+     * Everything one report page shows.
+     *
+     * @param title what the page is about, e.g. the board's name ("greenhouse board")
+     * @param toolVersion Rungtone version
+     * @param settings the effective settings, in the order to show them
+     * @param sounds one build summary per sound, in the order to show them
+     * @param sections extra sections (ladder summary, calibration summary, ...), shown after the sounds
+     * @param flashBytes total flash the build needs, in bytes
+     * @param flashBudgetBytes the flash budget, when one is set
+     * @param warnings project-level warnings, shown at the end
+     * @param byline an optional line under the title (a date, a commit); the page adds none itself
+     */
+    public record Page(String title, String toolVersion, List<Setting> settings, List<BuildSummary> sounds,
+            List<Section> sections, long flashBytes, OptionalLong flashBudgetBytes, List<String> warnings,
+            Optional<String> byline) {
+
+        /** Checks the figures and copies the lists. */
+        public Page {
+            Checks.checkArgument(!title.isBlank(), "report title must not be blank");
+            Checks.checkArgument(flashBytes >= 0, "flash bytes must be >= 0: %d", flashBytes);
+            Checks.checkArgument(flashBudgetBytes.isEmpty() || flashBudgetBytes.getAsLong() > 0,
+                    "flash budget must be > 0 bytes: %d", flashBudgetBytes.orElse(0));
+            settings = List.copyOf(settings);
+            sounds = List.copyOf(sounds);
+            for (BuildSummary s : sounds) {
+                Checks.checkArgument(!s.quality().isEmpty(), "sound %s has no quality figures", s.symbol());
+            }
+            sections = List.copyOf(sections);
+            warnings = List.copyOf(warnings);
+        }
+    }
+
+    /** One effective setting: key and value as the user would write them. */
+    public record Setting(String key, String value) {
+        /** The entries of an insertion-ordered map, values through {@link String#valueOf}. */
+        public static List<Setting> of(Map<String, ?> ordered) {
+            List<Setting> list = new ArrayList<>();
+            ordered.forEach((k, v) -> list.add(new Setting(k, String.valueOf(v))));
+            return list;
+        }
+    }
+
+    /**
+     * An extra section: a title, preformatted text (a ladder or calibration summary as the text report prints
+     * it; may be empty) and plots.
+     */
+    public record Section(String title, String text, List<Figure> figures) {
+        /** Copies the figure list. */
+        public Section {
+            figures = List.copyOf(figures);
+        }
+
+        /** A section of text only. */
+        public Section(String title, String text) {
+            this(title, text, List.of());
+        }
+    }
+
+    /** A PNG file to embed, with its caption. */
+    public record Figure(Path png, String caption) {
+        /** A figure captioned from its file name (known plot names get a sentence). */
+        public static Figure of(Path png) {
+            return new Figure(png, defaultCaption(png));
+        }
+    }
+
+    /**
+     * Renders the page as HTML, reading and embedding every PNG it lists. File paths are shown as given.
+     *
+     * @throws InputError when a listed PNG cannot be read or is not a PNG
+     */
+    public static String render(Page page) {
+        return render(page, Optional.empty());
+    }
+
+    /**
+     * Renders the page and writes it atomically to {@code file}; listed files inside the report's folder are
+     * shown relative to it, so the page reads the same wherever the folder is moved.
+     *
+     * @throws InputError when a listed PNG cannot be read or the file cannot be written
+     */
+    public static void write(Path file, Page page) {
+        Path folder = file.toAbsolutePath().normalize().getParent();
+        AtomicFiles.writeString(file, render(page, Optional.ofNullable(folder)));
+    }
+
+    private static String render(Page page, Optional<Path> base) {
+        return Layout.TEMPLATE.execute(new Context(base).page(page));
+    }
+
+    /** The compiled template, loaded once. */
+    private static final class Layout {
+        static final Template TEMPLATE = Mustache.compiler().escapeHTML(true).strictSections(true)
+                .compile(load());
+
+        private static String load() {
+            try (InputStream in = HtmlReport.class.getResourceAsStream("report.html.mustache")) {
+                if (in == null) {
+                    throw new IllegalStateException("report.html.mustache is missing from this build");
+                }
+                return new String(in.readAllBytes(), StandardCharsets.UTF_8).replace("\r\n", "\n");
+            } catch (IOException e) {
+                throw new IllegalStateException("cannot read report.html.mustache", e);
+            }
+        }
+    }
+
+    /** Turns a page into the template's context: maps of strings, booleans and lists, no nulls. */
+    private static final class Context {
+        private final Optional<Path> base;
+        private final Set<String> anchors = new HashSet<>();
+
+        Context(Optional<Path> base) {
+            this.base = base;
+        }
+
+        Map<String, Object> page(Page page) {
+            Map<String, Object> m = new LinkedHashMap<>();
+            m.put("title", page.title());
+            m.put("version", page.toolVersion());
+            m.put("hasByline", page.byline().isPresent());
+            m.put("byline", page.byline().orElse(""));
+            m.put("settings", rows(page.settings()));
+            m.put("hasSettings", !page.settings().isEmpty());
+            List<Map<String, Object>> sounds = new ArrayList<>();
+            for (BuildSummary s : page.sounds()) {
+                sounds.add(sound(s));
+            }
+            m.put("sounds", sounds);
+            m.put("hasSounds", !sounds.isEmpty());
+            m.put("soundCount", sounds.size() == 1 ? "1 sound" : sounds.size() + " sounds");
+            m.put("flash", flash(page.flashBytes(), page.flashBudgetBytes()));
+            List<Map<String, Object>> sections = new ArrayList<>();
+            for (Section sec : page.sections()) {
+                Map<String, Object> sm = new LinkedHashMap<>();
+                sm.put("anchor", anchor("section-" + sec.title()));
+                sm.put("title", sec.title());
+                sm.put("hasText", !sec.text().isBlank());
+                sm.put("text", stripTrailingNewlines(sec.text()));
+                sm.put("figures", figures(sec.figures(), sec.title()));
+                sections.add(sm);
+            }
+            m.put("sections", sections);
+            m.put("warnings", page.warnings());
+            m.put("hasWarnings", !page.warnings().isEmpty());
+            return m;
+        }
+
+        private Map<String, Object> sound(BuildSummary s) {
+            Map<String, Object> m = new LinkedHashMap<>();
+            m.put("anchor", anchor("sound-" + s.symbol()));
+            m.put("symbol", s.symbol());
+            m.put("sourceName", String.valueOf(s.source().getFileName()));
+            m.put("sourceLayout", s.sourceLayout());
+            m.put("bits", Integer.toString(s.bits()));
+            m.put("rate", Units.format(s.rateHz(), "Hz"));
+            m.put("duration", String.format(Locale.ROOT, "%.3f s", s.durationSeconds()));
+            m.put("flashBytes", bytes(s.flashBytes()));
+            QualityReport emitted = s.emitted();
+            m.put("emittedCase", s.emittedCase());
+            m.put("emittedSinad", f1(emitted.sinadDb()));
+            m.put("emittedEnob", f2(emitted.enobBits()));
+            m.put("settings", rows(soundSettings(s)));
+            m.put("cutoff", Units.format(s.quality().get(0).inBandCutoffHz(), "Hz"));
+            List<Map<String, Object>> quality = new ArrayList<>();
+            for (int i = 0; i < s.quality().size(); i++) {
+                QualityReport r = s.quality().get(i);
+                Map<String, Object> q = new LinkedHashMap<>();
+                q.put("label", r.label());
+                q.put("emitted", i == s.quality().size() - 1);
+                q.put("sinad", f1(r.sinadDb()));
+                q.put("inBandSnr", f1(r.inBandSnrDb()));
+                q.put("aWeightedSnr", f1(r.aWeightedSnrDb()));
+                q.put("enob", f2(r.enobBits()));
+                quality.add(q);
+            }
+            m.put("quality", quality);
+            m.put("hasShaping", s.shapingGainDb().isPresent());
+            m.put("shaping", s.shapingGainDb().map(g -> String.format(Locale.ROOT,
+                    "Noise shaping (%s) %s %.1f dB of in-band SNR against flat quantization.", s.shaping(),
+                    g >= 0 ? "wins" : "loses", Math.abs(g))).orElse(""));
+            m.put("hasTone", s.tone().isPresent());
+            m.put("tone", s.tone().map(Context::tone).orElse(Map.of()));
+            m.put("preview", rows(previewRows(s.preview())));
+            m.put("hasFirmware", !s.firmware().isEmpty());
+            m.put("firmware", String.join("\n", s.firmware()));
+            List<Figure> plots = new ArrayList<>();
+            for (Path f : s.files()) {
+                if (isPng(f)) {
+                    plots.add(Figure.of(f));
+                }
+            }
+            m.put("figures", figures(plots, s.symbol()));
+            m.put("hasFigures", !plots.isEmpty());
+            List<String> files = new ArrayList<>();
+            for (Path f : s.files()) {
+                files.add(shown(f));
+            }
+            m.put("files", files);
+            m.put("hasFiles", !files.isEmpty());
+            List<String> warnings = soundWarnings(s);
+            m.put("warnings", warnings);
+            m.put("hasWarnings", !warnings.isEmpty());
+            m.put("warningsAnchor", anchor("sound-" + s.symbol() + "-warnings"));
+            m.put("warningCount", Integer.toString(warnings.size()));
+            m.put("warningPhrase", warnings.size() == 1 ? "1 warning" : warnings.size() + " warnings");
+            return m;
+        }
+
+        private static List<Setting> soundSettings(BuildSummary s) {
+            List<Setting> rows = new ArrayList<>();
+            rows.add(new Setting("source", s.source().getFileName() + " (" + s.sourceLayout() + ")"));
+            rows.add(new Setting("conditioning", s.conditioning()));
+            rows.add(new Setting("resampler", s.resampler()));
+            rows.add(new Setting("target", s.bits() + " bits at " + Units.format(s.rateHz(), "Hz") + ", "
+                    + s.samples() + " samples, " + String.format(Locale.ROOT, "%.3f s", s.durationSeconds())));
+            rows.add(new Setting("dither / shaping", s.dither() + " / " + s.shaping() + " (seed " + s.seed()
+                    + ")"));
+            rows.add(new Setting("levels played", s.ladder()));
+            rows.add(new Setting("C files hold", s.emittedCase()));
+            rows.add(new Setting("clipped samples", s.clippedSamples() + (s.samples() > 0 ? String.format(
+                    Locale.ROOT, " (%.3f %%)", 100.0 * s.clippedSamples() / s.samples()) : "")));
+            rows.add(new Setting("flash", bytes(s.flashBytes()) + " of samples"));
+            return rows;
+        }
+
+        private static Map<String, Object> tone(ToneReport t) {
+            Map<String, Object> m = new LinkedHashMap<>();
+            m.put("rows", rows(List.of(
+                    new Setting("fundamental", Units.format(t.fundamentalHz(), "Hz")),
+                    new Setting("amplitude", f1(t.amplitudeDbfs()) + " dBFS"),
+                    new Setting("SINAD (sine fit)", f1(t.sinadDb()) + " dB"),
+                    new Setting("SNR", f1(t.snrDb()) + " dB"),
+                    new Setting("THD", f1(t.thdDb()) + " dB"),
+                    new Setting("SFDR", f1(t.sfdrDb()) + " dB"),
+                    new Setting("ENOB", f2(t.enobBits()) + " bits"),
+                    new Setting("noise floor", f1(t.noiseFloorDbfs()) + " dBFS"))));
+            List<Map<String, Object>> harmonics = new ArrayList<>();
+            for (ToneReport.Harmonic h : t.harmonics()) {
+                Map<String, Object> hm = new LinkedHashMap<>();
+                hm.put("order", Integer.toString(h.order()));
+                hm.put("frequency", Units.format(h.frequencyHz(), "Hz"));
+                hm.put("level", f1(h.levelDbc()));
+                harmonics.add(hm);
+            }
+            m.put("harmonics", harmonics);
+            m.put("hasHarmonics", !harmonics.isEmpty());
+            return m;
+        }
+
+        private static List<Setting> previewRows(BuildSummary.PreviewInfo p) {
+            return List.of(
+                    new Setting("reconstruction filter", p.filter().equals("none") ? "none (the hold alone)"
+                            : p.filter()),
+                    new Setting("preview WAV rate", Units.format(p.rateHz(), "Hz")),
+                    new Setting("zero-order-hold droop", String.format(Locale.ROOT, "%.2f dB at %s",
+                            p.zohDroopDb(), Units.format(p.passbandTopHz(), "Hz"))),
+                    new Setting("peak", String.format(Locale.ROOT, "%.3f of full scale", p.peak())));
+        }
+
+        /** The summary's warnings plus the preview's ringing, as the text report lists them. */
+        private static List<String> soundWarnings(BuildSummary s) {
+            List<String> w = new ArrayList<>(s.warnings());
+            if (s.preview().peak() > 1) {
+                w.add(String.format(Locale.ROOT, "the preview's filter rings %.1f %% past full scale;"
+                        + " the preview WAV clips there", 100 * (s.preview().peak() - 1)));
+            }
+            return w;
+        }
+
+        private static Map<String, Object> flash(long total, OptionalLong budget) {
+            Map<String, Object> m = new LinkedHashMap<>();
+            m.put("total", bytes(total));
+            m.put("hasBudget", budget.isPresent());
+            if (budget.isPresent()) {
+                long b = budget.getAsLong();
+                double percent = 100.0 * total / b;
+                m.put("budget", bytes(b));
+                m.put("percent", String.format(Locale.ROOT, "%.1f %%", percent));
+                m.put("barWidth", String.format(Locale.ROOT, "%.1f", Math.min(100, percent)));
+                m.put("over", total > b);
+                m.put("margin", total > b ? "over budget by " + bytes(total - b)
+                        : bytes(b - total) + " to spare");
+            }
+            return m;
+        }
+
+        private List<Map<String, Object>> figures(List<Figure> figures, String owner) {
+            List<Map<String, Object>> list = new ArrayList<>();
+            for (Figure f : figures) {
+                byte[] png = readPng(f.png());
+                Map<String, Object> m = new LinkedHashMap<>();
+                m.put("data", Base64.getEncoder().encodeToString(png));
+                m.put("width", Integer.toString(readInt(png, 16)));
+                m.put("height", Integer.toString(readInt(png, 20)));
+                m.put("caption", f.caption());
+                m.put("alt", owner + ": " + plotName(f.png()) + " plot");
+                m.put("file", shown(f.png()));
+                list.add(m);
+            }
+            return list;
+        }
+
+        private String shown(Path f) {
+            if (base.isPresent()) {
+                Path abs = f.toAbsolutePath().normalize();
+                if (abs.startsWith(base.get())) {
+                    return base.get().relativize(abs).toString().replace('\\', '/');
+                }
+            }
+            return f.toString();
+        }
+
+        /** An id made of [a-z0-9-] from {@code text}, unique within the page. */
+        private String anchor(String text) {
+            String id = text.toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]+", "-").replaceAll("^-|-$", "");
+            String unique = id;
+            for (int n = 2; !anchors.add(unique); n++) {
+                unique = id + "-" + n;
+            }
+            return unique;
+        }
+
+        private static List<Map<String, Object>> rows(List<Setting> settings) {
+            List<Map<String, Object>> rows = new ArrayList<>();
+            for (Setting s : settings) {
+                Map<String, Object> m = new LinkedHashMap<>();
+                m.put("key", s.key());
+                m.put("value", s.value());
+                rows.add(m);
+            }
+            return rows;
+        }
+    }
+
+    private static boolean isPng(Path f) {
+        Path name = f.getFileName();
+        return name != null && name.toString().toLowerCase(Locale.ROOT).endsWith(".png");
+    }
+
+    private static byte[] readPng(Path f) {
+        byte[] bytes;
+        try {
+            bytes = Files.readAllBytes(f);
+        } catch (IOException e) {
+            throw new InputError(f + ": cannot read this plot for report.html (" + e.getClass().getSimpleName()
+                    + "); rebuild to write it again", e);
+        }
+        boolean png = bytes.length >= 24;
+        for (int i = 0; png && i < PNG_SIGNATURE.length; i++) {
+            png = bytes[i] == PNG_SIGNATURE[i];
+        }
+        Checks.checkInput(png, "%s: not a PNG image; report.html embeds PNG plots only", f);
+        return bytes;
+    }
+
+    /** A big-endian 32-bit value; PNG's IHDR puts width at byte 16 and height at byte 20. */
+    private static int readInt(byte[] b, int at) {
+        return (b[at] & 0xff) << 24 | (b[at + 1] & 0xff) << 16 | (b[at + 2] & 0xff) << 8 | (b[at + 3] & 0xff);
+    }
+
+    private static String defaultCaption(Path png) {
+        String known = KNOWN_PLOTS.get(stem(png).toLowerCase(Locale.ROOT));
+        if (known != null) {
+            return known;
+        }
+        String words = plotName(png);
+        return Character.toUpperCase(words.charAt(0)) + words.substring(1);
+    }
+
+    /** The file name without ".png", dashes and underscores as spaces: "error spectrum". */
+    private static String plotName(Path png) {
+        String words = stem(png).replaceAll("[-_]+", " ").trim();
+        return words.isEmpty() ? String.valueOf(png.getFileName()) : words;
+    }
+
+    private static String stem(Path png) {
+        return String.valueOf(png.getFileName()).replaceFirst("(?i)\\.png$", "");
+    }
+
+    private static String stripTrailingNewlines(String text) {
+        return text.replaceAll("\\n+$", "");
+    }
+
+    private static String bytes(long n) {
+        return String.format(Locale.ROOT, "%,d bytes", n);
+    }
+
+    private static String f1(double v) {
+        return Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf") : String.format(Locale.ROOT, "%.1f", v);
+    }
+
+    private static String f2(double v) {
+        return Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf") : String.format(Locale.ROOT, "%.2f", v);
+    }
+}
