@@ -9,6 +9,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
+import java.util.OptionalLong;
 import java.util.function.UnaryOperator;
 import org.rungtone.analysis.ReconstructionFilter;
 import org.rungtone.firmware.CNames;
@@ -28,6 +29,7 @@ import org.rungtone.ladder.LevelTable;
 import org.rungtone.quantize.Dither;
 import org.rungtone.quantize.ErrorFilter;
 import org.rungtone.report.BuildSummary;
+import org.rungtone.report.HtmlReport;
 import org.rungtone.report.Json;
 import org.rungtone.report.ProjectReport;
 import org.tomlj.TomlTable;
@@ -198,13 +200,19 @@ public final class ProjectBuild {
         }
         Path txt = outDir.resolve("report.txt");
         Path json = outDir.resolve("report.json");
+        Path html = outDir.resolve("report.html");
         files.add(txt);
         files.add(json);
+        files.add(html);
         ProjectReport.Input in = new ProjectReport.Input(toolVersion, project.file(), project.name(), settings,
                 summaries, firmwareLines, flash, budget, files, warnings);
         Result result = new Result(outDir, summaries, firmwareLines, flash, settings, files, warnings, in);
         AtomicFiles.writeString(txt, ProjectReport.text(in));
         Json.write(json, ProjectReport.json(in));
+        HtmlReport.write(html, new HtmlReport.Page(project.name() + " (" + project.file().getFileName() + ")",
+                toolVersion, HtmlReport.Setting.of(settings), summaries, List.of(), flash,
+                budget > 0 ? OptionalLong.of(budget) : OptionalLong.empty(), ProjectReport.warningsOf(in),
+                Optional.empty()));
         return result;
     }
 

@@ -88,6 +88,11 @@ public final class ProjectReport {
         return b.toString();
     }
 
+    /** The project-level warnings only (each sound's own are shown with the sound). */
+    public static List<String> warningsOf(Input in) {
+        return List.copyOf(in.warnings());
+    }
+
     /** Project warnings and each sound's warnings, prefixed with the sound. */
     static List<String> warnings(Input in) {
         List<String> w = new ArrayList<>(in.warnings());
