@@ -29,7 +29,8 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code rungtone build}: one source to C files and a report. */
-@Command(name = "build", mixinStandardHelpOptions = true,
+@Command(name = "build",
+        header = "Build a sound or a project into C files, a preview and a report.", mixinStandardHelpOptions = true,
         description = "Condition and quantize a WAV file or .rung script for an N-bit ladder DAC and write C files"
                 + " and a report.",
         sortOptions = false,

@@ -16,7 +16,8 @@ import picocli.CommandLine.Spec;
  * command, option and enum value the tool knows completes on Tab. The script is the output, printed even with
  * {@code --quiet}, like {@code --json} output elsewhere.
  */
-@Command(name = "completion", mixinStandardHelpOptions = true,
+@Command(name = "completion",
+        header = "Print a bash or zsh completion script.", mixinStandardHelpOptions = true,
         description = {"Print a completion script for bash or zsh, generated from Rungtone's own commands and",
             "options. Load it in the current shell, or save it where your shell loads completions."},
         footerHeading = "%nExamples:%n",

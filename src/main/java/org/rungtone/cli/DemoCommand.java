@@ -17,7 +17,8 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
 /** {@code rungtone demo}: builds the bundled greenhouse scenario end to end. */
-@Command(name = "demo", mixinStandardHelpOptions = true,
+@Command(name = "demo",
+        header = "Build the bundled greenhouse example end to end.", mixinStandardHelpOptions = true,
         description = {"Build the bundled example: a greenhouse controller (8-bit AVR) that plays a door chime",
             "and a looping frost alarm through a 6-bit R-2R ladder of 5 % resistors on pins D2-D7.",
             "The scenario's files are copied next to the outputs so you can change and rebuild them."},

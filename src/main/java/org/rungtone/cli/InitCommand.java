@@ -17,7 +17,8 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code rungtone init}: writes a commented starter project file. */
-@Command(name = "init", mixinStandardHelpOptions = true,
+@Command(name = "init",
+        header = "Write a commented starter project file.", mixinStandardHelpOptions = true,
         description = {"Write a commented starter project file for a target family and ladder. It asks nothing:",
             "every choice is an option, and the file explains each key so you can edit it."},
         footerHeading = "%nExample:%n",

@@ -36,7 +36,8 @@ import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 
 /** {@code rungtone ladder}: analyse or design a resistor-ladder DAC. */
-@Command(name = "ladder", mixinStandardHelpOptions = true, sortOptions = false,
+@Command(name = "ladder",
+        header = "Model a ladder: every level, linearity, Monte Carlo spread, resistor picks.", mixinStandardHelpOptions = true, sortOptions = false,
         versionProvider = Version.Provider.class,
         description = {
             "Models a resistor-ladder DAC exactly, pins, load and buffer included, and prints its wiring,"

@@ -10,9 +10,8 @@ import picocli.CommandLine.ParseResult;
 @Command(name = "rungtone",
         mixinStandardHelpOptions = true,
         versionProvider = Version.Provider.class,
-        description = {
-            "Turns sounds and waveform scripts into firmware for resistor-ladder DACs on GPIO pins,",
-            "and tells you how the result will sound on your board."},
+        description = {"Turns sounds and waveform scripts into firmware for resistor-ladder DACs on GPIO pins, "
+            + "and tells you how the result will sound on your board.", ""},
         subcommands = {
             BuildCommand.class,
             DemoCommand.class,

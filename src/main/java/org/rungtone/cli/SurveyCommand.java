@@ -47,7 +47,8 @@ import picocli.CommandLine.Spec;
 import picocli.CommandLine.TypeConversionException;
 
 /** {@code rungtone survey}: quality and flash cost of one source over bit depths × sample rates. */
-@Command(name = "survey", mixinStandardHelpOptions = true,
+@Command(name = "survey",
+        header = "Tabulate quality and flash cost over bit depths x sample rates.", mixinStandardHelpOptions = true,
         description = {"Tabulate quality and flash cost over bit depths x sample rates.",
             "Quantizes a sound at every setting and measures SINAD, in-band and A-weighted",
             "SNR and ENOB; marks the setting with the fewest flash bytes that reaches a",

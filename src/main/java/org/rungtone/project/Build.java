@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
+import java.util.OptionalLong;
 import org.rungtone.analysis.AnalogModel;
 import org.rungtone.analysis.AudioMetrics;
 import org.rungtone.analysis.QualityReport;
@@ -38,6 +39,7 @@ import org.rungtone.quantize.Quantizer;
 import org.rungtone.report.AnalysisPlots;
 import org.rungtone.report.BuildReport;
 import org.rungtone.report.BuildSummary;
+import org.rungtone.report.HtmlReport;
 import org.rungtone.report.Json;
 import org.rungtone.source.Signal;
 import org.rungtone.source.WavWriter;
@@ -128,13 +130,18 @@ public final class Build {
         watch.lap("plots");
         Path txt = plan.outDir().resolve("report.txt");
         Path json = plan.outDir().resolve("report.json");
+        Path html = plan.outDir().resolve("report.html");
         files.add(txt);
         files.add(json);
+        files.add(html);
         Map<String, Double> laps = new LinkedHashMap<>(r.stageMillis());
         laps.putAll(watch.laps());
         BuildSummary summary = summary(r, firmwareLines, flash, files, warnings, laps);
         AtomicFiles.writeString(txt, BuildReport.text(summary));
         Json.write(json, BuildReport.json(summary));
+        HtmlReport.write(html, new HtmlReport.Page(plan.symbol(), toolVersion, List.of(), List.of(summary),
+                List.of(), flash, plan.flashBudgetBytes() > 0 ? OptionalLong.of(plan.flashBudgetBytes())
+                        : OptionalLong.empty(), List.of(), Optional.empty()));
         return summary;
     }
 

@@ -34,7 +34,7 @@ class BuildCommandTest {
         assertEquals(0, r.exitCode(), r.err());
         assertEquals("", r.err());
         List<String> expected = List.of("bell.h", "bell.c", "preview.wav", "error-spectrum.png", "spectrum.png",
-                "report.txt", "report.json");
+                "report.txt", "report.json", "report.html");
         for (String f : expected) {
             assertTrue(Files.size(out.resolve(f)) > 0, f);
         }
