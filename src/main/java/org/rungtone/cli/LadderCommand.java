@@ -181,7 +181,9 @@ public final class LadderCommand implements Callable<Integer> {
         files.add(csv.toString());
         for (Plots.Chart chart : Charts.of(a, mc)) {
             Path png = out.resolve(Charts.fileName(chart));
-            Plots.write(png, chart);
+            // the transfer curve rises to the right: keep its legend out of the way
+            Plots.write(png, chart, chart.title().startsWith("Transfer") ? Plots.Legend.BOTTOM_RIGHT
+                    : Plots.Legend.TOP_RIGHT);
             files.add(png.toString());
         }
         return files;

@@ -337,8 +337,15 @@ public final class Build {
         return Optional.of(ToneAnalysis.analyze(head(volts(codes, table), reference.sampleRateHz())));
     }
 
+    /** The codes' levels in signal units: the table's span mapped onto full scale [-1, 1]. */
     private static double[] volts(Codes codes, LevelTable table) {
-        return AudioMetrics.volts(codes, table);
+        double[] v = AudioMetrics.volts(codes, table);
+        double mid = 0.5 * (table.minVolts() + table.maxVolts());
+        double half = 0.5 * (table.maxVolts() - table.minVolts());
+        for (int i = 0; i < v.length; i++) {
+            v[i] = (v[i] - mid) / half;
+        }
+        return v;
     }
 
     private static Signal head(double[] x, double rate) {

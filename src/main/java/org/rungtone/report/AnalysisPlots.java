@@ -47,14 +47,20 @@ public final class AnalysisPlots {
         double nyquist = spectrum.sampleRateHz() / 2;
         series.add(new Plots.Series(String.format(Locale.ROOT, "ideal %d-bit noise floor per bin", bits),
                 new double[] {0, nyquist}, new double[] {floorDb, floorDb}, Plots.Style.DASHED));
-        double[] hx = new double[tone.harmonics().size() + 1];
-        double[] hy = new double[hx.length];
-        hx[0] = tone.fundamentalHz();
-        hy[0] = tone.amplitudeDbfs();
-        for (int i = 0; i < tone.harmonics().size(); i++) {
-            ToneReport.Harmonic h = tone.harmonics().get(i);
-            hx[i + 1] = h.frequencyHz();
-            hy[i + 1] = Math.max(FLOOR_DB, tone.amplitudeDbfs() + h.levelDbc());
+        List<double[]> marks = new ArrayList<>();
+        marks.add(new double[] {tone.fundamentalHz(), tone.amplitudeDbfs()});
+        for (ToneReport.Harmonic h : tone.harmonics()) {
+            double level = tone.amplitudeDbfs() + h.levelDbc();
+            // a harmonic lost in the arithmetic's own floor (e.g. folded onto another one) gets no marker
+            if (level > FLOOR_DB + 20) {
+                marks.add(new double[] {h.frequencyHz(), level});
+            }
+        }
+        double[] hx = new double[marks.size()];
+        double[] hy = new double[marks.size()];
+        for (int i = 0; i < hx.length; i++) {
+            hx[i] = marks.get(i)[0];
+            hy[i] = marks.get(i)[1];
         }
         series.add(new Plots.Series("fundamental and harmonics 2..10", hx, hy, Plots.Style.MARKERS));
         String title = String.format(Locale.ROOT,
