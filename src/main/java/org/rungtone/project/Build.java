@@ -8,6 +8,8 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
 import java.util.OptionalLong;
 import org.rungtone.analysis.AnalogModel;
 import org.rungtone.analysis.AudioMetrics;
@@ -237,6 +239,11 @@ public final class Build {
             warnings.add(clipped + " samples were beyond full scale and clipped");
         }
 
+        // The preview is independent of the figures: render it on another core meanwhile.
+        final Codes emittedCodes = emitted;
+        final LevelTable playedTable = played;
+        CompletableFuture<AnalogModel.Preview> previewJob = CompletableFuture.supplyAsync(
+                () -> new AnalogModel(plan.filter(), plan.previewRateHz()).render(emittedCodes, playedTable));
         double cutoff = plan.filter().kind() == org.rungtone.analysis.ReconstructionFilter.Kind.NONE
                 ? rate / 2 : Math.min(rate / 2, plan.filter().cutoffHz());
         AudioMetrics metrics = AudioMetrics.of(reference, cutoff);
@@ -259,8 +266,7 @@ public final class Build {
                 ? Optional.of(ToneAnalysis.spectrum(head(volts(emitted, played), rate))) : Optional.empty();
         Spectrum errorSpectrum = metrics.errorSpectrum(AudioMetrics.volts(emitted, played));
         watch.lap("analyze");
-
-        AnalogModel.Preview preview = new AnalogModel(plan.filter(), plan.previewRateHz()).render(emitted, played);
+        AnalogModel.Preview preview = join(previewJob);
         watch.lap("preview");
         return new Rendered(plan, loaded.layout(), rate, conditioned, emitted, played, quality, shapingGain, tone,
                 preview, errorSpectrum, toneSpectrum, cutoff, clipped,
@@ -335,6 +341,21 @@ public final class Build {
             return Optional.empty();
         }
         return Optional.of(ToneAnalysis.analyze(head(volts(codes, table), reference.sampleRateHz())));
+    }
+
+    /** Waits for a job, passing on the user's input errors and programming errors unwrapped. */
+    static <T> T join(CompletableFuture<T> job) {
+        try {
+            return job.join();
+        } catch (CompletionException e) {
+            if (e.getCause() instanceof RuntimeException r) {
+                throw r;
+            }
+            if (e.getCause() instanceof Error err) {
+                throw err;
+            }
+            throw e;
+        }
     }
 
     /** The codes' levels in signal units: the table's span mapped onto full scale [-1, 1]. */

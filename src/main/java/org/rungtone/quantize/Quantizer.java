@@ -29,6 +29,8 @@ public final class Quantizer {
     private final long seed;
     private final double[] sortedVolts;
     private final int[] sortedCodes;
+    /** For evenly spaced levels (the ideal ladder) the nearest index is computed, not searched: the step. */
+    private final double uniformStep;
 
     /** A quantizer over the table's full span, no shaping. */
     public Quantizer(LevelTable table, Dither dither, long seed) {
@@ -64,6 +66,25 @@ public final class Quantizer {
             sortedVolts[i] = levels[order[i]];
             sortedCodes[i] = order[i];
         }
+        uniformStep = uniformStep(sortedVolts);
+    }
+
+    /** The common step when the sorted levels are evenly spaced (to 1e-9 of a step), else NaN. */
+    private static double uniformStep(double[] sorted) {
+        int n = sorted.length;
+        if (n < 2) {
+            return Double.NaN;
+        }
+        double step = (sorted[n - 1] - sorted[0]) / (n - 1);
+        if (!(step > 0)) {
+            return Double.NaN;
+        }
+        for (int i = 0; i < n; i++) {
+            if (Math.abs(sorted[i] - (sorted[0] + i * step)) > 1e-9 * step) {
+                return Double.NaN;
+            }
+        }
+        return step;
     }
 
     /** The table quantized onto. */
@@ -148,6 +169,18 @@ public final class Quantizer {
     /** Index into the sorted levels of the level nearest to {@code volts}. */
     int nearestIndex(double volts) {
         double[] s = sortedVolts;
+        if (uniformStep == uniformStep) {
+            double k = Math.rint((volts - s[0]) / uniformStep);
+            int i = k <= 0 ? 0 : k >= s.length - 1 ? s.length - 1 : (int) k;
+            // rint rounds halves to even; the search below keeps ties on the lower level: match it exactly
+            if (i > 0 && volts - s[i - 1] <= s[i] - volts) {
+                return i - 1;
+            }
+            if (i < s.length - 1 && s[i + 1] - volts < volts - s[i]) {
+                return i + 1;
+            }
+            return i;
+        }
         int lo = 0;
         int hi = s.length - 1;
         if (volts <= s[0]) {

@@ -107,4 +107,23 @@ class QuantizerTest {
         assertEquals(15, q.codes().code(1));
         assertEquals(0, q.codes().code(2));
     }
+
+    @Test
+    void evenlySpacedTablesPickTheSameLevelsAsAFullSearch() {
+        LevelTable t = LevelTable.ideal(5, 3.3);
+        Quantizer q = new Quantizer(t, Dither.NONE, 1);
+        java.util.SplittableRandom r = new java.util.SplittableRandom(5);
+        double step = 3.3 / 32;
+        for (int i = 0; i < 20_000; i++) {
+            // random volts, and every exact midpoint between two levels (ties go to the lower level)
+            double v = i < 31 ? (i + 0.5) * step : r.nextDouble(-1, 4.3);
+            int best = 0;
+            for (int c = 1; c < 32; c++) {
+                if (Math.abs(t.volts(c) - v) < Math.abs(t.volts(best) - v)) {
+                    best = c;
+                }
+            }
+            assertEquals(best, q.nearestCode(v), "volts " + v);
+        }
+    }
 }
