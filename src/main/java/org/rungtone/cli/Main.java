@@ -48,6 +48,13 @@ public final class Main implements Runnable {
 
     /** Runs the tool and exits with its exit code. */
     public static void main(String[] args) {
+        if (args.length == 1 && (args[0].equals("--version") || args[0].equals("-V"))) {
+            // Build scripts ask this often: answer before building the whole command model (lazy start).
+            for (String line : new Version.Provider().getVersion()) {
+                System.out.println(line);
+            }
+            System.exit(0);
+        }
         System.exit(newCommandLine().execute(args));
     }
 
