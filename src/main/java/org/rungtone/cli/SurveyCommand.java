@@ -28,6 +28,7 @@ import org.rungtone.internal.AtomicFiles;
 import org.rungtone.internal.Checks;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.Units;
+import org.rungtone.ladder.LadderSpec;
 import org.rungtone.ladder.LevelTable;
 import org.rungtone.project.Sources;
 import org.rungtone.quantize.Codes;
@@ -106,6 +107,9 @@ public final class SurveyCommand implements Callable<Integer> {
 
     @Mixin
     ConditioningOptions conditioning;
+
+    @Mixin
+    LadderOptions ladder;
 
     @Option(names = "--flash-budget", paramLabel = "<bytes>", converter = Converters.Bytes.class,
             description = "Flash available for the samples, e.g. 32000 or 32k.")
@@ -226,7 +230,20 @@ public final class SurveyCommand implements Callable<Integer> {
      * Without one, the ideal table with a {@value #IDEAL_FULL_SCALE_VOLTS} V reference.
      */
     IntFunction<LevelTable> levelTables() {
-        return b -> LevelTable.ideal(b, IDEAL_FULL_SCALE_VOLTS);
+        if (!ladder.given()) {
+            return b -> LevelTable.ideal(b, IDEAL_FULL_SCALE_VOLTS);
+        }
+        LadderSpec base = ladder.toSpec(0);
+        return b -> {
+            if (b != base.bits() && !base.resistors().isEmpty()) {
+                throw new InputError("the ladder lists " + base.resistors().size() + " resistors, so it can only"
+                        + " be surveyed at " + base.bits() + " bits; give base_r instead of resistors to survey"
+                        + " other depths");
+            }
+            LadderSpec s = b == base.bits() ? base : base.toBuilder().bits(b).build();
+            // one description for every depth, so the report names the ladder once
+            return s.levels().withOrigin("modelled " + s.describe().replaceFirst(" \\d+-bit", ""));
+        };
     }
 
     private SurveySpec spec(List<Integer> bits, List<Double> rates, Map<Integer, LevelTable> tables,
