@@ -116,7 +116,14 @@ public final class BuildCommand implements Callable<Integer> {
             return buildProject();
         }
         BuildPlan plan = plan();
-        BuildSummary summary = new Build(Version.get()).run(plan);
+        ProgressLine line = ProgressLine.forTerminal(spec.commandLine().getErr(), common);
+        BuildSummary summary;
+        try {
+            summary = new Build(Version.get(), stage -> line.show("building " + plan.symbol() + ": " + stage
+                    + " done")).run(plan);
+        } finally {
+            line.clear();
+        }
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
             out.print(Json.toJson(BuildReport.json(summary)));
@@ -156,7 +163,13 @@ public final class BuildCommand implements Callable<Integer> {
                 pr.hasMatchedOption("--compensation") ? Optional.of(onOff(compensation, "--compensation"))
                         : Optional.empty(),
                 board, firmware::applyGiven, firmware.wantsPlayer());
-        ProjectBuild.Result r = new ProjectBuild(Version.get()).run(project, o);
+        ProgressLine line = ProgressLine.forTerminal(spec.commandLine().getErr(), common);
+        ProjectBuild.Result r;
+        try {
+            r = new ProjectBuild(Version.get(), line::show).run(project, o);
+        } finally {
+            line.clear();
+        }
         PrintWriter w = spec.commandLine().getOut();
         ProjectReport.Input in = r.report();
         if (json) {

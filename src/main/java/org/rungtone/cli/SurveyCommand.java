@@ -409,34 +409,4 @@ public final class SurveyCommand implements Callable<Integer> {
             }
         }
     }
-
-    /** A one-line percentage on a terminal's stderr, redrawn with a carriage return; silent when off. */
-    static final class ProgressLine {
-        private final PrintWriter err;
-        private final boolean on;
-        private int width;
-
-        ProgressLine(PrintWriter err, boolean on) {
-            this.err = err;
-            this.on = on;
-        }
-
-        synchronized void show(String what, int done, int total) {
-            if (on) {
-                String line = String.format(Locale.ROOT, "%s: %d/%d (%d%%)", what, done, total,
-                        total == 0 ? 100 : 100 * done / total);
-                width = Math.max(width, line.length());
-                err.print("\r" + line);
-                err.flush();
-            }
-        }
-
-        synchronized void clear() {
-            if (on && width > 0) {
-                err.print("\r" + " ".repeat(width) + "\r");
-                err.flush();
-                width = 0;
-            }
-        }
-    }
 }

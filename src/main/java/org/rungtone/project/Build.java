@@ -62,10 +62,17 @@ public final class Build {
     private static final int TONE_SAMPLES = 1 << 16;
 
     private final String toolVersion;
+    private final java.util.function.Consumer<String> progress;
 
     /** A build that stamps {@code toolVersion} into its outputs. */
     public Build(String toolVersion) {
+        this(toolVersion, stage -> { });
+    }
+
+    /** A build that also tells {@code progress} the name of every stage it finishes ("decode", ...). */
+    public Build(String toolVersion, java.util.function.Consumer<String> progress) {
         this.toolVersion = toolVersion;
+        this.progress = progress;
     }
 
     /**
@@ -105,7 +112,7 @@ public final class Build {
     public BuildSummary run(BuildPlan plan) {
         AtomicFiles.checkFolderUsable(plan.outDir());
         Rendered r = render(plan);
-        Stopwatch watch = new Stopwatch();
+        Stopwatch watch = new Stopwatch(progress);
         List<Path> files = new ArrayList<>();
         List<String> firmwareLines = new ArrayList<>();
         List<String> warnings = new ArrayList<>(r.warnings());
@@ -205,7 +212,7 @@ public final class Build {
      * @throws InputError for anything the user can fix
      */
     public Rendered render(BuildPlan plan) {
-        Stopwatch watch = new Stopwatch();
+        Stopwatch watch = new Stopwatch(progress);
         Prepared prepared = prepare(plan, watch);
         Sources.Loaded loaded = prepared.loaded();
         double rate = prepared.rateHz();
@@ -396,12 +403,18 @@ public final class Build {
     /** Wall-clock milliseconds per stage, in order. */
     static final class Stopwatch {
         private final Map<String, Double> laps = new LinkedHashMap<>();
+        private final java.util.function.Consumer<String> listener;
         private long last = System.nanoTime();
+
+        Stopwatch(java.util.function.Consumer<String> listener) {
+            this.listener = listener;
+        }
 
         void lap(String stage) {
             long now = System.nanoTime();
             laps.merge(stage, (now - last) / 1e6, Double::sum);
             last = now;
+            listener.accept(stage);
         }
 
         Map<String, Double> laps() {

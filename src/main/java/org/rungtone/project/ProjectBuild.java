@@ -43,10 +43,17 @@ import org.tomlj.TomlTable;
  */
 public final class ProjectBuild {
     private final String toolVersion;
+    private final java.util.function.Consumer<String> progress;
 
     /** A project build stamping {@code toolVersion} into its outputs. */
     public ProjectBuild(String toolVersion) {
+        this(toolVersion, line -> { });
+    }
+
+    /** A project build that reports "sound 2/3 door_chime: decode" style lines to {@code progress}. */
+    public ProjectBuild(String toolVersion, java.util.function.Consumer<String> progress) {
         this.toolVersion = toolVersion;
+        this.progress = progress;
     }
 
     /** Resolves the board's levels from the project's [ladder] table (or none) with command-line overrides. */
@@ -141,9 +148,12 @@ public final class ProjectBuild {
         Project.Preview pv = project.preview();
         String prefix = CNames.symbol(project.name());
 
-        Build build = new Build(toolVersion);
         List<Build.Rendered> rendered = new ArrayList<>();
+        Build build = new Build(toolVersion);
         for (Project.Sound s : project.sounds()) {
+            String label = String.format(Locale.ROOT, "sound %d/%d %s", s.index(), project.sounds().size(),
+                    s.name());
+            Build soundBuild = new Build(toolVersion, stage -> progress.accept(label + ": " + stage + " done"));
             OptionalDouble rate = o.rateHz().isPresent() ? o.rateHz() : s.rateHz().isPresent() ? s.rateHz()
                     : projectRate;
             String symbol = prefix + "_" + CNames.symbol(s.name());
@@ -157,9 +167,10 @@ public final class ProjectBuild {
                 plan = plan.withBoard(board.get(), compensate);
             }
             plan = plan.withPreview(pv.filter().orElse(ReconstructionFilter.none()), pv.rateHz().orElse(44_100)).withFirmware(Optional.empty(), s.loop(), 0);
-            rendered.add(build.render(plan));
+            rendered.add(soundBuild.render(plan));
         }
 
+        progress.accept("writing firmware, previews and reports");
         List<Path> files = new ArrayList<>();
         List<String> firmwareLines = new ArrayList<>();
         List<String> warnings = new ArrayList<>();
