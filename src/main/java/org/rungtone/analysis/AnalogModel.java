@@ -42,6 +42,10 @@ public final class AnalogModel {
     private static final double PASSBAND_TOP_HZ = 20000;
     private static final double[] HOLD_CORRECTION = {1.0 / 24, 11.0 / 12, 1.0 / 24};
     private static final int CORRECTION_TERMS = 6;
+    /** Output samples per parallel chunk of the preview. */
+    private static final int CHUNK = 1 << 17;
+    /** Fine-grid samples each chunk's filter runs before its first needed input (several thousand time constants). */
+    private static final int WARMUP = 1 << 16;
 
     private final ReconstructionFilter filter;
     private final double previewRateHz;
@@ -126,11 +130,25 @@ public final class AnalogModel {
         for (int k = 0; k < normalised.length; k++) {
             normalised[k] = (table.volts(k) - 0.5 * (low + high)) / (0.5 * (high - low));
         }
-        HeldSource source = new HeldSource(codes.unsafeCodes(), normalised, factor,
-                new StepInvariantFilter(filter, 1 / fine));
         int outLength = (int) Math.floor(codes.length() * previewRateHz / fs);
         // A held fine sample stands for the average over its step, centred half a step late.
-        double[] out = resampler.resample(source, outLength, raw ? -0.5 : 0);
+        double offset = raw ? -0.5 : 0;
+        double[] out = new double[outLength];
+        double ratio = fine / previewRateHz;
+        int[] c = codes.unsafeCodes();
+        int chunks = (outLength + CHUNK - 1) / CHUNK;
+        // Fixed-size chunks in parallel. Each chunk after the first starts its own filter WARMUP fine samples
+        // early, so the filter state it reaches equals the sequential one to far below double precision; the
+        // result does not depend on the number of cores.
+        java.util.stream.IntStream.range(0, chunks).parallel().forEach(k -> {
+            int from = k * CHUNK;
+            int to = Math.min(outLength, from + CHUNK);
+            long start = k == 0 ? -resampler.half() - 1
+                    : (long) Math.floor(from * ratio + offset) - resampler.half() + 1 - WARMUP;
+            HeldSource source = new HeldSource(c, normalised, factor, new StepInvariantFilter(filter, 1 / fine),
+                    start);
+            resampler.resampleInto(source, start, from, to, offset, out);
+        });
         double peak = 0;
         for (double v : out) {
             peak = Math.max(peak, Math.abs(v));
@@ -211,11 +229,12 @@ public final class AnalogModel {
         private long next;
         private double[] held = new double[0];
 
-        HeldSource(int[] codes, double[] level, int factor, StepInvariantFilter filter) {
+        HeldSource(int[] codes, double[] level, int factor, StepInvariantFilter filter, long start) {
             this.codes = codes;
             this.level = level;
             this.factor = factor;
             this.filter = filter;
+            this.next = start;
         }
 
         @Override
@@ -224,8 +243,8 @@ public final class AnalogModel {
                 held = new double[count];
             }
             for (int k = 0; k < count; k++) {
-                long code = (next + k) / factor;
-                held[k] = code < codes.length ? level[codes[(int) code]] : 0;
+                long code = Math.floorDiv(next + k, factor);
+                held[k] = code >= 0 && code < codes.length ? level[codes[(int) code]] : 0;
             }
             next += count;
             filter.process(held, dst, offset, count);

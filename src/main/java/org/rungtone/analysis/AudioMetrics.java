@@ -134,8 +134,27 @@ public final class AudioMetrics {
      * @throws IllegalArgumentException when the length differs from the reference's
      */
     public QualityReport measure(String label, double[] output) {
+        return measureWithSpectrum(label, output).report();
+    }
+
+    /**
+     * The figures and the error's Welch spectrum of one output, computed once.
+     *
+     * @param report the quality figures
+     * @param errorSpectrum the aligned error's spectrum (null when the error is zero)
+     */
+    public record Measured(QualityReport report, Spectrum errorSpectrum) {
+    }
+
+    /**
+     * Measures output samples and keeps the error spectrum for plots (no second alignment or transform).
+     *
+     * @throws IllegalArgumentException when the length differs from the reference's
+     */
+    public Measured measureWithSpectrum(String label, double[] output) {
         Alignment a = align(output);
         double[] e = a.error();
+        Spectrum s = null;
         double pr = referenceSumSquares / e.length;
         double pe = 0;
         for (double v : e) {
@@ -145,7 +164,7 @@ public final class AudioMetrics {
         double inBandError;
         double weightedError;
         if (pe > 0 && Double.isFinite(pe)) {
-            Spectrum s = spectrum(e, reference.sampleRateHz());
+            s = spectrum(e, reference.sampleRateHz());
             double total = s.totalPower();
             inBandError = pe * s.bandPower(0, inBandCutoffHz) / total;
             weightedError = pe * s.weightedPower(AWeighting::powerGain) / total;
@@ -154,9 +173,9 @@ public final class AudioMetrics {
             weightedError = pe;
         }
         double errorDbfs = db(pe / 0.5);
-        return new QualityReport(label, reference.sampleRateHz(), e.length, inBandCutoffHz, db(pr / 0.5),
-                db(pr / pe), db(pr * referenceInBandFraction / inBandError), db(pr / weightedError),
-                (-errorDbfs - 1.76) / 6.02, errorDbfs, a.gain(), a.offset());
+        return new Measured(new QualityReport(label, reference.sampleRateHz(), e.length, inBandCutoffHz,
+                db(pr / 0.5), db(pr / pe), db(pr * referenceInBandFraction / inBandError), db(pr / weightedError),
+                (-errorDbfs - 1.76) / 6.02, errorDbfs, a.gain(), a.offset()), s);
     }
 
     /**

@@ -89,16 +89,30 @@ final class SincResampler {
         return sum;
     }
 
+    /** Half the kernel length in input samples: an output at input time c reads inputs c − half + 1 .. c + half. */
+    int half() {
+        return half;
+    }
+
     /** Produces {@code outputLength} samples from {@code source}, starting at input position {@code offset}. */
     double[] resample(Source source, int outputLength, double offset) {
-        int taps = 2 * half;
         double[] out = new double[outputLength];
+        resampleInto(source, -half - 1, 0, outputLength, offset, out);
+        return out;
+    }
+
+    /**
+     * Computes outputs {@code from} (inclusive) to {@code to} (exclusive) into {@code out}. The source's next
+     * sample is input index {@code sourceStart}; inputs it is asked for before the first one needed are read
+     * and dropped (a filter inside the source settles on them), and it must return zeros for negative indices.
+     */
+    void resampleInto(Source source, long sourceStart, int from, int to, double offset, double[] out) {
+        int taps = 2 * half;
         int capacity = Math.max(1 << 16, 4 * taps);
         double[] buf = new double[capacity];
-        // buf[0] holds input index bufStart; the first 'half' slots before index 0 are zeros.
-        long bufStart = -half - 1;
-        int filled = half + 1;
-        for (int j = 0; j < outputLength; j++) {
+        long bufStart = sourceStart;
+        int filled = 0;
+        for (int j = from; j < to; j++) {
             double c = j * ratio + offset;
             long i0 = (long) Math.floor(c);
             double frac = c - i0;
@@ -133,6 +147,5 @@ final class SincResampler {
             }
             out[j] = acc0 + w * (acc1 - acc0);
         }
-        return out;
     }
 }

@@ -72,6 +72,9 @@ public final class Spectrum {
         return new Spectrum(sampleRateHz, fftLength, n, window, fftLength * sw2 / (sw * sw), p);
     }
 
+    /** Welch segments are summed in this many groups (fixed, so results do not depend on core count). */
+    private static final int WELCH_GROUPS = 8;
+
     /**
      * Welch's averaged spectrum over half-overlapping segments of {@code segmentLength} samples (a power of
      * two); a signal shorter than one segment is analysed whole, zero-padded to the segment length. The last
@@ -94,16 +97,29 @@ public final class Spectrum {
         }
         int hop = segmentLength / 2;
         int segments = 1 + (samples.length - segmentLength) / hop;
-        double[] p = new double[segmentLength / 2 + 1];
-        double[][] ri = new double[2][segmentLength];
         double scale = 1.0 / (segmentLength * sw2 * segments);
-        for (int s = 0; s < segments; s++) {
-            int start = s * hop;
-            for (int i = 0; i < segmentLength; i++) {
-                ri[0][i] = samples[start + i] * w[i];
-                ri[1][i] = 0;
+        // Segments are summed in a fixed number of groups, in parallel, then the groups in order: the result
+        // does not depend on how many cores there are.
+        int groups = Math.min(WELCH_GROUPS, segments);
+        double[][] partial = new double[groups][];
+        java.util.stream.IntStream.range(0, groups).parallel().forEach(g -> {
+            double[] acc = new double[segmentLength / 2 + 1];
+            double[][] ri = new double[2][segmentLength];
+            for (int s = g * segments / groups; s < (g + 1) * segments / groups; s++) {
+                int start = s * hop;
+                for (int i = 0; i < segmentLength; i++) {
+                    ri[0][i] = samples[start + i] * w[i];
+                    ri[1][i] = 0;
+                }
+                accumulate(ri, acc, scale);
             }
-            accumulate(ri, p, scale);
+            partial[g] = acc;
+        });
+        double[] p = new double[segmentLength / 2 + 1];
+        for (double[] acc : partial) {
+            for (int k = 0; k < p.length; k++) {
+                p[k] += acc[k];
+            }
         }
         return new Spectrum(sampleRateHz, segmentLength, segmentLength, window, segmentLength * sw2 / (sw * sw),
                 p);

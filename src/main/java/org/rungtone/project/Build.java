@@ -60,6 +60,7 @@ public final class Build {
     /** A reference whose 4-parameter sine fit leaves less than this residual (dB) counts as a single tone. */
     private static final double TONE_THRESHOLD_DB = 40;
     private static final int TONE_SAMPLES = 1 << 16;
+    private static final int TONE_PROBE = 1 << 13;
 
     private final String toolVersion;
     private final java.util.function.Consumer<String> progress;
@@ -255,10 +256,26 @@ public final class Build {
                 ? rate / 2 : Math.min(rate / 2, plan.filter().cutoffHz());
         AudioMetrics metrics = AudioMetrics.of(reference, cutoff);
         List<QualityReport> quality = new ArrayList<>();
-        quality.add(metrics.measure("ideal ladder", idealQ.codes(), ideal));
-        if (plan.board().isPresent()) {
-            quality.add(metrics.measure("board, plain codes", idealQ.codes(), played));
-            compensated.ifPresent(c -> quality.add(metrics.measure("board, compensated", c, plan.board().get())));
+        Spectrum errorSpectrum;
+        if (plan.board().isEmpty()) {
+            AudioMetrics.Measured m = metrics.measureWithSpectrum("ideal ladder", volts(idealQ.codes(), ideal));
+            quality.add(m.report());
+            errorSpectrum = m.errorSpectrum();
+        } else {
+            quality.add(metrics.measure("ideal ladder", idealQ.codes(), ideal));
+            AudioMetrics.Measured plain = metrics.measureWithSpectrum("board, plain codes",
+                    AudioMetrics.volts(idealQ.codes(), played));
+            quality.add(plain.report());
+            errorSpectrum = plain.errorSpectrum();
+            if (compensated.isPresent()) {
+                AudioMetrics.Measured comp = metrics.measureWithSpectrum("board, compensated",
+                        AudioMetrics.volts(compensated.get(), played));
+                quality.add(comp.report());
+                errorSpectrum = comp.errorSpectrum();
+            }
+        }
+        if (errorSpectrum == null) {
+            errorSpectrum = metrics.errorSpectrum(AudioMetrics.volts(emitted, played));
         }
         QualityReport emittedQuality = quality.get(quality.size() - 1);
         Optional<Double> shapingGain = Optional.empty();
@@ -271,7 +288,6 @@ public final class Build {
         Optional<ToneReport> tone = toneOf(reference, emitted, played);
         Optional<Spectrum> toneSpectrum = tone.isPresent()
                 ? Optional.of(ToneAnalysis.spectrum(head(volts(emitted, played), rate))) : Optional.empty();
-        Spectrum errorSpectrum = metrics.errorSpectrum(AudioMetrics.volts(emitted, played));
         watch.lap("analyze");
         AnalogModel.Preview preview = join(previewJob);
         watch.lap("preview");
@@ -334,13 +350,14 @@ public final class Build {
 
     /** Single-tone figures when the reference is essentially one sine (IEEE Std 1241 sine fit). */
     private static Optional<ToneReport> toneOf(Signal reference, Codes codes, LevelTable table) {
-        Signal ref = head(reference.unsafeSamples(), reference.sampleRateHz());
-        if (ref.length() < 256) {
+        // A quick look at the first 8192 samples decides; only a tone pays for the full analysis.
+        double[] probe = Arrays.copyOf(reference.unsafeSamples(), Math.min(reference.length(), TONE_PROBE));
+        if (probe.length < 256) {
             return Optional.empty();
         }
         SineFit.Result fit;
         try {
-            fit = SineFit.fit(ref.unsafeSamples(), ref.sampleRateHz());
+            fit = SineFit.fit(probe, reference.sampleRateHz());
         } catch (RuntimeException e) {
             return Optional.empty();
         }
