@@ -183,9 +183,21 @@ public final class MeasurementCsv {
             return out;
         }
 
+        /**
+         * The line a record starts on. Commons CSV reports the position where it began reading the record,
+         * before the blank and comment lines it skipped; those are skipped here too.
+         */
         private int lineOf(long charPosition) {
             int i = Arrays.binarySearch(lineStarts, (int) Math.min(Integer.MAX_VALUE, charPosition));
-            return (i >= 0 ? i : -i - 2) + 1;
+            int line = i >= 0 ? i : -i - 2;
+            while (line + 1 < lineStarts.length) {
+                String content = text.substring(lineStarts[line], lineStarts[line + 1]).trim();
+                if (!content.isEmpty() && !content.startsWith("#")) {
+                    break;
+                }
+                line++;
+            }
+            return line + 1;
         }
 
         private InputError error(int line, String detail) {
