@@ -87,8 +87,11 @@ public final class MeasurementPlan {
     /** Every code, in ascending order. */
     public static MeasurementPlan everyCode(LevelTable expected) {
         List<PlannedCode> list = new ArrayList<>();
-        for (int k = 0; k < expected.size(); k++) {
-            list.add(new PlannedCode(k, PlannedCode.Role.EVERY, expected.volts(k)));
+        int top = expected.size() - 1;
+        for (int k = 0; k <= top; k++) {
+            PlannedCode.Role role = k == 0 ? PlannedCode.Role.ZERO : k == top ? PlannedCode.Role.FULL
+                    : Integer.bitCount(k) == 1 ? PlannedCode.Role.BIT : PlannedCode.Role.EVERY;
+            list.add(new PlannedCode(k, role, expected.volts(k)));
         }
         return new MeasurementPlan(expected, list, true);
     }

@@ -18,8 +18,8 @@ public record PlannedCode(int code, Role role, double expectedVolts) {
         BIT("one bit"),
         /** A further code that checks the fit (and feeds the switched-load model). */
         VERIFY("check"),
-        /** Part of a plan that measures every code. */
-        EVERY("every code");
+        /** Any other code of a plan that measures every code. */
+        EVERY("");
 
         private final String label;
 

@@ -2,12 +2,12 @@ package org.rungtone.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Locale;
-import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
+import org.rungtone.calibrate.OutputSpan;
 import org.rungtone.firmware.CNames;
-import org.rungtone.ladder.LadderSpec;
 import org.rungtone.project.Build;
 import org.rungtone.project.BuildPlan;
 import org.rungtone.quantize.Dither;
@@ -124,6 +124,14 @@ public final class BuildCommand implements Callable<Integer> {
     String compensation;
 
     @Mixin
+    UnitOptions unit;
+
+    @Option(names = "--span", paramLabel = "full|nominal", defaultValue = "full",
+            description = "With compensation: map full scale onto everything the board reaches (full, default)"
+                    + " or onto the ideal ladder's span, for the same amplitude in volts on every board.")
+    String span;
+
+    @Mixin
     FirmwareOptions firmware;
 
     @Mixin
@@ -132,10 +140,18 @@ public final class BuildCommand implements Callable<Integer> {
     @Option(names = "--json", description = "Print the report as JSON instead of text.")
     boolean json;
 
+    private List<String> boardWarnings = List.of();
+
     @Override
     public Integer call() {
+        OutputSpan outputSpan = OutputSpan.parse(span);
         BuildPlan plan = plan();
-        BuildSummary summary = new Build(Version.get()).run(plan);
+        if (!common.quiet) {
+            for (String w : boardWarnings) {
+                spec.commandLine().getErr().println("rungtone: warning: " + w);
+            }
+        }
+        BuildSummary summary = new Build(Version.get(), outputSpan).run(plan);
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
             out.print(Json.toJson(BuildReport.json(summary)));
@@ -157,16 +173,16 @@ public final class BuildCommand implements Callable<Integer> {
                 : OptionalDouble.empty();
         OptionalDouble norm = gain.isPresent() ? OptionalDouble.empty()
                 : OptionalDouble.of(level != null && level.normalizeDbfs != null ? level.normalizeDbfs : -1.0);
-        Optional<LadderSpec> spec = ladder.specIfGiven(bits == null ? 0 : bits);
-        int effectiveBits = bits != null ? bits : spec.map(LadderSpec::bits).orElse(8);
+        UnitOptions.Board board = unit.resolve(bits == null ? 0 : bits, ladder, false);
+        boardWarnings = board.warnings();
+        int effectiveBits = bits != null ? bits : board.bits(8);
         BuildPlan plan = new BuildPlan(source, channel, symbol, outDir, effectiveBits,
                 rateHz == null ? OptionalDouble.empty() : OptionalDouble.of(rateHz), dither,
                 errorFilter(shaping), seed, !keepDc,
                 trimDbfs == null ? OptionalDouble.empty() : OptionalDouble.of(trimDbfs), gain, norm, fadeIn,
                 fadeOut, resampler.toLowerCase(Locale.ROOT), fullScale, flashAttr);
-        if (spec.isPresent()) {
-            plan = plan.withBoard(spec.get().levels().withOrigin("modelled " + spec.get().describe()),
-                    onOff(compensation, "--compensation"));
+        if (board.levels().isPresent()) {
+            plan = plan.withBoard(board.levels().get(), onOff(compensation, "--compensation"));
         }
         return plan.withFirmware(firmware.request(), firmware.loopSpan(), firmware.flashBudgetBytes())
                 .withPreview(preview.filter(plan.rateHz().orElse(BuildPlan.DEFAULT_RATE_HZ)),

@@ -15,6 +15,7 @@ import picocli.CommandLine.ParseResult;
             "and tells you how the result will sound on your board."},
         subcommands = {
             BuildCommand.class,
+            CalibrateCommand.class,
             DemoCommand.class,
             LadderCommand.class,
             CommandLine.HelpCommand.class},

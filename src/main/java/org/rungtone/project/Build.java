@@ -14,6 +14,7 @@ import org.rungtone.analysis.QualityReport;
 import org.rungtone.analysis.SineFit;
 import org.rungtone.analysis.ToneAnalysis;
 import org.rungtone.analysis.ToneReport;
+import org.rungtone.calibrate.OutputSpan;
 import org.rungtone.condition.Conditioner;
 import org.rungtone.condition.Conditioning;
 import org.rungtone.condition.KaiserResampler;
@@ -56,10 +57,17 @@ public final class Build {
     private static final int TONE_SAMPLES = 1 << 16;
 
     private final String toolVersion;
+    private final OutputSpan span;
 
-    /** A build that stamps {@code toolVersion} into its outputs. */
+    /** A build that stamps {@code toolVersion} into its outputs; compensation uses the board's full span. */
     public Build(String toolVersion) {
+        this(toolVersion, OutputSpan.FULL);
+    }
+
+    /** A build whose compensated quantization maps full scale onto {@code span} of the board's levels. */
+    public Build(String toolVersion, OutputSpan span) {
         this.toolVersion = toolVersion;
+        this.span = span;
     }
 
     /**
@@ -88,11 +96,15 @@ public final class Build {
         LevelTable played = ideal;
         long clipped = idealQ.clippedSamples();
         Optional<Codes> compensated = Optional.empty();
+        double[] range = {ideal.minVolts(), ideal.maxVolts()};
         if (plan.board().isPresent()) {
             LevelTable board = plan.board().get();
             played = board;
+            range = new double[] {board.minVolts(), board.maxVolts()};
             if (plan.compensate()) {
-                Quantizer.Quantized q = quantizer(board, plan).apply(reference);
+                range = span.volts(board, ideal);
+                Quantizer.Quantized q = new Quantizer(board, range[0], range[1], plan.dither(), plan.shaping(),
+                        plan.seed()).apply(reference);
                 compensated = Optional.of(q.codes());
                 emitted = q.codes();
                 clipped = q.clippedSamples();
@@ -115,8 +127,7 @@ public final class Build {
         QualityReport emittedQuality = quality.get(quality.size() - 1);
         Optional<Double> shapingGain = Optional.empty();
         if (plan.shaping().order() > 0) {
-            Quantizer flat = new Quantizer(played, played.minVolts(), played.maxVolts(), plan.dither(),
-                    ErrorFilter.NONE, plan.seed());
+            Quantizer flat = new Quantizer(played, range[0], range[1], plan.dither(), ErrorFilter.NONE, plan.seed());
             double flatInBand = metrics.measure("flat", flat.apply(reference).codes(), played).inBandSnrDb();
             shapingGain = Optional.of(emittedQuality.inBandSnrDb() - flatInBand);
         }
@@ -127,7 +138,7 @@ public final class Build {
         AnalogModel.Preview preview = model.render(emitted, played);
         watch.lap("preview");
 
-        List<String> settings = settings(plan, loaded, conditioned, played, rate);
+        List<String> settings = settings(plan, loaded, conditioned, played, rate, range);
         List<Path> files = new ArrayList<>();
         List<String> firmwareLines = new ArrayList<>();
         long flash;
@@ -225,8 +236,8 @@ public final class Build {
         return new Quantizer(table, table.minVolts(), table.maxVolts(), plan.dither(), plan.shaping(), plan.seed());
     }
 
-    private static List<String> settings(BuildPlan plan, Sources.Loaded loaded, Conditioner.Conditioned c,
-            LevelTable played, double rate) {
+    private List<String> settings(BuildPlan plan, Sources.Loaded loaded, Conditioner.Conditioned c,
+            LevelTable played, double rate, double[] range) {
         return List.of(
                 "name: " + plan.symbol(),
                 "source: " + plan.source().getFileName() + " (" + loaded.layout() + ")",
@@ -236,7 +247,13 @@ public final class Build {
                         + plan.seed(),
                 "levels: " + played.origin() + ", " + Units.format(played.minVolts(), "V") + " .. "
                         + Units.format(played.maxVolts(), "V")
-                        + (plan.board().isPresent() ? (plan.compensate() ? ", compensated" : ", plain codes") : ""));
+                        + (plan.board().isPresent() ? (plan.compensate() ? ", compensated" + spanNote(range)
+                                : ", plain codes") : ""));
+    }
+
+    private String spanNote(double[] range) {
+        return span == OutputSpan.FULL ? "" : ", span " + span.key() + " " + Units.format(range[0], "V") + " .. "
+                + Units.format(range[1], "V");
     }
 
     /** Single-tone figures when the reference is essentially one sine (IEEE Std 1241 sine fit). */
