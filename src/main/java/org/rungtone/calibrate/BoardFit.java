@@ -285,7 +285,8 @@ public final class BoardFit {
                     + " still determined by the " + residuals.size() + " codes that were read");
         }
         if (!outliers.isEmpty()) {
-            warnings.add("left out as outliers (mistyped, or measured at another code?): codes " + list(outliers)
+            warnings.add("left out as outlier" + (outliers.size() == 1 ? " (mistyped, or measured at another"
+                    + " code?): code " : "s (mistyped, or measured at other codes?): codes ") + list(outliers)
                     + (table.replaced > 0 ? "; the table takes the model's level for them" : "")
                     + "; measure them again to be sure");
         }
@@ -299,8 +300,8 @@ public final class BoardFit {
             }
         }
         if (!suspects.isEmpty()) {
-            warnings.add("codes " + list(suspects) + " do not fit but no other reading can replace them; measure"
-                    + " them again");
+            warnings.add((suspects.size() == 1 ? "code " + list(suspects) + " does" : "codes " + list(suspects)
+                    + " do") + " not fit, but no other reading can stand in for it; measure again");
         }
         if (unchecked == residuals.size()) {
             warnings.add("no reading checks another (as many parameters as codes): a typo would go unnoticed;"

@@ -179,9 +179,9 @@ public final class MeasurementPlan {
         StringBuilder sb = new StringBuilder();
         CSVFormat format = CSVFormat.DEFAULT.builder().setRecordSeparator("\n").setCommentMarker('#')
                 .setHeaderComments("Rungtone measurement plan, " + bits() + "-bit ladder, " + codes.size()
-                        + " codes. Put each code on the pins, read the output with a DC voltmeter and",
-                        "write the reading in the measured column: 2.613, 2.613 V or 612mV ('.' is the decimal"
-                        + " point). Add a row with the same code for every extra reading of it.")
+                        + " codes. Put each code on the pins, read the output",
+                        "with a DC voltmeter and write the reading in the measured column: 2.613, 2.613 V or",
+                        "612mV ('.' is the decimal point). Add a row with the same code for each extra reading.")
                 .setHeader("code", "binary", "expected_volts", "measured").build();
         try (CSVPrinter p = new CSVPrinter(sb, format)) {
             for (int i = 0; i < codes.size(); i++) {

@@ -218,7 +218,7 @@ public final class CalibrateFitCommand implements Callable<Integer> {
     private static void bits(StringBuilder b, FitReport fit, Optional<LadderSpec> s) {
         BoardModel m = fit.chosen();
         boolean load = m instanceof SwitchedLoad;
-        line(b, "Bits (%s): offset %s%s", m.key(), v(m.offsetVolts()), load ? "" : String.format(Locale.ROOT,
+        line(b, "Bits (%s): offset %s%s", m.key(), mv(m.offsetVolts()), load ? "" : String.format(Locale.ROOT,
                 " ± %s", mv(fit.parameterSigmas().get(0))));
         TextTable t = load ? new TextTable("bit", "step alone", "load term", "model expected")
                 : new TextTable("bit", "step", "± 1 sigma", "model expected");
@@ -331,7 +331,8 @@ public final class CalibrateFitCommand implements Callable<Integer> {
     }
 
     private static String mv(double volts) {
-        return String.format(Locale.ROOT, "%.3f mV", 1000 * volts);
+        // below half the last digit: print 0.000 rather than -0.000
+        return String.format(Locale.ROOT, "%.3f mV", Math.abs(volts) < 5e-7 ? 0.0 : 1000 * volts);
     }
 
     private static String v(double volts) {
