@@ -2,6 +2,7 @@ package org.rungtone.calibrate;
 
 import java.util.Locale;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.Units;
 import org.rungtone.ladder.LevelTable;
 
 /**
@@ -49,9 +50,10 @@ public enum OutputSpan {
         double low = Math.max(ideal.minVolts(), board.minVolts());
         double high = Math.min(ideal.maxVolts(), board.maxVolts());
         if (!(high > low)) {
-            throw new InputError(String.format(Locale.ROOT, "--span nominal: the board's levels (%.4g .. %.4g V) do"
-                    + " not overlap the ideal span (%.4g .. %.4g V); use --span full", board.minVolts(),
-                    board.maxVolts(), ideal.minVolts(), ideal.maxVolts()));
+            throw new InputError("--span nominal: the board's levels (" + Units.format(board.minVolts(), "V")
+                    + " .. " + Units.format(board.maxVolts(), "V") + ") do not overlap the ideal span ("
+                    + Units.format(ideal.minVolts(), "V") + " .. " + Units.format(ideal.maxVolts(), "V")
+                    + "); use --span full");
         }
         return new double[] {low, high};
     }
