@@ -287,8 +287,9 @@ public final class BoardFit {
         if (!outliers.isEmpty()) {
             warnings.add("left out as outlier" + (outliers.size() == 1 ? " (mistyped, or measured at another"
                     + " code?): code " : "s (mistyped, or measured at other codes?): codes ") + list(outliers)
-                    + (table.replaced > 0 ? "; the table takes the model's level for them" : "")
-                    + "; measure them again to be sure");
+                    + (table.replaced > 0 ? "; the table takes the model's level for " + (outliers.size() == 1
+                            ? "it" : "them") : "")
+                    + "; measure " + (outliers.size() == 1 ? "it" : "them") + " again to be sure");
         }
         List<Integer> suspects = new ArrayList<>();
         int unchecked = 0;

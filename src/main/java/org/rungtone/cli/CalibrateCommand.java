@@ -25,15 +25,19 @@ import picocli.CommandLine.Spec;
 
 /** {@code rungtone calibrate}: measure a built board and fit a unit profile of it. */
 @Command(name = "calibrate", mixinStandardHelpOptions = true,
-        description = {"Measures a built ladder and makes it sound like a better one: 'plan' says what to",
-            "measure (and writes a sweep program), 'fit' turns the readings into a unit profile that",
-            "'build --unit' quantizes onto, 'simulate' makes readings of a drawn board for trying it out."},
+        description = {"Measure a built ladder and fit a profile of it.",
+            "'plan' says what to measure and writes a sweep program; 'fit' turns the readings into a unit"
+                + " profile that 'build --unit' quantizes onto; 'simulate' makes readings of a drawn board to try"
+                + " it out."},
         subcommands = {CalibratePlanCommand.class, CalibrateFitCommand.class, CalibrateCommand.Simulate.class},
         footerHeading = "%nExample, the whole loop:%n",
-        footer = {"  rungtone calibrate plan --ladder board.toml --target avr --pins D2-D7 --cpu-clock 16MHz",
-            "  (measure, fill in rungtone-out/calibration/plan.csv)",
-            "  rungtone calibrate fit rungtone-out/calibration/plan.csv --ladder board.toml --board unit-1",
-            "  rungtone build chime.wav --unit rungtone-out/calibration/unit-1.unit.toml"})
+        footer = {"  rungtone calibrate plan --ladder board.toml --target avr --pins D2-D7 \\",
+            "      --cpu-clock 16MHz --button B0",
+            "  (measure; fill in rungtone-out/calibration/plan.csv)",
+            "  rungtone calibrate fit rungtone-out/calibration/plan.csv \\",
+            "      --ladder board.toml --board unit-1",
+            "  rungtone build chime.wav \\",
+            "      --unit rungtone-out/calibration/unit-1.unit.toml"})
 public final class CalibrateCommand implements Runnable {
     @Spec
     CommandSpec spec;
@@ -45,13 +49,15 @@ public final class CalibrateCommand implements Runnable {
 
     /** {@code rungtone calibrate simulate}: readings of a board drawn from the ladder's tolerance. */
     @Command(name = "simulate", mixinStandardHelpOptions = true, sortOptions = false,
-            description = {"Draws one board from the ladder description (resistors uniform within the",
-                "tolerance), reads it at the plan's codes with a meter's noise and step, and writes the",
-                "filled-in plan (readings.csv) and the board's true levels (true-levels.csv)."},
+            description = {"Make readings of a board drawn from the ladder's tolerance.",
+                "Draws one board from the ladder description (resistors uniform within the tolerance), reads it"
+                    + " at the plan's codes with a meter's noise and step, and writes the filled-in plan"
+                    + " (readings.csv) and the board's true levels (true-levels.csv)."},
             footerHeading = "%nExample:%n",
-            footer = {"  rungtone calibrate simulate --topology r2r --bits 6 --tolerance 5% --seed 7",
-                "  rungtone calibrate fit rungtone-out/calibration/readings.csv --topology r2r \\",
-                "      --bits 6 --tolerance 5% --board simulated-7 --date 2026-05-01"})
+            footer = {"  rungtone calibrate simulate --topology r2r --bits 6 --tolerance 5%% \\",
+                "      --seed 7",
+                "  rungtone calibrate fit rungtone-out/calibration/readings.csv \\",
+                "      --topology r2r --bits 6 --tolerance 5%% --board simulated-7"})
     static final class Simulate implements Callable<Integer> {
         @Spec
         CommandSpec spec;

@@ -39,13 +39,15 @@ import picocli.CommandLine.Spec;
 
 /** {@code rungtone calibrate fit}: readings of a built board to a unit profile. */
 @Command(name = "fit", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Reads the filled-in plan (or any CSV of code, volts), fits the board by least squares",
-            "(offset plus a step per bit; a switched-load model when the pins' high and low resistances",
-            "differ enough to show), leaves out readings that do not fit and names them, and writes a unit",
-            "profile with every code's level for 'build --unit'."},
+        description = {"Fit a board's readings and write its unit profile.",
+            "Reads the filled-in plan (or any CSV of code, volts), fits the board by least squares (an offset"
+                + " plus a step per bit; a switched-load model when the pins' high and low resistances differ"
+                + " enough to show), leaves out readings that do not fit and names them, and writes a unit"
+                + " profile with every code's level for 'build --unit'."},
         footerHeading = "%nExample:%n",
         footer = {"  rungtone calibrate fit greenhouse-cal/plan.csv --board greenhouse-1 \\",
-            "      --ladder examples/calibration/greenhouse-r2r.toml --date 2026-05-01 --out greenhouse-cal",
+            "      --ladder examples/calibration/greenhouse-r2r.toml \\",
+            "      --date 2026-05-01 --out greenhouse-cal",
             "  (writes greenhouse-cal/greenhouse-1.unit.toml and fit-residuals.csv)"})
 public final class CalibrateFitCommand implements Callable<Integer> {
     @Spec
@@ -171,10 +173,10 @@ public final class CalibrateFitCommand implements Callable<Integer> {
         line(b, "Fit of %s: %d reading%s of %d codes, %d-bit board%s", fit.source(), readings,
                 readings == 1 ? "" : "s", fit.codesMeasured(), fit.bits(), s.map(x -> " (" + x.describe() + ")")
                         .orElse(""));
-        line(b, "  meter step %s (%s); repeat spread %s; so nothing below %s rms is resolved",
-                fit.resolutionVolts() > 0 ? mv(fit.resolutionVolts()) : "unknown", resolutionGiven ? "given"
-                        : "from the readings' last digits", fit.repeatSpreadVolts() > 0
-                        ? mv(fit.repeatSpreadVolts()) + " rms" : "none (no code read twice)", mv(fit.floorVolts()));
+        line(b, "  meter step %s (%s); repeat spread %s", fit.resolutionVolts() > 0 ? mv(fit.resolutionVolts())
+                : "unknown", resolutionGiven ? "given" : "from the readings' last digits", fit.repeatSpreadVolts() > 0
+                        ? mv(fit.repeatSpreadVolts()) + " rms" : "none (no code read twice)");
+        line(b, "  so the readings resolve nothing below %s rms", mv(fit.floorVolts()));
         line(b, "");
         line(b, "Models");
         TextTable t = new TextTable("model", "parameters", "codes kept", "rms residual", "largest", "left out");
@@ -191,7 +193,7 @@ public final class CalibrateFitCommand implements Callable<Integer> {
         if (!fit.switchedLoad().fitted()) {
             line(b, "  switched-load: %s", fit.switchedLoad().note());
         }
-        line(b, "  chosen: %s", fit.reason());
+        wrap(b, "  chosen: ", fit.reason());
         line(b, "");
         bits(b, fit, s);
         line(b, "");
@@ -206,7 +208,7 @@ public final class CalibrateFitCommand implements Callable<Integer> {
             line(b, "");
             line(b, "Warnings");
             for (String w : fit.warnings()) {
-                line(b, "  ! %s", w);
+                wrap(b, "  ! ", w);
             }
         }
         line(b, "");
@@ -316,6 +318,23 @@ public final class CalibrateFitCommand implements Callable<Integer> {
         root.put("warnings", fit.warnings());
         root.put("files", files);
         return root;
+    }
+
+    /** Writes {@code text} after {@code first}, wrapped at 100 columns, continued under its first word. */
+    private static void wrap(StringBuilder b, String first, String text) {
+        String indent = " ".repeat(first.length());
+        StringBuilder l = new StringBuilder(first);
+        for (String word : text.split(" ")) {
+            if (l.length() + 1 + word.length() > 100 && l.length() > first.length()) {
+                b.append(l.toString().stripTrailing()).append('\n');
+                l = new StringBuilder(indent);
+            }
+            if (l.length() > indent.length()) {
+                l.append(' ');
+            }
+            l.append(word);
+        }
+        b.append(l.toString().stripTrailing()).append('\n');
     }
 
     private static void line(StringBuilder b, String format, Object... args) {

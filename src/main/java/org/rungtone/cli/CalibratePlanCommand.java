@@ -32,14 +32,17 @@ import picocli.CommandLine.Spec;
 
 /** {@code rungtone calibrate plan}: what to measure on a built board, as a checklist, a CSV and a sweep program. */
 @Command(name = "plan", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Chooses the codes to measure on your built ladder (every code up to 6 bits; else all",
-            "bits low, all high, each bit alone and spread-out check codes), prints a checklist with the level",
-            "the model expects for each and how to measure it, writes plan.csv to fill in, and with --pins a",
-            "sweep program that puts each code on the pins in turn."},
+        description = {"Say what to measure on a built board; write plan.csv and a sweep program.",
+            "Chooses the codes to measure (every code up to 6 bits; else all bits low, all high, each bit alone"
+                + " and check codes spread over the range), prints a checklist with the level the model expects"
+                + " for each and how to measure it, writes plan.csv to fill in, and with --pins a sweep program"
+                + " that puts each code on the pins in turn."},
         footerHeading = "%nExample:%n",
-        footer = {"  rungtone calibrate plan --ladder examples/calibration/greenhouse-r2r.toml \\",
-            "      --target avr --pins D2-D7 --cpu-clock 16MHz --button B0 --out greenhouse-cal",
-            "  (writes plan.csv and sweep.h, sweep.c, sweep_data.c into greenhouse-cal/)"})
+        footer = {"  rungtone calibrate plan \\",
+            "      --ladder examples/calibration/greenhouse-r2r.toml \\",
+            "      --target avr --pins D2-D7 --cpu-clock 16MHz --button B0 \\",
+            "      --out greenhouse-cal",
+            "  (writes plan.csv, sweep.h, sweep.c and sweep_data.c into greenhouse-cal/)"})
 public final class CalibratePlanCommand implements Callable<Integer> {
     static final double DEFAULT_HOLD_SECONDS = 2.0;
 
