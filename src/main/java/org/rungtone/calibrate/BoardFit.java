@@ -113,6 +113,8 @@ public final class BoardFit {
             outliers.add(codes[i]);
         }
         Table table = table(m, model, outliers, settings, warnings);
+        double[] levelSigmas = levelSigmas(chosen, m, table.measured, outliers, meter);
+        uncertaintyWarning(levelSigmas, table, warnings);
         String reason = choice.reason + (table.measured ? "; every code was read, so the readings themselves are"
                 + " the profile's table" : "");
         warn(m, missingBasis, residuals, outliers, table, warnings, bits);
@@ -125,7 +127,48 @@ public final class BoardFit {
                         ? new ModelSummary("switched-load", Optional.empty(), 0, Double.NaN, Double.NaN, List.of(),
                                 bNote)
                         : summary(ob, "switched-load", codes, ""), model, reason, sigmas, residuals, outliers,
-                table.levels, table.measured, warnings);
+                table.levels, table.measured, java.util.Arrays.stream(levelSigmas).boxed().toList(), warnings);
+    }
+
+    /**
+     * The standard deviation of every level of the table. A fitted level's is the prediction's,
+     * {@code s·sqrt(g·(JᵀJ)⁻¹·gᵀ)} for the model's gradient g at that code and the fit's scale s; a read
+     * level's is the meter floor over the square root of its count of readings.
+     */
+    private static double[] levelSigmas(RobustFit.Outcome o, Measurements m, boolean measured,
+            List<Integer> outliers, double floor) {
+        int n = 1 << m.bits();
+        double[] sigma = new double[n];
+        for (int k = 0; k < n; k++) {
+            sigma[k] = o.scale() * Math.sqrt(LeastSquares.leverage(o.kind().gradientAtCode(o.theta(), k),
+                    o.rInverse()));
+        }
+        if (measured) {
+            for (CodeMean c : m.means()) {
+                if (!outliers.contains(c.code())) {
+                    sigma[c.code()] = floor / Math.sqrt(c.count());
+                }
+            }
+        }
+        return sigma;
+    }
+
+    private static void uncertaintyWarning(double[] sigma, Table table, List<String> warnings) {
+        if (table.measured) {
+            return;
+        }
+        int worst = 0;
+        for (int k = 1; k < sigma.length; k++) {
+            worst = sigma[k] > sigma[worst] ? k : worst;
+        }
+        LevelTable t = table.levels;
+        double lsb = (t.maxVolts() - t.minVolts()) / (t.size() - 1);
+        if (sigma[worst] > lsb / 4) {
+            int bits = t.bits();
+            warnings.add(String.format(Locale.ROOT, "the fitted table is uncertain by up to %s (1 sigma) at code"
+                    + " %d, more than a quarter LSB (%s); measure more check codes (--verify %d) or read each"
+                    + " code several times", mv(sigma[worst]), worst, mv(lsb / 4), 4 * bits));
+        }
     }
 
     /** Code 0, the all-ones code is not needed; each single-bit code is. */

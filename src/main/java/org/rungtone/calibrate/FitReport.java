@@ -24,20 +24,31 @@ import org.rungtone.ladder.LevelTable;
  * @param outlierCodes codes left out of the chosen fit
  * @param levels the board's level table: the measured one when every code was read, else the model's
  * @param tableMeasured true when {@code levels} holds the readings themselves
+ * @param levelSigmas the standard deviation of each level of {@code levels}, index = code
  * @param warnings what deserves attention
  */
 public record FitReport(String source, int bits, int readingCount, List<Integer> unmeasuredCodes,
         double resolutionVolts, double repeatSpreadVolts, double floorVolts, ModelSummary superposition,
         ModelSummary switchedLoad, BoardModel chosen, String reason, List<Double> parameterSigmas,
         List<CodeResidual> residuals, List<Integer> outlierCodes, LevelTable levels, boolean tableMeasured,
-        List<String> warnings) {
+        List<Double> levelSigmas, List<String> warnings) {
     /** Copies the lists. */
     public FitReport {
         unmeasuredCodes = List.copyOf(unmeasuredCodes);
         parameterSigmas = List.copyOf(parameterSigmas);
         residuals = List.copyOf(residuals);
         outlierCodes = List.copyOf(outlierCodes);
+        levelSigmas = List.copyOf(levelSigmas);
         warnings = List.copyOf(warnings);
+    }
+
+    /** The code whose level is least certain. */
+    public int leastCertainCode() {
+        int worst = 0;
+        for (int k = 1; k < levelSigmas.size(); k++) {
+            worst = levelSigmas.get(k) > levelSigmas.get(worst) ? k : worst;
+        }
+        return worst;
     }
 
     /** Number of measured codes. */

@@ -23,6 +23,9 @@ interface ModelKind {
     /** The derivative of the model's value at row {@code i} by each parameter (a Jacobian row). */
     double[] gradient(double[] theta, int i);
 
+    /** The derivative of the model's value at any code by each parameter, measured or not. */
+    double[] gradientAtCode(double[] theta, int code);
+
     /** The board model of these parameters. */
     BoardModel model(double[] theta);
 }

@@ -56,6 +56,16 @@ final class SuperpositionFit implements ModelKind {
     }
 
     @Override
+    public double[] gradientAtCode(double[] theta, int code) {
+        double[] g = new double[theta.length];
+        g[0] = 1;
+        for (int i = 1; i < g.length; i++) {
+            g[i] = code >> (i - 1) & 1;
+        }
+        return g;
+    }
+
+    @Override
     public BoardModel model(double[] theta) {
         return Superposition.ofParameters(theta);
     }

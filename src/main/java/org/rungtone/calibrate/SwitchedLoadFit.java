@@ -130,9 +130,13 @@ final class SwitchedLoadFit implements ModelKind {
 
     @Override
     public double[] gradient(double[] theta, int i) {
+        return gradientAtCode(theta, codes[i]);
+    }
+
+    @Override
+    public double[] gradientAtCode(double[] theta, int code) {
         double num = theta[0];
         double den = 1;
-        int code = codes[i];
         for (int b = 0; b < bits; b++) {
             if ((code >> b & 1) != 0) {
                 num += theta[1 + b];

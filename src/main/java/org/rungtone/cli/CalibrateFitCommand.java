@@ -204,6 +204,10 @@ public final class CalibrateFitCommand implements Callable<Integer> {
                 + " code" : "the " + fit.chosen().key() + " model at all " + levels.size() + " codes");
         line(b, "  levels %s .. %s%s", v(levels.minVolts()), v(levels.maxVolts()), levels.isMonotonic() ? ""
                 : ", not monotonic: compensation uses every level in order of voltage");
+        int worst = fit.leastCertainCode();
+        double lsb = (levels.maxVolts() - levels.minVolts()) / (levels.size() - 1);
+        line(b, "  uncertain by up to %s (1 sigma, %.2f LSB) at code %d", mv(fit.levelSigmas().get(worst)),
+                fit.levelSigmas().get(worst) / lsb, worst);
         if (!fit.warnings().isEmpty()) {
             line(b, "");
             line(b, "Warnings");
@@ -314,6 +318,7 @@ public final class CalibrateFitCommand implements Callable<Integer> {
         prof.put("date", p.date().toString());
         prof.put("table", p.tableSource().key());
         prof.put("levels_v", p.levels().levels());
+        prof.put("level_sigmas_v", fit.levelSigmas());
         root.put("profile", prof);
         root.put("warnings", fit.warnings());
         root.put("files", files);

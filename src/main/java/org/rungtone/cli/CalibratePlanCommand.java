@@ -173,8 +173,8 @@ public final class CalibratePlanCommand implements Callable<Integer> {
                             + " will be limited by the meter");
         }
         b.append(m.render("  "));
-        line(b, "  (2000 counts is a 3½-digit meter, 20000 a 4½-digit one.) The fit wants a step of a quarter LSB or");
-        line(b, "  finer; repeated readings of a code average its noise.");
+        line(b, "  (2000 counts is a 3½-digit meter, 20000 a 4½-digit one.) The fit wants a step of a quarter");
+        line(b, "  LSB or finer; repeated readings of a code average its noise.");
         line(b, "  Settling: the ladder settles in microseconds, a handheld meter needs 1-2 s (two or three");
         line(b, "  updates) before its last digit is steady; read then. The sweep: %s.", stepping(plan));
         line(b, "");

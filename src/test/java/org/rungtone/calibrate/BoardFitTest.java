@@ -110,6 +110,45 @@ class BoardFitTest {
     }
 
     @Test
+    void choosesSwitchedLoadFromRoundedReadingsOnlyWhenItMatters() {
+        // 1 kΩ MSB leg against pins of 60 Ω high and 15 Ω low: the node's conductance moves by several
+        // per cent with the code, far more than a 1 mV meter resolves.
+        LadderSpec spec = LadderSpec.builder().topology(Topology.WEIGHTED).bits(10).baseROhms(1e3)
+                .pinROhmsHigh(60).pinROhmsLow(15).build();
+        Ladder board = Ladder.nominal(spec);
+        double[] truth = board.levels().levels();
+        SimulatedBoard.Meter meter = new SimulatedBoard.Meter(0.2e-3, 1e-3, 1);
+        double lsb = (truth[1023] - truth[0]) / 1023;
+
+        // The default plan (32 readings) leaves the 21 parameters 11 spare readings: the fit says so.
+        FitReport few = BoardFit.fit(SimulatedBoard.of(board).measure(plan(board), meter, 3),
+                BoardFit.Settings.defaults());
+        assertEquals("switched-load", few.chosen().key(), few.reason());
+        assertTrue(few.superposition().rmsVolts() > 2 * few.floorVolts(), few.reason());
+        assertTrue(few.warnings().stream().anyMatch(w -> w.startsWith("the fitted table is uncertain by up to")),
+                few.warnings().toString());
+
+        // With 4·N check codes every level lies within 5 of its predicted sigmas, all within a quarter LSB.
+        MeasurementPlan plan = MeasurementPlan.of(spec.levels(), 40);
+        FitReport fit = BoardFit.fit(SimulatedBoard.of(board).measure(plan, meter, 3), BoardFit.Settings.defaults());
+        assertEquals("switched-load", fit.chosen().key(), fit.reason());
+        double worst = 0;
+        for (int k = 0; k < truth.length; k++) {
+            double err = Math.abs(fit.levels().volts(k) - truth[k]);
+            assertTrue(err < 5 * fit.levelSigmas().get(k), "code " + k + ": " + err + " vs sigma "
+                    + fit.levelSigmas().get(k));
+            worst = Math.max(worst, err);
+        }
+        assertTrue(worst < lsb / 4, "worst level error " + worst);
+
+        // The same pins made equal: superposition holds and is kept.
+        Ladder equal = Ladder.nominal(spec.toBuilder().pinROhms(20).build());
+        FitReport eq = BoardFit.fit(SimulatedBoard.of(equal).measure(plan(equal), meter, 3),
+                BoardFit.Settings.defaults());
+        assertEquals("superposition", eq.chosen().key(), eq.reason());
+    }
+
+    @Test
     void requiresCodeZeroAndEverySingleBit() {
         List<Reading> r = new ArrayList<>();
         r.add(new Reading(0, 0.0, 0.001, 3));

@@ -145,7 +145,7 @@ class CalibratePlanSweepTest {
                 "sweep.c", "sweep_data.c");
     }
 
-    /** Builds the generic sweep with the harness, runs it and returns the code on the pins after start and each tick. */
+    /** Runs the generic sweep in the harness; returns the code on the pins after start and each tick. */
     private List<Integer> run(String pins, String period, String width) {
         require("gcc");
         AtomicFiles.writeString(dir.resolve("harness.c"), HARNESS);
