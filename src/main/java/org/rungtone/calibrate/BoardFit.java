@@ -307,8 +307,8 @@ public final class BoardFit {
             }
         }
         if (clipped > 0) {
-            warnings.add(String.format(Locale.ROOT, "the %s model puts %d codes beyond the buffer's swing of %s"
-                    + " .. %s; they are clipped to it", model.key(), clipped, volts(s.minVolts()),
+            warnings.add(String.format(Locale.ROOT, "the %s model puts %d code%s beyond the buffer's swing of %s"
+                    + " .. %s; clipped to it", model.key(), clipped, clipped == 1 ? "" : "s", volts(s.minVolts()),
                     volts(s.maxVolts())));
         }
         return new Table(LevelTable.of(bits, v, "fitted " + model.key()), false, 0, clipped);
