@@ -2,6 +2,7 @@ package org.rungtone.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
@@ -13,8 +14,8 @@ import org.rungtone.project.ProjectFile;
 import org.rungtone.report.ProjectReport;
 import picocli.CommandLine;
 import java.util.concurrent.Callable;
+import org.rungtone.calibrate.OutputSpan;
 import org.rungtone.firmware.CNames;
-import org.rungtone.ladder.LadderSpec;
 import org.rungtone.project.Build;
 import org.rungtone.project.BuildPlan;
 import org.rungtone.quantize.Dither;
@@ -101,6 +102,14 @@ public final class BuildCommand implements Callable<Integer> {
     String compensation;
 
     @Mixin
+    UnitOptions unit;
+
+    @Option(names = "--span", paramLabel = "full|nominal", defaultValue = "full",
+            description = "With compensation: map full scale onto everything the board reaches (full, default)"
+                    + " or onto the ideal ladder's span, for the same amplitude in volts on every board.")
+    String span;
+
+    @Mixin
     FirmwareOptions firmware;
 
     @Mixin
@@ -109,18 +118,26 @@ public final class BuildCommand implements Callable<Integer> {
     @Option(names = "--json", description = "Print the report as JSON instead of text.")
     boolean json;
 
+    private List<String> boardWarnings = List.of();
+
     @Override
     public Integer call() {
         if (source.getFileName() != null && source.getFileName().toString().toLowerCase(Locale.ROOT)
                 .endsWith(".toml")) {
             return buildProject();
         }
+        OutputSpan outputSpan = OutputSpan.parse(span);
         BuildPlan plan = plan();
+        if (!common.quiet) {
+            for (String w : boardWarnings) {
+                spec.commandLine().getErr().println("rungtone: warning: " + w);
+            }
+        }
         ProgressLine line = ProgressLine.forTerminal(spec.commandLine().getErr(), common);
         BuildSummary summary;
         try {
-            summary = new Build(Version.get(), stage -> line.show("building " + plan.symbol() + ": " + stage
-                    + " done")).run(plan);
+            summary = new Build(Version.get(), outputSpan, stage -> line.show("building " + plan.symbol() + ": "
+                    + stage + " done")).run(plan);
         } finally {
             line.clear();
         }
@@ -147,13 +164,7 @@ public final class BuildCommand implements Callable<Integer> {
             }
         }
         Project project = ProjectFile.load(source);
-        ProjectBuild.BoardResolver board = (table, file, b) -> {
-            if (table == null && !ladder.given()) {
-                return Optional.empty();
-            }
-            LadderSpec s = ladder.toSpec(table, file, b);
-            return Optional.of(s.levels().withOrigin("modelled " + s.describe()));
-        };
+        ProjectBuild.BoardResolver board = ProjectBoards.of(project, unit, ladder);
         ProjectBuild.Overrides o = new ProjectBuild.Overrides(
                 bits == null ? OptionalInt.empty() : OptionalInt.of(bits),
                 rateHz == null ? OptionalDouble.empty() : OptionalDouble.of(rateHz),
@@ -166,7 +177,9 @@ public final class BuildCommand implements Callable<Integer> {
         ProgressLine line = ProgressLine.forTerminal(spec.commandLine().getErr(), common);
         ProjectBuild.Result r;
         try {
-            r = new ProjectBuild(Version.get(), line::show).run(project, o);
+            OutputSpan outputSpan = pr.hasMatchedOption("--span") ? OutputSpan.parse(span)
+                    : project.quantize().span().map(OutputSpan::parse).orElse(OutputSpan.FULL);
+            r = new ProjectBuild(Version.get(), outputSpan, line::show).run(project, o);
         } finally {
             line.clear();
         }
@@ -185,16 +198,16 @@ public final class BuildCommand implements Callable<Integer> {
         String base = name != null ? name : stem(source);
         String symbol = CNames.symbol(base);
         Path outDir = out != null ? out : Path.of("rungtone-out", symbol);
-        Optional<LadderSpec> spec = ladder.specIfGiven(bits == null ? 0 : bits);
-        int effectiveBits = bits != null ? bits : spec.map(LadderSpec::bits).orElse(8);
+        UnitOptions.Board board = unit.resolve(bits == null ? 0 : bits, ladder, false);
+        boardWarnings = board.warnings();
+        int effectiveBits = bits != null ? bits : board.bits(8);
         BuildPlan plan = new BuildPlan(source, channel, symbol, outDir, effectiveBits,
                 rateHz == null ? OptionalDouble.empty() : OptionalDouble.of(rateHz), dither,
                 errorFilter(shaping), seed, conditioning.removeDc(), conditioning.trimDbfs(), conditioning.gainDb(),
                 conditioning.normalizeDbfs(), conditioning.fadeIn, conditioning.fadeOut,
                 conditioning.resamplerName(), fullScale, flashAttr);
-        if (spec.isPresent()) {
-            plan = plan.withBoard(spec.get().levels().withOrigin("modelled " + spec.get().describe()),
-                    onOff(compensation, "--compensation"));
+        if (board.levels().isPresent()) {
+            plan = plan.withBoard(board.levels().get(), onOff(compensation, "--compensation"));
         }
         return plan.withFirmware(firmware.request(), firmware.loopSpan(), firmware.flashBudgetBytes())
                 .withPreview(preview.filter(), preview.previewRateHz);

@@ -69,6 +69,9 @@ public final class LadderCommand implements Callable<Integer> {
     @Mixin
     LadderOptions ladder;
 
+    @Mixin
+    UnitOptions unit;
+
     @Option(names = "--bits", paramLabel = "N", description = "Bit depth 1..16 (default: the ladder's, else 8).")
     int bits;
 
@@ -114,9 +117,16 @@ public final class LadderCommand implements Callable<Integer> {
             throw new InputError("--monte-carlo: need 1.." + MAX_BOARDS + " boards, got " + boards);
         }
         AtomicFiles.checkFolderUsable(out);
-        LadderSpec ladderSpec = ladder.toSpec(bits);
+        UnitOptions.Board board = unit.resolve(bits, ladder, true);
+        LadderSpec ladderSpec = board.spec().orElseThrow();
         List<String> pins = pins(ladderSpec.bits());
         LadderAnalysis analysis = LadderAnalysis.of(ladderSpec, limit);
+        if (board.profile().isPresent()) {
+            analysis = UnitOptions.withLevels(analysis, board.profile().get());
+            if (!common.quiet) {
+                board.warnings().forEach(w -> spec.commandLine().getErr().println("rungtone: warning: " + w));
+            }
+        }
         MonteCarloResult mc = boards == null ? null
                 : new MonteCarlo(boards, seed, spread).run(Ladder.nominal(ladderSpec),
                         new Progress(boards, (long) boards << ladderSpec.bits()));

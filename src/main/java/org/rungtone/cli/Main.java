@@ -14,6 +14,7 @@ import picocli.CommandLine.ParseResult;
             + "and tells you how the result will sound on your board.", ""},
         subcommands = {
             BuildCommand.class,
+            CalibrateCommand.class,
             DemoCommand.class,
             InitCommand.class,
             LadderCommand.class,

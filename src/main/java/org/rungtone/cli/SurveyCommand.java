@@ -111,6 +111,9 @@ public final class SurveyCommand implements Callable<Integer> {
     @Mixin
     LadderOptions ladder;
 
+    @Mixin
+    UnitOptions unit;
+
     @Option(names = "--flash-budget", paramLabel = "<bytes>", converter = Converters.Bytes.class,
             description = "Flash available for the samples, e.g. 32000 or 32k.")
     Long flashBudget;
@@ -230,6 +233,16 @@ public final class SurveyCommand implements Callable<Integer> {
      * Without one, the ideal table with a {@value #IDEAL_FULL_SCALE_VOLTS} V reference.
      */
     IntFunction<LevelTable> levelTables() {
+        if (unit.given()) {
+            LevelTable measured = unit.resolve(0, ladder, false).levels().orElseThrow();
+            return b -> {
+                if (b != measured.bits()) {
+                    throw new InputError("the unit profile has " + measured.bits() + " bits; survey it with"
+                            + " --bits-list " + measured.bits());
+                }
+                return measured;
+            };
+        }
         if (!ladder.given()) {
             return b -> LevelTable.ideal(b, IDEAL_FULL_SCALE_VOLTS);
         }

@@ -18,6 +18,7 @@ import org.rungtone.analysis.SineFit;
 import org.rungtone.analysis.Spectrum;
 import org.rungtone.analysis.ToneAnalysis;
 import org.rungtone.analysis.ToneReport;
+import org.rungtone.calibrate.OutputSpan;
 import org.rungtone.condition.Conditioner;
 import org.rungtone.condition.Conditioning;
 import org.rungtone.condition.KaiserResampler;
@@ -63,16 +64,28 @@ public final class Build {
     private static final int TONE_PROBE = 1 << 13;
 
     private final String toolVersion;
+    private final OutputSpan span;
     private final java.util.function.Consumer<String> progress;
 
-    /** A build that stamps {@code toolVersion} into its outputs. */
+    /** A build that stamps {@code toolVersion} into its outputs; compensation uses the board's full span. */
     public Build(String toolVersion) {
-        this(toolVersion, stage -> { });
+        this(toolVersion, OutputSpan.FULL, stage -> { });
+    }
+
+    /** A build whose compensated quantization maps full scale onto {@code span} of the board's levels. */
+    public Build(String toolVersion, OutputSpan span) {
+        this(toolVersion, span, stage -> { });
     }
 
     /** A build that also tells {@code progress} the name of every stage it finishes ("decode", ...). */
     public Build(String toolVersion, java.util.function.Consumer<String> progress) {
+        this(toolVersion, OutputSpan.FULL, progress);
+    }
+
+    /** A build with a span and a progress listener. */
+    public Build(String toolVersion, OutputSpan span, java.util.function.Consumer<String> progress) {
         this.toolVersion = toolVersion;
+        this.span = span;
         this.progress = progress;
     }
 
@@ -232,11 +245,15 @@ public final class Build {
         LevelTable played = ideal;
         long clipped = idealQ.clippedSamples();
         Optional<Codes> compensated = Optional.empty();
+        double[] range = {ideal.minVolts(), ideal.maxVolts()};
         if (plan.board().isPresent()) {
             LevelTable board = plan.board().get();
             played = board;
+            range = new double[] {board.minVolts(), board.maxVolts()};
             if (plan.compensate()) {
-                Quantizer.Quantized q = quantizer(board, plan).apply(reference);
+                range = span.volts(board, ideal);
+                Quantizer.Quantized q = new Quantizer(board, range[0], range[1], plan.dither(), plan.shaping(),
+                        plan.seed()).apply(reference);
                 compensated = Optional.of(q.codes());
                 emitted = q.codes();
                 clipped = q.clippedSamples();
@@ -280,8 +297,7 @@ public final class Build {
         QualityReport emittedQuality = quality.get(quality.size() - 1);
         Optional<Double> shapingGain = Optional.empty();
         if (plan.shaping().order() > 0) {
-            Quantizer flat = new Quantizer(played, played.minVolts(), played.maxVolts(), plan.dither(),
-                    ErrorFilter.NONE, plan.seed());
+            Quantizer flat = new Quantizer(played, range[0], range[1], plan.dither(), ErrorFilter.NONE, plan.seed());
             double flatInBand = metrics.measure("flat", flat.apply(reference).codes(), played).inBandSnrDb();
             shapingGain = Optional.of(emittedQuality.inBandSnrDb() - flatInBand);
         }
@@ -293,7 +309,7 @@ public final class Build {
         watch.lap("preview");
         return new Rendered(plan, loaded.layout(), rate, conditioned, emitted, played, quality, shapingGain, tone,
                 preview, errorSpectrum, toneSpectrum, cutoff, clipped,
-                settings(plan, loaded, conditioned, played, rate), warnings, watch.laps());
+                settings(plan, loaded, conditioned, played, rate, range), warnings, watch.laps());
     }
 
     /** The source's description (its samples dropped), the conditioned reference and the target rate. */
@@ -334,8 +350,8 @@ public final class Build {
         return new Quantizer(table, table.minVolts(), table.maxVolts(), plan.dither(), plan.shaping(), plan.seed());
     }
 
-    private static List<String> settings(BuildPlan plan, Sources.Loaded loaded, Conditioner.Conditioned c,
-            LevelTable played, double rate) {
+    private List<String> settings(BuildPlan plan, Sources.Loaded loaded, Conditioner.Conditioned c,
+            LevelTable played, double rate, double[] range) {
         return List.of(
                 "name: " + plan.symbol(),
                 "source: " + plan.source().getFileName() + " (" + loaded.layout() + ")",
@@ -345,7 +361,13 @@ public final class Build {
                         + plan.seed(),
                 "levels: " + played.origin() + ", " + Units.format(played.minVolts(), "V") + " .. "
                         + Units.format(played.maxVolts(), "V")
-                        + (plan.board().isPresent() ? (plan.compensate() ? ", compensated" : ", plain codes") : ""));
+                        + (plan.board().isPresent() ? (plan.compensate() ? ", compensated" + spanNote(range)
+                                : ", plain codes") : ""));
+    }
+
+    private String spanNote(double[] range) {
+        return span == OutputSpan.FULL ? "" : ", span " + span.key() + " " + Units.format(range[0], "V") + " .. "
+                + Units.format(range[1], "V");
     }
 
     /** Single-tone figures when the reference is essentially one sine (IEEE Std 1241 sine fit). */

@@ -12,6 +12,7 @@ import java.util.OptionalInt;
 import java.util.OptionalLong;
 import java.util.function.UnaryOperator;
 import org.rungtone.analysis.ReconstructionFilter;
+import org.rungtone.calibrate.OutputSpan;
 import org.rungtone.firmware.CNames;
 import org.rungtone.firmware.DdsSpec;
 import org.rungtone.firmware.EmitResult;
@@ -43,16 +44,21 @@ import org.tomlj.TomlTable;
  */
 public final class ProjectBuild {
     private final String toolVersion;
+    private final OutputSpan span;
     private final java.util.function.Consumer<String> progress;
 
     /** A project build stamping {@code toolVersion} into its outputs. */
     public ProjectBuild(String toolVersion) {
-        this(toolVersion, line -> { });
+        this(toolVersion, OutputSpan.FULL, line -> { });
     }
 
-    /** A project build that reports "sound 2/3 door_chime: decode" style lines to {@code progress}. */
-    public ProjectBuild(String toolVersion, java.util.function.Consumer<String> progress) {
+    /**
+     * A project build with the output span of compensated sounds that reports "sound 2/3 door_chime:
+     * decode done" style lines to {@code progress}.
+     */
+    public ProjectBuild(String toolVersion, OutputSpan span, java.util.function.Consumer<String> progress) {
         this.toolVersion = toolVersion;
+        this.span = span;
         this.progress = progress;
     }
 
@@ -136,6 +142,9 @@ public final class ProjectBuild {
         settings.put("seed", seed + origin(o.seed().isPresent(), project.seed().isPresent()));
         boolean compensate = o.compensation().or(project::compensation).orElse(true);
         settings.put("levels", board.map(LevelTable::origin).orElse("ideal ladder"));
+        if (board.isPresent() && span != OutputSpan.FULL) {
+            settings.put("span", span.key());
+        }
         if (board.isPresent()) {
             settings.put("compensation", (compensate ? "on" : "off")
                     + origin(o.compensation().isPresent(), project.compensation().isPresent()));
@@ -153,7 +162,7 @@ public final class ProjectBuild {
         for (Project.Sound s : project.sounds()) {
             String label = String.format(Locale.ROOT, "sound %d/%d %s", s.index(), project.sounds().size(),
                     s.name());
-            Build soundBuild = new Build(toolVersion, stage -> progress.accept(label + ": " + stage + " done"));
+            Build soundBuild = new Build(toolVersion, span, stage -> progress.accept(label + ": " + stage + " done"));
             OptionalDouble rate = o.rateHz().isPresent() ? o.rateHz() : s.rateHz().isPresent() ? s.rateHz()
                     : projectRate;
             String symbol = prefix + "_" + CNames.symbol(s.name());

@@ -1,0 +1,156 @@
+package org.rungtone.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVPrinter;
+import org.rungtone.calibrate.MeasurementPlan;
+import org.rungtone.calibrate.SimulatedBoard;
+import org.rungtone.internal.AtomicFiles;
+import org.rungtone.internal.InputError;
+import org.rungtone.internal.Units;
+import org.rungtone.ladder.LadderSpec;
+import org.rungtone.ladder.LevelTable;
+import org.rungtone.ladder.Part;
+import org.rungtone.ladder.Spread;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/** {@code rungtone calibrate}: measure a built board and fit a unit profile of it. */
+@Command(name = "calibrate", mixinStandardHelpOptions = true,
+        description = {"Measure a built ladder and fit a profile of it.",
+            "'plan' says what to measure and writes a sweep program; 'fit' turns the readings into a unit"
+                + " profile that 'build --unit' quantizes onto; 'simulate' makes readings of a drawn board to try"
+                + " it out."},
+        subcommands = {CalibratePlanCommand.class, CalibrateFitCommand.class, CalibrateCommand.Simulate.class},
+        footerHeading = "%nExample, the whole loop:%n",
+        footer = {"  rungtone calibrate plan --ladder board.toml --target avr --pins D2-D7 \\",
+            "      --cpu-clock 16MHz --button B0",
+            "  (measure; fill in rungtone-out/calibration/plan.csv)",
+            "  rungtone calibrate fit rungtone-out/calibration/plan.csv \\",
+            "      --ladder board.toml --board unit-1",
+            "  rungtone build chime.wav \\",
+            "      --unit rungtone-out/calibration/unit-1.unit.toml"})
+public final class CalibrateCommand implements Runnable {
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
+    }
+
+    /** {@code rungtone calibrate simulate}: readings of a board drawn from the ladder's tolerance. */
+    @Command(name = "simulate", mixinStandardHelpOptions = true, sortOptions = false,
+            description = {"Make readings of a board drawn from the ladder's tolerance.",
+                "Draws one board from the ladder description (resistors uniform within the tolerance), reads it"
+                    + " at the plan's codes with a meter's noise and step, and writes the filled-in plan"
+                    + " (readings.csv) and the board's true levels (true-levels.csv)."},
+            footerHeading = "%nExample:%n",
+            footer = {"  rungtone calibrate simulate --topology r2r --bits 6 --tolerance 5%% \\",
+                "      --seed 7",
+                "  rungtone calibrate fit rungtone-out/calibration/readings.csv \\",
+                "      --topology r2r --bits 6 --tolerance 5%% --board simulated-7"})
+    static final class Simulate implements Callable<Integer> {
+        @Spec
+        CommandSpec spec;
+
+        @Mixin
+        CommonOptions common;
+
+        @Option(names = "--bits", paramLabel = "N", description = "Bit depth 1..16 (default: the ladder's, else 8).")
+        int bits;
+
+        @Mixin
+        LadderOptions ladder;
+
+        @Option(names = "--verify", paramLabel = "K",
+                description = "Check codes on top of the basis (default: every code up to 6 bits, else 2·N).")
+        Integer verify;
+
+        @Option(names = "--every-code", description = "Read every code.")
+        boolean everyCode;
+
+        @Option(names = "--seed", paramLabel = "N", defaultValue = "1",
+                description = "Seed of the board and the meter noise (default ${DEFAULT-VALUE}).")
+        long seed;
+
+        @Option(names = "--noise", paramLabel = "<volts>", converter = Converters.Volts.class,
+                defaultValue = "0.2mV", description = "The meter's rms noise (default ${DEFAULT-VALUE}).")
+        double noise;
+
+        @Option(names = "--resolution", paramLabel = "<volts>", converter = Converters.Volts.class,
+                defaultValue = "1mV", description = "The meter's step (default ${DEFAULT-VALUE}).")
+        double resolution;
+
+        @Option(names = "--repeat", paramLabel = "R", defaultValue = "1",
+                description = "Readings per code (default ${DEFAULT-VALUE}).")
+        int repeat;
+
+        @Option(names = "--out", paramLabel = "DIR", defaultValue = "rungtone-out/calibration",
+                description = "Output folder (default ${DEFAULT-VALUE}).")
+        Path out;
+
+        @Override
+        public Integer call() {
+            if (everyCode && verify != null) {
+                throw new InputError("--every-code and --verify exclude each other; give one");
+            }
+            if (!(resolution >= 0 && resolution < 10)) {
+                throw new InputError("--resolution must be 0 (exact) or a positive voltage below 10 V: "
+                        + resolution);
+            }
+            SimulatedBoard.Meter meter = new SimulatedBoard.Meter(noise, resolution, repeat);
+            AtomicFiles.checkFolderUsable(out);
+            LadderSpec s = ladder.toSpec(bits);
+            MeasurementPlan plan = everyCode ? MeasurementPlan.everyCode(s.levels())
+                    : verify != null ? MeasurementPlan.of(s.levels(), verify) : MeasurementPlan.of(s.levels());
+            SimulatedBoard board = SimulatedBoard.draw(s, Spread.uniform(), seed);
+            Path readings = out.resolve("readings.csv");
+            Path truth = out.resolve("true-levels.csv");
+            String header = String.format(Locale.ROOT, "# Simulated board: %s drawn with seed %d; meter noise %s"
+                    + " rms, step %s, %d reading%s per code.%n", s.describe(), seed, Units.format(noise, "V"),
+                    Units.format(resolution, "V"), repeat, repeat == 1 ? "" : "s");
+            AtomicFiles.writeString(readings, header + board.filledCsv(plan, meter, seed * 31 + 7));
+            AtomicFiles.writeString(truth, levelsCsv(board.levels()));
+            PrintWriter o = spec.commandLine().getOut();
+            if (!common.quiet) {
+                o.printf(Locale.ROOT, "Simulated board: %s, seed %d%n", s.describe(), seed);
+                List<Part> nominal = s.parts();
+                List<Part> drawn = board.ladder().parts();
+                for (int i = 0; i < drawn.size(); i++) {
+                    o.printf(Locale.ROOT, "  %-14s %10s  (%+.2f %%)%n", drawn.get(i).label(),
+                            Units.format(drawn.get(i).ohms(), ""), 100 * (drawn.get(i).ohms() / nominal.get(i).ohms()
+                                    - 1));
+                }
+                o.printf(Locale.ROOT, "  read at %d codes, %d time%s each; meter noise %s rms, step %s%n",
+                        plan.codes().size(), repeat, repeat == 1 ? "" : "s", Units.format(noise, "V"),
+                        Units.format(resolution, "V"));
+                o.printf(Locale.ROOT, "Wrote %s, %s%n", readings, truth);
+                o.printf(Locale.ROOT, "Next: rungtone calibrate fit %s (with the same ladder options)%n", readings);
+            }
+            o.flush();
+            return 0;
+        }
+
+        private static String levelsCsv(LevelTable t) {
+            StringBuilder sb = new StringBuilder();
+            CSVFormat f = CSVFormat.DEFAULT.builder().setRecordSeparator("\n").setHeader("code", "volts").build();
+            try (CSVPrinter p = new CSVPrinter(sb, f)) {
+                for (int k = 0; k < t.size(); k++) {
+                    p.printRecord(k, String.format(Locale.ROOT, "%.9f", t.volts(k)));
+                }
+            } catch (IOException e) {
+                throw new IllegalStateException("CSV to memory failed", e);
+            }
+            return sb.toString();
+        }
+    }
+}
