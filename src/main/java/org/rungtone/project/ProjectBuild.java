@@ -131,7 +131,7 @@ public final class ProjectBuild {
         int fixedBits = o.bits().isPresent() ? o.bits().getAsInt() : q.bits().map(Long::intValue).orElse(0);
         Optional<LevelTable> board = o.board().resolve(project.ladder().orElse(null), project.file(), fixedBits);
         int bits = fixedBits != 0 ? fixedBits : board.map(LevelTable::bits).orElse(8);
-        settings.put("bits", bits + (fixedBits == 0 && board.isPresent() ? "  (ladder)"
+        settings.put("bits", bits + (fixedBits == 0 && board.isPresent() ? "  (board)"
                 : origin(o.bits().isPresent(), q.bits().isPresent())));
         Dither dither = o.dither().orElse(q.dither().map(d -> Dither.valueOf(d.toUpperCase(Locale.ROOT)))
                 .orElse(Dither.TPDF));
