@@ -49,8 +49,20 @@ class ProjectBuildTest {
     }
 
     @Test
+    void aUnitProfileFixesTheBitDepth() throws IOException {
+        Path g = copyExample("greenhouse");
+        Cli.Run r = Cli.run("build", g.resolve("greenhouse.toml").toString(), "--bits", "5", "--out",
+                dir.resolve("o5").toString());
+        assertEquals(1, r.exitCode());
+        assertTrue(r.err().endsWith("greenhouse-1.unit.toml has 6 bits but the project asks for 5\n"), r.err());
+    }
+
+    @Test
     void commandLineOverridesTheFileAndTheReportSaysSo() throws IOException {
         Path g = copyExample("greenhouse");
+        Path toml = g.resolve("greenhouse.toml");
+        // without the measured profile, so that the ladder can take another bit depth
+        Files.writeString(toml, Files.readString(toml).replaceFirst("(?m)^unit = .*$", ""));
         Path out = dir.resolve("o2");
         Cli.Run r = Cli.run("build", g.resolve("greenhouse.toml").toString(), "--out", out.toString(), "--bits",
                 "5", "--dither", "none", "--target", "generic", "--pins", "A0-A4", "--json");
