@@ -115,7 +115,8 @@ public final class AudioMetrics {
         Checks.checkArgument(codes.sampleRateHz() == reference.sampleRateHz(),
                 "codes rate %s Hz differs from the reference's %s Hz", codes.sampleRateHz(),
                 reference.sampleRateHz());
-        return measure(label, volts(codes, table));
+        // the volts array is ours: the error may overwrite it
+        return measureWithSpectrum(label, volts(codes, table), true).report();
     }
 
     /** The volts of every code through the table. */
@@ -152,7 +153,15 @@ public final class AudioMetrics {
      * @throws IllegalArgumentException when the length differs from the reference's
      */
     public Measured measureWithSpectrum(String label, double[] output) {
-        Alignment a = align(output);
+        return measureWithSpectrum(label, output, false);
+    }
+
+    /**
+     * As {@link #measureWithSpectrum(String, double[])}, but with {@code overwrite} the aligned error is
+     * written into {@code output} itself, saving one array of the signal's length (long clips).
+     */
+    public Measured measureWithSpectrum(String label, double[] output, boolean overwrite) {
+        Alignment a = align(output, overwrite);
         double[] e = a.error();
         Spectrum s = null;
         double pr = referenceSumSquares / e.length;
@@ -184,7 +193,7 @@ public final class AudioMetrics {
      * @throws IllegalArgumentException when the length differs from the reference's
      */
     public double[] alignedError(double[] output) {
-        return align(output).error();
+        return align(output, false).error();
     }
 
     /** Welch spectrum of the aligned error (Hann, 8192-sample segments), for plots. */
@@ -192,7 +201,7 @@ public final class AudioMetrics {
         return spectrum(alignedError(output), reference.sampleRateHz());
     }
 
-    private Alignment align(double[] o) {
+    private Alignment align(double[] o, boolean inPlace) {
         double[] r = reference.unsafeSamples();
         Checks.checkArgument(o.length == r.length, "output has %d samples, the reference %d", o.length,
                 r.length);
@@ -208,7 +217,7 @@ public final class AudioMetrics {
         }
         double gain = sro / referenceSumSquares;
         double offset = mo - gain * referenceMean;
-        double[] e = new double[n];
+        double[] e = inPlace ? o : new double[n];
         if (gain > 0) {
             double inv = 1 / gain;
             for (int i = 0; i < n; i++) {

@@ -210,7 +210,8 @@ public final class BuildCommand implements Callable<Integer> {
             plan = plan.withBoard(board.levels().get(), onOff(compensation, "--compensation"));
         }
         return plan.withFirmware(firmware.request(), firmware.loopSpan(), firmware.flashBudgetBytes())
-                .withPreview(preview.filter(), preview.previewRateHz);
+                .withPreview(preview.filter(), preview.previewRateHz)
+                .withPreviewSeconds(preview.previewSeconds());
     }
 
     static boolean onOff(String text, String option) {

@@ -56,7 +56,15 @@ public final class Main implements Runnable {
             }
             System.exit(0);
         }
-        System.exit(newCommandLine().execute(args));
+        int code;
+        try {
+            code = newCommandLine().execute(args);
+        } catch (OutOfMemoryError e) {
+            System.err.println("rungtone: error: out of memory for this input; give Java more with"
+                    + " RUNGTONE_JAVA_OPTS=-Xmx4g (or shorten the sound)");
+            code = EXIT_INTERNAL;
+        }
+        System.exit(code);
     }
 
     /** A configured command line, for {@link #main} and for tests that capture its output. */

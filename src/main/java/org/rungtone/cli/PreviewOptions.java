@@ -16,6 +16,23 @@ public final class PreviewOptions {
             defaultValue = "44.1k", description = "Rate of preview.wav: 44.1k or 48k (default ${DEFAULT-VALUE}).")
     double previewRateHz;
 
+    @Option(names = "--preview-length", paramLabel = "<time>|all", defaultValue = "60s",
+            description = "Longest preview.wav: the first part of the sound (default ${DEFAULT-VALUE}); all for the"
+                    + " whole sound. The figures always cover the whole sound.")
+    String previewLength;
+
+    /** The preview length limit in seconds, infinite for all. */
+    double previewSeconds() {
+        if (previewLength.trim().equalsIgnoreCase("all")) {
+            return Double.POSITIVE_INFINITY;
+        }
+        try {
+            return org.rungtone.internal.Units.parse(previewLength, "s");
+        } catch (org.rungtone.internal.InputError e) {
+            throw new org.rungtone.internal.InputError("--preview-length: " + e.getMessage() + ", or all");
+        }
+    }
+
     /** The reconstruction filter. */
     ReconstructionFilter filter() {
         return filter;

@@ -267,26 +267,34 @@ public final class Build {
         // The preview is independent of the figures: render it on another core meanwhile.
         final Codes emittedCodes = emitted;
         final LevelTable playedTable = played;
+        int previewCodes = (int) Math.min(emitted.length(), Math.ceil(plan.previewSeconds() * rate));
+        final Codes previewInput = previewCodes == emitted.length() ? emittedCodes : Codes.of(emitted.bits(),
+                rate, Arrays.copyOf(emitted.unsafeCodes(), previewCodes));
+        if (previewCodes < emitted.length()) {
+            warnings.add(String.format(Locale.ROOT, "preview.wav holds the first %.0f s of %.0f s; use"
+                    + " --preview-length all for the whole sound", previewCodes / rate, emitted.length() / rate));
+        }
         CompletableFuture<AnalogModel.Preview> previewJob = CompletableFuture.supplyAsync(
-                () -> new AnalogModel(plan.filter(), plan.previewRateHz()).render(emittedCodes, playedTable));
+                () -> new AnalogModel(plan.filter(), plan.previewRateHz()).render(previewInput, playedTable));
         double cutoff = plan.filter().kind() == org.rungtone.analysis.ReconstructionFilter.Kind.NONE
                 ? rate / 2 : Math.min(rate / 2, plan.filter().cutoffHz());
         AudioMetrics metrics = AudioMetrics.of(reference, cutoff);
         List<QualityReport> quality = new ArrayList<>();
         Spectrum errorSpectrum;
         if (plan.board().isEmpty()) {
-            AudioMetrics.Measured m = metrics.measureWithSpectrum("ideal ladder", volts(idealQ.codes(), ideal));
+            AudioMetrics.Measured m = metrics.measureWithSpectrum("ideal ladder",
+                    AudioMetrics.volts(idealQ.codes(), ideal), true);
             quality.add(m.report());
             errorSpectrum = m.errorSpectrum();
         } else {
             quality.add(metrics.measure("ideal ladder", idealQ.codes(), ideal));
             AudioMetrics.Measured plain = metrics.measureWithSpectrum("board, plain codes",
-                    AudioMetrics.volts(idealQ.codes(), played));
+                    AudioMetrics.volts(idealQ.codes(), played), true);
             quality.add(plain.report());
             errorSpectrum = plain.errorSpectrum();
             if (compensated.isPresent()) {
                 AudioMetrics.Measured comp = metrics.measureWithSpectrum("board, compensated",
-                        AudioMetrics.volts(compensated.get(), played));
+                        AudioMetrics.volts(compensated.get(), played), true);
                 quality.add(comp.report());
                 errorSpectrum = comp.errorSpectrum();
             }

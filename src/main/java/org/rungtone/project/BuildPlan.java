@@ -39,13 +39,17 @@ import org.rungtone.quantize.ErrorFilter;
  *     sample array alone
  * @param loop loop points of a looped sound
  * @param flashBudgetBytes the most flash the samples may take, 0 for no limit
+ * @param previewSeconds the longest preview rendered (the first seconds of the sound); infinite for all
  */
 public record BuildPlan(Path source, int channel, String symbol, Path outDir, int bits, OptionalDouble rateHz,
         Dither dither, ErrorFilter shaping, long seed, boolean removeDc, OptionalDouble trimDbfs,
         OptionalDouble gainDb, OptionalDouble normalizeDbfs, double fadeInSeconds, double fadeOutSeconds,
         String resampler, double fullScaleVolts, String flashQualifier, Optional<LevelTable> board,
         boolean compensate, ReconstructionFilter filter, double previewRateHz, Optional<FirmwareRequest> firmware,
-        Optional<LoopSpan> loop, long flashBudgetBytes) {
+        Optional<LoopSpan> loop, long flashBudgetBytes, double previewSeconds) {
+
+    /** Longest preview by default: a minute is plenty to listen to; longer sounds are measured whole. */
+    public static final double DEFAULT_PREVIEW_SECONDS = 60;
 
     /** Default sample rate when neither the user nor a script names one. */
     public static final double DEFAULT_RATE_HZ = 16_000;
@@ -62,6 +66,7 @@ public record BuildPlan(Path source, int channel, String symbol, Path outDir, in
                 "--full-scale must be a positive voltage: %s", fullScaleVolts);
         board.ifPresent(t -> Checks.checkInput(t.bits() == bits, "the board's level table has %d bits but --bits"
                 + " is %d", t.bits(), bits));
+        Checks.checkInput(previewSeconds > 0, "--preview-length must be positive: %s", previewSeconds);
         Checks.checkInput(flashBudgetBytes >= 0, "--flash-budget must be positive: %d", flashBudgetBytes);
         Checks.checkInput(previewRateHz == 44_100 || previewRateHz == 48_000,
                 "--preview-rate must be 44.1k or 48k: %s", previewRateHz);
@@ -74,7 +79,8 @@ public record BuildPlan(Path source, int channel, String symbol, Path outDir, in
             String resampler, double fullScaleVolts, String flashQualifier) {
         this(source, channel, symbol, outDir, bits, rateHz, dither, shaping, seed, removeDc, trimDbfs, gainDb,
                 normalizeDbfs, fadeInSeconds, fadeOutSeconds, resampler, fullScaleVolts, flashQualifier,
-                Optional.empty(), true, ReconstructionFilter.none(), 44_100, Optional.empty(), Optional.empty(), 0);
+                Optional.empty(), true, ReconstructionFilter.none(), 44_100, Optional.empty(), Optional.empty(), 0,
+                DEFAULT_PREVIEW_SECONDS);
     }
 
     /** The same plan on a board with these real levels. */
@@ -82,14 +88,15 @@ public record BuildPlan(Path source, int channel, String symbol, Path outDir, in
         return new BuildPlan(source, channel, symbol, outDir, bits, rateHz, dither, shaping, seed, removeDc,
                 trimDbfs, gainDb, normalizeDbfs, fadeInSeconds, fadeOutSeconds, resampler, fullScaleVolts,
                 flashQualifier, Optional.of(levels), compensateOnIt, filter, previewRateHz, firmware, loop,
-                flashBudgetBytes);
+                flashBudgetBytes, previewSeconds);
     }
 
     /** The same plan with another reconstruction filter and preview rate. */
     public BuildPlan withPreview(ReconstructionFilter newFilter, double newPreviewRateHz) {
         return new BuildPlan(source, channel, symbol, outDir, bits, rateHz, dither, shaping, seed, removeDc,
                 trimDbfs, gainDb, normalizeDbfs, fadeInSeconds, fadeOutSeconds, resampler, fullScaleVolts,
-                flashQualifier, board, compensate, newFilter, newPreviewRateHz, firmware, loop, flashBudgetBytes);
+                flashQualifier, board, compensate, newFilter, newPreviewRateHz, firmware, loop, flashBudgetBytes,
+                previewSeconds);
     }
 
     /** The same plan with a player, loop points and flash budget. */
@@ -97,6 +104,14 @@ public record BuildPlan(Path source, int channel, String symbol, Path outDir, in
             long budgetBytes) {
         return new BuildPlan(source, channel, symbol, outDir, bits, rateHz, dither, shaping, seed, removeDc,
                 trimDbfs, gainDb, normalizeDbfs, fadeInSeconds, fadeOutSeconds, resampler, fullScaleVolts,
-                flashQualifier, board, compensate, filter, previewRateHz, player, loopPoints, budgetBytes);
+                flashQualifier, board, compensate, filter, previewRateHz, player, loopPoints, budgetBytes,
+                previewSeconds);
+    }
+
+    /** The same plan with another preview length limit (infinite: the whole sound). */
+    public BuildPlan withPreviewSeconds(double seconds) {
+        return new BuildPlan(source, channel, symbol, outDir, bits, rateHz, dither, shaping, seed, removeDc,
+                trimDbfs, gainDb, normalizeDbfs, fadeInSeconds, fadeOutSeconds, resampler, fullScaleVolts,
+                flashQualifier, board, compensate, filter, previewRateHz, firmware, loop, flashBudgetBytes, seconds);
     }
 }
