@@ -216,7 +216,9 @@ public final class ProjectBuild {
         for (Build.Rendered r : rendered) {
             List<Path> assets = Build.writeAssets(r, r.plan().outDir());
             files.addAll(assets);
-            summaries.add(build.summary(r, List.of(), Build.arrayBytes(r), assets, r.warnings(), r.stageMillis()));
+            SampleStorage storage = player.map(FirmwareRequest::storage).orElse(SampleStorage.UNPACKED);
+            long soundBytes = storage.bytes(r.emitted().length(), r.plan().bits());
+            summaries.add(build.summary(r, List.of(), soundBytes, assets, r.warnings(), r.stageMillis()));
         }
         Path txt = outDir.resolve("report.txt");
         Path json = outDir.resolve("report.json");
