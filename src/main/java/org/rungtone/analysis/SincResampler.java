@@ -1,5 +1,6 @@
 package org.rungtone.analysis;
 
+import org.rungtone.internal.Bessel;
 import org.rungtone.internal.Checks;
 
 /**
@@ -45,7 +46,7 @@ final class SincResampler {
         half = (int) windowHalf + extraHalf + 1;
         int taps = 2 * half;
         table = new double[(PHASES + 1) * taps];
-        double i0Beta = besselI0(beta);
+        double i0Beta = Bessel.i0(beta);
         for (int p = 0; p <= PHASES; p++) {
             double frac = (double) p / PHASES;
             for (int k = 0; k < taps; k++) {
@@ -71,22 +72,7 @@ final class SincResampler {
         }
         double x = 2 * fc * t;
         double sinc = x == 0 ? 1 : Math.sin(Math.PI * x) / (Math.PI * x);
-        return 2 * fc * sinc * besselI0(beta * Math.sqrt(1 - u * u)) / i0Beta;
-    }
-
-    /** Modified Bessel function of the first kind, order 0, by its power series. */
-    static double besselI0(double x) {
-        double sum = 1;
-        double term = 1;
-        double q = x * x / 4;
-        for (int k = 1; k < 200; k++) {
-            term *= q / ((double) k * k);
-            sum += term;
-            if (term < sum * 1e-17) {
-                break;
-            }
-        }
-        return sum;
+        return 2 * fc * sinc * Bessel.i0(beta * Math.sqrt(1 - u * u)) / i0Beta;
     }
 
     /** Half the kernel length in input samples: an output at input time c reads inputs c − half + 1 .. c + half. */

@@ -140,39 +140,9 @@ public final class FirmwareOptions {
         if (!wantsPlayer()) {
             return Optional.empty();
         }
-        FirmwareRequest.Builder b = FirmwareRequest.builder()
-                .family(target == null ? "generic" : target)
-                .templates(templates == null ? Templates.bundled() : Templates.fromFolder(templates));
-        if (cpuClockHz != null) {
-            b.cpuClockHz(cpuClockHz);
-        }
-        if (timer != null) {
-            b.timer(TimerKind.parse(timer));
-        }
-        if (rateTolerancePpm != null) {
-            b.rateTolerancePpm(rateTolerancePpm);
-        }
-        if (pins != null) {
-            b.pins(pins);
-        }
-        if (portWidth != null) {
-            b.portWidth(portWidth);
-        }
-        if (pinStrategy != null) {
-            b.pinStrategy(PinStrategy.parse(pinStrategy));
-        }
-        if (storage != null) {
-            b.storage(SampleStorage.parse(storage));
-        }
-        PlaybackEngine e = engine == null ? (loop != null ? PlaybackEngine.LOOP : PlaybackEngine.CLIP)
-                : PlaybackEngine.parse(engine);
-        b.engine(e);
-        if (e == PlaybackEngine.DDS) {
-            b.dds(new DdsSpec(ddsPhaseBits == null ? DdsSpec.DEFAULT_PHASE_BITS : ddsPhaseBits,
-                    ddsFrequencyHz == null ? 1000 : ddsFrequencyHz));
-        }
-        if (flashBudget != null) {
-            b.flashBudgetBytes(flashBudget);
+        FirmwareRequest.Builder b = applyGiven(FirmwareRequest.builder().family("generic"));
+        if (engine == null) {
+            b.engine(loop != null ? PlaybackEngine.LOOP : PlaybackEngine.CLIP);
         }
         return Optional.of(b.build());
     }

@@ -1,5 +1,6 @@
 package org.rungtone.condition;
 
+import org.rungtone.internal.Bessel;
 import java.util.stream.IntStream;
 import org.rungtone.internal.Checks;
 import org.rungtone.source.Signal;
@@ -115,14 +116,14 @@ public final class KaiserResampler implements Resampler {
             den = exact ? frac[1] : INTERPOLATED_PHASES;
             int phases = (int) den + (exact ? 0 : 1);
             rows = new double[phases][taps];
-            double i0Beta = besselI0(beta);
+            double i0Beta = Bessel.i0(beta);
             for (int p = 0; p < phases; p++) {
                 double phase = (double) p / den;
                 for (int j = 0; j < taps; j++) {
                     // tap j multiplies x[floor(t) - half + 1 + j]; its distance from t is:
                     double tau = (j - half + 1) - phase;
                     double r = tau / half;
-                    double w = Math.abs(r) >= 1 ? 0 : besselI0(beta * Math.sqrt(1 - r * r)) / i0Beta;
+                    double w = Math.abs(r) >= 1 ? 0 : Bessel.i0(beta * Math.sqrt(1 - r * r)) / i0Beta;
                     rows[p][j] = 2 * cutoff * sinc(2 * cutoff * tau) * w;
                 }
             }
@@ -192,18 +193,4 @@ public final class KaiserResampler implements Resampler {
         return Math.sin(px) / px;
     }
 
-    /** Zeroth-order modified Bessel function of the first kind, by its power series. */
-    static double besselI0(double x) {
-        double sum = 1;
-        double term = 1;
-        double q = x * x / 4;
-        for (int k = 1; k < 200; k++) {
-            term *= q / ((double) k * k);
-            sum += term;
-            if (term < sum * 1e-17) {
-                break;
-            }
-        }
-        return sum;
-    }
 }
