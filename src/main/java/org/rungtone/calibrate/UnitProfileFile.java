@@ -18,7 +18,6 @@ import org.tomlj.TomlArray;
 import org.tomlj.TomlParseError;
 import org.tomlj.TomlParseResult;
 import org.tomlj.TomlPosition;
-import org.tomlj.TomlTable;
 
 /** Writes and reads the TOML form of a {@link UnitProfile} (package-private). */
 final class UnitProfileFile {

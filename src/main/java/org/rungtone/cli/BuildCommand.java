@@ -68,7 +68,8 @@ public final class BuildCommand implements Callable<Integer> {
     String shaping;
 
     @Option(names = "--seed", paramLabel = "<n>", defaultValue = "1",
-            description = "Seed for dither; the same inputs and seed give identical outputs (default ${DEFAULT-VALUE}).")
+            description = "Seed for dither; the same inputs and seed give identical outputs"
+                    + " (default ${DEFAULT-VALUE}).")
     long seed;
 
     @Option(names = "--name", paramLabel = "<symbol>",

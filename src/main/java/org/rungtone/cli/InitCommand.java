@@ -49,7 +49,8 @@ public final class InitCommand implements Callable<Integer> {
             description = "Ladder topology (default ${DEFAULT-VALUE}).")
     String topology;
 
-    @Option(names = "--bits", paramLabel = "<n>", defaultValue = "6", description = "Ladder bits (default ${DEFAULT-VALUE}).")
+    @Option(names = "--bits", paramLabel = "<n>", defaultValue = "6",
+            description = "Ladder bits (default ${DEFAULT-VALUE}).")
     int bits;
 
     @Option(names = "--name", paramLabel = "<name>", description = "Project name (default: from the file name).")

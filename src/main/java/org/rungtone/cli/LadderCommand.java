@@ -37,7 +37,8 @@ import picocli.CommandLine.Option;
 
 /** {@code rungtone ladder}: analyse or design a resistor-ladder DAC. */
 @Command(name = "ladder",
-        header = "Model a ladder: every level, linearity, Monte Carlo spread, resistor picks.", mixinStandardHelpOptions = true, sortOptions = false,
+        header = "Model a ladder: every level, linearity, Monte Carlo spread, resistor picks.",
+        mixinStandardHelpOptions = true, sortOptions = false,
         versionProvider = Version.Provider.class,
         description = {
             "Models a resistor-ladder DAC exactly, pins, load and buffer included, and prints its wiring,"
@@ -379,7 +380,8 @@ public final class LadderCommand implements Callable<Integer> {
             stat("SINAD (dB), sine", mc.sinadStats(), true);
             stat("ENOB (bits)", mc.enobStats(), true);
             double[] ci = mc.monotonicInterval95();
-            line("  monotonic boards   %.1f %% (%d of %d; 95 %% interval %.1f .. %.1f %%)", 100 * mc.monotonicFraction(),
+            line("  monotonic boards   %.1f %% (%d of %d; 95 %% interval %.1f .. %.1f %%)",
+                    100 * mc.monotonicFraction(),
                     mc.monotonicBoards(), mc.boards(), 100 * ci[0], 100 * ci[1]);
             line("  nominal board SINAD %.2f dB", mc.nominalSinadDb());
         }
@@ -404,7 +406,8 @@ public final class LadderCommand implements Callable<Integer> {
             Linearity p = d.proposedLinearity();
             line("  %-14s %10s %10.4f  %.4f", "worst |INL|", "LSB", n.maxAbsInlLsb(), p.maxAbsInlLsb());
             line("  %-14s %10s %10.4f  %.4f", "worst |DNL|", "LSB", n.maxAbsDnlLsb(), p.maxAbsDnlLsb());
-            line("  %-14s %10s %10s  %s", "monotonic", "", n.isMonotonic() ? "yes" : "no", p.isMonotonic() ? "yes" : "no");
+            line("  %-14s %10s %10s  %s", "monotonic", "", n.isMonotonic() ? "yes" : "no",
+                    p.isMonotonic() ? "yes" : "no");
             line("  %-14s %10s %10d  %d", "resistors", "", d.naive().size(), d.partCount());
             double worst = 0;
             for (PinCurrent pc : proposed.pinCurrents()) {

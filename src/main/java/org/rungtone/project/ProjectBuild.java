@@ -175,7 +175,8 @@ public final class ProjectBuild {
             if (board.isPresent()) {
                 plan = plan.withBoard(board.get(), compensate);
             }
-            plan = plan.withPreview(pv.filter().orElse(ReconstructionFilter.none()), pv.rateHz().orElse(44_100)).withFirmware(Optional.empty(), s.loop(), 0);
+            plan = plan.withPreview(pv.filter().orElse(ReconstructionFilter.none()), pv.rateHz().orElse(44_100))
+                    .withFirmware(Optional.empty(), s.loop(), 0);
             rendered.add(soundBuild.render(plan));
         }
 

@@ -42,7 +42,8 @@ public record BuildSummary(String toolVersion, Path source, String sourceLayout,
         double rateHz, int samples, double durationSeconds, String dither, String shaping, long seed,
         String conditioning, String resampler, String ladder, long clippedSamples, List<QualityReport> quality,
         String emittedCase, Optional<Double> shapingGainDb, Optional<ToneReport> tone, PreviewInfo preview,
-        List<String> firmware, long flashBytes, List<Path> files, List<String> warnings, Map<String, Double> stageMillis) {
+        List<String> firmware, long flashBytes, List<Path> files, List<String> warnings,
+        Map<String, Double> stageMillis) {
 
     /** Copies the collections. */
     public BuildSummary {

@@ -14,7 +14,6 @@ import org.junit.jupiter.api.Test;
 import org.rungtone.internal.InputError;
 import org.rungtone.ladder.Ladder;
 import org.rungtone.ladder.LadderSpec;
-import org.rungtone.ladder.LevelTable;
 import org.rungtone.ladder.Topology;
 
 /**

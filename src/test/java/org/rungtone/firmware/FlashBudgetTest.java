@@ -17,7 +17,8 @@ class FlashBudgetTest {
     void namesTheOverrunAndTheFirstCandidateThatFits() {
         List<FlashBudget.Candidate> c = List.of(new FlashBudget.Candidate("8-bit packed at 11.025 kHz", 11000),
                 new FlashBudget.Candidate("6-bit packed at 8 kHz", 7812));
-        assertEquals("the samples need 12,345 bytes, 2,345 bytes over the 10,000-byte --flash-budget; 6-bit packed at 8 kHz"
+        assertEquals("the samples need 12,345 bytes, 2,345 bytes over the 10,000-byte --flash-budget;"
+                + " 6-bit packed at 8 kHz"
                 + " would fit (7,812 bytes)", assertThrows(InputError.class,
                         () -> FlashBudget.check(12345, 10000, c)).getMessage());
     }
@@ -36,7 +37,8 @@ class FlashBudgetTest {
     @Test
     void saysSoWhenNothingFits() {
         List<FlashBudget.Candidate> c = FlashBudget.alternatives(800000, 8000, 8, SampleStorage.PACKED, 0);
-        assertEquals("the samples need 800,000 bytes, 799,900 bytes over the 100-byte --flash-budget; no smaller bit depth"
+        assertEquals("the samples need 800,000 bytes, 799,900 bytes over the 100-byte --flash-budget;"
+                + " no smaller bit depth"
                 + " or rate fits either: shorten the sound or raise --flash-budget", assertThrows(
                         InputError.class, () -> FlashBudget.check(800000, 100, c)).getMessage());
     }

@@ -166,7 +166,8 @@ class WavReaderTest {
         byte[] truncated = java.util.Arrays.copyOf(good, 30);
         return Stream.of(
                 Arguments.of("empty", new byte[0], "is too short to be a WAV file (0 bytes; a RIFF header needs 12)"),
-                Arguments.of("text", "hello, this is not audio".getBytes(), "is not a WAV file (no RIFF header at byte 0)"),
+                Arguments.of("text", "hello, this is not audio".getBytes(),
+                        "is not a WAV file (no RIFF header at byte 0)"),
                 Arguments.of("truncated", truncated, "fmt chunk at byte 12 is truncated or too short (16 bytes)"),
                 Arguments.of("adpcm", WavFixtures.wav().layout(Layout.S16, 1, 8000, x).tag(2).bytes(),
                         "uses format tag 0x0002 (Microsoft ADPCM); Rungtone reads PCM (1), IEEE float (3) and"

@@ -5,7 +5,8 @@ import org.rungtone.script.ast.Pos;
 
 /**
  * A two-input operation on samples: arithmetic, comparisons and logic (true is 1, false is 0; NaN stays
- * NaN), and the two-argument maths functions. The four arithmetic operators have tight loops of their own, with a constant
+ * NaN), and the two-argument maths functions. The four arithmetic operators have tight loops of their own,
+ * with a constant
  * operand read once per block.
  */
 final class Arith extends Eval {
