@@ -44,6 +44,7 @@ import org.rungtone.report.BuildReport;
 import org.rungtone.report.BuildSummary;
 import org.rungtone.report.HtmlReport;
 import org.rungtone.report.Json;
+import org.rungtone.report.Plots;
 import org.rungtone.source.Signal;
 import org.rungtone.source.WavWriter;
 
@@ -125,6 +126,7 @@ public final class Build {
      */
     public BuildSummary run(BuildPlan plan) {
         AtomicFiles.checkFolderUsable(plan.outDir());
+        CompletableFuture<Void> plotsReady = CompletableFuture.runAsync(Plots::warmUp);
         Rendered r = render(plan);
         Stopwatch watch = new Stopwatch(progress);
         List<Path> files = new ArrayList<>();
@@ -149,6 +151,7 @@ public final class Build {
             files.addAll(emitArray(plan.symbol(), r, plan.outDir()));
         }
         watch.lap("emit");
+        join(plotsReady);
         files.addAll(writeAssets(r, plan.outDir()));
         watch.lap("plots");
         Path txt = plan.outDir().resolve("report.txt");

@@ -157,6 +157,8 @@ public final class ProjectBuild {
         Project.Preview pv = project.preview();
         String prefix = CNames.symbol(project.name());
 
+        java.util.concurrent.CompletableFuture<Void> plotsReady =
+                java.util.concurrent.CompletableFuture.runAsync(org.rungtone.report.Plots::warmUp);
         List<Build.Rendered> rendered = new ArrayList<>();
         Build build = new Build(toolVersion);
         for (Project.Sound s : project.sounds()) {
@@ -213,6 +215,7 @@ public final class ProjectBuild {
                 files.addAll(build.emitArray(r.plan().symbol(), r, outDir));
             }
         }
+        Build.join(plotsReady);
         List<BuildSummary> summaries = new ArrayList<>();
         for (Build.Rendered r : rendered) {
             List<Path> assets = Build.writeAssets(r, r.plan().outDir());

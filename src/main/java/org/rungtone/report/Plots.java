@@ -73,6 +73,16 @@ public final class Plots {
         BOTTOM_RIGHT
     }
 
+    /**
+     * Loads the drawing and PNG-encoding machinery (Java2D, fonts, XChart) by rendering a tiny chart and
+     * throwing it away: a build calls this on a spare thread at its start, so the first real plot later
+     * does not pay a few hundred milliseconds of one-time start-up.
+     */
+    public static void warmUp() {
+        png(new Chart("", "x", "y", false, List.of(new Series("s", new double[] {0, 1}, new double[] {0, 1},
+                Style.LINE))));
+    }
+
     /** Renders a chart to PNG bytes (800 x 480). */
     public static byte[] png(Chart chart) {
         return png(chart, Legend.TOP_RIGHT);
