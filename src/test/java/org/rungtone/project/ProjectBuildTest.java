@@ -58,6 +58,34 @@ class ProjectBuildTest {
     }
 
     @Test
+    void speechBandExampleBuildsAndItsGenericCodeCompiles() throws Exception {
+        Path g = copyExample("speech-band");
+        Path out = dir.resolve("speech");
+        Cli.Run r = Cli.run("build", g.resolve("speech-band.toml").toString(), "--out", out.toString(), "-q");
+        assertEquals(0, r.exitCode(), r.err());
+        String json = Files.readString(out.resolve("report.json"));
+        // ITU-T G.711 telephone sampling: 8 kHz
+        assertTrue(json.contains("\"rate_hz\": 8000.0"), json);
+        CToolchain.require("gcc");
+        CToolchain.compileClean(out, CToolchain.cmd(List.of("gcc"), CToolchain.cmd(CToolchain.STRICT,
+                List.of("-c", "vent_voice.c", "vent_voice_data.c"))));
+    }
+
+    @Test
+    void benchGeneratorExampleBuildsADdsPlayerForCortexM() throws Exception {
+        Path g = copyExample("bench-generator");
+        Path out = dir.resolve("bench");
+        Cli.Run r = Cli.run("build", g.resolve("bench-generator.toml").toString(), "--out", out.toString());
+        assertEquals(0, r.exitCode(), r.err());
+        // DDS: M = round(f * 2^n / fs) = round(1000 * 2^32 / 48000) = 89478485 (Analog Devices MT-085)
+        assertTrue(r.out().contains("tuning word M = 89478485"), r.out());
+        CToolchain.require("arm-none-eabi-gcc");
+        CToolchain.compileClean(out, CToolchain.cmd(List.of("arm-none-eabi-gcc", "-mcpu=cortex-m3", "-mthumb",
+                "-ffreestanding", "-Os"), CToolchain.cmd(CToolchain.STRICT, List.of("-c", "bench_gen.c",
+                        "bench_gen_data.c"))));
+    }
+
+    @Test
     void commandLineOverridesTheFileAndTheReportSaysSo() throws IOException {
         Path g = copyExample("greenhouse");
         Path toml = g.resolve("greenhouse.toml");
