@@ -40,6 +40,14 @@ class ProjectBuildTest {
                 "door_chime/preview.wav", "frost_alarm/preview.wav", "door_chime/error-spectrum.png")) {
             assertTrue(Files.exists(out.resolve(f)), f);
         }
+        String html = Files.readString(out.resolve("report.html"));
+        long pngs;
+        try (var files = Files.walk(out)) {
+            pngs = files.filter(p -> p.toString().endsWith(".png")).count();
+        }
+        assertTrue(pngs >= 2, "plots written: " + pngs);
+        assertEquals(pngs, html.split("data:image/png;base64,", -1).length - 1, "every plot embedded once");
+        assertFalse(html.contains("src=\"http") || html.contains("href=\"http"), "readable offline");
         String report = Files.readString(out.resolve("report.txt"));
         assertTrue(report.contains("greenhouse_door_chime"), report);
         assertTrue(report.contains("out of") || report.contains("Flash: "), report);
