@@ -1,6 +1,7 @@
 package org.rungtone.ladder;
 
 import java.io.IOException;
+import java.nio.charset.CharacterCodingException;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -127,6 +128,8 @@ public final class LadderFile {
             result = Toml.parse(file);
         } catch (NoSuchFileException e) {
             throw new InputError(file + ": no such file", e);
+        } catch (CharacterCodingException e) {
+            throw new InputError(file + ": is not UTF-8 text; expected a TOML file with a [ladder] table", e);
         } catch (IOException e) {
             throw new InputError(file + ": cannot read (" + e.getMessage() + ")", e);
         }

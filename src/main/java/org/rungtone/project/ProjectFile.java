@@ -1,6 +1,7 @@
 package org.rungtone.project;
 
 import java.io.IOException;
+import java.nio.charset.CharacterCodingException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
@@ -37,6 +38,8 @@ public final class ProjectFile {
             text = Files.readString(file);
         } catch (NoSuchFileException e) {
             throw InputError.inFile(file, "no such file", e);
+        } catch (CharacterCodingException e) {
+            throw InputError.inFile(file, "is not UTF-8 text; save the project file as UTF-8", e);
         } catch (IOException e) {
             throw InputError.inFile(file, "cannot be read (" + e.getMessage() + ")", e);
         }
