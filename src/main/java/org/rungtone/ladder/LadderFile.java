@@ -128,6 +128,15 @@ public final class LadderFile {
             result = Toml.parse(file);
         } catch (NoSuchFileException e) {
             throw new InputError(file + ": no such file", e);
+        } catch (TomlParseError e) {
+            // tomlj throws some errors (a bad escape in a quoted table name) instead of listing them
+            throw new InputError(location(file, e.position()) + ": not valid TOML: " + e.getMessage(), e);
+        } catch (StackOverflowError e) {
+            throw new InputError(file + ": arrays or tables are nested too deeply to read; expected a few levels");
+        } catch (AssertionError e) {
+            // tomlj 1.1.1 checks a malformed \\u escape with an assert; under java -ea it escapes as an Error
+            throw new InputError(file + ": not valid TOML: a string holds a broken escape (\\u needs 4 hex"
+                    + " digits, \\U needs 8)", e);
         } catch (CharacterCodingException e) {
             throw new InputError(file + ": is not UTF-8 text; expected a TOML file with a [ladder] table", e);
         } catch (IOException e) {

@@ -10,9 +10,11 @@ import org.rungtone.project.ProjectFile;
 
 /**
  * Fuzz target: any text given to the project-file reader (and its {@code [ladder]} table to the ladder reader
- * and solver) either gives a {@link Project} with at least one sound and a ladder with finite levels, or raises {@link InputError} with a one-line message naming the file; nothing else may escape. In
+ * and solver) either gives a {@link Project} with at least one sound and a ladder with finite levels, or
+ * raises {@link InputError} with a one-line message naming the file; nothing else may escape. In
  * {@code mvn verify} this replays the seed corpus in
- * {@code src/test/resources/org/rungtone/fuzz/ProjectFileFuzzTestInputs/}; {@code ./fuzz project 300} fuzzes it.
+ * {@code src/test/resources/org/rungtone/fuzz/ProjectFileFuzzTestInputs/} (files named {@code regression-*}
+ * are inputs that once escaped); {@code ./fuzz project 300} fuzzes it.
  */
 class ProjectFileFuzzTest {
     private static final Path FILE = Path.of("fuzz.toml");
