@@ -209,6 +209,16 @@ class BadInputCatalogueTest {
         c.add(bad("project: no sounds", "p.toml: the project has no sounds", d -> project(d, head)));
         c.add(bad("project: impossible ladder", "p.toml:6: ladder.bits: bit depth must be 1..16, got 40",
                 d -> project(d, head + "\n[ladder]\nbits = 40\n" + sound)));
+        c.add(bad("project: sound name too long for a C symbol", "p.toml:6: sound[1].name: the name '"
+                + "x".repeat(50) + "' is too long for a C symbol prefix", d -> project(d, head
+                        + "\n[[sound]]\nname = \"" + "x".repeat(50) + "\"\nsource = \"tone.wav\"\n")));
+        c.add(bad("project: long name with an escaped line break", "sound[1].name: the name '" + "y".repeat(20)
+                + "\\r" + "y".repeat(25) + "' is too long", d -> project(d, head + "\n[[sound]]\nname = \""
+                        + "y".repeat(20) + "\\r" + "y".repeat(25) + "\"\nsource = \"tone.wav\"\n")));
+        c.add(bad("project: broken escape in a table name", "p.toml:1:7: not valid TOML: Invalid escape sequence",
+                d -> project(d, "[ = \"u\\E]\"]\n")));
+        c.add(bad("project: arrays nested thousands deep", "p.toml: arrays or tables are nested too deeply",
+                d -> project(d, head + "a = " + "[".repeat(5000) + "]".repeat(5000) + "\n" + sound)));
         c.add(bad("project: sound file missing", "tone.wav: no such file",
                 d -> List.of("build", text(d, "p.toml", head + sound).toString())));
         c.add(bad("project: out below a regular file", "output folder cannot be created",
