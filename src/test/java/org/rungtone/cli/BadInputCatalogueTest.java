@@ -169,6 +169,13 @@ class BadInputCatalogueTest {
     }
 
     private static void outputCases(List<Case> c) {
+        c.add(bad("build: failed rebuild keeps the previous outputs", "over the 10-byte --flash-budget",
+                d -> {
+                    Files.createDirectories(d.resolve("out"));
+                    text(d, "out/tone.c", "/* from the last good build */\n");
+                    text(d, "out/report.txt", "last good report\n");
+                    return build(d, wavFile(d), "--flash-budget", "10");
+                }));
         c.add(bad("build: --out below a regular file", "output folder cannot be created",
                 d -> List.of("build", wavFile(d).toString(), "--out", text(d, "notes.txt", "x").resolve("out")
                         .toString())));
@@ -233,6 +240,8 @@ class BadInputCatalogueTest {
                 d -> survey(d, wavFile(d), "--target-sinad", "40", "--target-enob", "6")));
         c.add(bad("ladder: Monte Carlo of 0 boards", "--monte-carlo: need 1..2000000 boards, got 0",
                 d -> ladder(d, "--monte-carlo", "0")));
+        c.add(bad("ladder: Monte Carlo of a billion boards", "--monte-carlo: need 1..2000000 boards, got 1000000000",
+                d -> ladder(d, "--monte-carlo", "1000000000")));
         c.add(usage("build: --bits is not a number (usage error)", "Invalid value for option '--bits'",
                 d -> build(d, wavFile(d), "--bits", "six")));
         c.add(usage("build: no source given (usage error)", "Missing required parameter",
