@@ -244,19 +244,29 @@ public final class LadderFile {
      * of the table's first key.
      */
     public static String where(TomlTable table, Path file, String key) {
-        TomlPosition pos = table.inputPositionOf(key);
+        TomlPosition pos = positionOf(table, key);
         if (pos == null && key.contains(".")) {
-            pos = table.inputPositionOf(key.substring(0, key.indexOf('.')));
+            pos = positionOf(table, key.substring(0, key.indexOf('.')));
         }
         if (pos == null) {
             for (String k : table.keySet()) {
-                TomlPosition p = table.inputPositionOf(k);
+                TomlPosition p = table.inputPositionOf(List.of(k));
                 if (p != null && (pos == null || p.line() < pos.line())) {
                     pos = p;
                 }
             }
         }
         return location(file, pos) + ": ladder." + key;
+    }
+
+    /** The position of a dotted key such as {@code buffer.gain}, or of a quoted key that is not a bare key. */
+    private static TomlPosition positionOf(TomlTable table, String key) {
+        try {
+            return table.inputPositionOf(key);
+        } catch (IllegalArgumentException e) {
+            // a quoted key like 'bits ~' is not valid dotted-key syntax; look it up as one name
+            return table.inputPositionOf(List.of(key));
+        }
     }
 
     private static String location(Path file, TomlPosition pos) {

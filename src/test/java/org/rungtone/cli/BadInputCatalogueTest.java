@@ -226,6 +226,8 @@ class BadInputCatalogueTest {
                 d -> project(d, "[ = \"u\\E]\"]\n")));
         c.add(bad("project: arrays nested thousands deep", "p.toml: arrays or tables are nested too deeply",
                 d -> project(d, head + "a = " + "[".repeat(5000) + "]".repeat(5000) + "\n" + sound)));
+        c.add(bad("project: quoted ladder key that is no name", "p.toml:6: ladder.bits ~: unknown key",
+                d -> project(d, head + "\n[ladder]\n'bits ~' = 4\n" + sound)));
         c.add(bad("project: sound file missing", "tone.wav: no such file",
                 d -> List.of("build", text(d, "p.toml", head + sound).toString())));
         c.add(bad("project: out below a regular file", "output folder cannot be created",
