@@ -9,6 +9,7 @@ import java.util.concurrent.Callable;
 import org.rungtone.firmware.CNames;
 import org.rungtone.firmware.TargetFamily;
 import org.rungtone.internal.AtomicFiles;
+import org.rungtone.internal.Checks;
 import org.rungtone.internal.InputError;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -70,9 +71,16 @@ public final class InitCommand implements Callable<Integer> {
         if (!topo.equals("r2r") && !topo.equals("weighted")) {
             throw new InputError("--topology must be weighted or r2r for a starter file: " + topology);
         }
-        org.rungtone.internal.Checks.checkBits(bits);
+        Checks.checkBits(bits);
         if (Files.exists(file) && !force) {
             throw new InputError(file + ": already exists; use --force to overwrite it");
+        }
+        for (Path p = file.toAbsolutePath().getParent(); p != null; p = p.getParent()) {
+            if (Files.exists(p)) {
+                Checks.checkInput(Files.isDirectory(p), "%s: cannot be written, %s is a file; choose another path",
+                        file, p);
+                break;
+            }
         }
         String stem = file.getFileName().toString().replaceFirst("\\.toml$", "");
         String project = CNames.symbol(name != null ? name : stem);

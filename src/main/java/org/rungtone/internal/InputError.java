@@ -10,12 +10,39 @@ public class InputError extends RuntimeException {
 
     /** Creates an error with a complete one-line message. */
     public InputError(String message) {
-        super(message);
+        super(oneLine(message));
     }
 
     /** Creates an error with a complete one-line message and its cause (shown only with --verbose). */
     public InputError(String message, Throwable cause) {
-        super(message, cause);
+        super(oneLine(message), cause);
+    }
+
+    /**
+     * Keeps a message on one line when it quotes the user's text: line breaks and other control characters
+     * (a carriage return escaped into a TOML name, a tab in a script token) are written as backslash escapes
+     * such as {@code \n} and {@code \t}; the rest as a backslash, the letter u and four hex digits.
+     */
+    static String oneLine(String message) {
+        if (message == null) {
+            return null;
+        }
+        StringBuilder b = new StringBuilder(message.length());
+        for (int i = 0; i < message.length(); i++) {
+            char c = message.charAt(i);
+            if (c == '\n') {
+                b.append("\\n");
+            } else if (c == '\r') {
+                b.append("\\r");
+            } else if (c == '\t') {
+                b.append("\\t");
+            } else if (c < 0x20 || c == 0x7F || c == 0x85 || c == 0x2028 || c == 0x2029) {
+                b.append(String.format(java.util.Locale.ROOT, "\\u%04X", (int) c));
+            } else {
+                b.append(c);
+            }
+        }
+        return b.toString();
     }
 
     /** Prefixes the message with a file name: {@code "chime.wav: " + message}. */

@@ -1,6 +1,7 @@
 package org.rungtone.ladder;
 
 import java.io.IOException;
+import java.nio.charset.CharacterCodingException;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -127,6 +128,17 @@ public final class LadderFile {
             result = Toml.parse(file);
         } catch (NoSuchFileException e) {
             throw new InputError(file + ": no such file", e);
+        } catch (TomlParseError e) {
+            // tomlj throws some errors (a bad escape in a quoted table name) instead of listing them
+            throw new InputError(location(file, e.position()) + ": not valid TOML: " + e.getMessage(), e);
+        } catch (StackOverflowError e) {
+            throw new InputError(file + ": arrays or tables are nested too deeply to read; expected a few levels");
+        } catch (AssertionError e) {
+            // tomlj 1.1.1 checks a malformed \\u escape with an assert; under java -ea it escapes as an Error
+            throw new InputError(file + ": not valid TOML: a string holds a broken escape (\\u needs 4 hex"
+                    + " digits, \\U needs 8)", e);
+        } catch (CharacterCodingException e) {
+            throw new InputError(file + ": is not UTF-8 text; expected a TOML file with a [ladder] table", e);
         } catch (IOException e) {
             throw new InputError(file + ": cannot read (" + e.getMessage() + ")", e);
         }
@@ -232,19 +244,29 @@ public final class LadderFile {
      * of the table's first key.
      */
     public static String where(TomlTable table, Path file, String key) {
-        TomlPosition pos = table.inputPositionOf(key);
+        TomlPosition pos = positionOf(table, key);
         if (pos == null && key.contains(".")) {
-            pos = table.inputPositionOf(key.substring(0, key.indexOf('.')));
+            pos = positionOf(table, key.substring(0, key.indexOf('.')));
         }
         if (pos == null) {
             for (String k : table.keySet()) {
-                TomlPosition p = table.inputPositionOf(k);
+                TomlPosition p = table.inputPositionOf(List.of(k));
                 if (p != null && (pos == null || p.line() < pos.line())) {
                     pos = p;
                 }
             }
         }
         return location(file, pos) + ": ladder." + key;
+    }
+
+    /** The position of a dotted key such as {@code buffer.gain}, or of a quoted key that is not a bare key. */
+    private static TomlPosition positionOf(TomlTable table, String key) {
+        try {
+            return table.inputPositionOf(key);
+        } catch (IllegalArgumentException e) {
+            // a quoted key like 'bits ~' is not valid dotted-key syntax; look it up as one name
+            return table.inputPositionOf(List.of(key));
+        }
     }
 
     private static String location(Path file, TomlPosition pos) {

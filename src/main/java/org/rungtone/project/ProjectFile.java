@@ -1,6 +1,7 @@
 package org.rungtone.project;
 
 import java.io.IOException;
+import java.nio.charset.CharacterCodingException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
@@ -37,6 +38,8 @@ public final class ProjectFile {
             text = Files.readString(file);
         } catch (NoSuchFileException e) {
             throw InputError.inFile(file, "no such file", e);
+        } catch (CharacterCodingException e) {
+            throw InputError.inFile(file, "is not UTF-8 text; save the project file as UTF-8", e);
         } catch (IOException e) {
             throw InputError.inFile(file, "cannot be read (" + e.getMessage() + ")", e);
         }
@@ -49,11 +52,21 @@ public final class ProjectFile {
      * @throws InputError naming file, line and key for every problem
      */
     public static Project parse(String text, Path file) {
-        TomlParseResult toml = Toml.parse(text);
+        TomlParseResult toml;
+        try {
+            toml = Toml.parse(text);
+        } catch (TomlParseError e) {
+            // tomlj throws some errors (a bad escape in a quoted table name) instead of listing them
+            throw notToml(file, e);
+        } catch (StackOverflowError e) {
+            throw InputError.inFile(file, "arrays or tables are nested too deeply to read; expected a few levels");
+        } catch (AssertionError e) {
+            // tomlj 1.1.1 checks a malformed \\u escape with an assert; under java -ea it escapes as an Error
+            throw InputError.inFile(file, "not valid TOML: a string holds a broken escape (\\u needs 4 hex digits,"
+                    + " \\U needs 8)", e);
+        }
         if (!toml.errors().isEmpty()) {
-            TomlParseError e = toml.errors().get(0);
-            throw new InputError(file + ":" + e.position().line() + ":" + e.position().column()
-                    + ": not valid TOML: " + e.getMessage().replaceAll(" \\(line \\d+, column \\d+\\)$", ""));
+            throw notToml(file, toml.errors().get(0));
         }
         Path base = file.toAbsolutePath().getParent();
         TomlFields root = new TomlFields(toml, file, "");
@@ -86,7 +99,12 @@ public final class ProjectFile {
         Set<String> symbols = new HashSet<>();
         for (int i = 0; i < soundTables.size(); i++) {
             Project.Sound s = sound(soundTables.get(i), i + 1, base);
-            String symbol = CNames.symbol(s.name());
+            String symbol;
+            try {
+                symbol = CNames.symbol(s.name());
+            } catch (InputError e) {
+                throw soundTables.get(i).error("name", e.getMessage().replace("--name", "the name"));
+            }
             if (!symbols.add(symbol)) {
                 throw soundTables.get(i).error("name", "'" + s.name() + "' gives the C name '" + symbol
                         + "', which another sound already has");
@@ -95,6 +113,11 @@ public final class ProjectFile {
         }
         root.rejectUnknown();
         return new Project(file, name, out, seed, unit, compensation, target, ladder, quantize, preview, sounds);
+    }
+
+    private static InputError notToml(Path file, TomlParseError e) {
+        return new InputError(file + ":" + e.position().line() + ":" + e.position().column()
+                + ": not valid TOML: " + e.getMessage().replaceAll(" \\(line \\d+, column \\d+\\)$", ""), e);
     }
 
     private static Map<String, Integer> lines(TomlFields f) {

@@ -45,7 +45,7 @@ final class TomlFields {
 
     /** The line of a key, or of the table when the key is absent. */
     int line(String key) {
-        TomlPosition p = table.inputPositionOf(key);
+        TomlPosition p = table.inputPositionOf(List.of(key)); // one key, even a quoted one with dots
         return p == null ? 0 : p.line();
     }
 
