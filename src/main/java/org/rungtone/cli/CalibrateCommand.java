@@ -65,18 +65,8 @@ public final class CalibrateCommand implements Runnable {
         @Mixin
         CommonOptions common;
 
-        @Option(names = "--bits", paramLabel = "N", description = "Bit depth 1..16 (default: the ladder's, else 8).")
-        int bits;
-
         @Mixin
-        LadderOptions ladder;
-
-        @Option(names = "--verify", paramLabel = "K",
-                description = "Check codes on top of the basis (default: every code up to 6 bits, else 2·N).")
-        Integer verify;
-
-        @Option(names = "--every-code", description = "Read every code.")
-        boolean everyCode;
+        PlanOptions codes;
 
         @Option(names = "--seed", paramLabel = "N", defaultValue = "1",
                 description = "Seed of the board and the meter noise (default ${DEFAULT-VALUE}).")
@@ -100,18 +90,15 @@ public final class CalibrateCommand implements Runnable {
 
         @Override
         public Integer call() {
-            if (everyCode && verify != null) {
-                throw new InputError("--every-code and --verify exclude each other; give one");
-            }
+            codes.check();
             if (!(resolution >= 0 && resolution < 10)) {
                 throw new InputError("--resolution must be 0 (exact) or a positive voltage below 10 V: "
                         + resolution);
             }
             SimulatedBoard.Meter meter = new SimulatedBoard.Meter(noise, resolution, repeat);
             AtomicFiles.checkFolderUsable(out);
-            LadderSpec s = ladder.toSpec(bits);
-            MeasurementPlan plan = everyCode ? MeasurementPlan.everyCode(s.levels())
-                    : verify != null ? MeasurementPlan.of(s.levels(), verify) : MeasurementPlan.of(s.levels());
+            LadderSpec s = codes.spec();
+            MeasurementPlan plan = codes.plan(s);
             SimulatedBoard board = SimulatedBoard.draw(s, Spread.uniform(), seed);
             Path readings = out.resolve("readings.csv");
             Path truth = out.resolve("true-levels.csv");

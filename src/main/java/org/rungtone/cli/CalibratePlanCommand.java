@@ -52,18 +52,8 @@ public final class CalibratePlanCommand implements Callable<Integer> {
     @Mixin
     CommonOptions common;
 
-    @Option(names = "--bits", paramLabel = "N", description = "Bit depth 1..16 (default: the ladder's, else 8).")
-    int bits;
-
     @Mixin
-    LadderOptions ladder;
-
-    @Option(names = "--verify", paramLabel = "K",
-            description = "Check codes on top of the basis (default: every code up to 6 bits, else 2·N).")
-    Integer verify;
-
-    @Option(names = "--every-code", description = "Measure every code; the readings then are the profile.")
-    boolean everyCode;
+    PlanOptions codes;
 
     @Option(names = "--hold", paramLabel = "<time>", converter = Converters.Seconds.class, defaultValue = "2s",
             description = "How long the sweep holds each code (default ${DEFAULT-VALUE}).")
@@ -89,9 +79,7 @@ public final class CalibratePlanCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        if (everyCode && verify != null) {
-            throw new InputError("--every-code and --verify exclude each other; give one");
-        }
+        codes.check();
         if (firmware.engine != null && PlaybackEngine.parse(firmware.engine) != PlaybackEngine.SWEEP) {
             throw new InputError("--engine " + firmware.engine + ": a measurement plan always emits the sweep"
                     + " program; leave --engine out");
@@ -100,10 +88,9 @@ public final class CalibratePlanCommand implements Callable<Integer> {
             throw new InputError("--loop and --dds-frequency do not apply to the sweep program; leave them out");
         }
         AtomicFiles.checkFolderUsable(out);
-        LadderSpec ladderSpec = ladder.toSpec(bits);
+        LadderSpec ladderSpec = codes.spec();
         LevelTable model = ladderSpec.levels();
-        MeasurementPlan plan = everyCode ? MeasurementPlan.everyCode(model)
-                : verify != null ? MeasurementPlan.of(model, verify) : MeasurementPlan.of(model);
+        MeasurementPlan plan = codes.plan(ladderSpec);
         double lsb = (model.maxVolts() - model.minVolts()) / (model.size() - 1);
         double maxAbs = Math.max(Math.abs(model.minVolts()), Math.abs(model.maxVolts()));
         List<MeterAdvice> advice = MeterAdvice.forLevels(maxAbs, lsb);
