@@ -30,6 +30,12 @@ import org.rungtone.internal.InputError;
 public final class WavReader {
     private static final int BLOCK_BYTES = 1 << 16;
     private static final long UNKNOWN_SIZE = 0xFFFF_FFFFL;
+    /**
+     * Largest float sample accepted, in full-scale units: far above integer PCM written as floats without
+     * scaling (2^32), yet small enough that sums of squares over any file stay finite (common practice, no
+     * source). Larger values are damaged data; 1e308 samples would overflow the mix-down and the conditioning.
+     */
+    private static final double MAX_FLOAT_SAMPLE = 1e15;
     private static final byte[] GUID_TAIL = {0x00, 0x00, 0x00, 0x00, 0x10, 0x00, (byte) 0x80, 0x00, 0x00,
         (byte) 0xAA, 0x00, 0x38, (byte) 0x9B, 0x71};
 
@@ -295,11 +301,13 @@ public final class WavReader {
                     int base = i * frameBytes;
                     for (int c = c0; c < c1; c++) {
                         double v = sample(buf, base + c * bytesPer);
-                        if (!Double.isFinite(v)) {
+                        if (!(Math.abs(v) <= MAX_FLOAT_SAMPLE)) {
                             long idx = frame + i;
+                            String what = Double.isNaN(v) ? "NaN" : Double.isInfinite(v) ? "infinite"
+                                    : String.format(Locale.ROOT, "%.3g, far beyond full scale (1.0)", v);
                             throw bad(String.format(Locale.ROOT, "sample %d of channel %d (at %.3f s) is %s;"
                                     + " the file is damaged or was written without clipping", idx, c + 1,
-                                    idx / (double) format.sampleRateHz(), Double.isNaN(v) ? "NaN" : "infinite"));
+                                    idx / (double) format.sampleRateHz(), what));
                         }
                         acc += v;
                     }

@@ -105,6 +105,10 @@ class BadInputCatalogueTest {
                 d -> build(d, write(d, "nan.wav", floats(0.1, 0.2, Double.NaN, 0.3)))));
         c.add(bad("survey: infinite float sample", "sample 1 of channel 1 (at 0.000 s) is infinite",
                 d -> survey(d, write(d, "inf.wav", floats(0.1, Double.POSITIVE_INFINITY, 0.2)))));
+        c.add(bad("build: float64 stereo samples near the largest double", "sample 1 of channel 1 (at 0.000 s) is "
+                + "-1.70e+308, far beyond full scale (1.0)", d -> build(d, write(d, "huge.wav", WavFixtures.wav()
+                        .layout(Layout.F64, 2, 8000, new double[] {0.5, 0.5, -1.7e308, -1.7e308, 1.7e308, 1.7e308})
+                        .bytes()))));
         c.add(bad("build: source file does not exist", "missing.wav: no such file",
                 d -> build(d, d.resolve("missing.wav"))));
         c.add(bad("build: source is a folder", "is a folder, not a WAV file",
