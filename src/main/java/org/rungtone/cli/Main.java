@@ -83,6 +83,12 @@ public final class Main implements Runnable {
         boolean verbose = isVerbose(parsed);
         if (e instanceof InputError) {
             err.println("rungtone: error: " + e.getMessage());
+            if (e instanceof org.rungtone.script.ScriptError se) {
+                // under the one-line message: the script line and a caret at the column
+                for (String line : se.excerpt()) {
+                    err.println("  " + line);
+                }
+            }
             if (verbose) {
                 e.printStackTrace(err);
             }

@@ -270,7 +270,11 @@ class BadInputCatalogueTest {
         assertFalse(lines.isEmpty(), "no message");
         assertTrue(lines.get(0).startsWith(PREFIX), r.err());
         assertTrue(lines.get(0).contains(c.message()), () -> "expected '" + c.message() + "' in " + r.err());
-        if (c.exitCode() == 1) {
+        if (c.exitCode() == 1 && lines.get(0).matches("rungtone: error: \\S+\\.rung:\\d+:\\d+: .*")) {
+            // a script error shows its line and a caret under the column (issue 3), nothing more
+            assertEquals(3, lines.size(), () -> "script error with excerpt:\n" + r.err());
+            assertTrue(lines.get(2).trim().endsWith("^"), r.err());
+        } else if (c.exitCode() == 1) {
             assertEquals(1, lines.size(), () -> "more than one line:\n" + r.err());
         } else {
             assertTrue(lines.get(lines.size() - 1).matches("Try 'rungtone \\w+ --help' for the options\\."),
