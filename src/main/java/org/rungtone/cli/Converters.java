@@ -46,20 +46,10 @@ final class Converters {
     static final class Decibels implements ITypeConverter<Double> {
         @Override
         public Double convert(String value) {
-            String v = value.trim();
-            if (v.endsWith("dBFS")) {
-                v = v.substring(0, v.length() - 4);
-            } else if (v.endsWith("dB")) {
-                v = v.substring(0, v.length() - 2);
-            }
             try {
-                double d = Double.parseDouble(v);
-                if (!Double.isFinite(d)) {
-                    throw new NumberFormatException();
-                }
-                return d;
-            } catch (NumberFormatException e) {
-                throw new TypeConversionException("'" + value + "' is not a level in dB (e.g. -1, -6dB)");
+                return Units.parseDecibels(value);
+            } catch (InputError e) {
+                throw new TypeConversionException(e.getMessage());
             }
         }
     }

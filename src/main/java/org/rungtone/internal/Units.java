@@ -59,6 +59,24 @@ public final class Units {
         throw new InputError("'" + text + "' is not " + describe(unit));
     }
 
+    /**
+     * Parses a level in decibels: {@code -1}, {@code -6dB}, {@code -3dBFS}.
+     *
+     * @throws InputError with an example when the text is not a finite number of dB
+     */
+    public static double parseDecibels(String text) {
+        String t = text == null ? "" : text.trim().replaceFirst("(?i)dbfs$|(?i)db$", "");
+        try {
+            double d = Double.parseDouble(t);
+            if (Double.isFinite(d)) {
+                return d;
+            }
+        } catch (NumberFormatException e) {
+            // reported below
+        }
+        throw new InputError("'" + text + "' is not a level in dB (e.g. -1 or -6dB)");
+    }
+
     /** Parses a plain integer count, accepting a k suffix ("4k" is 4000). */
     public static long parseCount(String text) {
         double v = parse(text, "");

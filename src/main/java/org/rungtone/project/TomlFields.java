@@ -119,28 +119,17 @@ final class TomlFields {
 
     /** A quantity written as a number (SI units) or a string with a suffix, e.g. "16k", "250ms", "5V". */
     OptionalDouble quantity(String key, String unit) {
-        if (!has(key)) {
-            return OptionalDouble.empty();
-        }
-        Object v = table.get(key);
-        if (v instanceof Long n) {
-            return OptionalDouble.of(n);
-        }
-        if (v instanceof Double d) {
-            return OptionalDouble.of(d);
-        }
-        if (v instanceof String s) {
-            try {
-                return OptionalDouble.of(Units.parse(s, unit));
-            } catch (InputError e) {
-                throw error(key, e.getMessage());
-            }
-        }
-        throw error(key, "expected a number or a string like \"16k\", got " + describe(v));
+        return number(key, text -> Units.parse(text, unit), "a number or a string like \"16k\"");
     }
 
     /** A level in dB, written as a number or a string like "-1dB". */
     OptionalDouble decibels(String key) {
+        return number(key, Units::parseDecibels, "a level in dB");
+    }
+
+    /** A number, or a string read by {@code fromText}; its InputError is placed at the key's line. */
+    private OptionalDouble number(String key, java.util.function.ToDoubleFunction<String> fromText,
+            String expected) {
         if (!has(key)) {
             return OptionalDouble.empty();
         }
@@ -152,14 +141,13 @@ final class TomlFields {
             return OptionalDouble.of(d);
         }
         if (v instanceof String s) {
-            String t = s.trim().replaceFirst("(?i)dbfs$|(?i)db$", "");
             try {
-                return OptionalDouble.of(Double.parseDouble(t));
-            } catch (NumberFormatException e) {
-                throw error(key, "'" + s + "' is not a level in dB (e.g. -1 or \"-6dB\")");
+                return OptionalDouble.of(fromText.applyAsDouble(s));
+            } catch (InputError e) {
+                throw error(key, e.getMessage());
             }
         }
-        throw error(key, "expected a level in dB, got " + describe(v));
+        throw error(key, "expected " + expected + ", got " + describe(v));
     }
 
     Optional<TomlFields> table(String key) {

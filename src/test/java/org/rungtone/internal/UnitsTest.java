@@ -39,4 +39,14 @@ class UnitsTest {
         assertEquals("2.61V", Units.format(2.61, "V"));
         assertEquals("0V", Units.format(0, "V"));
     }
+
+    @Test
+    void readsDecibels() {
+        assertEquals(-6.0, Units.parseDecibels("-6dB"), 0);
+        assertEquals(-1.5, Units.parseDecibels(" -1.5 dBFS"), 0);
+        assertEquals(3.0, Units.parseDecibels("+3"), 0);
+        assertEquals("'loud' is not a level in dB (e.g. -1 or -6dB)",
+                assertThrows(InputError.class, () -> Units.parseDecibels("loud")).getMessage());
+        assertThrows(InputError.class, () -> Units.parseDecibels("NaN"));
+    }
 }
