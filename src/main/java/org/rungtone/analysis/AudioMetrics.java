@@ -64,15 +64,18 @@ public final class AudioMetrics {
         }
         mean /= r.length;
         double ss = 0;
-        double[] centred = new double[r.length];
-        for (int i = 0; i < r.length; i++) {
-            centred[i] = r[i] - mean;
-            ss += centred[i] * centred[i];
+        for (double v : r) {
+            double d = v - mean;
+            ss += d * d;
         }
         Checks.checkInput(ss > 0, "the reference signal is constant, so there is no sound to measure "
                 + "quality against; use a source with some signal in it");
-        Spectrum s = spectrum(centred, reference.sampleRateHz());
-        double fraction = s.bandPower(0, cutoff) / s.totalPower();
+        // At a cutoff of rate/2 every bin is in band: the fraction is 1 without a transform.
+        double fraction = 1;
+        if (cutoff < reference.sampleRateHz() / 2) {
+            Spectrum s = Spectrum.welch(r, mean, reference.sampleRateHz(), Window.HANN, segment(r.length));
+            fraction = s.bandPower(0, cutoff) / s.totalPower();
+        }
         return new AudioMetrics(reference, cutoff, mean, ss, fraction);
     }
 
@@ -231,8 +234,11 @@ public final class AudioMetrics {
     }
 
     private static Spectrum spectrum(double[] x, double rate) {
-        int segment = Math.min(SEGMENT_LENGTH, Spectrum.nextPowerOfTwo(Math.max(16, x.length)));
-        return Spectrum.welch(x, rate, Window.HANN, segment);
+        return Spectrum.welch(x, rate, Window.HANN, segment(x.length));
+    }
+
+    private static int segment(int length) {
+        return Math.min(SEGMENT_LENGTH, Spectrum.nextPowerOfTwo(Math.max(16, length)));
     }
 
     private static double db(double ratio) {

@@ -84,9 +84,29 @@ public final class Spectrum {
      *     are fewer than two samples, or the rate is not positive
      */
     public static Spectrum welch(double[] samples, double sampleRateHz, Window window, int segmentLength) {
+        return welch(samples, 0, sampleRateHz, window, segmentLength);
+    }
+
+    /**
+     * Welch's spectrum of {@code samples − offset} (the offset is subtracted as the segments are read, so a
+     * long signal's mean can be removed without a second array).
+     *
+     * <p>Two real segments share one complex transform: with {@code z = x1 + i·x2}, {@code |X1_k|² + |X2_k|² =
+     * (|Z_k|² + |Z_(M−k)|²)/2} because both real spectra are Hermitian, which halves the transforms and gives
+     * the same sum as transforming each segment alone (to rounding).
+     */
+    public static Spectrum welch(double[] samples, double offset, double sampleRateHz, Window window,
+            int segmentLength) {
         checkCommon(samples, sampleRateHz, segmentLength);
         if (samples.length <= segmentLength) {
-            return of(samples, sampleRateHz, window, segmentLength);
+            double[] x = samples;
+            if (offset != 0) {
+                x = new double[samples.length];
+                for (int i = 0; i < x.length; i++) {
+                    x[i] = samples[i] - offset;
+                }
+            }
+            return of(x, sampleRateHz, window, segmentLength);
         }
         double[] w = window.values(segmentLength);
         double sw = 0;
@@ -105,13 +125,20 @@ public final class Spectrum {
         java.util.stream.IntStream.range(0, groups).parallel().forEach(g -> {
             double[] acc = new double[segmentLength / 2 + 1];
             double[][] ri = new double[2][segmentLength];
-            for (int s = g * segments / groups; s < (g + 1) * segments / groups; s++) {
-                int start = s * hop;
+            int end = (g + 1) * segments / groups;
+            for (int s = g * segments / groups; s < end; s += 2) {
+                int a = s * hop;
+                boolean pair = s + 1 < end;
+                int b = pair ? a + hop : 0;
                 for (int i = 0; i < segmentLength; i++) {
-                    ri[0][i] = samples[start + i] * w[i];
-                    ri[1][i] = 0;
+                    ri[0][i] = (samples[a + i] - offset) * w[i];
+                    ri[1][i] = pair ? (samples[b + i] - offset) * w[i] : 0;
                 }
-                accumulate(ri, acc, scale);
+                if (pair) {
+                    accumulatePair(ri, acc, scale);
+                } else {
+                    accumulate(ri, acc, scale);
+                }
             }
             partial[g] = acc;
         });
@@ -123,6 +150,21 @@ public final class Spectrum {
         }
         return new Spectrum(sampleRateHz, segmentLength, segmentLength, window, segmentLength * sw2 / (sw * sw),
                 p);
+    }
+
+    /** Transforms two real segments packed as re/im and adds both their single-sided powers into {@code p}. */
+    private static void accumulatePair(double[][] ri, double[] p, double scale) {
+        FastFourierTransformer.transformInPlace(ri, DftNormalization.STANDARD, TransformType.FORWARD);
+        int m = ri[0].length;
+        int half = m / 2;
+        double toFullScale = scale / FULL_SCALE_SINE_POWER;
+        for (int k = 0; k <= half; k++) {
+            int mk = k == 0 ? 0 : m - k;
+            double both = 0.5 * (ri[0][k] * ri[0][k] + ri[1][k] * ri[1][k] + ri[0][mk] * ri[0][mk]
+                    + ri[1][mk] * ri[1][mk]);
+            double c = k == 0 || k == half ? 1 : 2;
+            p[k] += c * both * toFullScale;
+        }
     }
 
     private static void checkCommon(double[] samples, double sampleRateHz, int fftLength) {

@@ -1,9 +1,9 @@
 package org.rungtone.condition;
 
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
+import org.rungtone.source.SampleSource;
 import org.rungtone.source.Signal;
 
 /**
@@ -11,6 +11,9 @@ import org.rungtone.source.Signal;
  * stop the run (an all-silent source, a clip longer than the fades) are collected in the result.
  */
 public final class Conditioner {
+    /** Samples read at a time when scanning a source for its mean and trim points. */
+    private static final int SCAN = 1 << 16;
+
     private final Resampler resampler;
 
     /** A conditioner that resamples with {@code resampler}. */
@@ -42,37 +45,36 @@ public final class Conditioner {
      * (when the rate already matches, the range is copied once).
      */
     public Conditioned apply(Signal source, Conditioning c) {
+        return apply(SampleSource.of(source), c);
+    }
+
+    /**
+     * Conditions a source that is read by range (a WAV file decoded on demand): the mean and the trim points
+     * are found by reading it block by block, and the resampler reads the kept range block by block, so
+     * only the result at the target rate is ever held whole.
+     */
+    public Conditioned apply(SampleSource source, Conditioning c) {
         List<String> warnings = new ArrayList<>();
         double rate = source.sampleRateHz();
-        double[] x = source.unsafeSamples();
-        double mean = 0;
-        if (c.removeDc() && x.length > 0) {
-            for (double v : x) {
-                mean += v;
-            }
-            mean /= x.length;
-        }
+        int length = source.length();
         double trimmedStart = 0;
         double trimmedEnd = 0;
         int first = 0;
-        int last = x.length - 1;
+        int last = length - 1;
         if (c.trimBelowDbfs().isPresent()) {
+            double mean = c.removeDc() ? mean(source) : 0;
             double threshold = Math.pow(10, c.trimBelowDbfs().getAsDouble() / 20);
-            while (first < x.length && Math.abs(x[first] - mean) < threshold) {
-                first++;
-            }
-            while (last >= first && Math.abs(x[last] - mean) < threshold) {
-                last--;
-            }
+            first = firstAbove(source, mean, threshold);
+            last = first < length ? lastAbove(source, mean, threshold) : -1;
             if (first > last) {
                 warnings.add(String.format(Locale.ROOT,
                         "the whole source is below the %.1f dBFS trim threshold; nothing was trimmed",
                         c.trimBelowDbfs().getAsDouble()));
                 first = 0;
-                last = x.length - 1;
+                last = length - 1;
             } else {
                 trimmedStart = first / rate;
-                trimmedEnd = (x.length - 1 - last) / rate;
+                trimmedEnd = (length - 1 - last) / rate;
             }
         }
         String how = "none";
@@ -81,7 +83,7 @@ public final class Conditioner {
             s = resampler.resample(source, first, last + 1, c.targetRateHz());
             how = resampler.name();
         } else {
-            s = Signal.wrap(Arrays.copyOfRange(x, first, last + 1), rate);
+            s = source.read(first, last + 1);
         }
         if (c.removeDc()) {
             // The resampled signal's own mean: equal to the source's but for the filter's edge transients.
@@ -137,5 +139,54 @@ public final class Conditioner {
                     + " clip; lower --gain or use --normalize", over));
         }
         return new Conditioned(s, gainDb, trimmedStart, trimmedEnd, how, warnings);
+    }
+
+    private static double mean(SampleSource source) {
+        int n = source.length();
+        if (n == 0) {
+            return 0;
+        }
+        double[] b = new double[Math.min(SCAN, n)];
+        double sum = 0;
+        for (int at = 0; at < n; at += b.length) {
+            int k = Math.min(b.length, n - at);
+            source.read(at, b, 0, k);
+            for (int i = 0; i < k; i++) {
+                sum += b[i];
+            }
+        }
+        return sum / n;
+    }
+
+    /** Index of the first sample at least {@code threshold} from {@code mean}; the length if none. */
+    private static int firstAbove(SampleSource source, double mean, double threshold) {
+        int n = source.length();
+        double[] b = new double[Math.max(1, Math.min(SCAN, n))];
+        for (int at = 0; at < n; at += b.length) {
+            int k = Math.min(b.length, n - at);
+            source.read(at, b, 0, k);
+            for (int i = 0; i < k; i++) {
+                if (!(Math.abs(b[i] - mean) < threshold)) {
+                    return at + i;
+                }
+            }
+        }
+        return n;
+    }
+
+    /** Index of the last sample at least {@code threshold} from {@code mean}; -1 if none. */
+    private static int lastAbove(SampleSource source, double mean, double threshold) {
+        int n = source.length();
+        double[] b = new double[Math.max(1, Math.min(SCAN, n))];
+        for (int end = n; end > 0; end -= b.length) {
+            int k = Math.min(b.length, end);
+            source.read(end - k, b, 0, k);
+            for (int i = k - 1; i >= 0; i--) {
+                if (!(Math.abs(b[i] - mean) < threshold)) {
+                    return end - k + i;
+                }
+            }
+        }
+        return -1;
     }
 }

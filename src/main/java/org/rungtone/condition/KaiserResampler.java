@@ -3,6 +3,7 @@ package org.rungtone.condition;
 import org.rungtone.internal.Bessel;
 import java.util.stream.IntStream;
 import org.rungtone.internal.Checks;
+import org.rungtone.source.SampleSource;
 import org.rungtone.source.Signal;
 
 /**
@@ -64,28 +65,56 @@ public final class KaiserResampler implements Resampler {
 
     @Override
     public Signal resample(Signal signal, int from, int to, double targetRateHz) {
+        Checks.checkArgument(from >= 0 && to <= signal.length() && from <= to, "bad range %d..%d", from, to);
+        if (signal.sampleRateHz() == targetRateHz && from == 0 && to == signal.length()) {
+            return signal;
+        }
+        return resample(SampleSource.of(signal), from, to, targetRateHz);
+    }
+
+    /**
+     * Resamples a range of a source block by block: each block of output samples reads just the input it
+     * needs (its span plus the filter's half-length either side), so a file-backed source is decoded in
+     * parallel pieces and never held whole. A damaged sample is reported for the earliest block that meets
+     * it, so the message names the first bad sample whatever the number of cores.
+     */
+    @Override
+    public Signal resample(SampleSource source, int from, int to, double targetRateHz) {
         Checks.checkArgument(Double.isFinite(targetRateHz) && targetRateHz > 0,
                 "target rate must be positive: %s", targetRateHz);
-        Checks.checkArgument(from >= 0 && to <= signal.length() && from <= to, "bad range %d..%d", from, to);
-        double fin = signal.sampleRateHz();
+        Checks.checkArgument(from >= 0 && to <= source.length() && from <= to, "bad range %d..%d", from, to);
+        double fin = source.sampleRateHz();
         if (fin == targetRateHz) {
-            return from == 0 && to == signal.length() ? signal
-                    : Signal.wrap(java.util.Arrays.copyOfRange(signal.unsafeSamples(), from, to), fin);
+            return source.read(from, to);
         }
-        double[] x = signal.unsafeSamples();
         double step = fin / targetRateHz;
         int length = to - from;
         int outLen = (int) Math.ceil(length / step - 1e-9);
         Kernel kernel = new Kernel(fin, targetRateHz);
         double[] y = new double[outLen];
         int blocks = (outLen + BLOCK - 1) / BLOCK;
+        RuntimeException[] failures = new RuntimeException[blocks];
         IntStream.range(0, blocks).parallel().forEach(b -> {
             int first = b * BLOCK;
             int end = Math.min(outLen, first + BLOCK);
+            long lo = Math.max(0, kernel.base(first) - kernel.half + 1);
+            long hi = Math.min(length, kernel.base(end - 1) + kernel.half + 1);
+            double[] x = new double[(int) Math.max(0, hi - lo)];
+            try {
+                source.read(from + (int) lo, x, 0, x.length);
+            } catch (RuntimeException e) {
+                failures[b] = e;
+                return;
+            }
             for (int n = first; n < end; n++) {
-                y[n] = kernel.at(x, from, length, n);
+                y[n] = kernel.at(x, (int) -lo, length, n);
             }
         });
+        for (RuntimeException e : failures) {
+            if (e != null) {
+                throw e;
+            }
+        }
         return Signal.wrap(y, targetRateHz);
     }
 
@@ -129,7 +158,12 @@ public final class KaiserResampler implements Resampler {
             }
         }
 
-        /** Output sample n of the range x[from .. from+length). */
+        /** The input position at or before output sample n's time. */
+        long base(int n) {
+            return exact ? n * num / den : (long) Math.floor(n * step);
+        }
+
+        /** Output sample n of a range of {@code length} samples whose sample p is {@code x[from + p]}. */
         double at(double[] x, int from, int length, int n) {
             long base;
             double[] row;

@@ -1,5 +1,6 @@
 package org.rungtone.condition;
 
+import org.rungtone.source.SampleSource;
 import org.rungtone.source.Signal;
 
 /** Changes a signal's sample rate with an anti-alias (or anti-image) low-pass filter. */
@@ -22,6 +23,14 @@ public interface Resampler {
         }
         return resample(Signal.wrap(java.util.Arrays.copyOfRange(signal.unsafeSamples(), from, to),
                 signal.sampleRateHz()), targetRateHz);
+    }
+
+    /**
+     * Resamples samples {@code from} to {@code to} (exclusive) of {@code source}, as if that range were the
+     * whole signal. The default reads the range into memory; implementations may read it block by block.
+     */
+    default Signal resample(SampleSource source, int from, int to, double targetRateHz) {
+        return resample(source.read(from, to), targetRateHz);
     }
 
     /** A short name for reports. */

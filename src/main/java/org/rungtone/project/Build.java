@@ -78,7 +78,7 @@ public final class Build {
         this(toolVersion, span, stage -> { });
     }
 
-    /** A build that also tells {@code progress} the name of every stage it finishes ("decode", ...). */
+    /** A build that also tells {@code progress} the name of every stage it finishes ("open", "condition", ...; a WAV file is decoded during "condition"). */
     public Build(String toolVersion, java.util.function.Consumer<String> progress) {
         this(toolVersion, OutputSpan.FULL, progress);
     }
@@ -231,7 +231,6 @@ public final class Build {
     public Rendered render(BuildPlan plan) {
         Stopwatch watch = new Stopwatch(progress);
         Prepared prepared = prepare(plan, watch);
-        Sources.Loaded loaded = prepared.loaded();
         double rate = prepared.rateHz();
         Conditioner.Conditioned conditioned = prepared.conditioned();
         Signal reference = conditioned.signal();
@@ -240,7 +239,7 @@ public final class Build {
                     + " (all trimmed?)");
         }
 
-        List<String> warnings = new ArrayList<>(loaded.warnings());
+        List<String> warnings = new ArrayList<>(prepared.warnings());
         warnings.addAll(conditioned.warnings());
         LevelTable ideal = LevelTable.ideal(plan.bits(), plan.fullScaleVolts());
         Quantizer.Quantized idealQ = quantizer(ideal, plan).apply(reference);
@@ -318,54 +317,56 @@ public final class Build {
         watch.lap("analyze");
         AnalogModel.Preview preview = join(previewJob);
         watch.lap("preview");
-        return new Rendered(plan, loaded.layout(), rate, conditioned, emitted, played, quality, shapingGain, tone,
+        return new Rendered(plan, prepared.layout(), rate, conditioned, emitted, played, quality, shapingGain, tone,
                 preview, errorSpectrum, toneSpectrum, cutoff, clipped,
-                settings(plan, loaded, conditioned, played, rate, range), warnings, watch.laps());
+                settings(plan, prepared.layout(), conditioned, played, rate, range), warnings, watch.laps());
     }
 
-    /** The source's description (its samples dropped), the conditioned reference and the target rate. */
-    private record Prepared(Sources.Loaded loaded, Conditioner.Conditioned conditioned, double rateHz) {
+    /** The source's description, the conditioned reference and the target rate. */
+    private record Prepared(String layout, List<String> warnings, Conditioner.Conditioned conditioned,
+            double rateHz) {
     }
 
     /**
-     * Loads and conditions the source. The decoded source lives only inside this method, so its memory can be
-     * reclaimed before quantizing a long clip.
+     * Opens and conditions the source. A WAV source is decoded block by block as the resampler reads it, so
+     * a long clip is never held at its own rate.
      */
     private static Prepared prepare(BuildPlan plan, Stopwatch watch) {
-        Sources.Loaded loaded = Sources.load(plan.source(), plan.channel(), plan.rateHz().orElse(Double.NaN),
-                plan.seed());
-        watch.lap("decode");
-        double rate = plan.rateHz().orElse(Double.isNaN(loaded.preferredRateHz()) ? BuildPlan.DEFAULT_RATE_HZ
-                : loaded.preferredRateHz());
-        Conditioner.Conditioned conditioned;
-        if (loaded.wavetable()) {
-            // One cycle: its samples are the table as it is, played at any rate by the DDS engine. Only DC
-            // removal and level apply; the codes are labelled with the playback rate.
-            Signal table = Signal.wrap(loaded.signal().samples(), rate);
-            Conditioning c = new Conditioning(plan.removeDc(), java.util.OptionalDouble.empty(), rate,
-                    plan.gainDb(), plan.normalizeDbfs(), 0, 0);
-            conditioned = new Conditioner(KaiserResampler.forBits(plan.bits())).apply(table, c);
-        } else {
-            Conditioning conditioning = new Conditioning(plan.removeDc(), plan.trimDbfs(), rate, plan.gainDb(),
-                    plan.normalizeDbfs(), plan.fadeInSeconds(), plan.fadeOutSeconds());
-            Resampler resampler = plan.resampler().equals("tarsos") ? new TarsosResampler()
-                    : KaiserResampler.forBits(plan.bits());
-            conditioned = new Conditioner(resampler).apply(loaded.signal(), conditioning);
+        try (Sources.Opened opened = Sources.open(plan.source(), plan.channel(),
+                plan.rateHz().orElse(Double.NaN), plan.seed())) {
+            watch.lap("open");
+            double rate = plan.rateHz().orElse(Double.isNaN(opened.preferredRateHz()) ? BuildPlan.DEFAULT_RATE_HZ
+                    : opened.preferredRateHz());
+            Conditioner.Conditioned conditioned;
+            if (opened.wavetable()) {
+                // One cycle: its samples are the table as it is, played at any rate by the DDS engine. Only DC
+                // removal and level apply; the codes are labelled with the playback rate.
+                Signal table = Signal.wrap(opened.samples().read(0, opened.samples().length()).unsafeSamples(),
+                        rate);
+                Conditioning c = new Conditioning(plan.removeDc(), java.util.OptionalDouble.empty(), rate,
+                        plan.gainDb(), plan.normalizeDbfs(), 0, 0);
+                conditioned = new Conditioner(KaiserResampler.forBits(plan.bits())).apply(table, c);
+            } else {
+                Conditioning conditioning = new Conditioning(plan.removeDc(), plan.trimDbfs(), rate, plan.gainDb(),
+                        plan.normalizeDbfs(), plan.fadeInSeconds(), plan.fadeOutSeconds());
+                Resampler resampler = plan.resampler().equals("tarsos") ? new TarsosResampler()
+                        : KaiserResampler.forBits(plan.bits());
+                conditioned = new Conditioner(resampler).apply(opened.samples(), conditioning);
+            }
+            watch.lap("condition");
+            return new Prepared(opened.layout(), opened.warnings(), conditioned, rate);
         }
-        watch.lap("condition");
-        return new Prepared(new Sources.Loaded(Signal.wrap(new double[0], 1), loaded.layout(), loaded.warnings(),
-                loaded.preferredRateHz(), loaded.wavetable()), conditioned, rate);
     }
 
     private static Quantizer quantizer(LevelTable table, BuildPlan plan) {
         return new Quantizer(table, table.minVolts(), table.maxVolts(), plan.dither(), plan.shaping(), plan.seed());
     }
 
-    private List<String> settings(BuildPlan plan, Sources.Loaded loaded, Conditioner.Conditioned c,
+    private List<String> settings(BuildPlan plan, String layout, Conditioner.Conditioned c,
             LevelTable played, double rate, double[] range) {
         return List.of(
                 "name: " + plan.symbol(),
-                "source: " + plan.source().getFileName() + " (" + loaded.layout() + ")",
+                "source: " + plan.source().getFileName() + " (" + layout + ")",
                 "conditioning: " + describe(plan, c),
                 "target: " + plan.bits() + " bits at " + Units.format(rate, "Hz"),
                 "dither: " + plan.dither().label() + ", shaping: " + plan.shaping().name() + ", seed: "

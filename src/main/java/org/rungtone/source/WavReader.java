@@ -106,6 +106,93 @@ public final class WavReader {
         }
     }
 
+    /**
+     * Opens {@code file} for reading by range: the header is parsed now, the samples are decoded block by
+     * block as they are read (mixed down when {@code channel} is 0, else that channel 1..C). Close it after use.
+     *
+     * @throws InputError naming the file and the problem for anything that is not a readable WAV file
+     */
+    public static Stream open(Path file, int channel) {
+        Decoder d = new Decoder(file);
+        FileChannel ch = open(file);
+        try {
+            d.parse(ch);
+            if (channel < 0 || channel > d.format.channels()) {
+                throw InputError.inFile(file, "has " + d.format.channels() + " channel(s); --channel must be "
+                        + "0 (mix down) or 1.." + d.format.channels() + ": " + channel);
+            }
+            return new Stream(d, ch, channel);
+        } catch (EOFException e) {
+            closeQuietly(ch);
+            throw InputError.inFile(file, "ends early (truncated file)", e);
+        } catch (IOException e) {
+            closeQuietly(ch);
+            throw InputError.inFile(file, "cannot be read (" + e.getMessage() + ")", e);
+        } catch (RuntimeException e) {
+            closeQuietly(ch);
+            throw e;
+        }
+    }
+
+    private static void closeQuietly(FileChannel ch) {
+        try {
+            ch.close();
+        } catch (IOException ignored) {
+            // nothing was written; the read error that led here is the one to report
+        }
+    }
+
+    /** An open WAV file read by range: its layout, its warnings and its mono samples on demand. */
+    public static final class Stream implements SampleSource {
+        private final Decoder decoder;
+        private final FileChannel channel;
+        private final int pick;
+
+        private Stream(Decoder decoder, FileChannel channel, int pick) {
+            this.decoder = decoder;
+            this.channel = channel;
+            this.pick = pick;
+        }
+
+        /** The layout. */
+        public WavFormat format() {
+            return decoder.format;
+        }
+
+        /** Non-fatal problems found in the header. */
+        public List<String> warnings() {
+            return List.copyOf(decoder.warnings);
+        }
+
+        @Override
+        public double sampleRateHz() {
+            return decoder.format.sampleRateHz();
+        }
+
+        @Override
+        public int length() {
+            return (int) decoder.format.frames();
+        }
+
+        @Override
+        public void read(int from, double[] dst, int offset, int count) {
+            org.rungtone.internal.Checks.checkArgument(from >= 0 && count >= 0 && from + count <= length(),
+                    "range %d+%d outside 0..%d", from, count, length());
+            try {
+                decoder.decodeRange(channel, pick, from, count, dst, offset);
+            } catch (EOFException e) {
+                throw InputError.inFile(decoder.file, "ends early (truncated file)", e);
+            } catch (IOException e) {
+                throw InputError.inFile(decoder.file, "cannot be read (" + e.getMessage() + ")", e);
+            }
+        }
+
+        @Override
+        public void close() {
+            closeQuietly(channel);
+        }
+    }
+
     private static FileChannel open(Path file) {
         try {
             if (Files.isDirectory(file)) {
@@ -276,18 +363,26 @@ public final class WavReader {
         }
 
         double[] decode(FileChannel ch, int channel) throws IOException {
+            double[] out = new double[(int) format.frames()];
+            decodeRange(ch, channel, 0, out.length, out, 0);
+            return out;
+        }
+
+        /** Decodes frames {@code first .. first + count - 1} into {@code out[off ..]}, checking every sample. */
+        void decodeRange(FileChannel ch, int channel, long first, int count, double[] out, int off)
+                throws IOException {
             int channels = format.channels();
             int bytesPer = format.bitsPerSample() / 8;
             int frameBytes = format.blockAlign();
-            int framesPerBlock = Math.max(1, BLOCK_BYTES / frameBytes);
-            double[] out = new double[(int) format.frames()];
+            int framesPerBlock = Math.max(1, Math.min(count, BLOCK_BYTES / frameBytes));
             ByteBuffer buf = ByteBuffer.allocate(framesPerBlock * frameBytes).order(ByteOrder.LITTLE_ENDIAN);
-            long frame = 0;
             double mixScale = channel == 0 ? 1.0 / channels : 1.0;
             int c0 = channel == 0 ? 0 : channel - 1;
             int c1 = channel == 0 ? channels : channel;
-            while (frame < format.frames()) {
-                int n = (int) Math.min(framesPerBlock, format.frames() - frame);
+            long frame = first;
+            long end = first + count;
+            while (frame < end) {
+                int n = (int) Math.min(framesPerBlock, end - frame);
                 buf.clear().limit(n * frameBytes);
                 long at = dataOffset + frame * frameBytes;
                 while (buf.hasRemaining()) {
@@ -296,26 +391,29 @@ public final class WavReader {
                         throw new EOFException();
                     }
                 }
+                int o = off + (int) (frame - first);
                 for (int i = 0; i < n; i++) {
                     double acc = 0;
                     int base = i * frameBytes;
                     for (int c = c0; c < c1; c++) {
                         double v = sample(buf, base + c * bytesPer);
                         if (!(Math.abs(v) <= MAX_FLOAT_SAMPLE)) {
-                            long idx = frame + i;
-                            String what = Double.isNaN(v) ? "NaN" : Double.isInfinite(v) ? "infinite"
-                                    : String.format(Locale.ROOT, "%.3g, far beyond full scale (1.0)", v);
-                            throw bad(String.format(Locale.ROOT, "sample %d of channel %d (at %.3f s) is %s;"
-                                    + " the file is damaged or was written without clipping", idx, c + 1,
-                                    idx / (double) format.sampleRateHz(), what));
+                            throw damaged(frame + i, c, v);
                         }
                         acc += v;
                     }
-                    out[(int) (frame + i)] = acc * mixScale;
+                    out[o + i] = acc * mixScale;
                 }
                 frame += n;
             }
-            return out;
+        }
+
+        private InputError damaged(long idx, int c, double v) {
+            String what = Double.isNaN(v) ? "NaN" : Double.isInfinite(v) ? "infinite"
+                    : String.format(Locale.ROOT, "%.3g, far beyond full scale (1.0)", v);
+            return bad(String.format(Locale.ROOT, "sample %d of channel %d (at %.3f s) is %s;"
+                    + " the file is damaged or was written without clipping", idx, c + 1,
+                    idx / (double) format.sampleRateHz(), what));
         }
 
         private double sample(ByteBuffer b, int at) {

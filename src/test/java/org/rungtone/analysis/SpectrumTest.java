@@ -79,4 +79,30 @@ class SpectrumTest {
                 () -> Spectrum.of(new double[8], 8000, Window.HANN, 12));
         assertEquals("transform length must be a power of two: 12", e.getMessage());
     }
+
+    @Test
+    void welchWithPairedTransformsEqualsTheAverageOfEachSegmentsSpectrum() {
+        // Welch (1967): the average of the segments' periodograms; 7 segments, so one is transformed alone
+        SplittableRandom rnd = new SplittableRandom(7);
+        double[] x = new double[256 * 4];
+        for (int i = 0; i < x.length; i++) {
+            x[i] = 0.3 + 0.5 * Math.sin(0.37 * i) + 0.1 * (rnd.nextDouble() - 0.5);
+        }
+        Spectrum w = Spectrum.welch(x, 0.3, 8000, Window.HANN, 256);
+        double[] expected = new double[129];
+        int segments = 7;
+        for (int s = 0; s < segments; s++) {
+            double[] seg = new double[256];
+            for (int i = 0; i < 256; i++) {
+                seg[i] = x[s * 128 + i] - 0.3;
+            }
+            Spectrum one = Spectrum.of(seg, 8000, Window.HANN, 256);
+            for (int k = 0; k < expected.length; k++) {
+                expected[k] += one.power(k) / segments;
+            }
+        }
+        for (int k = 0; k < expected.length; k++) {
+            assertEquals(expected[k], w.power(k), 1e-12 * (1 + expected[k]), "bin " + k);
+        }
+    }
 }
