@@ -113,13 +113,27 @@ public final class AudioMetrics {
      * @throws IllegalArgumentException when the bit depths, rates or lengths do not match
      */
     public QualityReport measure(String label, Codes codes, LevelTable table) {
+        return measureWithSpectrum(label, codes, table).report();
+    }
+
+    /**
+     * Measures codes played through a level table and keeps the error spectrum, without building an array
+     * of the output's volts: the error is computed from the codes as it is needed (long clips).
+     *
+     * @throws IllegalArgumentException when the bit depths, rates or lengths do not match
+     */
+    public Measured measureWithSpectrum(String label, Codes codes, LevelTable table) {
         Checks.checkArgument(codes.bits() == table.bits(), "codes have %d bits, the table %d", codes.bits(),
                 table.bits());
         Checks.checkArgument(codes.sampleRateHz() == reference.sampleRateHz(),
                 "codes rate %s Hz differs from the reference's %s Hz", codes.sampleRateHz(),
                 reference.sampleRateHz());
-        // the volts array is ours: the error may overwrite it
-        return measureWithSpectrum(label, volts(codes, table), true).report();
+        int[] c = codes.unsafeCodes();
+        double[] level = new double[table.size()];
+        for (int k = 0; k < level.length; k++) {
+            level[k] = table.volts(k);
+        }
+        return measured(label, c.length, i -> level[c[i]]);
     }
 
     /** The volts of every code through the table. */
@@ -164,19 +178,27 @@ public final class AudioMetrics {
      * written into {@code output} itself, saving one array of the signal's length (long clips).
      */
     public Measured measureWithSpectrum(String label, double[] output, boolean overwrite) {
-        Alignment a = align(output, overwrite);
-        double[] e = a.error();
+        return measured(label, output.length, i -> output[i]);
+    }
+
+    /** The figures of an output given sample by sample (see the class comment for the alignment). */
+    private Measured measured(String label, int length, java.util.function.IntToDoubleFunction output) {
+        double[] r = reference.unsafeSamples();
+        Checks.checkArgument(length == r.length, "output has %d samples, the reference %d", length, r.length);
+        Alignment a = align(output);
+        java.util.function.IntToDoubleFunction e = a.error(output, r);
         Spectrum s = null;
-        double pr = referenceSumSquares / e.length;
+        double pr = referenceSumSquares / length;
         double pe = 0;
-        for (double v : e) {
+        for (int i = 0; i < length; i++) {
+            double v = e.applyAsDouble(i);
             pe += v * v;
         }
-        pe /= e.length;
+        pe /= length;
         double inBandError;
         double weightedError;
         if (pe > 0 && Double.isFinite(pe)) {
-            s = spectrum(e, reference.sampleRateHz());
+            s = Spectrum.welch(e, length, reference.sampleRateHz(), Window.HANN, segment(length));
             double total = s.totalPower();
             inBandError = pe * s.bandPower(0, inBandCutoffHz) / total;
             weightedError = pe * s.weightedPower(AWeighting::powerGain) / total;
@@ -185,7 +207,7 @@ public final class AudioMetrics {
             weightedError = pe;
         }
         double errorDbfs = db(pe / 0.5);
-        return new Measured(new QualityReport(label, reference.sampleRateHz(), e.length, inBandCutoffHz,
+        return new Measured(new QualityReport(label, reference.sampleRateHz(), length, inBandCutoffHz,
                 db(pr / 0.5), db(pr / pe), db(pr * referenceInBandFraction / inBandError), db(pr / weightedError),
                 (-errorDbfs - 1.76) / 6.02, errorDbfs, a.gain(), a.offset()), s);
     }
@@ -196,7 +218,16 @@ public final class AudioMetrics {
      * @throws IllegalArgumentException when the length differs from the reference's
      */
     public double[] alignedError(double[] output) {
-        return align(output, false).error();
+        double[] r = reference.unsafeSamples();
+        Checks.checkArgument(output.length == r.length, "output has %d samples, the reference %d",
+                output.length, r.length);
+        java.util.function.IntToDoubleFunction o = i -> output[i];
+        java.util.function.IntToDoubleFunction e = align(o).error(o, r);
+        double[] out = new double[r.length];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = e.applyAsDouble(i);
+        }
+        return out;
     }
 
     /** Welch spectrum of the aligned error (Hann, 8192-sample segments), for plots. */
@@ -204,33 +235,20 @@ public final class AudioMetrics {
         return spectrum(alignedError(output), reference.sampleRateHz());
     }
 
-    private Alignment align(double[] o, boolean inPlace) {
+    private Alignment align(java.util.function.IntToDoubleFunction o) {
         double[] r = reference.unsafeSamples();
-        Checks.checkArgument(o.length == r.length, "output has %d samples, the reference %d", o.length,
-                r.length);
         int n = r.length;
         double mo = 0;
-        for (double v : o) {
-            mo += v;
+        for (int i = 0; i < n; i++) {
+            mo += o.applyAsDouble(i);
         }
         mo /= n;
         double sro = 0;
         for (int i = 0; i < n; i++) {
-            sro += (r[i] - referenceMean) * (o[i] - mo);
+            sro += (r[i] - referenceMean) * (o.applyAsDouble(i) - mo);
         }
         double gain = sro / referenceSumSquares;
-        double offset = mo - gain * referenceMean;
-        double[] e = inPlace ? o : new double[n];
-        if (gain > 0) {
-            double inv = 1 / gain;
-            for (int i = 0; i < n; i++) {
-                e[i] = (o[i] - offset) * inv - r[i];
-            }
-        } else {
-            // The output carries none of the reference: the error is unbounded.
-            Arrays.fill(e, Double.POSITIVE_INFINITY);
-        }
-        return new Alignment(gain, offset, e);
+        return new Alignment(gain, mo - gain * referenceMean);
     }
 
     private static Spectrum spectrum(double[] x, double rate) {
@@ -245,6 +263,15 @@ public final class AudioMetrics {
         return 10 * Math.log10(ratio);
     }
 
-    private record Alignment(double gain, double offset, double[] error) {
+    private record Alignment(double gain, double offset) {
+        /** The error {@code (o − offset)/gain − r} sample by sample; unbounded when the output carries none of r. */
+        java.util.function.IntToDoubleFunction error(java.util.function.IntToDoubleFunction o, double[] r) {
+            if (!(gain > 0)) {
+                return i -> Double.POSITIVE_INFINITY;
+            }
+            double inv = 1 / gain;
+            double c = offset;
+            return i -> (o.applyAsDouble(i) - c) * inv - r[i];
+        }
     }
 }

@@ -97,14 +97,21 @@ public final class Spectrum {
      */
     public static Spectrum welch(double[] samples, double offset, double sampleRateHz, Window window,
             int segmentLength) {
-        checkCommon(samples, sampleRateHz, segmentLength);
-        if (samples.length <= segmentLength) {
-            double[] x = samples;
-            if (offset != 0) {
-                x = new double[samples.length];
-                for (int i = 0; i < x.length; i++) {
-                    x[i] = samples[i] - offset;
-                }
+        return welch(i -> samples[i] - offset, samples.length, sampleRateHz, window, segmentLength);
+    }
+
+    /**
+     * Welch's spectrum of a signal given sample by sample ({@code samples.applyAsDouble(i)} for i in
+     * 0..length−1), for signals computed on the fly (an aligned error) rather than stored.
+     */
+    public static Spectrum welch(java.util.function.IntToDoubleFunction samples, int length, double sampleRateHz,
+            Window window, int segmentLength) {
+        Checks.checkArgument(length >= 2, "a spectrum needs at least two samples: %d", length);
+        checkCommon(new double[2], sampleRateHz, segmentLength);
+        if (length <= segmentLength) {
+            double[] x = new double[length];
+            for (int i = 0; i < x.length; i++) {
+                x[i] = samples.applyAsDouble(i);
             }
             return of(x, sampleRateHz, window, segmentLength);
         }
@@ -116,7 +123,7 @@ public final class Spectrum {
             sw2 += v * v;
         }
         int hop = segmentLength / 2;
-        int segments = 1 + (samples.length - segmentLength) / hop;
+        int segments = 1 + (length - segmentLength) / hop;
         double scale = 1.0 / (segmentLength * sw2 * segments);
         // Segments are summed in a fixed number of groups, in parallel, then the groups in order: the result
         // does not depend on how many cores there are.
@@ -131,8 +138,8 @@ public final class Spectrum {
                 boolean pair = s + 1 < end;
                 int b = pair ? a + hop : 0;
                 for (int i = 0; i < segmentLength; i++) {
-                    ri[0][i] = (samples[a + i] - offset) * w[i];
-                    ri[1][i] = pair ? (samples[b + i] - offset) * w[i] : 0;
+                    ri[0][i] = samples.applyAsDouble(a + i) * w[i];
+                    ri[1][i] = pair ? samples.applyAsDouble(b + i) * w[i] : 0;
                 }
                 if (pair) {
                     accumulatePair(ri, acc, scale);

@@ -62,6 +62,9 @@ public final class Main implements Runnable {
         } catch (OutOfMemoryError e) {
             System.err.println("rungtone: error: out of memory for this input; give Java more with"
                     + " RUNGTONE_JAVA_OPTS=-Xmx4g (or shorten the sound)");
+            if (java.util.Arrays.asList(args).contains("--verbose")) {
+                e.printStackTrace();
+            }
             code = EXIT_INTERNAL;
         }
         System.exit(code);

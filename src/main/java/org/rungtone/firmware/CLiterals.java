@@ -40,22 +40,52 @@ public final class CLiterals {
      * unsigned 32-bit.
      */
     public static String arrayBody(int[] values, int digits, int perLine, String indent) {
-        StringBuilder b = new StringBuilder(values.length * (digits + 4) + values.length / perLine * 8 + 16);
+        java.io.ByteArrayOutputStream b = new java.io.ByteArrayOutputStream(values.length * (digits + 4)
+                + values.length / perLine * 8 + 16);
+        try {
+            writeArrayBody(values, digits, perLine, indent, b);
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+        return b.toString(java.nio.charset.StandardCharsets.US_ASCII);
+    }
+
+    /**
+     * Writes the text of {@link #arrayBody} as ASCII straight to {@code out}, a 64 KiB buffer at a time, so a
+     * sample array of millions of values is never held as one string.
+     */
+    public static void writeArrayBody(int[] values, int digits, int perLine, String indent,
+            java.io.OutputStream out) throws java.io.IOException {
+        byte[] in = indent.getBytes(java.nio.charset.StandardCharsets.US_ASCII);
+        byte[] buf = new byte[1 << 16];
+        int n = 0;
+        int worst = in.length + 24;
         for (int i = 0; i < values.length; i++) {
+            if (n > buf.length - worst) {
+                out.write(buf, 0, n);
+                n = 0;
+            }
             if (i % perLine == 0) {
                 if (i > 0) {
-                    b.append('\n');
+                    buf[n++] = '\n';
                 }
-                b.append(indent);
+                System.arraycopy(in, 0, buf, n, in.length);
+                n += in.length;
             } else {
-                b.append(' ');
+                buf[n++] = ' ';
             }
-            appendHex(b, values[i] & 0xFFFFFFFFL, digits);
+            long value = values[i] & 0xFFFFFFFFL;
+            buf[n++] = '0';
+            buf[n++] = 'x';
+            int shown = Math.max(digits, (64 - Long.numberOfLeadingZeros(value) + 3) / 4);
+            for (int d = shown - 1; d >= 0; d--) {
+                buf[n++] = (byte) HEX[(int) (value >>> (4 * d)) & 0xF];
+            }
             if (i < values.length - 1) {
-                b.append(',');
+                buf[n++] = ',';
             }
         }
-        return b.toString();
+        out.write(buf, 0, n);
     }
 
     /** {@link #arrayBody} for bytes, two hex digits each, taken as unsigned. */
@@ -65,14 +95,6 @@ public final class CLiterals {
             v[i] = values[i] & 0xFF;
         }
         return arrayBody(v, 2, perLine, indent);
-    }
-
-    private static void appendHex(StringBuilder b, long value, int digits) {
-        b.append('0').append('x');
-        int shown = Math.max(digits, (64 - Long.numberOfLeadingZeros(value) + 3) / 4);
-        for (int d = shown - 1; d >= 0; d--) {
-            b.append(HEX[(int) (value >>> (4 * d)) & 0xF]);
-        }
     }
 
     /** A C double literal with enough digits, e.g. {@code 16000.0}. */

@@ -50,11 +50,11 @@ public final class SampleArrayEmitter {
     public List<Path> emit(Request request, Path outDir) {
         Map<String, Object> ctx = context(request);
         String header = templates.render("generic", "samples.h.mustache", ctx);
-        String source = templates.render("generic", "samples.c.mustache", ctx);
         Path h = outDir.resolve(request.symbol() + ".h");
         Path c = outDir.resolve(request.symbol() + ".c");
         AtomicFiles.writeString(h, header);
-        AtomicFiles.writeString(c, source);
+        // The sample array goes straight to the file: millions of samples are never one string.
+        AtomicFiles.write(c, out -> templates.renderTo("generic", "samples.c.mustache", ctx, out));
         return List.of(h, c);
     }
 
@@ -80,8 +80,8 @@ public final class SampleArrayEmitter {
             settings.add(s.replace("*/", "* /"));
         }
         ctx.put("settings", settings);
-        ctx.put("data", CLiterals.arrayBody(codes.unsafeCodes(), CLiterals.hexDigits(bits), PER_LINE,
-                "    "));
+        ctx.put("data", (Templates.Streamed) out -> CLiterals.writeArrayBody(codes.unsafeCodes(),
+                CLiterals.hexDigits(bits), PER_LINE, "    ", out));
         ctx.put("durationMs", String.format(Locale.ROOT, "%.1f", 1000.0 * codes.length()
                 / codes.sampleRateHz()));
         return ctx;

@@ -67,6 +67,67 @@ public final class Templates {
      * @throws InputError when the template is missing or refers to a value that is not there
      */
     public String render(String family, String name, Object context) {
+        if (context instanceof Map<?, ?> m && m.values().stream().anyMatch(v -> v instanceof Streamed)) {
+            java.io.ByteArrayOutputStream out = new java.io.ByteArrayOutputStream();
+            try {
+                renderTo(family, name, m, out);
+            } catch (IOException e) {
+                throw new java.io.UncheckedIOException(e);
+            }
+            return out.toString(StandardCharsets.UTF_8);
+        }
+        return execute(family, name, context);
+    }
+
+    /**
+     * A long value (a sample array's text) written straight to the output file instead of being built as one
+     * string: {@link #renderTo} renders the template with a marker in its place and streams it there.
+     */
+    @FunctionalInterface
+    public interface Streamed {
+        /** Writes the value's UTF-8 text to {@code out}. */
+        void writeTo(java.io.OutputStream out) throws IOException;
+    }
+
+    /**
+     * Renders {@code family/name} with {@code context} into {@code out} as UTF-8; values that are
+     * {@link Streamed} are written in place without being held as strings.
+     *
+     * @throws InputError when the template is missing or refers to a value that is not there
+     * @throws IOException when {@code out} fails
+     */
+    public void renderTo(String family, String name, Map<?, ?> context, java.io.OutputStream out)
+            throws IOException {
+        Map<Object, Object> marked = new java.util.LinkedHashMap<>();
+        Map<String, Streamed> streams = new java.util.HashMap<>();
+        for (Map.Entry<?, ?> e : context.entrySet()) {
+            if (e.getValue() instanceof Streamed st) {
+                String marker = MARK + Integer.toString(streams.size()) + MARK;
+                streams.put(marker, st);
+                marked.put(e.getKey(), marker);
+            } else {
+                marked.put(e.getKey(), e.getValue());
+            }
+        }
+        String text = execute(family, name, marked);
+        int at = 0;
+        while (true) {
+            int open = text.indexOf(MARK, at);
+            int close = open < 0 ? -1 : text.indexOf(MARK, open + 1);
+            if (close < 0) {
+                out.write(text.substring(at).getBytes(StandardCharsets.UTF_8));
+                return;
+            }
+            out.write(text.substring(at, open).getBytes(StandardCharsets.UTF_8));
+            streams.get(text.substring(open, close + 1)).writeTo(out);
+            at = close + 1;
+        }
+    }
+
+    /** Marks a streamed value in rendered text; a control character no template or value contains. */
+    private static final char MARK = '\u0001';
+
+    private String execute(String family, String name, Object context) {
         Template t;
         try {
             t = compiled.computeIfAbsent(family + "/" + name, k -> compiler.compile(load(family, name)));

@@ -284,25 +284,24 @@ public final class Build {
         List<QualityReport> quality = new ArrayList<>();
         Spectrum errorSpectrum;
         if (plan.board().isEmpty()) {
-            AudioMetrics.Measured m = metrics.measureWithSpectrum("ideal ladder",
-                    AudioMetrics.volts(idealQ.codes(), ideal), true);
+            AudioMetrics.Measured m = metrics.measureWithSpectrum("ideal ladder", idealQ.codes(), ideal);
             quality.add(m.report());
             errorSpectrum = m.errorSpectrum();
         } else {
             quality.add(metrics.measure("ideal ladder", idealQ.codes(), ideal));
-            AudioMetrics.Measured plain = metrics.measureWithSpectrum("board, plain codes",
-                    AudioMetrics.volts(idealQ.codes(), played), true);
+            AudioMetrics.Measured plain = metrics.measureWithSpectrum("board, plain codes", idealQ.codes(),
+                    played);
             quality.add(plain.report());
             errorSpectrum = plain.errorSpectrum();
             if (compensated.isPresent()) {
                 AudioMetrics.Measured comp = metrics.measureWithSpectrum("board, compensated",
-                        AudioMetrics.volts(compensated.get(), played), true);
+                        compensated.get(), played);
                 quality.add(comp.report());
                 errorSpectrum = comp.errorSpectrum();
             }
         }
         if (errorSpectrum == null) {
-            errorSpectrum = metrics.errorSpectrum(AudioMetrics.volts(emitted, played));
+            errorSpectrum = metrics.measureWithSpectrum("emitted", emitted, played).errorSpectrum();
         }
         QualityReport emittedQuality = quality.get(quality.size() - 1);
         Optional<Double> shapingGain = Optional.empty();
@@ -313,7 +312,7 @@ public final class Build {
         }
         Optional<ToneReport> tone = toneOf(reference, emitted, played);
         Optional<Spectrum> toneSpectrum = tone.isPresent()
-                ? Optional.of(ToneAnalysis.spectrum(head(volts(emitted, played), rate))) : Optional.empty();
+                ? Optional.of(ToneAnalysis.spectrum(head(emitted, played, rate))) : Optional.empty();
         watch.lap("analyze");
         AnalogModel.Preview preview = join(previewJob);
         watch.lap("preview");
@@ -398,7 +397,7 @@ public final class Build {
         if (!(fit.sinadDb() > TONE_THRESHOLD_DB)) {
             return Optional.empty();
         }
-        return Optional.of(ToneAnalysis.analyze(head(volts(codes, table), reference.sampleRateHz())));
+        return Optional.of(ToneAnalysis.analyze(head(codes, table, reference.sampleRateHz())));
     }
 
     /** Waits for a job, passing on the user's input errors and programming errors unwrapped. */
@@ -416,19 +415,19 @@ public final class Build {
         }
     }
 
-    /** The codes' levels in signal units: the table's span mapped onto full scale [-1, 1]. */
-    private static double[] volts(Codes codes, LevelTable table) {
-        double[] v = AudioMetrics.volts(codes, table);
+    /**
+     * The first {@value #TONE_SAMPLES} codes' levels in signal units: the table's span mapped onto full scale
+     * [-1, 1].
+     */
+    private static Signal head(Codes codes, LevelTable table, double rate) {
+        int[] c = codes.unsafeCodes();
+        double[] v = new double[Math.min(c.length, TONE_SAMPLES)];
         double mid = 0.5 * (table.minVolts() + table.maxVolts());
         double half = 0.5 * (table.maxVolts() - table.minVolts());
         for (int i = 0; i < v.length; i++) {
-            v[i] = (v[i] - mid) / half;
+            v[i] = (table.volts(c[i]) - mid) / half;
         }
-        return v;
-    }
-
-    private static Signal head(double[] x, double rate) {
-        return Signal.wrap(Arrays.copyOf(x, Math.min(x.length, TONE_SAMPLES)), rate);
+        return Signal.wrap(v, rate);
     }
 
     private static String describe(BuildPlan plan, Conditioner.Conditioned c) {

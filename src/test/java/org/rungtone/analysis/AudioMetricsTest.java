@@ -103,4 +103,28 @@ class AudioMetricsTest {
         assertEquals("the reference signal is constant, so there is no sound to measure quality against; "
                 + "use a source with some signal in it", e.getMessage());
     }
+
+    @Test
+    void codesAreMeasuredExactlyAsTheirVoltsWould() {
+        // The codes path computes the error on the fly; it must give the figures of the stored-volts path.
+        double[] x = new double[40_000];
+        for (int i = 0; i < x.length; i++) {
+            x[i] = 0.7 * Math.sin(2 * Math.PI * 0.0123 * i) + 0.1 * Math.sin(2 * Math.PI * 0.31 * i);
+        }
+        Signal ref = Signal.wrap(x, 16000);
+        double[] v = new double[64];
+        for (int k = 0; k < v.length; k++) {
+            v[k] = 0.05 * k + 0.0004 * k * k;
+        }
+        LevelTable bent = LevelTable.of(6, v, "bent");
+        Codes codes = new Quantizer(LevelTable.ideal(6, 3.2), 0, 3.15, Dither.TPDF, ErrorFilter.NONE, 3)
+                .apply(ref).codes();
+        AudioMetrics m = AudioMetrics.of(ref, 5000);
+        AudioMetrics.Measured fromCodes = m.measureWithSpectrum("codes", codes, bent);
+        AudioMetrics.Measured fromVolts = m.measureWithSpectrum("volts", AudioMetrics.volts(codes, bent));
+        assertEquals(fromVolts.report().sinadDb(), fromCodes.report().sinadDb(), 1e-12);
+        assertEquals(fromVolts.report().inBandSnrDb(), fromCodes.report().inBandSnrDb(), 1e-12);
+        assertEquals(fromVolts.report().aWeightedSnrDb(), fromCodes.report().aWeightedSnrDb(), 1e-12);
+        assertArrayEquals(fromVolts.errorSpectrum().powers(), fromCodes.errorSpectrum().powers(), 1e-18);
+    }
 }
