@@ -12,15 +12,6 @@ import picocli.CommandLine.ParseResult;
         versionProvider = Version.Provider.class,
         description = {"Turns sounds and waveform scripts into firmware for resistor-ladder DACs on GPIO pins, "
             + "and tells you how the result will sound on your board.", ""},
-        subcommands = {
-            BuildCommand.class,
-            CalibrateCommand.class,
-            DemoCommand.class,
-            InitCommand.class,
-            LadderCommand.class,
-            SurveyCommand.class,
-            CompletionCommand.class,
-            CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {
             " 0:done",
@@ -58,7 +49,7 @@ public final class Main implements Runnable {
         }
         int code;
         try {
-            code = newCommandLine().execute(args);
+            code = newCommandLine(args).execute(args);
         } catch (OutOfMemoryError e) {
             System.err.println("rungtone: error: out of memory for this input; give Java more with"
                     + " RUNGTONE_JAVA_OPTS=-Xmx4g (or shorten the sound)");
@@ -70,9 +61,44 @@ public final class Main implements Runnable {
         System.exit(code);
     }
 
-    /** A configured command line, for {@link #main} and for tests that capture its output. */
+    /**
+     * The subcommands in help order. They are added in code rather than in the annotation so that a run of
+     * one command builds only that command's model: picocli reads every option annotation of every class it
+     * is given, which costs a tenth of a second at start for all of them.
+     */
+    private static final java.util.Map<String, java.util.function.Supplier<Object>> SUBCOMMANDS = subcommands();
+
+    private static java.util.Map<String, java.util.function.Supplier<Object>> subcommands() {
+        java.util.Map<String, java.util.function.Supplier<Object>> m = new java.util.LinkedHashMap<>();
+        m.put("build", BuildCommand::new);
+        m.put("calibrate", CalibrateCommand::new);
+        m.put("demo", DemoCommand::new);
+        m.put("init", InitCommand::new);
+        m.put("ladder", LadderCommand::new);
+        m.put("survey", SurveyCommand::new);
+        m.put("completion", CompletionCommand::new);
+        m.put("help", CommandLine.HelpCommand::new);
+        return m;
+    }
+
+    /** A configured command line with every subcommand, for tests that capture its output. */
     public static CommandLine newCommandLine() {
+        return newCommandLine(new String[0]);
+    }
+
+    /**
+     * A configured command line for {@code args}: when the first argument names a command that needs no
+     * view of the others (not help or completion), only that command is added.
+     */
+    static CommandLine newCommandLine(String[] args) {
         CommandLine cl = new CommandLine(new Main());
+        String first = args.length > 0 ? args[0] : "";
+        boolean alone = SUBCOMMANDS.containsKey(first) && !first.equals("help") && !first.equals("completion");
+        for (java.util.Map.Entry<String, java.util.function.Supplier<Object>> e : SUBCOMMANDS.entrySet()) {
+            if (!alone || e.getKey().equals(first)) {
+                cl.addSubcommand(e.getKey(), e.getValue().get());
+            }
+        }
         cl.setExecutionExceptionHandler(Main::handleFailure);
         cl.setParameterExceptionHandler(Main::handleUsage);
         cl.setExitCodeExceptionMapper(t -> t instanceof CommandLine.ParameterException ? EXIT_USAGE
