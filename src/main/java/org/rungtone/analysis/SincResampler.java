@@ -47,17 +47,24 @@ final class SincResampler {
         int taps = 2 * half;
         table = new double[(PHASES + 1) * taps];
         double i0Beta = Bessel.i0(beta);
+        // The extra taps shift the kernel by whole samples, which keeps the phase: each phase's kernel is
+        // evaluated once at taps + 2·extraHalf points and the extra FIR is applied to that row.
+        double[] row = new double[taps + 2 * extraHalf];
         for (int p = 0; p <= PHASES; p++) {
             double frac = (double) p / PHASES;
+            for (int k2 = 0; k2 < row.length; k2++) {
+                // row[k2] is the kernel at t = (k2 - extraHalf) - half + 1 - frac
+                row[k2] = kernel(k2 - extraHalf - half + 1 - frac, fc, windowHalf, beta, i0Beta);
+            }
             for (int k = 0; k < taps; k++) {
-                double t = k - half + 1 - frac;
                 double v;
                 if (extraTaps.length == 0) {
-                    v = kernel(t, fc, windowHalf, beta, i0Beta);
+                    v = row[k];
                 } else {
                     v = 0;
                     for (int e = 0; e < extraTaps.length; e++) {
-                        v += extraTaps[e] * kernel(t - (e - extraHalf), fc, windowHalf, beta, i0Beta);
+                        // kernel(t - (e - extraHalf)) with t = k - half + 1 - frac
+                        v += extraTaps[e] * row[k - e + 2 * extraHalf];
                     }
                 }
                 table[p * taps + k] = v;
