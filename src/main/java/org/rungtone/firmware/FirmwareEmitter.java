@@ -66,7 +66,16 @@ public final class FirmwareEmitter {
      * @throws org.rungtone.internal.InputError for a bad request (nothing is written) or an unusable folder
      */
     public static EmitResult emit(FirmwareRequest request, Path outDir) {
-        Rendered r = render(request);
+        return write(render(request), outDir);
+    }
+
+    /**
+     * Writes rendered files into {@code outDir} (created if needed), each through a temporary file and an
+     * atomic move.
+     *
+     * @throws org.rungtone.internal.InputError for an unusable folder
+     */
+    public static EmitResult write(Rendered r, Path outDir) {
         AtomicFiles.prepareFolder(outDir);
         List<Path> written = new ArrayList<>();
         for (Map.Entry<String, String> f : r.files().entrySet()) {

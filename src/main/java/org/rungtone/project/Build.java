@@ -133,26 +133,48 @@ public final class Build {
         List<String> firmwareLines = new ArrayList<>();
         List<String> warnings = new ArrayList<>(r.warnings());
         long flash;
+        // Every check that can refuse the build runs before the first file is written.
+        FirmwareEmitter.Rendered firmware = null;
         if (plan.firmware().isPresent()) {
             FirmwareRequest.Builder fb = plan.firmware().get().toBuilder().name(plan.symbol())
                     .toolVersion(toolVersion).settings(r.settings());
             fb.sound(clip(plan.symbol(), r));
-            EmitResult er = FirmwareEmitter.emit(fb.build(), plan.outDir());
-            files.addAll(er.files());
-            firmwareLines.addAll(er.report());
-            warnings.addAll(er.warnings());
-            flash = er.flashBytes();
+            firmware = FirmwareEmitter.render(fb.build());
+            flash = firmware.result().flashBytes();
         } else {
             flash = arrayBytes(r);
             if (plan.flashBudgetBytes() > 0) {
                 FlashBudget.check(flash, plan.flashBudgetBytes(), FlashBudget.alternatives(r.emitted().length(),
                         r.rateHz(), plan.bits(), SampleStorage.UNPACKED, 0));
             }
-            files.addAll(emitArray(plan.symbol(), r, plan.outDir()));
+        }
+        // The preview and plots are written on another core while the C files are.
+        CompletableFuture<List<Path>> assets = CompletableFuture.supplyAsync(() -> {
+            join(plotsReady);
+            return writeAssets(r, plan.outDir());
+        });
+        try {
+            if (firmware != null) {
+                EmitResult er = FirmwareEmitter.write(firmware, plan.outDir());
+                files.addAll(er.files());
+                firmwareLines.addAll(er.report());
+                warnings.addAll(er.warnings());
+            } else {
+                files.addAll(emitArray(plan.symbol(), r, plan.outDir()));
+            }
+        } catch (RuntimeException e) {
+            // Leave nothing behind: wait for the assets and remove what they wrote.
+            try {
+                for (Path p : join(assets)) {
+                    java.nio.file.Files.deleteIfExists(p);
+                }
+            } catch (RuntimeException | java.io.IOException suppressed) {
+                e.addSuppressed(suppressed);
+            }
+            throw e;
         }
         watch.lap("emit");
-        join(plotsReady);
-        files.addAll(writeAssets(r, plan.outDir()));
+        files.addAll(join(assets));
         watch.lap("plots");
         Path txt = plan.outDir().resolve("report.txt");
         Path json = plan.outDir().resolve("report.json");
