@@ -140,6 +140,14 @@ public final class AnalogModel {
         // Fixed-size chunks in parallel. Each chunk after the first starts its own filter WARMUP fine samples
         // early, so the filter state it reaches equals the sequential one to far below double precision; the
         // result does not depend on the number of cores.
+        if (raw) {
+            // No filter: the grid signal is the held staircase itself, so the kernel is summed over each
+            // hold once and every output reads codes instead of fine samples (factor times less work).
+            SincResampler.Held held = resampler.new Held(factor);
+            java.util.stream.IntStream.range(0, chunks).parallel().forEach(k -> resampler.resampleHeld(held, c,
+                    normalised, k * CHUNK, Math.min(outLength, (k + 1) * CHUNK), offset, out));
+            return preview(out, fs);
+        }
         java.util.stream.IntStream.range(0, chunks).parallel().forEach(k -> {
             int from = k * CHUNK;
             int to = Math.min(outLength, from + CHUNK);
@@ -149,6 +157,10 @@ public final class AnalogModel {
                     start);
             resampler.resampleInto(source, start, from, to, offset, out);
         });
+        return preview(out, fs);
+    }
+
+    private Preview preview(double[] out, double fs) {
         double peak = 0;
         for (double v : out) {
             peak = Math.max(peak, Math.abs(v));

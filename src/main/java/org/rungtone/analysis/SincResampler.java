@@ -141,4 +141,91 @@ final class SincResampler {
             out[j] = acc0 + w * (acc1 - acc0);
         }
     }
+
+    /**
+     * The kernel summed over each hold of a zero-order-held input, for {@link #resampleHeld}: with fine
+     * samples {@code s} holding {@code v[floor(s / factor)]}, an output at fine position {@code c = factor·a
+     * + r + frac} is {@code Σ_d v[a − d]·G_(r, frac)(d)}, {@code G_(r, frac)(d) = Σ_(m=0..factor−1)
+     * H(factor·d + r − m + frac)}. Rows are tabulated at the same 512 phases per fine sample as the kernel
+     * itself (from its table, so no new kernel values), so results equal {@link #resampleInto} over the held
+     * signal to rounding while each output reads {@code factor} times fewer values.
+     */
+    final class Held {
+        private final int factor;
+        private final int dMin;
+        private final int width;
+        private final double[] g;
+
+        Held(int factor) {
+            Checks.checkArgument(factor >= 1, "hold factor must be at least 1: %d", factor);
+            this.factor = factor;
+            int taps = 2 * half;
+            dMin = -((half + factor) / factor) - 1;
+            int dMax = (half + factor) / factor + 1;
+            width = dMax - dMin + 1;
+            g = new double[factor * (PHASES + 1) * width];
+            for (int r = 0; r < factor; r++) {
+                for (int p = 0; p <= PHASES; p++) {
+                    int row = (r * (PHASES + 1) + p) * width;
+                    for (int dd = 0; dd < width; dd++) {
+                        int d = dMin + dd;
+                        double sum = 0;
+                        for (int m = 0; m < factor; m++) {
+                            // H(x + p/512) is table[p][half − 1 − x]
+                            int k = half - 1 - (factor * d + r - m);
+                            if (k >= 0 && k < taps) {
+                                sum += table[p * taps + k];
+                            }
+                        }
+                        g[row + dd] = sum;
+                    }
+                }
+            }
+        }
+    }
+
+    /**
+     * Computes outputs {@code from} to {@code to} (exclusive) into {@code out} from a zero-order-held input:
+     * fine sample {@code s} holds {@code level[codes[floor(s / factor)]]}, and 0 outside the codes. Output j
+     * is taken at fine position {@code j·ratio + offset}, as in {@link #resampleInto}.
+     */
+    void resampleHeld(Held held, int[] codes, double[] level, int from, int to, double offset, double[] out) {
+        int factor = held.factor;
+        int width = held.width;
+        int dMin = held.dMin;
+        double[] g = held.g;
+        int n = codes.length;
+        for (int j = from; j < to; j++) {
+            double c = j * ratio + offset;
+            long i0 = (long) Math.floor(c);
+            double frac = c - i0;
+            long a = Math.floorDiv(i0, factor);
+            int r = (int) Math.floorMod(i0, (long) factor);
+            double pos = frac * PHASES;
+            int p = (int) pos;
+            double w = pos - p;
+            int row0 = (r * (PHASES + 1) + p) * width;
+            int row1 = row0 + width;
+            double acc0 = 0;
+            double acc1 = 0;
+            long top = a - dMin;
+            long bottom = a - (dMin + width - 1);
+            if (bottom >= 0 && top < n) {
+                int at = (int) top;
+                for (int dd = 0; dd < width; dd++) {
+                    double x = level[codes[at - dd]];
+                    acc0 += x * g[row0 + dd];
+                    acc1 += x * g[row1 + dd];
+                }
+            } else {
+                for (int dd = 0; dd < width; dd++) {
+                    long k = top - dd;
+                    double x = k >= 0 && k < n ? level[codes[(int) k]] : 0;
+                    acc0 += x * g[row0 + dd];
+                    acc1 += x * g[row1 + dd];
+                }
+            }
+            out[j] = acc0 + w * (acc1 - acc0);
+        }
+    }
 }
