@@ -131,13 +131,21 @@ final class SincResampler {
             double w = pos - p;
             int row0 = p * taps;
             int row1 = row0 + taps;
+            // Two partial sums per row: independent additions overlap in the CPU (taps is even).
             double acc0 = 0;
             double acc1 = 0;
-            for (int k = 0; k < taps; k++) {
+            double odd0 = 0;
+            double odd1 = 0;
+            for (int k = 0; k < taps; k += 2) {
                 double x = buf[base + k];
+                double y = buf[base + k + 1];
                 acc0 += x * table[row0 + k];
                 acc1 += x * table[row1 + k];
+                odd0 += y * table[row0 + k + 1];
+                odd1 += y * table[row1 + k + 1];
             }
+            acc0 += odd0;
+            acc1 += odd1;
             out[j] = acc0 + w * (acc1 - acc0);
         }
     }

@@ -32,8 +32,10 @@ public final class Codes {
         Checks.checkArgument(sampleRateHz > 0, "sample rate must be positive: %s", sampleRateHz);
         int max = (1 << bits) - 1;
         for (int i = 0; i < codes.length; i++) {
-            Checks.checkArgument(codes[i] >= 0 && codes[i] <= max, "code %d at %d is outside 0..%d",
-                    codes[i], i, max);
+            if (codes[i] < 0 || codes[i] > max) {
+                // checked first: formatting arguments would box three values for every sample
+                throw new IllegalArgumentException("code " + codes[i] + " at " + i + " is outside 0.." + max);
+            }
         }
         return new Codes(bits, sampleRateHz, codes);
     }
