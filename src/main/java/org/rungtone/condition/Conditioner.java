@@ -85,24 +85,26 @@ public final class Conditioner {
         } else {
             s = source.read(first, last + 1);
         }
-        if (c.removeDc()) {
+        // Few passes over the result: each pass over a long array costs its own warm-up in a fresh JVM.
+        double[] y = s.unsafeSamples();
+        double m = 0;
+        if (c.removeDc() && y.length > 0) {
             // The resampled signal's own mean: equal to the source's but for the filter's edge transients.
-            double[] y = s.unsafeSamples();
-            double m = 0;
             for (double v : y) {
                 m += v;
             }
-            m = y.length == 0 ? 0 : m / y.length;
-            for (int i = 0; i < y.length; i++) {
-                y[i] -= m;
-            }
+            m /= y.length;
         }
-        double[] y = s.unsafeSamples();
+        double peak = 0;
+        for (int i = 0; i < y.length; i++) {
+            double v = y[i] - m;
+            y[i] = v;
+            peak = Math.max(peak, Math.abs(v));
+        }
         double gainDb = 0;
         if (c.gainDb().isPresent()) {
             gainDb = c.gainDb().getAsDouble();
         } else if (c.normalizeDbfs().isPresent()) {
-            double peak = s.peak();
             if (peak > 0) {
                 gainDb = c.normalizeDbfs().getAsDouble() - 20 * Math.log10(peak);
             } else {
@@ -118,6 +120,7 @@ public final class Conditioner {
                     + " (%.0f ms); they overlap", 1000 * c.fadeInSeconds(), 1000 * c.fadeOutSeconds(),
                     1000.0 * n / s.sampleRateHz()));
         }
+        long over = 0;
         for (int i = 0; i < n; i++) {
             double v = y[i] * g;
             if (i < fadeIn) {
@@ -127,9 +130,6 @@ public final class Conditioner {
                 v *= (double) (n - 1 - i) / fadeOut;
             }
             y[i] = v;
-        }
-        long over = 0;
-        for (double v : y) {
             if (v > 1 || v < -1) {
                 over++;
             }

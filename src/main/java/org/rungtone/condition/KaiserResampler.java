@@ -188,22 +188,21 @@ public final class KaiserResampler implements Resampler {
             double acc = 0;
             int off = (int) start + from;
             if (row2 == null) {
-                // Four partial sums: independent additions run in parallel in the CPU instead of waiting on
-                // one chain (the result differs from one sum only by rounding, and not between runs).
-                double a1 = 0;
-                double a2 = 0;
-                double a3 = 0;
-                int j = j0;
-                for (; j + 3 < j1; j += 4) {
-                    acc += row[j] * x[off + j];
-                    a1 += row[j + 1] * x[off + j + 1];
-                    a2 += row[j + 2] * x[off + j + 2];
-                    a3 += row[j + 3] * x[off + j + 3];
+                if (j0 == 0 && j1 == taps) {
+                    // The whole window (taps is even): two partial sums let independent additions overlap
+                    // in the CPU; the result differs from one running sum only by rounding, never between runs.
+                    double odd = 0;
+                    int k = off;
+                    for (int j = 0; j < taps; j += 2, k += 2) {
+                        acc += row[j] * x[k];
+                        odd += row[j + 1] * x[k + 1];
+                    }
+                    acc += odd;
+                } else {
+                    for (int j = j0; j < j1; j++) {
+                        acc += row[j] * x[off + j];
+                    }
                 }
-                for (; j < j1; j++) {
-                    acc += row[j] * x[off + j];
-                }
-                acc += a1 + a2 + a3;
             } else {
                 double acc2 = 0;
                 for (int j = j0; j < j1; j++) {
