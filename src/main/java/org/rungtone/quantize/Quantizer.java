@@ -127,16 +127,63 @@ public final class Quantizer {
         return (volts - 0.5 * (lowVolts + highVolts)) / (0.5 * (highVolts - lowVolts));
     }
 
-    /** Quantizes a whole signal. */
+    /** Samples per dither block: each block draws from its own random stream (see {@link #apply}). */
+    static final int BLOCK = 1 << 16;
+
+    /**
+     * Quantizes a whole signal. The dither comes from one random stream per block of {@value #BLOCK} samples,
+     * split in order from a generator seeded with the seed, so that without an error filter the blocks are
+     * quantized in parallel and the codes are the same whatever the number of cores. With an error filter
+     * the samples depend on each other and run in order (same streams, same codes).
+     */
     public Quantized apply(Signal signal) {
         double[] x = signal.unsafeSamples();
         int[] out = new int[x.length];
-        SplittableRandom random = new SplittableRandom(seed);
+        int blocks = (x.length + BLOCK - 1) / BLOCK;
+        SplittableRandom root = new SplittableRandom(seed);
+        SplittableRandom[] streams = new SplittableRandom[blocks];
+        for (int b = 0; b < blocks; b++) {
+            streams[b] = root.split();
+        }
+        long clipped;
+        if (shaping.order() == 0) {
+            long[] counts = new long[blocks];
+            java.util.stream.IntStream.range(0, blocks).parallel().forEach(b -> counts[b] = quantizeFlat(x,
+                    out, b * BLOCK, Math.min(x.length, (b + 1) * BLOCK), streams[b]));
+            clipped = 0;
+            for (long c : counts) {
+                clipped += c;
+            }
+        } else {
+            clipped = quantizeShaped(x, out, streams);
+        }
+        return new Quantized(Codes.wrap(table.bits(), signal.sampleRateHz(), out), clipped);
+    }
+
+    /** Samples {@code from .. to − 1} without error feedback; returns how many lay beyond full scale. */
+    private long quantizeFlat(double[] x, int[] out, int from, int to, SplittableRandom random) {
+        double lsb = lsbVolts();
+        double mid = 0.5 * (lowVolts + highVolts);
+        double half = 0.5 * (highVolts - lowVolts);
+        long clipped = 0;
+        for (int i = from; i < to; i++) {
+            double xi = x[i];
+            if (xi > 1 || xi < -1) {
+                clipped++;
+            }
+            double d = dither == Dither.NONE ? 0 : dither.next(random) * lsb;
+            out[i] = sortedCodes[nearestIndex(mid + xi * half + d)];
+        }
+        return clipped;
+    }
+
+    /** All samples in order with the error fed back; returns how many lay beyond full scale. */
+    private long quantizeShaped(double[] x, int[] out, SplittableRandom[] streams) {
         double lsb = lsbVolts();
         double mid = 0.5 * (lowVolts + highVolts);
         double half = 0.5 * (highVolts - lowVolts);
         int order = shaping.order();
-        double[] history = new double[Math.max(1, order)];
+        double[] history = new double[order];
         int head = 0;
         long clipped = 0;
         double clamp = FEEDBACK_CLAMP_LSB * lsb;
@@ -146,24 +193,20 @@ public final class Quantizer {
                 clipped++;
             }
             double v = mid + xi * half;
-            if (order > 0) {
-                double fb = 0;
-                for (int k = 0; k < order; k++) {
-                    fb += shaping.tap(k) * history[(head - k + history.length) % history.length];
-                }
-                v -= fb;
+            double fb = 0;
+            for (int k = 0; k < order; k++) {
+                fb += shaping.tap(k) * history[(head - k + order) % order];
             }
-            double d = dither == Dither.NONE ? 0 : dither.next(random) * lsb;
+            v -= fb;
+            double d = dither == Dither.NONE ? 0 : dither.next(streams[i / BLOCK]) * lsb;
             int idx = nearestIndex(v + d);
             out[i] = sortedCodes[idx];
-            if (order > 0) {
-                double e = sortedVolts[idx] - v;
-                e = Math.max(-clamp, Math.min(clamp, e));
-                head = (head + 1) % history.length;
-                history[head] = e;
-            }
+            double e = sortedVolts[idx] - v;
+            e = Math.max(-clamp, Math.min(clamp, e));
+            head = (head + 1) % order;
+            history[head] = e;
         }
-        return new Quantized(Codes.wrap(table.bits(), signal.sampleRateHz(), out), clipped);
+        return clipped;
     }
 
     /** Index into the sorted levels of the level nearest to {@code volts}. */

@@ -46,7 +46,8 @@ class BuildCommandTest {
                     s.map(p -> p.getFileName().toString()).sorted().toList(), "no temporary files left behind");
         }
         // a single tone gets the IEEE 1241 figures: 6 bits with TPDF dither, about 6.02*6 + 1.76 - 4.77 dB
-        assertTrue(r.out().contains("single tone at 523.2Hz"), r.out());
+        // the fixture is C5, 523.25 Hz: the fitted frequency shows as 523.2 or 523.3 depending on the dither
+        assertTrue(r.out().matches("(?s).*single tone at 523\\.[23]Hz.*"), r.out());
     }
 
     @Test

@@ -126,4 +126,22 @@ class QuantizerTest {
             assertEquals(best, q.nearestCode(v), "volts " + v);
         }
     }
+
+    @Test
+    void ditheredCodesDoNotDependOnTheNumberOfThreads() throws Exception {
+        // Blocks draw from their own random streams, so one thread and many give the same codes.
+        double[] x = new double[5 * Quantizer.BLOCK + 123];
+        for (int i = 0; i < x.length; i++) {
+            x[i] = 0.9 * Math.sin(0.001 * i);
+        }
+        Quantizer q = new Quantizer(LevelTable.ideal(8, 3.3), Dither.TPDF, 42);
+        Signal s = Signal.wrap(x, 16000);
+        int[] one = new java.util.concurrent.ForkJoinPool(1).submit(() -> q.apply(s).codes().codes()).get();
+        int[] four = new java.util.concurrent.ForkJoinPool(4).submit(() -> q.apply(s).codes().codes()).get();
+        assertArrayEquals(one, four);
+        assertArrayEquals(one, q.apply(s).codes().codes());
+        // and a different seed gives different dither
+        int[] other = new Quantizer(LevelTable.ideal(8, 3.3), Dither.TPDF, 43).apply(s).codes().codes();
+        assertTrue(!java.util.Arrays.equals(one, other));
+    }
 }
