@@ -14,7 +14,7 @@ import org.rungtone.internal.InputError;
  * escape. The fit is fuzzed apart by {@link BoardFitFuzzTest}, so this target runs fast enough for millions of
  * inputs. In {@code mvn verify} this replays the seed corpus in
  * {@code src/test/resources/org/rungtone/fuzz/MeasurementCsvFuzzTestInputs/} (files named
- * {@code regression-*} are inputs that once escaped); {@code ./fuzz csv 1200} fuzzes it.
+ * {@code regression-*} are inputs that once escaped); {@code ./fuzz csv 600} fuzzes it.
  */
 class MeasurementCsvFuzzTest {
     private static final String NAME = "fuzz.csv";
