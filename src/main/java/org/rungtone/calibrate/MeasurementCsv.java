@@ -40,6 +40,12 @@ public final class MeasurementCsv {
     private static final Pattern CODE = Pattern.compile("0[bB]([01]{1,16})|0[xX]([0-9a-fA-F]{1,4})|(\\d{1,6})");
     private static final Pattern VOLTS = Pattern.compile(
             "([+-]?)(\\d*)(?:\\.(\\d*))?(?:[eE]([+-]?\\d{1,3}))?\\s*(mV|mv|uV|uv|µV|V|v)?");
+    private static final Pattern BINARY = Pattern.compile("[01]{1,16}");
+    private static final Pattern DECIMAL_COMMA = Pattern.compile("[+-]?\\d+,\\d+.*");
+    private static final Pattern CONTROL = Pattern.compile("\\p{Cntrl}");
+    // Built once: the format is immutable, and every file is read the same way.
+    private static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder().setCommentMarker('#')
+            .setIgnoreEmptyLines(true).setIgnoreSurroundingSpaces(true).setTrim(true).build();
 
     private MeasurementCsv() {
     }
@@ -88,6 +94,9 @@ public final class MeasurementCsv {
         private final int[] lineStarts;
         private final List<Reading> readings = new ArrayList<>();
         private final List<Reading> unmeasured = new ArrayList<>();
+        // One matcher of each kind per file, reset for every field, rather than one per field.
+        private final Matcher codeMatcher = CODE.matcher("");
+        private final Matcher voltsMatcher = VOLTS.matcher("");
         private int bits;
         private int codeCol = 0;
         private int voltsCol = 1;
@@ -113,10 +122,8 @@ public final class MeasurementCsv {
 
         Measurements run(int bitsOrZero) {
             bits = bitsOrZero;
-            CSVFormat format = CSVFormat.DEFAULT.builder().setCommentMarker('#').setIgnoreEmptyLines(true)
-                    .setIgnoreSurroundingSpaces(true).setTrim(true).build();
             boolean first = true;
-            try (CSVParser parser = CSVParser.parse(new StringReader(text), format)) {
+            try (CSVParser parser = CSVParser.parse(new StringReader(text), FORMAT)) {
                 Iterator<CSVRecord> it = parser.iterator();
                 while (true) {
                     CSVRecord rec;
@@ -132,12 +139,12 @@ public final class MeasurementCsv {
                     }
                     int line = lineOf(rec.getCharacterPosition());
                     List<String> fields = fields(rec);
-                    if (fields.stream().allMatch(String::isEmpty)) {
+                    if (allEmpty(fields)) {
                         continue;
                     }
                     if (first) {
                         first = false;
-                        if (!CODE.matcher(fields.get(0)).matches()) {
+                        if (!codeMatcher.reset(fields.get(0)).matches()) {
                             header(fields, line);
                             continue;
                         }
@@ -168,8 +175,9 @@ public final class MeasurementCsv {
 
         /** The fields of a record up to a '#' comment. */
         private static List<String> fields(CSVRecord rec) {
-            List<String> out = new ArrayList<>();
-            for (String f : rec) {
+            List<String> out = new ArrayList<>(rec.size());
+            for (int i = 0; i < rec.size(); i++) {
+                String f = rec.get(i);
                 int hash = f.indexOf('#');
                 if (hash >= 0) {
                     String before = f.substring(0, hash).trim();
@@ -183,6 +191,15 @@ public final class MeasurementCsv {
             return out;
         }
 
+        private static boolean allEmpty(List<String> fields) {
+            for (String f : fields) {
+                if (!f.isEmpty()) {
+                    return false;
+                }
+            }
+            return true;
+        }
+
         /**
          * The line a record starts on. Commons CSV reports the position where it began reading the record,
          * before the blank and comment lines it skipped; those are skipped here too.
@@ -190,14 +207,21 @@ public final class MeasurementCsv {
         private int lineOf(long charPosition) {
             int i = Arrays.binarySearch(lineStarts, (int) Math.min(Integer.MAX_VALUE, charPosition));
             int line = i >= 0 ? i : -i - 2;
-            while (line + 1 < lineStarts.length) {
-                String content = text.substring(lineStarts[line], lineStarts[line + 1]).trim();
-                if (!content.isEmpty() && !content.startsWith("#")) {
-                    break;
-                }
+            while (line + 1 < lineStarts.length && blankOrComment(lineStarts[line], lineStarts[line + 1])) {
                 line++;
             }
             return line + 1;
+        }
+
+        /** True when text[from, to) trimmed is empty or starts with '#' (as String.trim, without a copy). */
+        private boolean blankOrComment(int from, int to) {
+            for (int i = from; i < to; i++) {
+                char c = text.charAt(i);
+                if (c > ' ') {
+                    return c == '#';
+                }
+            }
+            return true;
         }
 
         private InputError error(int line, String detail) {
@@ -267,7 +291,7 @@ public final class MeasurementCsv {
         }
 
         private int code(String t, int line) {
-            Matcher m = CODE.matcher(t);
+            Matcher m = codeMatcher.reset(t);
             if (!m.matches()) {
                 String hint = t.contains(";") || t.contains("\t") ? "; separate the fields with commas" : "";
                 throw error(line, "'" + shown(t) + "' is not a code; write it in decimal (37), binary"
@@ -287,7 +311,7 @@ public final class MeasurementCsv {
         }
 
         private void checkBinary(String b, int code, int line) {
-            if (!b.matches("[01]{1,16}")) {
+            if (!BINARY.matcher(b).matches()) {
                 throw error(line, "binary '" + shown(b) + "' is not a row of 0s and 1s");
             }
             int value = Integer.parseInt(b, 2);
@@ -302,12 +326,12 @@ public final class MeasurementCsv {
         }
 
         private double[] volts(String t, int line) {
-            Matcher m = VOLTS.matcher(t);
+            Matcher m = voltsMatcher.reset(t);
             boolean digits = m.matches() && (!m.group(2).isEmpty() || (m.group(3) != null && !m.group(3)
                     .isEmpty()));
             if (!digits) {
-                String hint = t.matches("[+-]?\\d+,\\d+.*") ? "; use '.' as the decimal point: "
-                        + t.replace(',', '.') : "";
+                String hint = DECIMAL_COMMA.matcher(t).matches() ? "; use '.' as the decimal point: "
+                        + shown(t.replace(',', '.')) : "";
                 throw error(line, "'" + shown(t) + "' is not a reading in volts; write 2.613, 2.613 V or 612mV"
                         + hint);
             }
@@ -334,7 +358,7 @@ public final class MeasurementCsv {
 
         /** The text as it may appear inside a one-line message: no control characters, at most 40 chars. */
         private static String shown(String t) {
-            String s = t.replaceAll("\\p{Cntrl}", "?");
+            String s = CONTROL.matcher(t).replaceAll("?");
             return s.length() > 40 ? s.substring(0, 40) + "..." : s;
         }
     }

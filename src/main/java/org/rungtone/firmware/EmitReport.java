@@ -170,7 +170,7 @@ final class EmitReport {
         b.append(String.join(" + ", parts)).append(" = ").append(Fmt.bytes(p.totalBytes())).append(" bytes");
         long budget = p.request.flashBudgetBytes();
         if (budget > 0) {
-            b.append("; --flash-budget ").append(Fmt.bytes(budget)).append(" bytes, ")
+            b.append("; flash budget ").append(Fmt.bytes(budget)).append(" bytes, ")
                     .append(Fmt.bytes(budget - p.totalBytes())).append(" left");
         }
         return b.toString();

@@ -7,10 +7,13 @@ import org.rungtone.internal.Checks;
 import org.rungtone.internal.InputError;
 
 /**
- * Checks the emitted tables against the user's {@code --flash-budget} and, when they do not fit, names a
- * setting that would.
+ * Checks the emitted tables against the user's flash budget ({@code --flash-budget} on the command line,
+ * {@code flash_budget} in a project file's {@code [target]} table) and, when they do not fit, names a setting
+ * that would.
  */
 public final class FlashBudget {
+    /** How messages name the setting, wherever the budget came from. */
+    public static final String SETTING = "--flash-budget or target.flash_budget";
     /** Sample rates tried when proposing a smaller setting, highest first. */
     private static final double[] RATES_HZ = {48000, 44100, 32000, 22050, 16000, 11025, 8000, 6000, 4000};
     /** Proposals drop at most this many bits. */
@@ -33,15 +36,15 @@ public final class FlashBudget {
      *
      * @param candidates settings to propose, in order of preference: the message names the first that fits
      * @throws InputError when over budget, e.g. "the samples need 12,345 bytes, 2,345 bytes over the 10,000-byte
-     *     --flash-budget; 6-bit packed at 8 kHz would fit (7,812 bytes)"
+     *     flash budget (--flash-budget or target.flash_budget); 6-bit packed at 8 kHz would fit (7,812 bytes)"
      */
     public static void check(long neededBytes, long budgetBytes, List<Candidate> candidates) {
-        Checks.checkInput(budgetBytes > 0, "--flash-budget must be positive: %d", budgetBytes);
+        Checks.checkInput(budgetBytes > 0, "the flash budget (%s) must be positive: %d", SETTING, budgetBytes);
         if (neededBytes <= budgetBytes) {
             return;
         }
         String head = "the samples need " + Fmt.bytes(neededBytes) + " bytes, " + Fmt.bytes(neededBytes - budgetBytes)
-                + " bytes over the " + Fmt.bytes(budgetBytes) + "-byte --flash-budget";
+                + " bytes over the " + Fmt.bytes(budgetBytes) + "-byte flash budget (" + SETTING + ")";
         for (Candidate c : candidates) {
             if (c.bytes() <= budgetBytes) {
                 throw new InputError(head + "; " + c.label() + " would fit (" + Fmt.bytes(c.bytes())
@@ -49,7 +52,7 @@ public final class FlashBudget {
             }
         }
         throw new InputError(head + "; no smaller bit depth or rate fits either: shorten the sound or raise"
-                + " --flash-budget");
+                + " the budget");
     }
 
     /**

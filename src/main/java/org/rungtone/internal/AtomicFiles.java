@@ -17,6 +17,9 @@ import java.nio.file.StandardCopyOption;
  * place, so a failed run never leaves a half-written file. Folder problems become {@link InputError}s.
  */
 public final class AtomicFiles {
+    /** The fix every folder message ends with; the folder may come from an option or a project file. */
+    private static final String CHOOSE = "choose another output folder (--out or project.out)";
+
     private AtomicFiles() {
     }
 
@@ -34,19 +37,18 @@ public final class AtomicFiles {
      */
     public static Path prepareFolder(Path dir) {
         if (Files.exists(dir) && !Files.isDirectory(dir)) {
-            throw new InputError(dir + ": output folder is an existing file; choose another --out");
+            throw new InputError(dir + ": the output folder is an existing file; " + CHOOSE);
         }
         try {
             Files.createDirectories(dir);
         } catch (FileAlreadyExistsException | NotDirectoryException e) {
-            throw new InputError(dir + ": cannot create output folder, a part of its path is a file;"
-                    + " choose another --out", e);
+            throw new InputError(dir + ": cannot create output folder, a part of its path is a file; " + CHOOSE,
+                    e);
         } catch (IOException e) {
-            throw new InputError(dir + ": cannot create output folder (" + reason(e)
-                    + "); choose another --out", e);
+            throw new InputError(dir + ": cannot create output folder (" + reason(e) + "); " + CHOOSE, e);
         }
         if (!Files.isWritable(dir)) {
-            throw new InputError(dir + ": output folder is not writable; choose another --out");
+            throw new InputError(dir + ": output folder is not writable; " + CHOOSE);
         }
         return dir;
     }
@@ -66,12 +68,10 @@ public final class AtomicFiles {
             return;
         }
         if (!Files.isDirectory(p)) {
-            throw new InputError(dir + ": output folder cannot be created, " + p
-                    + " is a file; choose another --out");
+            throw new InputError(dir + ": output folder cannot be created, " + p + " is a file; " + CHOOSE);
         }
         if (!Files.isWritable(p)) {
-            throw new InputError(dir + ": output folder is not writable (" + p
-                    + "); choose another --out");
+            throw new InputError(dir + ": output folder is not writable (" + p + "); " + CHOOSE);
         }
     }
 

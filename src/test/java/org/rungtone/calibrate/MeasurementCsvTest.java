@@ -103,4 +103,14 @@ class MeasurementCsvTest {
         assertEquals("m.csv: the bit depth is unknown; give --bits or --ladder (the file has no binary column to"
                 + " tell it)", error("1,0.5\n", 0));
     }
+
+    @Test
+    void quotesTheDecimalCommaFixLikeTheReadingItself() {
+        // The suggested fix is shown as the field is: control characters as '?', at most 40 characters.
+        String field = "2,61\u0000" + "x".repeat(50);
+        String shownFix = "2.61?" + "x".repeat(35) + "...";
+        assertEquals("m.csv:2: '2,61?" + "x".repeat(35) + "...' is not a reading in volts; write 2.613, 2.613 V or"
+                + " 612mV; use '.' as the decimal point: " + shownFix,
+                error("code,measured\n2,\"" + field + "\"\n", 4));
+    }
 }

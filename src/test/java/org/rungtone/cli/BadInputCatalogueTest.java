@@ -136,7 +136,8 @@ class BadInputCatalogueTest {
         c.add(bad("ladder: negative resistor", "--resistors: bit 0 needs a positive, finite resistance, got -10k",
                 d -> ladder(d, "--topology", "custom", "--resistors=-10k,20k")));
         c.add(bad("ladder: 20 bits", "--bits: bit depth must be 1..16, got 20", d -> ladder(d, "--bits", "20")));
-        c.add(bad("build: 0 bits", "bit depth must be 1..16: 0", d -> build(d, wavFile(d), "--bits", "0")));
+        c.add(bad("build: 0 bits", "--bits: bit depth must be 1..16, got 0", d -> build(d, wavFile(d), "--bits",
+                "0")));
         c.add(bad("build: per-bit list shorter than the bits", "--resistors: expected 4 values for 4 bits, got 3",
                 d -> build(d, wavFile(d), "--topology", "custom", "--bits", "4", "--resistors", "10k,20k,40k")));
         c.add(bad("ladder: buffer swing with no span", "--out-max: 2V must be above out_min (2V)",
@@ -168,12 +169,13 @@ class BadInputCatalogueTest {
         c.add(bad("build: rate the timer cannot reach", "--rate 16 kHz is too fast for timer1",
                 d -> build(d, wavFile(d), "--target", "avr", "--pins", "B0-B5", "--bits", "6", "--cpu-clock",
                         "1kHz", "--rate", "16k")));
-        c.add(bad("build: samples over the flash budget", "1,590 bytes over the 10-byte --flash-budget",
+        c.add(bad("build: samples over the flash budget", "1,590 bytes over the 10-byte flash budget"
+                + " (--flash-budget or target.flash_budget); no smaller bit depth or rate fits either",
                 d -> build(d, wavFile(d), "--flash-budget", "10")));
     }
 
     private static void outputCases(List<Case> c) {
-        c.add(bad("build: failed rebuild keeps the previous outputs", "over the 10-byte --flash-budget",
+        c.add(bad("build: failed rebuild keeps the previous outputs", "over the 10-byte flash budget",
                 d -> {
                     Files.createDirectories(d.resolve("out"));
                     text(d, "out/tone.c", "/* from the last good build */\n");
@@ -236,6 +238,20 @@ class BadInputCatalogueTest {
                 d -> List.of("build", text(d, "p.toml", head + sound).toString())));
         c.add(bad("project: out below a regular file", "output folder cannot be created",
                 d -> project(d, "[project]\nname = \"bench\"\nout = \"notes.txt/out\"\n" + sound, "notes.txt")));
+        c.add(bad("project: out is a regular file", "notes.txt is a file; choose another output folder (--out or"
+                + " project.out)", d -> project(d, "[project]\nname = \"bench\"\nout = \"notes.txt\"\n" + sound,
+                        "notes.txt")));
+        c.add(bad("project: samples over the flash budget", "1,590 bytes over the 10-byte flash budget"
+                + " (--flash-budget or target.flash_budget)", d -> project(d, head + "\n[target]\nflash_budget = 10\n"
+                        + sound)));
+        c.add(bad("project: 0 bits", "p.toml:6: quantize.bits: must be 1..16, got 0",
+                d -> project(d, head + "\n[quantize]\nbits = 0\n" + sound)));
+        c.add(bad("project: --bits 0 on the command line", "--bits: bit depth must be 1..16, got 0",
+                d -> {
+                    List<String> a = new ArrayList<>(project(d, head + sound));
+                    a.addAll(List.of("--bits", "0"));
+                    return a;
+                }));
     }
 
     private static void optionCases(List<Case> c) {

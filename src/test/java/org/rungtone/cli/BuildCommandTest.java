@@ -82,7 +82,7 @@ class BuildCommandTest {
                 Arguments.of("rate.wav", WavFixtures.wav().layout(WavFixtures.Layout.S16, 1, 8000,
                         new double[] {0}).rate(1_000_000).bytes(), List.of(), "unusable sample rate"),
                 Arguments.of("bits.wav", WavFixtures.sine16(8000, 0.1, 440, 0.5), List.of("--bits", "17"),
-                        "bit depth must be 1..16: 17"),
+                        "--bits: bit depth must be 1..16, got 17"),
                 Arguments.of("song.mp3", new byte[] {1, 2, 3}, List.of(),
                         "is not a source Rungtone reads; give a .wav file or a .rung script"));
     }
@@ -114,7 +114,7 @@ class BuildCommandTest {
         Cli.Run r = Cli.run("build", fixture().toString(), "--out", file.toString());
         assertEquals(1, r.exitCode());
         assertEquals("rungtone: error: " + file + ": output folder cannot be created, " + file
-                + " is a file; choose another --out\n", r.err());
+                + " is a file; choose another output folder (--out or project.out)\n", r.err());
         Cli.Run r2 = Cli.run("build", fixture().toString(), "--out", file.resolve("sub").toString());
         assertEquals(1, r2.exitCode());
         assertEquals("x", Files.readString(file));

@@ -197,8 +197,9 @@ class FirmwareEmitterTest {
     void refusesAnOverBudgetBuildAndProposesASetting() {
         // 16,000 unpacked 8-bit samples at 16 kHz plus a 4-byte sound table. The largest smaller setting:
         // 11,025 samples at 11.025 kHz, 7 bits packed: ceil(11,025 * 7 / 8) + 4 = 9,651 bytes.
-        assertRefused("the samples need 16,004 bytes, 6,004 bytes over the 10,000-byte --flash-budget; 7-bit packed at"
-                + " 11.025 kHz would fit (9,651 bytes)", b -> FirmwareRequest.builder().name("chime").pins("B0-B7")
+        assertRefused("the samples need 16,004 bytes, 6,004 bytes over the 10,000-byte flash budget (--flash-budget or"
+                + " target.flash_budget); 7-bit packed at 11.025 kHz would fit (9,651 bytes)",
+                b -> FirmwareRequest.builder().name("chime").pins("B0-B7")
                         .sound("chime", ramp(8, 16000, 16000)).flashBudgetBytes(10000), avrProject());
     }
 
