@@ -31,6 +31,9 @@ public final class AudioMetrics {
     /** Welch segment length for the in-band and weighted fractions. */
     public static final int SEGMENT_LENGTH = 8192;
 
+    /** Samples per block of the passes over an output; blocks run in parallel and add up in order. */
+    private static final int BLOCK = 1 << 15;
+
     private final Signal reference;
     private final double inBandCutoffHz;
     private final double referenceMean;
@@ -133,7 +136,11 @@ public final class AudioMetrics {
         for (int k = 0; k < level.length; k++) {
             level[k] = table.volts(k);
         }
-        return measured(label, c.length, i -> level[c[i]]);
+        return measured(label, c.length, (from, dst, count) -> {
+            for (int i = 0; i < count; i++) {
+                dst[i] = level[c[from + i]];
+            }
+        });
     }
 
     /** The volts of every code through the table. */
@@ -178,23 +185,25 @@ public final class AudioMetrics {
      * written into {@code output} itself, saving one array of the signal's length (long clips).
      */
     public Measured measureWithSpectrum(String label, double[] output, boolean overwrite) {
-        return measured(label, output.length, i -> output[i]);
+        return measured(label, output.length, (from, dst, count) -> System.arraycopy(output, from, dst, 0, count));
     }
 
-    /** The figures of an output given sample by sample (see the class comment for the alignment). */
-    private Measured measured(String label, int length, java.util.function.IntToDoubleFunction output) {
+    /** The figures of an output read by range (see the class comment for the alignment). */
+    private Measured measured(String label, int length, Spectrum.Samples output) {
         double[] r = reference.unsafeSamples();
         Checks.checkArgument(length == r.length, "output has %d samples, the reference %d", length, r.length);
         Alignment a = align(output);
-        java.util.function.IntToDoubleFunction e = a.error(output, r);
-        Spectrum s = null;
+        Spectrum.Samples e = a.error(output, r);
         double pr = referenceSumSquares / length;
-        double pe = 0;
-        for (int i = 0; i < length; i++) {
-            double v = e.applyAsDouble(i);
-            pe += v * v;
-        }
-        pe /= length;
+        double pe = blockSum(length, (from, buf, count) -> {
+            e.read(from, buf, count);
+            double sum = 0;
+            for (int i = 0; i < count; i++) {
+                sum += buf[i] * buf[i];
+            }
+            return new double[] {sum};
+        })[0] / length;
+        Spectrum s = null;
         double inBandError;
         double weightedError;
         if (pe > 0 && Double.isFinite(pe)) {
@@ -212,6 +221,30 @@ public final class AudioMetrics {
                 (-errorDbfs - 1.76) / 6.02, errorDbfs, a.gain(), a.offset()), s);
     }
 
+    /** Partial sums of one block. */
+    @FunctionalInterface
+    private interface BlockSums {
+        double[] of(int from, double[] buf, int count);
+    }
+
+    /** Sums over fixed blocks of {@code length} samples, in parallel, added in block order (core-independent). */
+    private static double[] blockSum(int length, BlockSums sums) {
+        int blocks = (length + BLOCK - 1) / BLOCK;
+        double[][] partial = new double[blocks][];
+        java.util.stream.IntStream.range(0, blocks).parallel().forEach(b -> {
+            int from = b * BLOCK;
+            int count = Math.min(BLOCK, length - from);
+            partial[b] = sums.of(from, new double[count], count);
+        });
+        double[] total = new double[partial.length == 0 ? 0 : partial[0].length];
+        for (double[] p : partial) {
+            for (int k = 0; k < total.length; k++) {
+                total[k] += p[k];
+            }
+        }
+        return total;
+    }
+
     /**
      * The aligned error of an output, in reference units (see the class comment).
      *
@@ -221,11 +254,14 @@ public final class AudioMetrics {
         double[] r = reference.unsafeSamples();
         Checks.checkArgument(output.length == r.length, "output has %d samples, the reference %d",
                 output.length, r.length);
-        java.util.function.IntToDoubleFunction o = i -> output[i];
-        java.util.function.IntToDoubleFunction e = align(o).error(o, r);
+        Spectrum.Samples o = (from, dst, count) -> System.arraycopy(output, from, dst, 0, count);
         double[] out = new double[r.length];
-        for (int i = 0; i < out.length; i++) {
-            out[i] = e.applyAsDouble(i);
+        double[] buf = new double[BLOCK];
+        Spectrum.Samples e = align(o).error(o, r);
+        for (int from = 0; from < out.length; from += BLOCK) {
+            int count = Math.min(BLOCK, out.length - from);
+            e.read(from, buf, count);
+            System.arraycopy(buf, 0, out, from, count);
         }
         return out;
     }
@@ -235,19 +271,26 @@ public final class AudioMetrics {
         return spectrum(alignedError(output), reference.sampleRateHz());
     }
 
-    private Alignment align(java.util.function.IntToDoubleFunction o) {
+    /** Gain and offset in one pass: Σo and Σ(r − r̄)·o; then Σ(r − r̄)(o − ō) = Σ(r − r̄)·o − ō·Σ(r − r̄). */
+    private Alignment align(Spectrum.Samples o) {
         double[] r = reference.unsafeSamples();
         int n = r.length;
-        double mo = 0;
-        for (int i = 0; i < n; i++) {
-            mo += o.applyAsDouble(i);
-        }
-        mo /= n;
-        double sro = 0;
-        for (int i = 0; i < n; i++) {
-            sro += (r[i] - referenceMean) * (o.applyAsDouble(i) - mo);
-        }
-        double gain = sro / referenceSumSquares;
+        double rm = referenceMean;
+        double[] sums = blockSum(n, (from, buf, count) -> {
+            o.read(from, buf, count);
+            double so = 0;
+            double sro = 0;
+            double sr = 0;
+            for (int i = 0; i < count; i++) {
+                double d = r[from + i] - rm;
+                so += buf[i];
+                sro += d * buf[i];
+                sr += d;
+            }
+            return new double[] {so, sro, sr};
+        });
+        double mo = sums[0] / n;
+        double gain = (sums[1] - mo * sums[2]) / referenceSumSquares;
         return new Alignment(gain, mo - gain * referenceMean);
     }
 
@@ -264,14 +307,19 @@ public final class AudioMetrics {
     }
 
     private record Alignment(double gain, double offset) {
-        /** The error {@code (o − offset)/gain − r} sample by sample; unbounded when the output carries none of r. */
-        java.util.function.IntToDoubleFunction error(java.util.function.IntToDoubleFunction o, double[] r) {
+        /** The error {@code (o − offset)/gain − r} by range; unbounded when the output carries none of r. */
+        Spectrum.Samples error(Spectrum.Samples o, double[] r) {
             if (!(gain > 0)) {
-                return i -> Double.POSITIVE_INFINITY;
+                return (from, dst, count) -> java.util.Arrays.fill(dst, 0, count, Double.POSITIVE_INFINITY);
             }
             double inv = 1 / gain;
             double c = offset;
-            return i -> (o.applyAsDouble(i) - c) * inv - r[i];
+            return (from, dst, count) -> {
+                o.read(from, dst, count);
+                for (int i = 0; i < count; i++) {
+                    dst[i] = (dst[i] - c) * inv - r[from + i];
+                }
+            };
         }
     }
 }

@@ -97,22 +97,31 @@ public final class Spectrum {
      */
     public static Spectrum welch(double[] samples, double offset, double sampleRateHz, Window window,
             int segmentLength) {
-        return welch(i -> samples[i] - offset, samples.length, sampleRateHz, window, segmentLength);
+        return welch((from, dst, count) -> {
+            for (int i = 0; i < count; i++) {
+                dst[i] = samples[from + i] - offset;
+            }
+        }, samples.length, sampleRateHz, window, segmentLength);
+    }
+
+    /** Samples read by range, for signals computed as they are needed rather than stored. */
+    @FunctionalInterface
+    public interface Samples {
+        /** Writes samples {@code from .. from + count − 1} into {@code dst[0 ..]}. */
+        void read(int from, double[] dst, int count);
     }
 
     /**
-     * Welch's spectrum of a signal given sample by sample ({@code samples.applyAsDouble(i)} for i in
-     * 0..length−1), for signals computed on the fly (an aligned error) rather than stored.
+     * Welch's spectrum of a signal read segment by segment ({@code length} samples), for signals computed
+     * on the fly (an aligned error) rather than stored. {@code samples} is called from several threads.
      */
-    public static Spectrum welch(java.util.function.IntToDoubleFunction samples, int length, double sampleRateHz,
-            Window window, int segmentLength) {
+    public static Spectrum welch(Samples samples, int length, double sampleRateHz, Window window,
+            int segmentLength) {
         Checks.checkArgument(length >= 2, "a spectrum needs at least two samples: %d", length);
         checkCommon(new double[2], sampleRateHz, segmentLength);
         if (length <= segmentLength) {
             double[] x = new double[length];
-            for (int i = 0; i < x.length; i++) {
-                x[i] = samples.applyAsDouble(i);
-            }
+            samples.read(0, x, length);
             return of(x, sampleRateHz, window, segmentLength);
         }
         double[] w = window.values(segmentLength);
@@ -137,9 +146,15 @@ public final class Spectrum {
                 int a = s * hop;
                 boolean pair = s + 1 < end;
                 int b = pair ? a + hop : 0;
+                samples.read(a, ri[0], segmentLength);
+                if (pair) {
+                    samples.read(b, ri[1], segmentLength);
+                } else {
+                    java.util.Arrays.fill(ri[1], 0);
+                }
                 for (int i = 0; i < segmentLength; i++) {
-                    ri[0][i] = samples.applyAsDouble(a + i) * w[i];
-                    ri[1][i] = pair ? samples.applyAsDouble(b + i) * w[i] : 0;
+                    ri[0][i] *= w[i];
+                    ri[1][i] *= w[i];
                 }
                 if (pair) {
                     accumulatePair(ri, acc, scale);

@@ -21,6 +21,9 @@ import org.rungtone.internal.InputError;
  * uses JMustache with no escaping (the output is C, not HTML) and fails on missing values.
  */
 public final class Templates {
+    /** Marks a streamed value in rendered text; a control character no template or value contains. */
+    private static final char MARK = '\u0001';
+
     private final Optional<Path> userDir;
     private final Mustache.Compiler compiler;
     /** Compiled templates by family/name; partials are cached inside them once first used. */
@@ -123,9 +126,6 @@ public final class Templates {
             at = close + 1;
         }
     }
-
-    /** Marks a streamed value in rendered text; a control character no template or value contains. */
-    private static final char MARK = '\u0001';
 
     private String execute(String family, String name, Object context) {
         Template t;
