@@ -87,20 +87,9 @@ public final class Conditioner {
         }
         // Few passes over the result: each pass over a long array costs its own warm-up in a fresh JVM.
         double[] y = s.unsafeSamples();
-        double m = 0;
-        if (c.removeDc() && y.length > 0) {
-            // The resampled signal's own mean: equal to the source's but for the filter's edge transients.
-            for (double v : y) {
-                m += v;
-            }
-            m /= y.length;
-        }
-        double peak = 0;
-        for (int i = 0; i < y.length; i++) {
-            double v = y[i] - m;
-            y[i] = v;
-            peak = Math.max(peak, Math.abs(v));
-        }
+        // The resampled signal's own mean: equal to the source's but for the filter's edge transients.
+        double m = c.removeDc() && y.length > 0 ? sum(y) / y.length : 0;
+        double peak = subtractAndPeak(y, m);
         double gainDb = 0;
         if (c.gainDb().isPresent()) {
             gainDb = c.gainDb().getAsDouble();
@@ -120,6 +109,39 @@ public final class Conditioner {
                     + " (%.0f ms); they overlap", 1000 * c.fadeInSeconds(), 1000 * c.fadeOutSeconds(),
                     1000.0 * n / s.sampleRateHz()));
         }
+        long over = levelAndCount(y, g, fadeIn, fadeOut);
+        if (over > 0) {
+            warnings.add(String.format(Locale.ROOT, "%d samples exceed full scale after conditioning and will"
+                    + " clip; lower --gain or use --normalize", over));
+        }
+        return new Conditioned(s, gainDb, trimmedStart, trimmedEnd, how, warnings);
+    }
+
+    // The passes over the result are small methods of their own: a fresh JVM compiles each hot loop apart,
+    // and small methods compile quickly.
+
+    private static double sum(double[] y) {
+        double m = 0;
+        for (double v : y) {
+            m += v;
+        }
+        return m;
+    }
+
+    /** Subtracts {@code m} from every sample; returns the largest magnitude left. */
+    private static double subtractAndPeak(double[] y, double m) {
+        double peak = 0;
+        for (int i = 0; i < y.length; i++) {
+            double v = y[i] - m;
+            y[i] = v;
+            peak = Math.max(peak, Math.abs(v));
+        }
+        return peak;
+    }
+
+    /** Applies gain {@code g} and linear fades; returns how many samples end up beyond full scale. */
+    private static long levelAndCount(double[] y, double g, int fadeIn, int fadeOut) {
+        int n = y.length;
         long over = 0;
         for (int i = 0; i < n; i++) {
             double v = y[i] * g;
@@ -134,11 +156,7 @@ public final class Conditioner {
                 over++;
             }
         }
-        if (over > 0) {
-            warnings.add(String.format(Locale.ROOT, "%d samples exceed full scale after conditioning and will"
-                    + " clip; lower --gain or use --normalize", over));
-        }
-        return new Conditioned(s, gainDb, trimmedStart, trimmedEnd, how, warnings);
+        return over;
     }
 
     private static double mean(SampleSource source) {

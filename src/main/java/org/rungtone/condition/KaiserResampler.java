@@ -107,7 +107,7 @@ public final class KaiserResampler implements Resampler {
                 return;
             }
             for (int n = first; n < end; n++) {
-                y[n] = kernel.at(x, (int) -lo, length, n);
+                y[n] = kernel.whole(n, length) ? kernel.atWhole(x, (int) -lo, n) : kernel.at(x, (int) -lo, length, n);
             }
         });
         for (RuntimeException e : failures) {
@@ -163,6 +163,30 @@ public final class KaiserResampler implements Resampler {
             return exact ? n * num / den : (long) Math.floor(n * step);
         }
 
+        /** True when output n's window lies wholly inside a range of {@code length} samples. */
+        boolean whole(int n, int length) {
+            long start = base(n) - half + 1;
+            return exact && start >= 0 && start + taps <= length;
+        }
+
+        /**
+         * Output n when its window is whole and the ratio exact (the common case, kept apart from the edges so
+         * that the compiled loop never meets a clamped window): two partial sums let independent additions
+         * overlap in the CPU; the result differs from one running sum only by rounding, never between runs.
+         */
+        double atWhole(double[] x, int from, int n) {
+            long pos = n * num;
+            double[] row = rows[(int) (pos % den)];
+            int k = (int) (pos / den - half + 1) + from;
+            double even = 0;
+            double odd = 0;
+            for (int j = 0; j < taps; j += 2, k += 2) {
+                even += row[j] * x[k];
+                odd += row[j + 1] * x[k + 1];
+            }
+            return even + odd;
+        }
+
         /** Output sample n of a range of {@code length} samples whose sample p is {@code x[from + p]}. */
         double at(double[] x, int from, int length, int n) {
             long base;
@@ -188,20 +212,8 @@ public final class KaiserResampler implements Resampler {
             double acc = 0;
             int off = (int) start + from;
             if (row2 == null) {
-                if (j0 == 0 && j1 == taps) {
-                    // The whole window (taps is even): two partial sums let independent additions overlap
-                    // in the CPU; the result differs from one running sum only by rounding, never between runs.
-                    double odd = 0;
-                    int k = off;
-                    for (int j = 0; j < taps; j += 2, k += 2) {
-                        acc += row[j] * x[k];
-                        odd += row[j + 1] * x[k + 1];
-                    }
-                    acc += odd;
-                } else {
-                    for (int j = j0; j < j1; j++) {
-                        acc += row[j] * x[off + j];
-                    }
+                for (int j = j0; j < j1; j++) {
+                    acc += row[j] * x[off + j];
                 }
             } else {
                 double acc2 = 0;

@@ -80,7 +80,10 @@ public final class Build {
         this(toolVersion, span, stage -> { });
     }
 
-    /** A build that also tells {@code progress} the name of every stage it finishes ("open", "condition", ...; a WAV file is decoded during "condition"). */
+    /**
+     * A build that also tells {@code progress} the name of every stage it finishes ("open", "condition", ...;
+     * a WAV file is decoded during "condition").
+     */
     public Build(String toolVersion, java.util.function.Consumer<String> progress) {
         this(toolVersion, OutputSpan.FULL, progress);
     }
