@@ -381,6 +381,7 @@ public final class WavReader {
             int c1 = channel == 0 ? channels : channel;
             long frame = first;
             long end = first + count;
+            double[] raw = new double[0];
             while (frame < end) {
                 int n = (int) Math.min(framesPerBlock, end - frame);
                 buf.clear().limit(n * frameBytes);
@@ -392,12 +393,19 @@ public final class WavReader {
                     }
                 }
                 int o = off + (int) (frame - first);
+                int values = n * channels;
+                if (raw.length < values) {
+                    raw = new double[values];
+                }
+                samples(buf, values, raw);
+                boolean checked = format.encoding() == WavFormat.Encoding.FLOAT32
+                        || format.encoding() == WavFormat.Encoding.FLOAT64;
                 for (int i = 0; i < n; i++) {
                     double acc = 0;
-                    int base = i * frameBytes;
+                    int base = i * channels;
                     for (int c = c0; c < c1; c++) {
-                        double v = sample(buf, base + c * bytesPer);
-                        if (!(Math.abs(v) <= MAX_FLOAT_SAMPLE)) {
+                        double v = raw[base + c];
+                        if (checked && !(Math.abs(v) <= MAX_FLOAT_SAMPLE)) {
                             throw damaged(frame + i, c, v);
                         }
                         acc += v;
@@ -408,30 +416,58 @@ public final class WavReader {
             }
         }
 
+        /** The first {@code count} interleaved samples of {@code b} in full-scale units (bulk views if possible). */
+        private void samples(ByteBuffer b, int count, double[] dst) {
+            b.position(0);
+            switch (format.encoding()) {
+                case PCM_U8:
+                    for (int i = 0; i < count; i++) {
+                        dst[i] = ((b.get(i) & 0xFF) - 128) / 128.0;
+                    }
+                    break;
+                case PCM_S16: {
+                    short[] v = new short[count];
+                    b.asShortBuffer().get(v, 0, count);
+                    for (int i = 0; i < count; i++) {
+                        dst[i] = v[i] / 32768.0;
+                    }
+                    break;
+                }
+                case PCM_S24:
+                    for (int i = 0; i < count; i++) {
+                        int at = 3 * i;
+                        int v = (b.get(at) & 0xFF) | ((b.get(at + 1) & 0xFF) << 8) | (b.get(at + 2) << 16);
+                        dst[i] = v / 8388608.0;
+                    }
+                    break;
+                case PCM_S32: {
+                    int[] v = new int[count];
+                    b.asIntBuffer().get(v, 0, count);
+                    for (int i = 0; i < count; i++) {
+                        dst[i] = v[i] / 2147483648.0;
+                    }
+                    break;
+                }
+                case FLOAT32: {
+                    float[] v = new float[count];
+                    b.asFloatBuffer().get(v, 0, count);
+                    for (int i = 0; i < count; i++) {
+                        dst[i] = v[i];
+                    }
+                    break;
+                }
+                default:
+                    b.asDoubleBuffer().get(dst, 0, count);
+                    break;
+            }
+        }
+
         private InputError damaged(long idx, int c, double v) {
             String what = Double.isNaN(v) ? "NaN" : Double.isInfinite(v) ? "infinite"
                     : String.format(Locale.ROOT, "%.3g, far beyond full scale (1.0)", v);
             return bad(String.format(Locale.ROOT, "sample %d of channel %d (at %.3f s) is %s;"
                     + " the file is damaged or was written without clipping", idx, c + 1,
                     idx / (double) format.sampleRateHz(), what));
-        }
-
-        private double sample(ByteBuffer b, int at) {
-            switch (format.encoding()) {
-                case PCM_U8:
-                    return ((b.get(at) & 0xFF) - 128) / 128.0;
-                case PCM_S16:
-                    return b.getShort(at) / 32768.0;
-                case PCM_S24:
-                    int v = (b.get(at) & 0xFF) | ((b.get(at + 1) & 0xFF) << 8) | (b.get(at + 2) << 16);
-                    return v / 8388608.0;
-                case PCM_S32:
-                    return b.getInt(at) / 2147483648.0;
-                case FLOAT32:
-                    return b.getFloat(at);
-                default:
-                    return b.getDouble(at);
-            }
         }
 
         private static ByteBuffer readAt(FileChannel ch, long pos, int len) throws IOException {
