@@ -18,6 +18,13 @@ import org.rungtone.source.Signal;
  * When the ratio of the rates is a fraction with a denominator of at most 4096 every output phase has its
  * own exact coefficient row; otherwise 1024 rows are interpolated linearly. Output samples are computed in
  * parallel blocks across the available cores; results do not depend on the number of cores.
+ *
+ * <p>Going down by more than about two, halving stages may run first (multistage decimation, R. E.
+ * Crochiere and L. R. Rabiner, Multirate Digital Signal Processing, 1983, ch. 5): a halving stage at rate r
+ * keeps the passband and stops from r/2 − fout/2 with the same attenuation, so nothing it folds reaches the
+ * final band, and the last stage's narrow transition then runs at a lower rate with fewer taps. The number of
+ * halvings is the one that needs the fewest multiplies per output by the tap counts above; 44.1 → 16 kHz at
+ * 62 dB takes 26 + 104 taps (36 multiplies per output for the first) instead of 208.
  */
 public final class KaiserResampler implements Resampler {
     private static final int MAX_EXACT_PHASES = 4096;
@@ -90,24 +97,48 @@ public final class KaiserResampler implements Resampler {
         double step = fin / targetRateHz;
         int length = to - from;
         int outLen = (int) Math.ceil(length / step - 1e-9);
-        Kernel kernel = new Kernel(fin, targetRateHz);
+        java.util.List<Kernel> stages = stages(fin, targetRateHz);
+        int count = stages.size();
+        // Lengths of the signal at each level: the input range, the halved intermediates, the output.
+        long[] lengths = new long[count + 1];
+        lengths[0] = length;
+        for (int s = 0; s < count; s++) {
+            lengths[s + 1] = s == count - 1 ? outLen : (long) Math.ceil(lengths[s] / stages.get(s).step - 1e-9);
+        }
         double[] y = new double[outLen];
         int blocks = (outLen + BLOCK - 1) / BLOCK;
         RuntimeException[] failures = new RuntimeException[blocks];
         IntStream.range(0, blocks).parallel().forEach(b -> {
-            int first = b * BLOCK;
-            int end = Math.min(outLen, first + BLOCK);
-            long lo = Math.max(0, kernel.base(first) - kernel.half + 1);
-            long hi = Math.min(length, kernel.base(end - 1) + kernel.half + 1);
-            double[] x = new double[(int) Math.max(0, hi - lo)];
+            // The range each level must supply for this block of outputs, from the output back to the input.
+            long[] lo = new long[count + 1];
+            long[] hi = new long[count + 1];
+            lo[count] = (long) b * BLOCK;
+            hi[count] = Math.min(outLen, lo[count] + BLOCK);
+            for (int s = count - 1; s >= 0; s--) {
+                Kernel k = stages.get(s);
+                lo[s] = Math.max(0, k.base(lo[s + 1]) - k.half + 1);
+                hi[s] = Math.min(lengths[s], k.base(hi[s + 1] - 1) + k.half + 1);
+                hi[s] = Math.max(lo[s], hi[s]);
+            }
+            double[] x = new double[(int) (hi[0] - lo[0])];
             try {
-                source.read(from + (int) lo, x, 0, x.length);
+                source.read(from + (int) lo[0], x, 0, x.length);
             } catch (RuntimeException e) {
                 failures[b] = e;
                 return;
             }
-            for (int n = first; n < end; n++) {
-                y[n] = kernel.whole(n, length) ? kernel.atWhole(x, (int) -lo, n) : kernel.at(x, (int) -lo, length, n);
+            for (int s = 0; s < count; s++) {
+                Kernel k = stages.get(s);
+                boolean last = s == count - 1;
+                double[] next = last ? y : new double[(int) (hi[s + 1] - lo[s + 1])];
+                int shift = last ? 0 : (int) lo[s + 1];
+                int at = (int) -lo[s];
+                int len = (int) lengths[s];
+                for (long n = lo[s + 1]; n < hi[s + 1]; n++) {
+                    int m = (int) n;
+                    next[m - shift] = k.whole(m, len) ? k.atWhole(x, at, m) : k.at(x, at, len, m);
+                }
+                x = next;
             }
         });
         for (RuntimeException e : failures) {
@@ -116,6 +147,55 @@ public final class KaiserResampler implements Resampler {
             }
         }
         return Signal.wrap(y, targetRateHz);
+    }
+
+    /**
+     * The filter stages from {@code fin} to {@code fout}: one polyphase filter, or when it costs fewer
+     * multiplies per output, halving stages first. A halving stage at rate r keeps the passband and stops from
+     * r/2 − fout/2, so that what it folds lands above the final Nyquist frequency and the last stage removes
+     * it; the last stage's narrow transition then runs at a lower rate, where it needs fewer taps.
+     */
+    private java.util.List<Kernel> stages(double fin, double fout) {
+        double nyquist = Math.min(fin, fout) / 2;
+        double pass = passbandFraction * nyquist;
+        long[] direct = fraction(fin, fout);
+        int bestHalvings = 0;
+        double bestCost = tapsFor(fin, pass, nyquist) * (isExact(direct) ? 1 : 2);
+        double rate = fin;
+        double halvingCost = 0;
+        for (int h = 1; rate / 2 > fout; h++) {
+            halvingCost += tapsFor(rate, pass, rate / 2 - fout / 2) * (rate / 2) / fout;
+            rate /= 2;
+            long[] f = fraction(fin, fout * (1L << h));
+            double cost = halvingCost + tapsFor(rate, pass, fout / 2) * (isExact(f) ? 1 : 2);
+            if (cost < bestCost) {
+                bestCost = cost;
+                bestHalvings = h;
+            }
+        }
+        java.util.List<Kernel> stages = new java.util.ArrayList<>();
+        rate = fin;
+        for (int h = 0; h < bestHalvings; h++) {
+            stages.add(new Kernel(rate, rate / 2, pass, rate / 2 - fout / 2, new long[] {2, 1}));
+            rate /= 2;
+        }
+        stages.add(new Kernel(rate, fout, pass, nyquist, fraction(fin, fout * (1L << bestHalvings))));
+        return stages;
+    }
+
+    /** How many filters run from {@code fin} to {@code fout} (for tests). */
+    int stageCount(double fin, double fout) {
+        return fin == fout ? 0 : stages(fin, fout).size();
+    }
+
+    private static boolean isExact(long[] frac) {
+        return frac != null && frac[1] <= MAX_EXACT_PHASES;
+    }
+
+    /** Taps of a Kaiser low-pass at rate {@code fin} from {@code passHz} to {@code stopHz}. */
+    private int tapsFor(double fin, double passHz, double stopHz) {
+        int n = (int) Math.ceil((stopbandDb - 7.95) / (14.36 * (stopHz - passHz) / fin));
+        return 2 * Math.max(2, (n + 1) / 2);
     }
 
     /** The coefficient table for one pair of rates. */
@@ -128,19 +208,15 @@ public final class KaiserResampler implements Resampler {
         private final long den;
         private final double step;
 
-        Kernel(double fin, double fout) {
+        /** A low-pass from rate {@code fin} to {@code fout}, flat to {@code passHz}, stopped from {@code stopHz}. */
+        Kernel(double fin, double fout, double passHz, double stopHz, long[] frac) {
             step = fin / fout;
-            double nyquistLow = Math.min(fin, fout) / 2;
-            double pass = passbandFraction * nyquistLow;
-            double cutoff = (pass + nyquistLow) / 2 / fin;
-            double transition = (nyquistLow - pass) / fin;
-            int n = (int) Math.ceil((stopbandDb - 7.95) / (14.36 * transition));
-            half = Math.max(2, (n + 1) / 2);
+            double cutoff = (passHz + stopHz) / 2 / fin;
+            half = tapsFor(fin, passHz, stopHz) / 2;
             taps = 2 * half;
             double beta = stopbandDb > 50 ? 0.1102 * (stopbandDb - 8.7)
                     : 0.5842 * Math.pow(stopbandDb - 21, 0.4) + 0.07886 * (stopbandDb - 21);
-            long[] frac = fraction(fin, fout);
-            exact = frac != null && frac[1] <= MAX_EXACT_PHASES;
+            exact = isExact(frac);
             num = exact ? frac[0] : 0;
             den = exact ? frac[1] : INTERPOLATED_PHASES;
             int phases = (int) den + (exact ? 0 : 1);
@@ -159,7 +235,7 @@ public final class KaiserResampler implements Resampler {
         }
 
         /** The input position at or before output sample n's time. */
-        long base(int n) {
+        long base(long n) {
             return exact ? n * num / den : (long) Math.floor(n * step);
         }
 
