@@ -416,20 +416,23 @@ public final class WavReader {
             }
         }
 
-        /** The first {@code count} interleaved samples of {@code b} in full-scale units (bulk views if possible). */
+        /**
+         * The first {@code count} interleaved samples of {@code b} in full-scale units (bulk views if possible;
+         * scaling multiplies by the exact power-of-two reciprocal, which equals dividing).
+         */
         private void samples(ByteBuffer b, int count, double[] dst) {
             b.position(0);
             switch (format.encoding()) {
                 case PCM_U8:
                     for (int i = 0; i < count; i++) {
-                        dst[i] = ((b.get(i) & 0xFF) - 128) / 128.0;
+                        dst[i] = ((b.get(i) & 0xFF) - 128) * (1.0 / 128);
                     }
                     break;
                 case PCM_S16: {
                     short[] v = new short[count];
                     b.asShortBuffer().get(v, 0, count);
                     for (int i = 0; i < count; i++) {
-                        dst[i] = v[i] / 32768.0;
+                        dst[i] = v[i] * (1.0 / 32768);
                     }
                     break;
                 }
@@ -437,14 +440,14 @@ public final class WavReader {
                     for (int i = 0; i < count; i++) {
                         int at = 3 * i;
                         int v = (b.get(at) & 0xFF) | ((b.get(at + 1) & 0xFF) << 8) | (b.get(at + 2) << 16);
-                        dst[i] = v / 8388608.0;
+                        dst[i] = v * (1.0 / 8388608);
                     }
                     break;
                 case PCM_S32: {
                     int[] v = new int[count];
                     b.asIntBuffer().get(v, 0, count);
                     for (int i = 0; i < count; i++) {
-                        dst[i] = v[i] / 2147483648.0;
+                        dst[i] = v[i] * (1.0 / 2147483648L);
                     }
                     break;
                 }
