@@ -38,6 +38,7 @@ public class PipelineBench {
     Signal decoded;
     Signal conditioned;
     Quantizer quantizer;
+    Quantizer shaped;
 
     /** Makes the clip once. */
     @Setup(Level.Trial)
@@ -49,6 +50,9 @@ public class PipelineBench {
         conditioned = new Conditioner(KaiserResampler.forBits(8)).apply(decoded, Conditioning.toRate(16_000))
                 .signal();
         quantizer = new Quantizer(LevelTable.ideal(8, 5), Dither.TPDF, 1);
+        LevelTable ideal = LevelTable.ideal(8, 5);
+        shaped = new Quantizer(ideal, ideal.minVolts(), ideal.maxVolts(), Dither.TPDF,
+                org.rungtone.quantize.ErrorFilter.SECOND_ORDER, 1);
     }
 
     /** Removes the files. */
@@ -69,6 +73,20 @@ public class PipelineBench {
     @Benchmark
     public Signal condition() {
         return new Conditioner(KaiserResampler.forBits(8)).apply(decoded, Conditioning.toRate(16_000)).signal();
+    }
+
+    /** Streamed decode and conditioning, as a build runs it: the WAV is decoded block by block as resampled. */
+    @Benchmark
+    public Signal decodeAndCondition() {
+        try (var in = WavReader.open(clip, 0)) {
+            return new Conditioner(KaiserResampler.forBits(8)).apply(in, Conditioning.toRate(16_000)).signal();
+        }
+    }
+
+    /** 8-bit TPDF quantization with second-order error feedback (sequential by nature). */
+    @Benchmark
+    public Object quantizeShaped() {
+        return shaped.apply(conditioned);
     }
 
     /** 8-bit TPDF quantization of 960,000 samples. */
