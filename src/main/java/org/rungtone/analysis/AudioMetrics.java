@@ -1,6 +1,5 @@
 package org.rungtone.analysis;
 
-import java.util.Arrays;
 import org.rungtone.internal.Checks;
 import org.rungtone.ladder.LevelTable;
 import org.rungtone.quantize.Codes;
