@@ -71,19 +71,10 @@ public final class WavReader {
      * @throws InputError naming the file and the problem for anything that is not a readable WAV file
      */
     public static Decoded read(Path file, int channel) {
-        Decoder d = new Decoder(file);
-        try (FileChannel ch = open(file)) {
-            d.parse(ch);
-            if (channel < 0 || channel > d.format.channels()) {
-                throw InputError.inFile(file, "has " + d.format.channels() + " channel(s); --channel must be "
-                        + "0 (mix down) or 1.." + d.format.channels() + ": " + channel);
-            }
-            double[] mono = d.decode(ch, channel);
-            return new Decoded(d.format, Signal.wrap(mono, d.format.sampleRateHz()), d.warnings);
-        } catch (EOFException e) {
-            throw InputError.inFile(file, "ends early (truncated file)", e);
-        } catch (IOException e) {
-            throw InputError.inFile(file, "cannot be read (" + e.getMessage() + ")", e);
+        try (Stream s = open(file, channel)) {
+            double[] mono = new double[s.length()];
+            s.read(0, mono, 0, mono.length);
+            return new Decoded(s.format(), Signal.wrap(mono, s.sampleRateHz()), s.warnings());
         }
     }
 

@@ -25,16 +25,25 @@ class WavStreamTest {
     @TempDir
     Path dir;
 
+    /**
+     * A buffer holding the canonical 44-byte header (RIFF/WAVE, a 16-byte fmt chunk, the data chunk's header)
+     * with room for {@code frames} frames after it.
+     */
+    private static ByteBuffer header(int tag, int channels, int rate, int bits, int frames) {
+        int frameBytes = channels * bits / 8;
+        ByteBuffer b = ByteBuffer.allocate(44 + frames * frameBytes).order(ByteOrder.LITTLE_ENDIAN);
+        java.nio.charset.Charset ascii = java.nio.charset.StandardCharsets.US_ASCII;
+        b.put("RIFF".getBytes(ascii)).putInt(36 + frames * frameBytes).put("WAVE".getBytes(ascii))
+                .put("fmt ".getBytes(ascii)).putInt(16).putShort((short) tag).putShort((short) channels)
+                .putInt(rate).putInt(rate * frameBytes).putShort((short) frameBytes).putShort((short) bits)
+                .put("data".getBytes(ascii)).putInt(frames * frameBytes);
+        return b;
+    }
+
     /** A stereo 16-bit PCM file of {@code frames} random frames (canonical 44-byte header). */
     private Path stereo16(int frames, long seed) throws IOException {
         Random rnd = new Random(seed);
-        ByteBuffer b = ByteBuffer.allocate(44 + frames * 4).order(ByteOrder.LITTLE_ENDIAN);
-        b.put("RIFF".getBytes(java.nio.charset.StandardCharsets.US_ASCII)).putInt(36 + frames * 4)
-                .put("WAVE".getBytes(java.nio.charset.StandardCharsets.US_ASCII))
-                .put("fmt ".getBytes(java.nio.charset.StandardCharsets.US_ASCII)).putInt(16)
-                .putShort((short) 1).putShort((short) 2).putInt(44100).putInt(44100 * 4).putShort((short) 4)
-                .putShort((short) 16).put("data".getBytes(java.nio.charset.StandardCharsets.US_ASCII))
-                .putInt(frames * 4);
+        ByteBuffer b = header(1, 2, 44100, 16, frames);
         for (int i = 0; i < frames; i++) {
             double t = i / 44100.0;
             // a 440 Hz tone with some noise, silent for the first and last 1000 frames
@@ -89,13 +98,7 @@ class WavStreamTest {
     void aDamagedSampleIsReportedAtItsPositionWhenStreamed() throws IOException {
         // float32 mono with NaN at two places: the earlier one is named whatever block meets it first
         int frames = 200_000;
-        ByteBuffer b = ByteBuffer.allocate(44 + frames * 4).order(ByteOrder.LITTLE_ENDIAN);
-        b.put("RIFF".getBytes(java.nio.charset.StandardCharsets.US_ASCII)).putInt(36 + frames * 4)
-                .put("WAVE".getBytes(java.nio.charset.StandardCharsets.US_ASCII))
-                .put("fmt ".getBytes(java.nio.charset.StandardCharsets.US_ASCII)).putInt(16)
-                .putShort((short) 3).putShort((short) 1).putInt(48000).putInt(48000 * 4).putShort((short) 4)
-                .putShort((short) 32).put("data".getBytes(java.nio.charset.StandardCharsets.US_ASCII))
-                .putInt(frames * 4);
+        ByteBuffer b = header(3, 1, 48000, 32, frames);
         for (int i = 0; i < frames; i++) {
             b.putFloat(i == 123_456 || i == 190_000 ? Float.NaN : 0.1f);
         }
