@@ -81,7 +81,7 @@ public final class Conditioner {
         Signal s;
         if (rate != c.targetRateHz()) {
             s = resampler.resample(source, first, last + 1, c.targetRateHz());
-            how = resampler.name();
+            how = resampler.describe(rate, c.targetRateHz());
         } else {
             s = source.read(first, last + 1);
         }

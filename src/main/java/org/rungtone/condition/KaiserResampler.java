@@ -183,6 +183,13 @@ public final class KaiserResampler implements Resampler {
         return stages;
     }
 
+    @Override
+    public String describe(double fromHz, double toHz) {
+        int halvings = stageCount(fromHz, toHz) - 1;
+        return halvings <= 0 ? name() : name() + (halvings == 1 ? ", halving first" : ", halving " + halvings
+                + " times first");
+    }
+
     /** How many filters run from {@code fin} to {@code fout} (for tests). */
     int stageCount(double fin, double fout) {
         return fin == fout ? 0 : stages(fin, fout).size();

@@ -35,4 +35,9 @@ public interface Resampler {
 
     /** A short name for reports. */
     String name();
+
+    /** The name for reports of a conversion from {@code fromHz} to {@code toHz} (the default: {@link #name}). */
+    default String describe(double fromHz, double toHz) {
+        return name();
+    }
 }

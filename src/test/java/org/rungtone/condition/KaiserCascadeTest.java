@@ -21,6 +21,13 @@ class KaiserCascadeTest {
         assertEquals(stages, EIGHT_BIT.stageCount(fin, fout));
     }
 
+    @org.junit.jupiter.api.Test
+    void theReportSaysWhenItHalvesFirst() {
+        assertEquals("kaiser polyphase, 62 dB stopband, halving first", EIGHT_BIT.describe(44100, 16000));
+        assertEquals("kaiser polyphase, 62 dB stopband, halving 3 times first", EIGHT_BIT.describe(96000, 8000));
+        assertEquals("kaiser polyphase, 62 dB stopband", EIGHT_BIT.describe(16000, 44100));
+    }
+
     @ParameterizedTest
     @CsvSource({"44100, 16000", "44100, 8000", "48000, 11025", "96000, 8000"})
     void passesTheBand(double fin, double fout) {
