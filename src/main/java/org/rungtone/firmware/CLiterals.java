@@ -90,11 +90,21 @@ public final class CLiterals {
 
     /** {@link #arrayBody} for bytes, two hex digits each, taken as unsigned. */
     public static String arrayBody(byte[] values, int perLine, String indent) {
+        return arrayBody(unsigned(values), 2, perLine, indent);
+    }
+
+    /** {@link #writeArrayBody} for bytes, two hex digits each, taken as unsigned. */
+    public static void writeArrayBody(byte[] values, int perLine, String indent, java.io.OutputStream out)
+            throws java.io.IOException {
+        writeArrayBody(unsigned(values), 2, perLine, indent, out);
+    }
+
+    private static int[] unsigned(byte[] values) {
         int[] v = new int[values.length];
         for (int i = 0; i < v.length; i++) {
             v[i] = values[i] & 0xFF;
         }
-        return arrayBody(v, 2, perLine, indent);
+        return v;
     }
 
     /** A C double literal with enough digits, e.g. {@code 16000.0}. */

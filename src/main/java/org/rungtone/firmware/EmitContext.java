@@ -219,9 +219,14 @@ final class EmitContext {
         }
         c.put("soundRanges", ranges);
         if (has) {
-            c.put("sampleData", packed
-                    ? CLiterals.arrayBody(SamplePacking.pack(p.samples, p.bits), PER_LINE, INDENT)
-                    : CLiterals.arrayBody(p.samples, CLiterals.hexDigits(p.bits), PER_LINE, INDENT));
+            // Streamed to the file: a long sound's array is never one string.
+            c.put("sampleData", (Templates.Streamed) out -> {
+                if (packed) {
+                    CLiterals.writeArrayBody(SamplePacking.pack(p.samples, p.bits), PER_LINE, INDENT, out);
+                } else {
+                    CLiterals.writeArrayBody(p.samples, CLiterals.hexDigits(p.bits), PER_LINE, INDENT, out);
+                }
+            });
         }
         boolean wordSamples = !packed && p.bits > 8;
         c.put("readSample", wordSamples ? "pgm_read_word" : "pgm_read_byte");

@@ -19,15 +19,23 @@ public final class FirmwareEmitter {
     }
 
     /**
-     * The rendered files and the report, without writing anything.
+     * The rendered files and the report, without writing anything. The sample data is not held as text: it
+     * is written straight to its file by {@link #write}.
      *
-     * @param files file name to content, header first
+     * @param outputs file name to rendered template, header first
      * @param result the report; its {@code files} list is empty
      */
-    public record Rendered(Map<String, String> files, EmitResult result) {
+    public record Rendered(Map<String, Templates.Output> outputs, EmitResult result) {
         /** Copies the map, keeping its order. */
         public Rendered {
-            files = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(files));
+            outputs = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(outputs));
+        }
+
+        /** File name to its whole text (the sample data formatted in memory: for tests and small sounds). */
+        public Map<String, String> files() {
+            Map<String, String> m = new LinkedHashMap<>();
+            outputs.forEach((name, output) -> m.put(name, output.text()));
+            return m;
         }
     }
 
@@ -47,12 +55,12 @@ public final class FirmwareEmitter {
         String h = plan.symbol + ".h";
         String c = plan.symbol + ".c";
         String d = plan.symbol + "_data.c";
-        Map<String, String> files = new LinkedHashMap<>();
-        files.put(h, t.render(plan.folder, "player.h.mustache",
+        Map<String, Templates.Output> files = new LinkedHashMap<>();
+        files.put(h, t.prepare(plan.folder, "player.h.mustache",
                 EmitContext.forFile(shared, h, "ladder-DAC player interface", true)));
-        files.put(c, t.render(plan.folder, "player.c.mustache",
+        files.put(c, t.prepare(plan.folder, "player.c.mustache",
                 EmitContext.forFile(shared, c, "ladder-DAC player", true)));
-        files.put(d, t.render(plan.folder, "data.c.mustache",
+        files.put(d, t.prepare(plan.folder, "data.c.mustache",
                 EmitContext.forFile(shared, d, "ladder-DAC player tables", false)));
         EmitResult result = new EmitResult(List.of(), report, plan.totalBytes(), plan.timer, plan.strategy,
                 plan.warnings);
@@ -78,9 +86,9 @@ public final class FirmwareEmitter {
     public static EmitResult write(Rendered r, Path outDir) {
         AtomicFiles.prepareFolder(outDir);
         List<Path> written = new ArrayList<>();
-        for (Map.Entry<String, String> f : r.files().entrySet()) {
+        for (Map.Entry<String, Templates.Output> f : r.outputs().entrySet()) {
             Path p = outDir.resolve(f.getKey());
-            AtomicFiles.writeString(p, f.getValue());
+            AtomicFiles.write(p, f.getValue()::writeTo);
             written.add(p);
         }
         EmitResult e = r.result();

@@ -71,20 +71,15 @@ public final class Templates {
      */
     public String render(String family, String name, Object context) {
         if (context instanceof Map<?, ?> m && m.values().stream().anyMatch(v -> v instanceof Streamed)) {
-            java.io.ByteArrayOutputStream out = new java.io.ByteArrayOutputStream();
-            try {
-                renderTo(family, name, m, out);
-            } catch (IOException e) {
-                throw new java.io.UncheckedIOException(e);
-            }
-            return out.toString(StandardCharsets.UTF_8);
+            return prepare(family, name, m).text();
         }
         return execute(family, name, context);
     }
 
     /**
      * A long value (a sample array's text) written straight to the output file instead of being built as one
-     * string: {@link #renderTo} renders the template with a marker in its place and streams it there.
+     * string: {@link #prepare} renders the template with a marker in its place, {@link Output#writeTo} streams
+     * the value there.
      */
     @FunctionalInterface
     public interface Streamed {
@@ -101,6 +96,17 @@ public final class Templates {
      */
     public void renderTo(String family, String name, Map<?, ?> context, java.io.OutputStream out)
             throws IOException {
+        prepare(family, name, context).writeTo(out);
+    }
+
+    /**
+     * Renders {@code family/name} now, with a marker where each {@link Streamed} value goes: every template
+     * error surfaces here, before anything is written, and the long values are written only by
+     * {@link Output#writeTo}.
+     *
+     * @throws InputError when the template is missing or refers to a value that is not there
+     */
+    public Output prepare(String family, String name, Map<?, ?> context) {
         Map<Object, Object> marked = new java.util.LinkedHashMap<>();
         Map<String, Streamed> streams = new java.util.HashMap<>();
         for (Map.Entry<?, ?> e : context.entrySet()) {
@@ -112,18 +118,47 @@ public final class Templates {
                 marked.put(e.getKey(), e.getValue());
             }
         }
-        String text = execute(family, name, marked);
-        int at = 0;
-        while (true) {
-            int open = text.indexOf(MARK, at);
-            int close = open < 0 ? -1 : text.indexOf(MARK, open + 1);
-            if (close < 0) {
-                out.write(text.substring(at).getBytes(StandardCharsets.UTF_8));
-                return;
+        return new Output(execute(family, name, marked), streams);
+    }
+
+    /** A rendered template whose {@link Streamed} values are written when it is. */
+    public static final class Output {
+        private final String text;
+        private final Map<String, Streamed> streams;
+
+        private Output(String text, Map<String, Streamed> streams) {
+            this.text = text;
+            this.streams = Map.copyOf(streams);
+        }
+
+        /** Writes the whole text as UTF-8, streaming the long values in their places. */
+        public void writeTo(java.io.OutputStream out) throws IOException {
+            int at = 0;
+            while (true) {
+                int open = text.indexOf(MARK, at);
+                int close = open < 0 ? -1 : text.indexOf(MARK, open + 1);
+                if (close < 0) {
+                    out.write(text.substring(at).getBytes(StandardCharsets.UTF_8));
+                    return;
+                }
+                out.write(text.substring(at, open).getBytes(StandardCharsets.UTF_8));
+                streams.get(text.substring(open, close + 1)).writeTo(out);
+                at = close + 1;
             }
-            out.write(text.substring(at, open).getBytes(StandardCharsets.UTF_8));
-            streams.get(text.substring(open, close + 1)).writeTo(out);
-            at = close + 1;
+        }
+
+        /** The whole text as one string (for tests and small files). */
+        public String text() {
+            if (streams.isEmpty()) {
+                return text;
+            }
+            java.io.ByteArrayOutputStream out = new java.io.ByteArrayOutputStream();
+            try {
+                writeTo(out);
+            } catch (IOException e) {
+                throw new java.io.UncheckedIOException(e);
+            }
+            return out.toString(StandardCharsets.UTF_8);
         }
     }
 
