@@ -275,7 +275,8 @@ final class EmitPlan {
         if (total > family.maxTableBytes()) {
             throw new InputError("target " + family.folder() + ": the tables need " + Fmt.bytes(total)
                     + " bytes, more than the " + Fmt.bytes(family.maxTableBytes()) + " bytes that"
-                    + " pgm_read_byte can reach; use --storage packed, a lower --rate or fewer --bits");
+                    + " pgm_read_byte can reach; use " + (storage == SampleStorage.PACKED ? ""
+                            : "--storage packed, ") + "a lower --rate, fewer --bits or a shorter sound");
         }
         long budget = request.flashBudgetBytes();
         if (budget > 0) {

@@ -169,6 +169,17 @@ class BadInputCatalogueTest {
         c.add(bad("build: rate the timer cannot reach", "--rate 16 kHz is too fast for timer1",
                 d -> build(d, wavFile(d), "--target", "avr", "--pins", "B0-B5", "--bits", "6", "--cpu-clock",
                         "1kHz", "--rate", "16k")));
+        // 5 s at 16 kHz, 8 bits: 80,000 bytes of samples, past the 64 KiB pgm_read_byte reaches on an AVR
+        c.add(bad("build: AVR tables beyond 64 KiB", "the tables need 80,008 bytes, more than the 65,536 bytes"
+                + " that pgm_read_byte can reach; use --storage packed, a lower --rate, fewer --bits or a shorter"
+                + " sound", d -> build(d, write(d, "siren.wav", WavFixtures.sine16(16_000, 5.0, 440, 0.5)),
+                        "--target", "avr", "--cpu-clock", "16MHz", "--bits", "8", "--rate", "16k", "--pins",
+                        "D0-D7")));
+        c.add(bad("build: AVR tables beyond 64 KiB, already packed", "more than the 65,536 bytes that"
+                + " pgm_read_byte can reach; use a lower --rate, fewer --bits or a shorter sound",
+                d -> build(d, write(d, "siren.wav", WavFixtures.sine16(16_000, 5.0, 440, 0.5)), "--target", "avr",
+                        "--cpu-clock", "16MHz", "--bits", "8", "--rate", "16k", "--pins", "D0-D7", "--storage",
+                        "packed")));
         c.add(bad("build: samples over the flash budget", "1,590 bytes over the 10-byte flash budget"
                 + " (--flash-budget or target.flash_budget); no smaller bit depth or rate fits either",
                 d -> build(d, wavFile(d), "--flash-budget", "10")));
