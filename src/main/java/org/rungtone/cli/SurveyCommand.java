@@ -169,24 +169,31 @@ public final class SurveyCommand implements Callable<Integer> {
         AnalogModel model = new AnalogModel(filter, PREVIEW_RATE_HZ);
         SurveySpec surveySpec = spec(bits, rates, tables, model);
 
-        Sources.Loaded loaded = Sources.load(source, channel, maxRate, seed);
         Map<Double, Conditioner.Conditioned> references = new ConcurrentHashMap<>();
         ProgressLine progress = new ProgressLine(spec.commandLine().getErr(),
                 System.console() != null && !common.quiet);
-        progress.show("survey", 0, bits.size() * rates.size());
-        SurveyResult result = Survey.run(surveySpec, rate -> {
-            Conditioner.Conditioned c = conditioner.apply(loaded.signal(), conditionings.get(rate));
-            Checks.checkInput(c.signal().length() >= MIN_SAMPLES, "%s: only %d samples are left at %s after"
-                    + " conditioning; the survey needs at least %d (use a longer clip or higher --rates)", source,
-                    c.signal().length(), Units.format(rate, "Hz"), MIN_SAMPLES);
-            references.put(rate, c);
-            return c.signal();
-        }, (done, total) -> progress.show("survey", done, total));
+        SurveyResult result;
+        List<String> sourceWarnings;
+        String layout;
+        // A WAV source is decoded as each rate's conditioning reads it, never held whole at its own rate.
+        try (Sources.Opened loaded = Sources.open(source, channel, maxRate, seed)) {
+            sourceWarnings = loaded.warnings();
+            layout = loaded.layout();
+            progress.show("survey", 0, bits.size() * rates.size());
+            result = Survey.run(surveySpec, rate -> {
+                Conditioner.Conditioned c = conditioner.apply(loaded.samples(), conditionings.get(rate));
+                Checks.checkInput(c.signal().length() >= MIN_SAMPLES, "%s: only %d samples are left at %s after"
+                        + " conditioning; the survey needs at least %d (use a longer clip or higher --rates)",
+                        source, c.signal().length(), Units.format(rate, "Hz"), MIN_SAMPLES);
+                references.put(rate, c);
+                return c.signal();
+            }, (done, total) -> progress.show("survey", done, total));
+        }
         progress.clear();
         long surveyed = System.nanoTime();
 
         List<Path> files = new ArrayList<>();
-        Set<String> warnings = new LinkedHashSet<>(loaded.warnings());
+        Set<String> warnings = new LinkedHashSet<>(sourceWarnings);
         warnings.addAll(conditioningWarnings(rates, references));
         if (previews) {
             Path folder = outDir.resolve("previews");
@@ -202,7 +209,7 @@ public final class SurveyCommand implements Callable<Integer> {
         Path jsonFile = outDir.resolve("survey.json");
         Path png = outDir.resolve("survey-sinad.png");
         files.addAll(0, List.of(txt, jsonFile, png));
-        SurveyReport.Context context = new SurveyReport.Context(Version.get(), source, loaded.layout(),
+        SurveyReport.Context context = new SurveyReport.Context(Version.get(), source, layout,
                 conditioning.describe(), resampler.name(), describeLevels(tables), dither.label(),
                 surveySpec.shaping().name(), seed, filter.describe(), previews, files, new ArrayList<>(warnings));
         String jsonText = Json.toJson(SurveyReport.json(result, context));
