@@ -176,14 +176,6 @@ public final class AudioMetrics {
      * @throws IllegalArgumentException when the length differs from the reference's
      */
     public Measured measureWithSpectrum(String label, double[] output) {
-        return measureWithSpectrum(label, output, false);
-    }
-
-    /**
-     * As {@link #measureWithSpectrum(String, double[])}, but with {@code overwrite} the aligned error is
-     * written into {@code output} itself, saving one array of the signal's length (long clips).
-     */
-    public Measured measureWithSpectrum(String label, double[] output, boolean overwrite) {
         return measured(label, output.length, (from, dst, count) -> System.arraycopy(output, from, dst, 0, count));
     }
 

@@ -158,41 +158,47 @@ public final class KaiserResampler implements Resampler {
     private java.util.List<Kernel> stages(double fin, double fout) {
         double nyquist = Math.min(fin, fout) / 2;
         double pass = passbandFraction * nyquist;
-        long[] direct = fraction(fin, fout);
-        int bestHalvings = 0;
-        double bestCost = tapsFor(fin, pass, nyquist) * (isExact(direct) ? 1 : 2);
+        int halvings = halvings(fin, fout);
+        java.util.List<Kernel> stages = new java.util.ArrayList<>();
+        double rate = fin;
+        for (int h = 0; h < halvings; h++) {
+            stages.add(new Kernel(rate, rate / 2, pass, rate / 2 - fout / 2, new long[] {2, 1}));
+            rate /= 2;
+        }
+        stages.add(new Kernel(rate, fout, pass, nyquist, fraction(fin, fout * (1L << halvings))));
+        return stages;
+    }
+
+    /** How many halving stages need the fewest multiplies per output, from the tap counts alone. */
+    private int halvings(double fin, double fout) {
+        double nyquist = Math.min(fin, fout) / 2;
+        double pass = passbandFraction * nyquist;
+        int best = 0;
+        double bestCost = tapsFor(fin, pass, nyquist) * (isExact(fraction(fin, fout)) ? 1 : 2);
         double rate = fin;
         double halvingCost = 0;
         for (int h = 1; rate / 2 > fout; h++) {
             halvingCost += tapsFor(rate, pass, rate / 2 - fout / 2) * (rate / 2) / fout;
             rate /= 2;
-            long[] f = fraction(fin, fout * (1L << h));
-            double cost = halvingCost + tapsFor(rate, pass, fout / 2) * (isExact(f) ? 1 : 2);
-            if (cost < bestCost) {
-                bestCost = cost;
-                bestHalvings = h;
+            double last = tapsFor(rate, pass, fout / 2) * (isExact(fraction(fin, fout * (1L << h))) ? 1 : 2);
+            if (halvingCost + last < bestCost) {
+                bestCost = halvingCost + last;
+                best = h;
             }
         }
-        java.util.List<Kernel> stages = new java.util.ArrayList<>();
-        rate = fin;
-        for (int h = 0; h < bestHalvings; h++) {
-            stages.add(new Kernel(rate, rate / 2, pass, rate / 2 - fout / 2, new long[] {2, 1}));
-            rate /= 2;
-        }
-        stages.add(new Kernel(rate, fout, pass, nyquist, fraction(fin, fout * (1L << bestHalvings))));
-        return stages;
+        return best;
     }
 
     @Override
     public String describe(double fromHz, double toHz) {
-        int halvings = stageCount(fromHz, toHz) - 1;
-        return halvings <= 0 ? name() : name() + (halvings == 1 ? ", halving first" : ", halving " + halvings
+        int halvings = fromHz == toHz ? 0 : halvings(fromHz, toHz);
+        return halvings == 0 ? name() : name() + (halvings == 1 ? ", halving first" : ", halving " + halvings
                 + " times first");
     }
 
     /** How many filters run from {@code fin} to {@code fout} (for tests). */
     int stageCount(double fin, double fout) {
-        return fin == fout ? 0 : stages(fin, fout).size();
+        return fin == fout ? 0 : halvings(fin, fout) + 1;
     }
 
     private static boolean isExact(long[] frac) {

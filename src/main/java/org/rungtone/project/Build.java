@@ -109,7 +109,7 @@ public final class Build {
      * @param shapingGainDb in-band gain of noise shaping, if used
      * @param tone single-tone figures, if the source is one sine
      * @param preview the analog preview
-     * @param errorSpectrum the error's spectrum, for its plot
+     * @param errorSpectrum the emitted case's error spectrum, for its plot (null when the error is zero)
      * @param toneSpectrum the output spectrum, for tones
      * @param inBandCutoffHz top of the in-band figures
      * @param clippedSamples samples beyond full scale
@@ -238,9 +238,11 @@ public final class Build {
         Path previewFile = dir.resolve("preview.wav");
         WavWriter.write(previewFile, r.preview().signal(), WavWriter.Format.PCM16);
         files.add(previewFile);
-        Path errPlot = dir.resolve("error-spectrum.png");
-        AnalysisPlots.writeErrorSpectrum(errPlot, r.errorSpectrum(), r.inBandCutoffHz());
-        files.add(errPlot);
+        if (r.errorSpectrum() != null) {
+            Path errPlot = dir.resolve("error-spectrum.png");
+            AnalysisPlots.writeErrorSpectrum(errPlot, r.errorSpectrum(), r.inBandCutoffHz());
+            files.add(errPlot);
+        }
         if (r.tone().isPresent() && r.toneSpectrum().isPresent()) {
             Path specPlot = dir.resolve("spectrum.png");
             AnalysisPlots.writeSpectrum(specPlot, r.toneSpectrum().get(), r.tone().get(), r.plan().bits());
@@ -326,9 +328,6 @@ public final class Build {
                 quality.add(comp.report());
                 errorSpectrum = comp.errorSpectrum();
             }
-        }
-        if (errorSpectrum == null) {
-            errorSpectrum = metrics.measureWithSpectrum("emitted", emitted, played).errorSpectrum();
         }
         QualityReport emittedQuality = quality.get(quality.size() - 1);
         Optional<Double> shapingGain = Optional.empty();

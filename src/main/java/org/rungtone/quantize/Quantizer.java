@@ -187,7 +187,11 @@ public final class Quantizer {
         int head = 0;
         long clipped = 0;
         double clamp = FEEDBACK_CLAMP_LSB * lsb;
+        SplittableRandom random = null;
         for (int i = 0; i < x.length; i++) {
+            if ((i & (BLOCK - 1)) == 0) {
+                random = streams[i / BLOCK];
+            }
             double xi = x[i];
             if (xi > 1 || xi < -1) {
                 clipped++;
@@ -198,7 +202,7 @@ public final class Quantizer {
                 fb += shaping.tap(k) * history[(head - k + order) % order];
             }
             v -= fb;
-            double d = dither == Dither.NONE ? 0 : dither.next(streams[i / BLOCK]) * lsb;
+            double d = dither == Dither.NONE ? 0 : dither.next(random) * lsb;
             int idx = nearestIndex(v + d);
             out[i] = sortedCodes[idx];
             double e = sortedVolts[idx] - v;
