@@ -106,13 +106,4 @@ public final class CLiterals {
         }
         return v;
     }
-
-    /** A C double literal with enough digits, e.g. {@code 16000.0}. */
-    public static String real(double v) {
-        String s = String.format(Locale.ROOT, "%.9g", v);
-        if (s.contains(".")) {
-            s = s.replaceAll("0+(?=$|e)", "").replaceAll("\\.(?=$|e)", ".0");
-        }
-        return s;
-    }
 }

@@ -270,8 +270,8 @@ final class EmitContext {
      * 64, 128, 256, 1024 with values 1..7.
      */
     static String avrClockSelect(TimerKind k, int prescaler) {
-        int[] order = k == TimerKind.AVR_TIMER2 ? new int[] {1, 8, 32, 64, 128, 256, 1024}
-                : new int[] {1, 8, 64, 256, 1024};
+        // the timer's prescalers in ascending order are exactly the datasheet's clock-select values 1, 2, ...
+        int[] order = k.prescalers().toArray();
         int value = 0;
         for (int i = 0; i < order.length; i++) {
             if (order[i] == prescaler) {

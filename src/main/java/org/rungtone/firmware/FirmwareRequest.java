@@ -153,24 +153,6 @@ public final class FirmwareRequest {
     }
 
     @Override
-    public boolean equals(Object o) {
-        return o instanceof FirmwareRequest r && r.family.equals(family) && r.templates == templates
-                && Objects.equals(r.name, name) && r.toolVersion.equals(toolVersion)
-                && Double.compare(r.cpuClockHz, cpuClockHz) == 0 && r.timer == timer
-                && r.rateTolerancePpm == rateTolerancePpm && Objects.equals(r.pins, pins)
-                && Objects.equals(r.pinMap, pinMap) && Objects.equals(r.portWidth, portWidth)
-                && r.pinStrategy == pinStrategy && r.storage == storage && r.engine == engine
-                && r.sounds.equals(sounds) && r.dds.equals(dds) && Objects.equals(r.sweep, sweep)
-                && r.flashBudgetBytes == flashBudgetBytes && r.settings.equals(settings);
-    }
-
-    @Override
-    public int hashCode() {
-        return Objects.hash(family, name, cpuClockHz, timer, pins, pinMap, pinStrategy, storage, engine, sounds,
-                dds, sweep, flashBudgetBytes, settings);
-    }
-
-    @Override
     public String toString() {
         return "FirmwareRequest[" + family + ", " + engine.optionName() + ", " + sounds.size() + " sound(s)]";
     }

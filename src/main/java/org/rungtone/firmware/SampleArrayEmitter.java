@@ -49,12 +49,14 @@ public final class SampleArrayEmitter {
      */
     public List<Path> emit(Request request, Path outDir) {
         Map<String, Object> ctx = context(request);
-        String header = templates.render("generic", "samples.h.mustache", ctx);
+        // Both templates render before either file is written; the sample array then goes straight to its
+        // file, so millions of samples are never one string.
+        Templates.Output header = templates.prepare("generic", "samples.h.mustache", ctx);
+        Templates.Output source = templates.prepare("generic", "samples.c.mustache", ctx);
         Path h = outDir.resolve(request.symbol() + ".h");
         Path c = outDir.resolve(request.symbol() + ".c");
-        AtomicFiles.writeString(h, header);
-        // The sample array goes straight to the file: millions of samples are never one string.
-        AtomicFiles.write(c, out -> templates.renderTo("generic", "samples.c.mustache", ctx, out));
+        AtomicFiles.write(h, header::writeTo);
+        AtomicFiles.write(c, source::writeTo);
         return List.of(h, c);
     }
 

@@ -65,18 +65,6 @@ public final class Templates {
     }
 
     /**
-     * Renders {@code family/name} with {@code context} (a map or bean).
-     *
-     * @throws InputError when the template is missing or refers to a value that is not there
-     */
-    public String render(String family, String name, Object context) {
-        if (context instanceof Map<?, ?> m && m.values().stream().anyMatch(v -> v instanceof Streamed)) {
-            return prepare(family, name, m).text();
-        }
-        return execute(family, name, context);
-    }
-
-    /**
      * A long value (a sample array's text) written straight to the output file instead of being built as one
      * string: {@link #prepare} renders the template with a marker in its place, {@link Output#writeTo} streams
      * the value there.
@@ -85,18 +73,6 @@ public final class Templates {
     public interface Streamed {
         /** Writes the value's UTF-8 text to {@code out}. */
         void writeTo(java.io.OutputStream out) throws IOException;
-    }
-
-    /**
-     * Renders {@code family/name} with {@code context} into {@code out} as UTF-8; values that are
-     * {@link Streamed} are written in place without being held as strings.
-     *
-     * @throws InputError when the template is missing or refers to a value that is not there
-     * @throws IOException when {@code out} fails
-     */
-    public void renderTo(String family, String name, Map<?, ?> context, java.io.OutputStream out)
-            throws IOException {
-        prepare(family, name, context).writeTo(out);
     }
 
     /**
@@ -163,14 +139,9 @@ public final class Templates {
     }
 
     private String execute(String family, String name, Object context) {
-        Template t;
         try {
-            t = compiled.computeIfAbsent(family + "/" + name, k -> compiler.compile(load(family, name)));
-        } catch (MustacheException e) {
-            throw new InputError("template " + family + "/" + name + ": " + e.getMessage(), e);
-        }
-        try {
-            return t.execute(context);
+            return compiled.computeIfAbsent(family + "/" + name, k -> compiler.compile(load(family, name)))
+                    .execute(context);
         } catch (MustacheException e) {
             throw new InputError("template " + family + "/" + name + ": " + e.getMessage(), e);
         }

@@ -366,8 +366,9 @@ public final class Build {
             if (opened.wavetable()) {
                 // One cycle: its samples are the table as it is, played at any rate by the DDS engine. Only DC
                 // removal and level apply; the codes are labelled with the playback rate.
-                Signal table = Signal.wrap(opened.samples().read(0, opened.samples().length()).unsafeSamples(),
-                        rate);
+                double[] cycle = new double[opened.samples().length()];
+                opened.samples().read(0, cycle, 0, cycle.length);
+                Signal table = Signal.wrap(cycle, rate);
                 Conditioning c = new Conditioning(plan.removeDc(), java.util.OptionalDouble.empty(), rate,
                         plan.gainDb(), plan.normalizeDbfs(), 0, 0);
                 conditioned = new Conditioner(KaiserResampler.forBits(plan.bits())).apply(table, c);

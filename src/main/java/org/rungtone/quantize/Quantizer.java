@@ -127,7 +127,10 @@ public final class Quantizer {
         return (volts - 0.5 * (lowVolts + highVolts)) / (0.5 * (highVolts - lowVolts));
     }
 
-    /** Samples per dither block: each block draws from its own random stream (see {@link #apply}). */
+    /**
+     * Samples per dither block (a power of two): each block draws from its own random stream (see
+     * {@link #apply}).
+     */
     static final int BLOCK = 1 << 16;
 
     /**
