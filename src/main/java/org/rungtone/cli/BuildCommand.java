@@ -169,6 +169,15 @@ public final class BuildCommand implements Callable<Integer> {
                         + " [[sound]] table");
             }
         }
+        // Options a project build would otherwise drop without a word.
+        for (String[] moved : new String[][] {{"--filter", "set filter in the project's [preview] table"},
+            {"--preview-rate", "set rate in the project's [preview] table"},
+            {"--preview-length", "a project's previews always hold the first 60 s of each sound"},
+            {"--full-scale", "a project's levels come from its [ladder] table, or a 5 V ideal ladder"}}) {
+            if (pr.hasMatchedOption(moved[0])) {
+                throw new InputError(moved[0] + " does not apply to a project file; " + moved[1]);
+            }
+        }
         Project project = ProjectFile.load(source);
         ProjectBuild.BoardResolver board = ProjectBoards.of(project, unit, ladder);
         ProjectBuild.Overrides o = new ProjectBuild.Overrides(

@@ -3,6 +3,7 @@ package org.rungtone.cli;
 import java.nio.file.Path;
 import java.util.Optional;
 import org.rungtone.firmware.DdsSpec;
+import org.rungtone.internal.InputError;
 import org.rungtone.firmware.FirmwareRequest;
 import org.rungtone.firmware.PinStrategy;
 import org.rungtone.firmware.PlaybackEngine;
@@ -76,7 +77,8 @@ public final class FirmwareOptions {
 
     /** True when the user asked for a player, not only the sample array. */
     boolean wantsPlayer() {
-        return target != null || pins != null || engine != null || timer != null || cpuClockHz != null;
+        return target != null || pins != null || engine != null || timer != null || cpuClockHz != null
+                || ddsFrequencyHz != null || ddsPhaseBits != null;
     }
 
     /** The loop points, when given. */
@@ -119,12 +121,17 @@ public final class FirmwareOptions {
             b.storage(SampleStorage.parse(storage));
         }
         if (engine != null) {
-            PlaybackEngine e = PlaybackEngine.parse(engine);
-            b.engine(e);
-            if (e == PlaybackEngine.DDS) {
-                b.dds(new DdsSpec(ddsPhaseBits == null ? DdsSpec.DEFAULT_PHASE_BITS : ddsPhaseBits,
-                        ddsFrequencyHz == null ? 1000 : ddsFrequencyHz));
+            b.engine(PlaybackEngine.parse(engine));
+        }
+        if (ddsPhaseBits != null || ddsFrequencyHz != null) {
+            if (b.engine() != PlaybackEngine.DDS) {
+                throw new InputError("--dds-frequency and --dds-phase-bits set up the dds engine; add --engine dds"
+                        + " (or engine = \"dds\" in the project's [target] table)");
             }
+            // each DDS option given replaces only its own setting (a project's other one stays)
+            DdsSpec now = b.dds();
+            b.dds(new DdsSpec(ddsPhaseBits == null ? now.phaseBits() : ddsPhaseBits,
+                    ddsFrequencyHz == null ? now.frequencyHz() : ddsFrequencyHz));
         }
         if (flashBudget != null) {
             b.flashBudgetBytes(flashBudget);

@@ -11,6 +11,8 @@ import org.rungtone.internal.Checks;
 public record DdsSpec(int phaseBits, double frequencyHz) {
     /** Accumulator width used when none is given. */
     public static final int DEFAULT_PHASE_BITS = 32;
+    /** Start frequency used when none is given. */
+    public static final double DEFAULT_FREQUENCY_HZ = 1000;
 
     /** Checks the fields. */
     public DdsSpec {

@@ -173,7 +173,7 @@ public final class FirmwareRequest {
         private SampleStorage storage = SampleStorage.UNPACKED;
         private PlaybackEngine engine = PlaybackEngine.CLIP;
         private final List<SoundClip> sounds = new ArrayList<>();
-        private DdsSpec dds = DdsSpec.of(1000);
+        private DdsSpec dds = DdsSpec.of(DdsSpec.DEFAULT_FREQUENCY_HZ);
         private SweepSpec sweep;
         private long flashBudgetBytes;
         private final List<String> settings = new ArrayList<>();
@@ -298,6 +298,16 @@ public final class FirmwareRequest {
         public Builder sound(SoundClip sound) {
             sounds.add(Objects.requireNonNull(sound));
             return this;
+        }
+
+        /** The engine so far. */
+        public PlaybackEngine engine() {
+            return engine;
+        }
+
+        /** The DDS settings so far (the defaults, or the request's this builder started from). */
+        public DdsSpec dds() {
+            return dds;
         }
 
         /** DDS settings (the dds engine uses the one sound as its wavetable). */

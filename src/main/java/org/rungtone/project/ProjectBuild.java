@@ -298,7 +298,7 @@ public final class ProjectBuild {
         b.engine(engine);
         if (engine == PlaybackEngine.DDS) {
             b.dds(new DdsSpec(t.ddsPhaseBits().map(Long::intValue).orElse(DdsSpec.DEFAULT_PHASE_BITS),
-                    t.ddsFrequencyHz().orElse(1000)));
+                    t.ddsFrequencyHz().orElse(DdsSpec.DEFAULT_FREQUENCY_HZ)));
         }
         t.flashBudgetBytes().ifPresent(x -> b.flashBudgetBytes((long) x));
         FirmwareRequest r = o.firmware().apply(b).build();

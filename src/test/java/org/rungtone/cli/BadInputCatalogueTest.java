@@ -180,6 +180,8 @@ class BadInputCatalogueTest {
                 d -> build(d, write(d, "siren.wav", WavFixtures.sine16(16_000, 5.0, 440, 0.5)), "--target", "avr",
                         "--cpu-clock", "16MHz", "--bits", "8", "--rate", "16k", "--pins", "D0-D7", "--storage",
                         "packed")));
+        c.add(bad("build: DDS option without the dds engine", "--dds-frequency and --dds-phase-bits set up the"
+                + " dds engine; add --engine dds", d -> build(d, wavFile(d), "--dds-frequency", "440")));
         c.add(bad("build: samples over the flash budget", "1,590 bytes over the 10-byte flash budget"
                 + " (--flash-budget or target.flash_budget); no smaller bit depth or rate fits either",
                 d -> build(d, wavFile(d), "--flash-budget", "10")));
@@ -228,6 +230,11 @@ class BadInputCatalogueTest {
         c.add(bad("project: flash_attr with a target family", "target.flash_attr: applies only to bare sample "
                 + "arrays", d -> project(d, head + "\n[target]\nfamily = \"avr\"\npins = \"D2-D7\"\n"
                         + "flash_attr = \"PROGMEM\"\n" + sound)));
+        c.add(bad("project: a preview option on the command line", "--filter does not apply to a project file;"
+                + " set filter in the project's [preview] table", d -> withArgs(project(d, head + sound),
+                        "--filter", "rc:3k")));
+        c.add(bad("project: --full-scale on the command line", "--full-scale does not apply to a project file",
+                d -> withArgs(project(d, head + sound), "--full-scale", "3.3V")));
         c.add(bad("project: two sounds with one C name", "sound[2].name: 'tone' gives the C name 'tone', which "
                 + "another sound already has", d -> project(d, head + sound + sound)));
         c.add(bad("project: no sounds", "p.toml: the project has no sounds", d -> project(d, head)));
@@ -358,6 +365,12 @@ class BadInputCatalogueTest {
             text(d, f, "x");
         }
         return List.of("build", text(d, "p.toml", toml).toString());
+    }
+
+    private static List<String> withArgs(List<String> args, String... more) {
+        List<String> all = new java.util.ArrayList<>(args);
+        all.addAll(List.of(more));
+        return all;
     }
 
     private static Path write(Path d, String name, byte[] bytes) throws IOException {

@@ -134,6 +134,17 @@ class BuildCommandTest {
     }
 
     @Test
+    void aDdsOptionOverridesOnlyItsOwnProjectSetting() throws IOException {
+        // the bench generator project asks for 1 kHz with a 32-bit accumulator; the option moves the frequency
+        Path project = Path.of("examples/bench-generator/bench-generator.toml").toAbsolutePath();
+        Cli.Run r = Cli.run("build", project.toString(), "--dds-frequency", "440", "--out",
+                dir.resolve("bg").toString(), "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        assertTrue(r.out().contains("32-bit phase accumulator"), r.out());
+        assertTrue(r.out().contains("440 Hz requested"), r.out());
+    }
+
+    @Test
     void flashBudgetOverflowIsBadInputWithAProposal() throws IOException {
         Path out = dir.resolve("over");
         Cli.Run r = Cli.run("build", fixture().toString(), "--bits", "8", "--flash-budget", "4000", "--out",
