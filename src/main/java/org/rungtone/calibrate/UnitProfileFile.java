@@ -12,10 +12,9 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.TomlText;
 import org.rungtone.ladder.LevelTable;
-import org.tomlj.Toml;
 import org.tomlj.TomlArray;
-import org.tomlj.TomlParseError;
 import org.tomlj.TomlParseResult;
 import org.tomlj.TomlPosition;
 
@@ -121,11 +120,8 @@ final class UnitProfileFile {
     }
 
     static UnitProfile parse(String text, Path file) {
-        TomlParseResult root = Toml.parse(text);
-        if (root.hasErrors()) {
-            TomlParseError e = root.errors().get(0);
-            throw new InputError(at(file, e.position()) + ": not valid TOML: " + e.getMessage(), e);
-        }
+        TomlParseResult root = TomlText.parse(text, file,
+                e -> new InputError(at(file, e.position()) + ": not valid TOML: " + e.getMessage(), e));
         for (String key : root.keySet()) {
             if (!TABLES.contains(key)) {
                 throw new Reader(root, file).error(key, "unknown table or key; a unit profile has [unit], [model]"
@@ -213,9 +209,9 @@ final class UnitProfileFile {
         }
 
         InputError error(String key, String detail) {
-            TomlPosition pos = root.inputPositionOf(key);
+            TomlPosition pos = TomlText.positionOf(root, key);
             if (pos == null && key.contains(".")) {
-                pos = root.inputPositionOf(key.substring(0, key.indexOf('.')));
+                pos = TomlText.positionOf(root, key.substring(0, key.indexOf('.')));
             }
             return new InputError(at(file, pos) + ": " + key + ": " + detail);
         }

@@ -2,15 +2,16 @@ package org.rungtone.ladder;
 
 import java.io.IOException;
 import java.nio.charset.CharacterCodingException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.TomlText;
 import org.rungtone.internal.Units;
-import org.tomlj.Toml;
 import org.tomlj.TomlArray;
-import org.tomlj.TomlParseError;
 import org.tomlj.TomlParseResult;
 import org.tomlj.TomlPosition;
 import org.tomlj.TomlTable;
@@ -123,29 +124,18 @@ public final class LadderFile {
      * @throws InputError when the file cannot be read, is not valid TOML or has no {@code [ladder]} table
      */
     public static TomlTable readTable(Path file) {
-        TomlParseResult result;
+        String text;
         try {
-            result = Toml.parse(file);
+            text = Files.readString(file, StandardCharsets.UTF_8);
         } catch (NoSuchFileException e) {
             throw new InputError(file + ": no such file", e);
-        } catch (TomlParseError e) {
-            // tomlj throws some errors (a bad escape in a quoted table name) instead of listing them
-            throw new InputError(location(file, e.position()) + ": not valid TOML: " + e.getMessage(), e);
-        } catch (StackOverflowError e) {
-            throw new InputError(file + ": arrays or tables are nested too deeply to read; expected a few levels");
-        } catch (AssertionError e) {
-            // tomlj 1.1.1 checks a malformed \\u escape with an assert; under java -ea it escapes as an Error
-            throw new InputError(file + ": not valid TOML: a string holds a broken escape (\\u needs 4 hex"
-                    + " digits, \\U needs 8)", e);
         } catch (CharacterCodingException e) {
             throw new InputError(file + ": is not UTF-8 text; expected a TOML file with a [ladder] table", e);
         } catch (IOException e) {
             throw new InputError(file + ": cannot read (" + e.getMessage() + ")", e);
         }
-        if (result.hasErrors()) {
-            TomlParseError e = result.errors().get(0);
-            throw new InputError(location(file, e.position()) + ": not valid TOML: " + e.getMessage(), e);
-        }
+        TomlParseResult result = TomlText.parse(text, file,
+                e -> new InputError(location(file, e.position()) + ": not valid TOML: " + e.getMessage(), e));
         if (!result.isTable("ladder")) {
             throw new InputError(file + ": no [ladder] table; a ladder file holds its keys under [ladder]");
         }
@@ -244,9 +234,9 @@ public final class LadderFile {
      * of the table's first key.
      */
     public static String where(TomlTable table, Path file, String key) {
-        TomlPosition pos = positionOf(table, key);
+        TomlPosition pos = TomlText.positionOf(table, key);
         if (pos == null && key.contains(".")) {
-            pos = positionOf(table, key.substring(0, key.indexOf('.')));
+            pos = TomlText.positionOf(table, key.substring(0, key.indexOf('.')));
         }
         if (pos == null) {
             for (String k : table.keySet()) {
@@ -257,16 +247,6 @@ public final class LadderFile {
             }
         }
         return location(file, pos) + ": ladder." + key;
-    }
-
-    /** The position of a dotted key such as {@code buffer.gain}, or of a quoted key that is not a bare key. */
-    private static TomlPosition positionOf(TomlTable table, String key) {
-        try {
-            return table.inputPositionOf(key);
-        } catch (IllegalArgumentException e) {
-            // a quoted key like 'bits ~' is not valid dotted-key syntax; look it up as one name
-            return table.inputPositionOf(List.of(key));
-        }
     }
 
     private static String location(Path file, TomlPosition pos) {

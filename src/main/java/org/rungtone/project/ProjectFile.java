@@ -14,7 +14,7 @@ import java.util.Optional;
 import java.util.Set;
 import org.rungtone.firmware.CNames;
 import org.rungtone.internal.InputError;
-import org.tomlj.Toml;
+import org.rungtone.internal.TomlText;
 import org.tomlj.TomlParseError;
 import org.tomlj.TomlParseResult;
 
@@ -52,22 +52,7 @@ public final class ProjectFile {
      * @throws InputError naming file, line and key for every problem
      */
     public static Project parse(String text, Path file) {
-        TomlParseResult toml;
-        try {
-            toml = Toml.parse(text);
-        } catch (TomlParseError e) {
-            // tomlj throws some errors (a bad escape in a quoted table name) instead of listing them
-            throw notToml(file, e);
-        } catch (StackOverflowError e) {
-            throw InputError.inFile(file, "arrays or tables are nested too deeply to read; expected a few levels");
-        } catch (AssertionError e) {
-            // tomlj 1.1.1 checks a malformed \\u escape with an assert; under java -ea it escapes as an Error
-            throw InputError.inFile(file, "not valid TOML: a string holds a broken escape (\\u needs 4 hex digits,"
-                    + " \\U needs 8)", e);
-        }
-        if (!toml.errors().isEmpty()) {
-            throw notToml(file, toml.errors().get(0));
-        }
+        TomlParseResult toml = TomlText.parse(text, file, e -> notToml(file, e));
         Path base = file.toAbsolutePath().getParent();
         TomlFields root = new TomlFields(toml, file, "");
         TomlFields project = root.table("project").orElseThrow(() -> new InputError(file

@@ -80,6 +80,11 @@ class UnitProfileTest {
                 message("[unit]\nboard = \"b\"\ndate = \"May 1\"\nbits = 2\n"));
         assertEquals("board.unit.toml:5: unit.colour: unknown key; known keys are board, date, bits, ladder,"
                 + " readings, table", message(head + "colour = \"red\"\n"));
+        // a quoted key that is not a bare key still gets its line, not a crash
+        assertEquals("board.unit.toml:5: unit.bad key: unknown key; known keys are board, date, bits, ladder,"
+                + " readings, table", message(head + "\"bad key\" = 1\n"));
+        assertEquals("board.unit.toml:1: odd table: unknown table or key; a unit profile has [unit], [model]"
+                + " and [levels]", message("\"odd table\" = 1\n" + head));
         assertEquals("board.unit.toml: no [levels] table with the volts of every code", message(head));
         assertEquals("board.unit.toml: no [unit] table; is this a unit profile from 'rungtone calibrate fit'?",
                 message("[levels]\nvolts = [1]\n"));
