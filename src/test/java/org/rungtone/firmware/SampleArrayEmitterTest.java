@@ -48,6 +48,7 @@ class SampleArrayEmitterTest {
                 "    }",
                 "    return 0;",
                 "}", ""));
+        CToolchain.require("gcc");
         CCompiler.Result cc = CCompiler.run(dir, CCompiler.strictGcc("-o", "dump", "main.c", "door_chime.c"));
         assertEquals(0, cc.exitCode(), cc.output());
         assertEquals("", cc.output());

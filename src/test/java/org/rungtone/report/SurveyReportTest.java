@@ -19,7 +19,10 @@ class SurveyReportTest {
             "in_band_snr_db", "a_weighted_snr_db", "enob_bits", "clipped_samples", "flash_bytes_unpacked",
             "flash_bytes_packed", "fits", "reaches_target", "chosen");
 
-    /** A cell of a 1 s clip; flash bytes follow from the rate and depth as in SurveyRow. */
+    /**
+     * A cell of a 1 s clip; flash bytes follow from the rate and depth as in SurveyRow, ENOB from SINAD as
+     * (SINAD − 1.76)/6.02 (IEEE Std 1241-2010).
+     */
     private static SurveyRow row(int bits, double rate, double sinad, boolean fits, boolean reaches,
             boolean chosen) {
         int n = (int) rate;
