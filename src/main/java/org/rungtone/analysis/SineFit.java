@@ -113,7 +113,15 @@ public final class SineFit {
      */
     public static double estimateFrequencyHz(double[] samples, double sampleRateHz) {
         Checks.checkArgument(samples.length >= 16, "a sine fit needs at least 16 samples: %d", samples.length);
-        Spectrum s = Spectrum.of(samples, sampleRateHz, Window.BLACKMAN_HARRIS_7);
+        return estimateFrequencyHz(Spectrum.of(samples, sampleRateHz, Window.BLACKMAN_HARRIS_7));
+    }
+
+    /**
+     * The strongest peak of a spectrum already at hand (see {@link #estimateFrequencyHz(double[], double)}).
+     *
+     * @throws IllegalArgumentException when the spectrum has no peak away from DC
+     */
+    public static double estimateFrequencyHz(Spectrum s) {
         int skip = s.mainLobeHalfWidthBins();
         int best = -1;
         double bestPower = 0;

@@ -41,24 +41,32 @@ public final class ToneAnalysis {
      * @throws IllegalArgumentException when the signal is shorter than 64 samples or holds no tone
      */
     public static ToneReport analyze(Signal signal) {
-        double[] x = signal.unsafeSamples();
-        if (x.length > MAX_SAMPLES) {
-            x = Arrays.copyOf(x, MAX_SAMPLES);
-        }
+        return analyze(signal, spectrum(signal));
+    }
+
+    /**
+     * Analyses a signal with its {@link #spectrum} already computed (for callers that also plot it): the
+     * spectrum seeds the sine fit and gives the harmonics, so it is transformed once.
+     *
+     * @throws IllegalArgumentException when the signal is shorter than 64 samples or holds no tone
+     */
+    public static ToneReport analyze(Signal signal, Spectrum spectrum) {
+        double[] x = analysed(signal);
         Checks.checkArgument(x.length >= 64, "a tone analysis needs at least 64 samples: %d", x.length);
         double rate = signal.sampleRateHz();
-        SineFit.Result fit = SineFit.fit(x, rate);
-        Spectrum s = Spectrum.of(x, rate, Window.BLACKMAN_HARRIS_7);
-        return fromSpectrum(s, fit, x.length);
+        SineFit.Result fit = SineFit.fit(x, rate, SineFit.estimateFrequencyHz(spectrum));
+        return fromSpectrum(spectrum, fit, x.length);
     }
 
     /** The spectrum {@link #analyze} works on (the first {@link #MAX_SAMPLES} samples), for plots. */
     public static Spectrum spectrum(Signal signal) {
+        return Spectrum.of(analysed(signal), signal.sampleRateHz(), Window.BLACKMAN_HARRIS_7);
+    }
+
+    /** The samples analysed: the first {@link #MAX_SAMPLES}. */
+    private static double[] analysed(Signal signal) {
         double[] x = signal.unsafeSamples();
-        if (x.length > MAX_SAMPLES) {
-            x = Arrays.copyOf(x, MAX_SAMPLES);
-        }
-        return Spectrum.of(x, signal.sampleRateHz(), Window.BLACKMAN_HARRIS_7);
+        return x.length > MAX_SAMPLES ? Arrays.copyOf(x, MAX_SAMPLES) : x;
     }
 
     /** Where harmonic {@code order} of {@code f0} lies after folding into 0 .. rate/2. */

@@ -336,9 +336,13 @@ public final class Build {
             double flatInBand = metrics.measure("flat", flat.apply(reference).codes(), played).inBandSnrDb();
             shapingGain = Optional.of(emittedQuality.inBandSnrDb() - flatInBand);
         }
-        Optional<ToneReport> tone = toneOf(reference, emitted, played);
-        Optional<Spectrum> toneSpectrum = tone.isPresent()
-                ? Optional.of(ToneAnalysis.spectrum(head(emitted, played, rate))) : Optional.empty();
+        Optional<ToneReport> tone = Optional.empty();
+        Optional<Spectrum> toneSpectrum = Optional.empty();
+        if (isTone(reference)) {
+            Signal out = head(emitted, played, rate);
+            toneSpectrum = Optional.of(ToneAnalysis.spectrum(out));
+            tone = Optional.of(ToneAnalysis.analyze(out, toneSpectrum.get()));
+        }
         watch.lap("analyze");
         AnalogModel.Preview preview = join(previewJob);
         watch.lap("preview");
@@ -408,12 +412,12 @@ public final class Build {
                 + Units.format(range[1], "V");
     }
 
-    /** Single-tone figures when the reference is essentially one sine (IEEE Std 1241 sine fit). */
-    private static Optional<ToneReport> toneOf(Signal reference, Codes codes, LevelTable table) {
+    /** True when the reference is essentially one sine (IEEE Std 1241 sine fit), so tone figures apply. */
+    private static boolean isTone(Signal reference) {
         // A quick look at the first 8192 samples decides; only a tone pays for the full analysis.
         double[] probe = Arrays.copyOf(reference.unsafeSamples(), Math.min(reference.length(), TONE_PROBE));
         if (probe.length < 256) {
-            return Optional.empty();
+            return false;
         }
         SineFit.Result fit;
         try {
@@ -423,16 +427,13 @@ public final class Build {
             // δ = 0.1 (analytic, from the linear phase drift across the record); programme material stays far
             // below the screen. Only candidates pay for the iterated four-parameter fit.
             if (!(SineFit.fitKnownFrequency(probe, reference.sampleRateHz(), f0).sinadDb() > TONE_SCREEN_DB)) {
-                return Optional.empty();
+                return false;
             }
             fit = SineFit.fit(probe, reference.sampleRateHz(), f0);
         } catch (RuntimeException e) {
-            return Optional.empty();
+            return false;
         }
-        if (!(fit.sinadDb() > TONE_THRESHOLD_DB)) {
-            return Optional.empty();
-        }
-        return Optional.of(ToneAnalysis.analyze(head(codes, table, reference.sampleRateHz())));
+        return fit.sinadDb() > TONE_THRESHOLD_DB;
     }
 
     /** Waits for a job, passing on the user's input errors and programming errors unwrapped. */
