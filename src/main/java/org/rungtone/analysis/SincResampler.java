@@ -87,13 +87,6 @@ final class SincResampler {
         return half;
     }
 
-    /** Produces {@code outputLength} samples from {@code source}, starting at input position {@code offset}. */
-    double[] resample(Source source, int outputLength, double offset) {
-        double[] out = new double[outputLength];
-        resampleInto(source, -half - 1, 0, outputLength, offset, out);
-        return out;
-    }
-
     /**
      * Computes outputs {@code from} (inclusive) to {@code to} (exclusive) into {@code out}. The source's next
      * sample is input index {@code sourceStart}; inputs it is asked for before the first one needed are read

@@ -55,11 +55,6 @@ public final class KaiserResampler implements Resampler {
         return new KaiserResampler(Math.min(150, Math.max(60, 6.02 * bits + 1.76 + 12)), 0.9);
     }
 
-    /** Stopband attenuation in dB. */
-    public double stopbandDb() {
-        return stopbandDb;
-    }
-
     @Override
     public String name() {
         return String.format(java.util.Locale.ROOT, "kaiser polyphase, %.0f dB stopband", stopbandDb);
@@ -67,16 +62,8 @@ public final class KaiserResampler implements Resampler {
 
     @Override
     public Signal resample(Signal signal, double targetRateHz) {
-        return resample(signal, 0, signal.length(), targetRateHz);
-    }
-
-    @Override
-    public Signal resample(Signal signal, int from, int to, double targetRateHz) {
-        Checks.checkArgument(from >= 0 && to <= signal.length() && from <= to, "bad range %d..%d", from, to);
-        if (signal.sampleRateHz() == targetRateHz && from == 0 && to == signal.length()) {
-            return signal;
-        }
-        return resample(SampleSource.of(signal), from, to, targetRateHz);
+        return signal.sampleRateHz() == targetRateHz ? signal
+                : resample(SampleSource.of(signal), 0, signal.length(), targetRateHz);
     }
 
     /**

@@ -14,18 +14,6 @@ public interface Resampler {
     Signal resample(Signal signal, double targetRateHz);
 
     /**
-     * Resamples samples {@code from} (inclusive) to {@code to} (exclusive) of {@code signal}, as if that range
-     * were the whole signal. The default copies the range; implementations may read it in place.
-     */
-    default Signal resample(Signal signal, int from, int to, double targetRateHz) {
-        if (from == 0 && to == signal.length()) {
-            return resample(signal, targetRateHz);
-        }
-        return resample(Signal.wrap(java.util.Arrays.copyOfRange(signal.unsafeSamples(), from, to),
-                signal.sampleRateHz()), targetRateHz);
-    }
-
-    /**
      * Resamples samples {@code from} to {@code to} (exclusive) of {@code source}, as if that range were the
      * whole signal. The default reads the range into memory; implementations may read it block by block.
      */

@@ -84,17 +84,15 @@ public final class WavReader {
      * @throws InputError naming the file and the problem
      */
     public static double[][] readChannels(Path file) {
-        Decoder d = new Decoder(file);
-        try (FileChannel ch = open(file)) {
-            d.parse(ch);
-            double[][] out = new double[d.format.channels()][];
-            for (int c = 1; c <= out.length; c++) {
-                out[c - 1] = d.decode(ch, c);
-            }
-            return out;
-        } catch (IOException e) {
-            throw InputError.inFile(file, "cannot be read (" + e.getMessage() + ")", e);
+        int channels;
+        try (Stream s = open(file, 0)) {
+            channels = s.format().channels();
         }
+        double[][] out = new double[channels][];
+        for (int c = 1; c <= channels; c++) {
+            out[c - 1] = read(file, c).signal().unsafeSamples();
+        }
+        return out;
     }
 
     /**
@@ -113,16 +111,19 @@ public final class WavReader {
                         + "0 (mix down) or 1.." + d.format.channels() + ": " + channel);
             }
             return new Stream(d, ch, channel);
-        } catch (EOFException e) {
-            closeQuietly(ch);
-            throw InputError.inFile(file, "ends early (truncated file)", e);
         } catch (IOException e) {
             closeQuietly(ch);
-            throw InputError.inFile(file, "cannot be read (" + e.getMessage() + ")", e);
+            throw readError(file, e);
         } catch (RuntimeException e) {
             closeQuietly(ch);
             throw e;
         }
+    }
+
+    /** A failed read as the user's error: a file that ends early, or one the system cannot read. */
+    private static InputError readError(Path file, IOException e) {
+        return e instanceof EOFException ? InputError.inFile(file, "ends early (truncated file)", e)
+                : InputError.inFile(file, "cannot be read (" + e.getMessage() + ")", e);
     }
 
     private static void closeQuietly(FileChannel ch) {
@@ -171,10 +172,8 @@ public final class WavReader {
                     "range %d+%d outside 0..%d", from, count, length());
             try {
                 decoder.decodeRange(channel, pick, from, count, dst, offset);
-            } catch (EOFException e) {
-                throw InputError.inFile(decoder.file, "ends early (truncated file)", e);
             } catch (IOException e) {
-                throw InputError.inFile(decoder.file, "cannot be read (" + e.getMessage() + ")", e);
+                throw readError(decoder.file, e);
             }
         }
 
@@ -353,17 +352,10 @@ public final class WavReader {
             return new WavFormat(tag, enc, channels, (int) rate, bits, validBits, blockAlign, frames);
         }
 
-        double[] decode(FileChannel ch, int channel) throws IOException {
-            double[] out = new double[(int) format.frames()];
-            decodeRange(ch, channel, 0, out.length, out, 0);
-            return out;
-        }
-
         /** Decodes frames {@code first .. first + count - 1} into {@code out[off ..]}, checking every sample. */
         void decodeRange(FileChannel ch, int channel, long first, int count, double[] out, int off)
                 throws IOException {
             int channels = format.channels();
-            int bytesPer = format.bitsPerSample() / 8;
             int frameBytes = format.blockAlign();
             int framesPerBlock = Math.max(1, Math.min(count, BLOCK_BYTES / frameBytes));
             ByteBuffer buf = ByteBuffer.allocate(framesPerBlock * frameBytes).order(ByteOrder.LITTLE_ENDIAN);
@@ -372,7 +364,9 @@ public final class WavReader {
             int c1 = channel == 0 ? channels : channel;
             long frame = first;
             long end = first + count;
-            double[] raw = new double[0];
+            double[] raw = new double[framesPerBlock * channels];
+            boolean checked = format.encoding() == WavFormat.Encoding.FLOAT32
+                    || format.encoding() == WavFormat.Encoding.FLOAT64;
             while (frame < end) {
                 int n = (int) Math.min(framesPerBlock, end - frame);
                 buf.clear().limit(n * frameBytes);
@@ -384,13 +378,7 @@ public final class WavReader {
                     }
                 }
                 int o = off + (int) (frame - first);
-                int values = n * channels;
-                if (raw.length < values) {
-                    raw = new double[values];
-                }
-                samples(buf, values, raw);
-                boolean checked = format.encoding() == WavFormat.Encoding.FLOAT32
-                        || format.encoding() == WavFormat.Encoding.FLOAT64;
+                samples(buf, n * channels, raw);
                 for (int i = 0; i < n; i++) {
                     double acc = 0;
                     int base = i * channels;
