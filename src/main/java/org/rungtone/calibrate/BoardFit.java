@@ -123,10 +123,10 @@ public final class BoardFit {
             sigmas.add(s);
         }
         return new FitReport(m.source(), bits, m.readings().size(), new ArrayList<>(m.unmeasured()), q, spread,
-                meter, summary(oa, a.key(), codes, ""), ob == null
+                meter, summary(oa, a.key(), codes), ob == null
                         ? new ModelSummary("switched-load", Optional.empty(), 0, Double.NaN, Double.NaN, List.of(),
                                 bNote)
-                        : summary(ob, "switched-load", codes, ""), model, reason, sigmas, residuals, outliers,
+                        : summary(ob, "switched-load", codes), model, reason, sigmas, residuals, outliers,
                 table.levels, table.measured, java.util.Arrays.stream(levelSigmas).boxed().toList(), warnings);
     }
 
@@ -253,7 +253,7 @@ public final class BoardFit {
         return out;
     }
 
-    private static ModelSummary summary(RobustFit.Outcome o, String key, int[] codes, String note) {
+    private static ModelSummary summary(RobustFit.Outcome o, String key, int[] codes) {
         int kept = o.kept();
         int p = o.theta().length;
         double max = 0;
@@ -267,10 +267,10 @@ public final class BoardFit {
             outliers.add(codes[i]);
         }
         double rms = kept > p ? Math.sqrt(o.rss() / (kept - p)) : Double.NaN;
-        return new ModelSummary(key, Optional.of(o.kind().model(o.theta())), kept, rms, max, outliers, note);
+        return new ModelSummary(key, Optional.of(o.kind().model(o.theta())), kept, rms, max, outliers, "");
     }
 
-    private record Table(LevelTable levels, boolean measured, int replaced, int clipped) {
+    private record Table(LevelTable levels, boolean measured, int replaced) {
     }
 
     private static Table table(Measurements m, BoardModel model, List<Integer> outliers, Settings s,
@@ -294,7 +294,7 @@ public final class BoardFit {
                         + " table keeps them as read: check the board for clipping or a loose probe",
                         outliers.size(), model.key()));
             }
-            return new Table(LevelTable.of(bits, measured, "measured"), true, replaced, 0);
+            return new Table(LevelTable.of(bits, measured, "measured"), true, replaced);
         }
         int clipped = 0;
         for (int k = 0; k < v.length; k++) {
@@ -311,7 +311,7 @@ public final class BoardFit {
                     + " .. %s; clipped to it", model.key(), clipped, clipped == 1 ? "" : "s", volts(s.minVolts()),
                     volts(s.maxVolts())));
         }
-        return new Table(LevelTable.of(bits, v, "fitted " + model.key()), false, 0, clipped);
+        return new Table(LevelTable.of(bits, v, "fitted " + model.key()), false, 0);
     }
 
     private static void warn(Measurements m, List<Integer> missingBasis, List<CodeResidual> residuals,

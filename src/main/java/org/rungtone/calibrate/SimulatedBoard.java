@@ -62,9 +62,7 @@ public final class SimulatedBoard {
         List<Part> parts = spec.parts();
         double[] ohms = new double[parts.size()];
         for (int i = 0; i < ohms.length; i++) {
-            double d = spread.kind() == Spread.Kind.UNIFORM ? spec.tolerance() * (2 * random.nextDouble() - 1)
-                    : spread.sigma() * random.nextGaussian();
-            ohms[i] = parts.get(i).ohms() * Math.max(1e-6, 1 + d);
+            ohms[i] = parts.get(i).ohms() * Math.max(1e-6, 1 + spread.deviation(random, spec.tolerance()));
         }
         return new SimulatedBoard(Ladder.of(spec, ohms), seed);
     }

@@ -43,7 +43,7 @@ final class ProjectBoards {
             if (ladder == null && bits != 0 && bits != s.bits()) {
                 s = s.toBuilder().bits(bits).build();
             }
-            return Optional.of(s.levels().withOrigin("modelled " + s.describe()));
+            return Optional.of(s.levels());
         };
     }
 }

@@ -65,7 +65,7 @@ public final class UnitOptions {
         if (unitFile == null) {
             Optional<LadderSpec> spec = alwaysSpec ? Optional.of(ladder.toSpec(bitsOrZero))
                     : ladder.specIfGiven(bitsOrZero);
-            return new Board(spec.map(s -> s.levels().withOrigin("modelled " + s.describe())), spec,
+            return new Board(spec.map(s -> s.levels()), spec,
                     Optional.empty(), List.of());
         }
         UnitProfile p = UnitProfile.load(unitFile);

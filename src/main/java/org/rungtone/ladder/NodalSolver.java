@@ -87,11 +87,6 @@ final class NodalSolver {
         return solver.solve(s).toArray();
     }
 
-    /** The ladder output voltage (buffer input) of this code. */
-    double outputVolts() {
-        return nodeVolts()[outputNode(spec)];
-    }
-
     /** The Thévenin resistance of the network seen from the output, load included. */
     double outputOhms() {
         RealVector unit = new ArrayRealVector(nodeCount(spec));

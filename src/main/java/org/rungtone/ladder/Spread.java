@@ -38,7 +38,7 @@ public record Spread(Kind kind, double sigma) {
     }
 
     /** One relative deviation: the value is {@code nominal · (1 + deviation)}. */
-    double deviation(SplittableRandom random, double tolerance) {
+    public double deviation(SplittableRandom random, double tolerance) {
         if (kind == Kind.UNIFORM) {
             return tolerance * (2 * random.nextDouble() - 1);
         }

@@ -75,20 +75,11 @@ public final class Build {
         this(toolVersion, OutputSpan.FULL, stage -> { });
     }
 
-    /** A build whose compensated quantization maps full scale onto {@code span} of the board's levels. */
-    public Build(String toolVersion, OutputSpan span) {
-        this(toolVersion, span, stage -> { });
-    }
-
     /**
-     * A build that also tells {@code progress} the name of every stage it finishes ("open", "condition", ...;
-     * a WAV file is decoded during "condition").
+     * A build whose compensated quantization maps full scale onto {@code span} of the board's levels, and
+     * that tells {@code progress} the name of every stage it finishes ("open", "condition", ...; a WAV file
+     * is decoded during "condition").
      */
-    public Build(String toolVersion, java.util.function.Consumer<String> progress) {
-        this(toolVersion, OutputSpan.FULL, progress);
-    }
-
-    /** A build with a span and a progress listener. */
     public Build(String toolVersion, OutputSpan span, java.util.function.Consumer<String> progress) {
         this.toolVersion = toolVersion;
         this.span = span;

@@ -27,8 +27,7 @@ public record LoopSpan(double start, double end, boolean seconds) {
             throw new InputError("--loop '" + text + "' must be START:END in samples (1200:9600) or times"
                     + " (0.25s:end)");
         }
-        boolean secs = m.group(1).matches(".*[a-z]s$") || m.group(1).endsWith("s")
-                || m.group(2).endsWith("s");
+        boolean secs = m.group(1).endsWith("s") || m.group(2).endsWith("s");
         double start = value(m.group(1), secs, text);
         double end = m.group(2).equals("end") ? Double.POSITIVE_INFINITY : value(m.group(2), secs, text);
         if (!(start >= 0) || !(end > start)) {

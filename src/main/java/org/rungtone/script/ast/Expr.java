@@ -15,7 +15,7 @@ public sealed interface Expr {
     record Decibels(Pos pos, double db) implements Expr {
         /** The linear amplitude factor. */
         public double factor() {
-            return Math.pow(10.0, db / 20.0);
+            return Literals.dbToFactor(db);
         }
     }
 

@@ -57,7 +57,7 @@ final class MathCall extends Eval {
                 case FRAC:
                     return x - Math.floor(x);
                 default:
-                    return Math.pow(10.0, x / 20.0);
+                    return org.rungtone.script.ast.Literals.dbToFactor(x);
             }
         }
     }
