@@ -161,11 +161,8 @@ public final class AnalogModel {
     }
 
     private Preview preview(double[] out, double fs) {
-        double peak = 0;
-        for (double v : out) {
-            peak = Math.max(peak, Math.abs(v));
-        }
-        return new Preview(Signal.wrap(out, previewRateHz), fs, passbandTopHz(fs), zohDroopDb(fs), peak);
+        Signal signal = Signal.wrap(out, previewRateHz);
+        return new Preview(signal, fs, passbandTopHz(fs), zohDroopDb(fs), signal.peak());
     }
 
     /**
@@ -254,9 +251,15 @@ public final class AnalogModel {
             if (held.length < count) {
                 held = new double[count];
             }
+            // step through the codes instead of dividing for every fine sample
+            long code = Math.floorDiv(next, factor);
+            int left = (int) (factor - Math.floorMod(next, (long) factor));
             for (int k = 0; k < count; k++) {
-                long code = Math.floorDiv(next + k, factor);
                 held[k] = code >= 0 && code < codes.length ? level[codes[(int) code]] : 0;
+                if (--left == 0) {
+                    code++;
+                    left = factor;
+                }
             }
             next += count;
             filter.process(held, dst, offset, count);

@@ -184,7 +184,7 @@ public final class BuildCommand implements Callable<Integer> {
                 bits == null ? OptionalInt.empty() : OptionalInt.of(bits),
                 rateHz == null ? OptionalDouble.empty() : OptionalDouble.of(rateHz),
                 pr.hasMatchedOption("--dither") ? Optional.of(dither) : Optional.empty(),
-                pr.hasMatchedOption("--shaping") ? Optional.of(errorFilter(shaping)) : Optional.empty(),
+                pr.hasMatchedOption("--shaping") ? Optional.of(ErrorFilter.parse(shaping)) : Optional.empty(),
                 pr.hasMatchedOption("--seed") ? Optional.of(seed) : Optional.empty(), Optional.ofNullable(out),
                 pr.hasMatchedOption("--compensation") ? Optional.of(onOff(compensation, "--compensation"))
                         : Optional.empty(),
@@ -218,8 +218,8 @@ public final class BuildCommand implements Callable<Integer> {
         int effectiveBits = bits != null ? bits : board.bits(8);
         BuildPlan plan = new BuildPlan(source, channel, symbol, outDir, effectiveBits,
                 rateHz == null ? OptionalDouble.empty() : OptionalDouble.of(rateHz), dither,
-                errorFilter(shaping), seed, conditioning.removeDc(), conditioning.trimDbfs(), conditioning.gainDb(),
-                conditioning.normalizeDbfs(), conditioning.fadeIn, conditioning.fadeOut,
+                ErrorFilter.parse(shaping), seed, conditioning.removeDc(), conditioning.trimDbfs(),
+                conditioning.gainDb(), conditioning.normalizeDbfs(), conditioning.fadeIn, conditioning.fadeOut,
                 conditioning.resamplerName(), fullScale, flashAttr);
         if (board.levels().isPresent()) {
             plan = plan.withBoard(board.levels().get(), onOff(compensation, "--compensation"));
@@ -241,19 +241,6 @@ public final class BuildCommand implements Callable<Integer> {
                 return false;
             default:
                 throw new org.rungtone.internal.InputError(option + " must be on or off: " + text);
-        }
-    }
-
-    static ErrorFilter errorFilter(String text) {
-        switch (text.toLowerCase(Locale.ROOT)) {
-            case "none":
-                return ErrorFilter.NONE;
-            case "first":
-                return ErrorFilter.FIRST_ORDER;
-            case "second":
-                return ErrorFilter.SECOND_ORDER;
-            default:
-                throw new org.rungtone.internal.InputError("--shaping must be none, first or second: " + text);
         }
     }
 

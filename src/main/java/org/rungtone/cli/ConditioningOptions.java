@@ -5,10 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.OptionalDouble;
 import org.rungtone.condition.Conditioning;
-import org.rungtone.condition.KaiserResampler;
 import org.rungtone.condition.Resampler;
-import org.rungtone.condition.TarsosResampler;
-import org.rungtone.internal.Checks;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Option;
 
@@ -99,10 +96,7 @@ public final class ConditioningOptions {
      * @throws org.rungtone.internal.InputError when --resampler names neither kaiser nor tarsos
      */
     Resampler resamplerFor(int maxBits) {
-        String name = resamplerName();
-        Checks.checkInput(name.equals("kaiser") || name.equals("tarsos"),
-                "--resampler must be kaiser or tarsos: %s", resampler);
-        return name.equals("tarsos") ? new TarsosResampler() : KaiserResampler.forBits(maxBits);
+        return Resampler.named(resamplerName(), maxBits);
     }
 
     /** The settings in words, for reports: "DC removed, normalized to -1.0 dBFS, trim below -50.0 dBFS". */

@@ -33,6 +33,7 @@ import org.rungtone.ladder.LevelTable;
 import org.rungtone.project.Sources;
 import org.rungtone.quantize.Codes;
 import org.rungtone.quantize.Dither;
+import org.rungtone.quantize.ErrorFilter;
 import org.rungtone.report.AnalysisPlots;
 import org.rungtone.report.Json;
 import org.rungtone.report.SurveyReport;
@@ -269,7 +270,7 @@ public final class SurveyCommand implements Callable<Integer> {
     private SurveySpec spec(List<Integer> bits, List<Double> rates, Map<Integer, LevelTable> tables,
             AnalogModel model) {
         SurveySpec.Builder b = SurveySpec.builder().bitDepths(bits).ratesHz(rates).dither(dither)
-                .shaping(BuildCommand.errorFilter(shaping)).seed(seed).tables(tables::get)
+                .shaping(ErrorFilter.parse(shaping)).seed(seed).tables(tables::get)
                 .inBandCutoffHz(rate -> Math.min(20_000, model.passbandTopHz(rate))).packed(packed);
         if (flashBudget != null) {
             b.flashBudgetBytes(flashBudget);

@@ -23,7 +23,6 @@ import org.rungtone.condition.Conditioner;
 import org.rungtone.condition.Conditioning;
 import org.rungtone.condition.KaiserResampler;
 import org.rungtone.condition.Resampler;
-import org.rungtone.condition.TarsosResampler;
 import org.rungtone.firmware.EmitResult;
 import org.rungtone.firmware.FirmwareEmitter;
 import org.rungtone.firmware.FirmwareRequest;
@@ -296,10 +295,11 @@ public final class Build {
             warnings.add(String.format(Locale.ROOT, "preview.wav holds the first %.0f s of %.0f s; use"
                     + " --preview-length all for the whole sound", previewCodes / rate, emitted.length() / rate));
         }
+        AnalogModel model = new AnalogModel(plan.filter(), plan.previewRateHz());
         CompletableFuture<AnalogModel.Preview> previewJob = CompletableFuture.supplyAsync(
-                () -> new AnalogModel(plan.filter(), plan.previewRateHz()).render(previewInput, playedTable));
-        double cutoff = plan.filter().kind() == org.rungtone.analysis.ReconstructionFilter.Kind.NONE
-                ? rate / 2 : Math.min(rate / 2, plan.filter().cutoffHz());
+                () -> model.render(previewInput, playedTable));
+        // in-band figures stop where the analog output's passband does: rate/2, or a lower filter cutoff
+        double cutoff = model.passbandTopHz(rate);
         AudioMetrics metrics = AudioMetrics.of(reference, cutoff);
         List<QualityReport> quality = new ArrayList<>();
         Spectrum errorSpectrum;
@@ -370,9 +370,8 @@ public final class Build {
             } else {
                 Conditioning conditioning = new Conditioning(plan.removeDc(), plan.trimDbfs(), rate, plan.gainDb(),
                         plan.normalizeDbfs(), plan.fadeInSeconds(), plan.fadeOutSeconds());
-                Resampler resampler = plan.resampler().equals("tarsos") ? new TarsosResampler()
-                        : KaiserResampler.forBits(plan.bits());
-                conditioned = new Conditioner(resampler).apply(opened.samples(), conditioning);
+                conditioned = new Conditioner(Resampler.named(plan.resampler(), plan.bits()))
+                        .apply(opened.samples(), conditioning);
             }
             watch.lap("condition");
             return new Prepared(opened.layout(), opened.warnings(), conditioned, rate);

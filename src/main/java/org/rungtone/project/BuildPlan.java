@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import org.rungtone.analysis.ReconstructionFilter;
+import org.rungtone.condition.Resampler;
 import org.rungtone.firmware.FirmwareRequest;
 import org.rungtone.firmware.FlashBudget;
 import org.rungtone.internal.Checks;
@@ -61,8 +62,7 @@ public record BuildPlan(Path source, int channel, String symbol, Path outDir, in
         rateHz.ifPresent(r -> Checks.checkInput(Double.isFinite(r) && r >= 1 && r <= 384_000,
                 "--rate must be 1 Hz..384 kHz: %s", r));
         Checks.checkInput(channel >= 0 && channel <= 8, "--channel must be 0 (mix down) or 1..8: %d", channel);
-        Checks.checkInput(resampler.equals("kaiser") || resampler.equals("tarsos"),
-                "--resampler must be kaiser or tarsos: %s", resampler);
+        Resampler.named(resampler, bits); // refuses an unknown name while the plan is made
         Checks.checkInput(Double.isFinite(fullScaleVolts) && fullScaleVolts > 0,
                 "--full-scale must be a positive voltage: %s", fullScaleVolts);
         board.ifPresent(t -> Checks.checkInput(t.bits() == bits, "the board's level table has %d bits but --bits"

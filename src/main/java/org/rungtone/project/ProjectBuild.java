@@ -136,7 +136,7 @@ public final class ProjectBuild {
         Dither dither = o.dither().orElse(q.dither().map(d -> Dither.valueOf(d.toUpperCase(Locale.ROOT)))
                 .orElse(Dither.TPDF));
         settings.put("dither", dither.label() + origin(o.dither().isPresent(), q.dither().isPresent()));
-        ErrorFilter shaping = o.shaping().orElse(q.shaping().map(ProjectBuild::shaping).orElse(ErrorFilter.NONE));
+        ErrorFilter shaping = o.shaping().orElse(q.shaping().map(ErrorFilter::parse).orElse(ErrorFilter.NONE));
         settings.put("shaping", shaping.name() + origin(o.shaping().isPresent(), q.shaping().isPresent()));
         long seed = o.seed().or(project::seed).orElse(1L);
         settings.put("seed", seed + origin(o.seed().isPresent(), project.seed().isPresent()));
@@ -244,14 +244,6 @@ public final class ProjectBuild {
 
     private static String origin(boolean cli, boolean file) {
         return cli ? "  (command line)" : file ? "  (project file)" : "  (default)";
-    }
-
-    private static ErrorFilter shaping(String s) {
-        return switch (s) {
-            case "first" -> ErrorFilter.FIRST_ORDER;
-            case "second" -> ErrorFilter.SECOND_ORDER;
-            default -> ErrorFilter.NONE;
-        };
     }
 
     private static void checkOneRate(Project p, Overrides o, OptionalDouble projectRate) {

@@ -29,6 +29,24 @@ public final class ErrorFilter {
     }
 
     /**
+     * The filter an option or project key names: none, first or second (order).
+     *
+     * @throws org.rungtone.internal.InputError for any other name
+     */
+    public static ErrorFilter parse(String text) {
+        switch (text.toLowerCase(java.util.Locale.ROOT)) {
+            case "none":
+                return NONE;
+            case "first":
+                return FIRST_ORDER;
+            case "second":
+                return SECOND_ORDER;
+            default:
+                throw new org.rungtone.internal.InputError("--shaping must be none, first or second: " + text);
+        }
+    }
+
+    /**
      * A user-given FIR error filter h[0..K−1] (h[0] weights the previous sample's error).
      *
      * @throws IllegalArgumentException when there are more than 32 taps or a tap is not finite

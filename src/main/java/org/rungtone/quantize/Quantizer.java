@@ -185,9 +185,9 @@ public final class Quantizer {
         double lsb = lsbVolts();
         double mid = 0.5 * (lowVolts + highVolts);
         double half = 0.5 * (highVolts - lowVolts);
-        int order = shaping.order();
-        double[] history = new double[order];
-        int head = 0;
+        double[] taps = shaping.taps();
+        int order = taps.length;
+        double[] past = new double[order]; // fed-back errors, newest first
         long clipped = 0;
         double clamp = FEEDBACK_CLAMP_LSB * lsb;
         SplittableRandom random = null;
@@ -202,7 +202,7 @@ public final class Quantizer {
             double v = mid + xi * half;
             double fb = 0;
             for (int k = 0; k < order; k++) {
-                fb += shaping.tap(k) * history[(head - k + order) % order];
+                fb += taps[k] * past[k];
             }
             v -= fb;
             double d = dither == Dither.NONE ? 0 : dither.next(random) * lsb;
@@ -210,8 +210,8 @@ public final class Quantizer {
             out[i] = sortedCodes[idx];
             double e = sortedVolts[idx] - v;
             e = Math.max(-clamp, Math.min(clamp, e));
-            head = (head + 1) % order;
-            history[head] = e;
+            System.arraycopy(past, 0, past, 1, order - 1);
+            past[0] = e;
         }
         return clipped;
     }
