@@ -38,7 +38,7 @@ class BoardFitFuzzTest {
                     }
                 }
             } catch (InputError e) {
-                MeasurementCsvFuzzTest.checkMessage(e, NAME);
+                FuzzMessages.checkMessage(e, NAME);
             }
         }
     }

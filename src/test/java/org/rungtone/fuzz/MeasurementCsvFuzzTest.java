@@ -27,7 +27,7 @@ class MeasurementCsvFuzzTest {
             try {
                 check(MeasurementCsv.parse(text, NAME, bits), bits);
             } catch (InputError e) {
-                checkMessage(e, NAME);
+                FuzzMessages.checkMessage(e, NAME);
             }
         }
     }
@@ -41,15 +41,6 @@ class MeasurementCsvFuzzTest {
                     || Math.abs(r.volts()) > MeasurementCsv.MAX_VOLTS) {
                 throw new AssertionError("accepted a reading out of range: " + r);
             }
-        }
-    }
-
-    /** The contract of every refusal: one line that starts with the file name and a colon, then says more. */
-    static void checkMessage(InputError e, String name) {
-        String msg = e.getMessage();
-        if (msg == null || !msg.startsWith(name + ":") || msg.length() <= name.length() + 2
-                || msg.contains("\n") || msg.contains("\r")) {
-            throw new AssertionError("unclear error message: " + msg, e);
         }
     }
 }

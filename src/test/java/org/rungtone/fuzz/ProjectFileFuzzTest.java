@@ -36,11 +36,7 @@ class ProjectFileFuzzTest {
                 }
             }
         } catch (InputError e) {
-            String m = e.getMessage();
-            if (m == null || !m.startsWith(FILE + ":") || m.length() <= FILE.toString().length() + 2
-                    || m.contains("\n") || m.contains("\r")) {
-                throw new AssertionError("unclear error message: " + m, e);
-            }
+            FuzzMessages.checkMessage(e, FILE.toString());
         }
     }
 }

@@ -43,11 +43,7 @@ class RungScriptFuzzTest {
                 }
             }
         } catch (InputError e) {
-            String m = e.getMessage();
-            if (m == null || !m.startsWith(FILE + ":") || m.length() <= FILE.length() + 2 || m.contains("\n")
-                    || m.contains("\r")) {
-                throw new AssertionError("unclear error message: " + m, e);
-            }
+            FuzzMessages.checkMessage(e, FILE);
             if (e instanceof ScriptError se && se.excerpt().size() != 2) {
                 throw new AssertionError("excerpt is not two lines: " + se.excerpt(), e);
             }

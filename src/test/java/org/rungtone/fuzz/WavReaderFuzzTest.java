@@ -52,10 +52,7 @@ class WavReaderFuzzTest {
                 }
             }
         } catch (InputError e) {
-            String m = e.getMessage();
-            if (m == null || !m.startsWith(FILE.toString() + ": ") || m.contains("\n")) {
-                throw new AssertionError("unclear error message: " + m, e);
-            }
+            FuzzMessages.checkMessage(e, FILE.toString());
         }
     }
 }
