@@ -171,8 +171,7 @@ public final class SurveyCommand implements Callable<Integer> {
         SurveySpec surveySpec = spec(bits, rates, tables, model);
 
         Map<Double, Conditioner.Conditioned> references = new ConcurrentHashMap<>();
-        ProgressLine progress = new ProgressLine(spec.commandLine().getErr(),
-                System.console() != null && !common.quiet);
+        ProgressLine progress = ProgressLine.forTerminal(spec.commandLine().getErr(), common);
         SurveyResult result;
         List<String> sourceWarnings;
         String layout;

@@ -188,36 +188,18 @@ final class TomlFields {
         }
     }
 
+    /** The known key nearest to {@code key} (Suggestions.distance), if within max(2, length/3) edits. */
     private String nearest(String key) {
         String best = null;
         int bestD = Integer.MAX_VALUE;
         for (String k : known) {
-            int d = distance(key, k);
+            int d = org.rungtone.script.ast.Suggestions.distance(key, k);
             if (d < bestD) {
                 bestD = d;
                 best = k;
             }
         }
         return bestD <= Math.max(2, key.length() / 3) ? best : null;
-    }
-
-    static int distance(String a, String b) {
-        int[] prev = new int[b.length() + 1];
-        int[] cur = new int[b.length() + 1];
-        for (int j = 0; j <= b.length(); j++) {
-            prev[j] = j;
-        }
-        for (int i = 1; i <= a.length(); i++) {
-            cur[0] = i;
-            for (int j = 1; j <= b.length(); j++) {
-                int cost = a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1;
-                cur[j] = Math.min(Math.min(cur[j - 1] + 1, prev[j] + 1), prev[j - 1] + cost);
-            }
-            int[] t = prev;
-            prev = cur;
-            cur = t;
-        }
-        return prev[b.length()];
     }
 
     static String describe(Object v) {
