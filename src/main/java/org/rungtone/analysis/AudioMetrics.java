@@ -131,10 +131,7 @@ public final class AudioMetrics {
                 "codes rate %s Hz differs from the reference's %s Hz", codes.sampleRateHz(),
                 reference.sampleRateHz());
         int[] c = codes.unsafeCodes();
-        double[] level = new double[table.size()];
-        for (int k = 0; k < level.length; k++) {
-            level[k] = table.volts(k);
-        }
+        double[] level = table.levels();
         return measured(label, c.length, (from, dst, count) -> {
             for (int i = 0; i < count; i++) {
                 dst[i] = level[c[from + i]];
