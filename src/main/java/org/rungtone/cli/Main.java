@@ -111,7 +111,9 @@ public final class Main implements Runnable {
         PrintWriter err = cl.getErr();
         boolean verbose = isVerbose(parsed);
         if (e instanceof InputError) {
-            err.println("rungtone: error: " + e.getMessage());
+            // a setting's error names the option the user typed it with
+            err.println("rungtone: error: " + (e instanceof org.rungtone.internal.SettingError failed
+                    ? failed.render(OptionNames::of) : e.getMessage()));
             if (e instanceof org.rungtone.script.ScriptError se) {
                 // under the one-line message: the script line and a caret at the column
                 for (String line : se.excerpt()) {

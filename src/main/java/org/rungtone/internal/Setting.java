@@ -1,0 +1,132 @@
+package org.rungtone.internal;
+
+/**
+ * Every setting a user can give, named by its key as a project file spells it ({@code quantize.rate} is
+ * {@code rate} in the {@code [quantize]} table). Stages name settings only through these keys; the command
+ * line maps a key to its option ({@code --rate}) and a project reader to the file and line where the key was
+ * typed. Settings that exist only on the command line get a key in a section of their own ({@code sweep.hold}).
+ */
+public enum Setting {
+    /** The project's name, or one sound's name: the C symbol prefix. */
+    NAME("sound.name"),
+    /** The output folder. */
+    OUT("project.out"),
+    /** Seed of every random process. */
+    SEED("project.seed"),
+    /** A measured unit profile. */
+    UNIT("project.unit"),
+    /** Quantize onto the board's real levels. */
+    COMPENSATION("project.compensation"),
+    /** The source file of a sound. */
+    SOURCE("sound.source"),
+    /** Which channel of the source, 0 to mix down. */
+    CHANNEL("sound.channel"),
+    /** Fixed gain. */
+    GAIN("sound.gain"),
+    /** Peak normalization target. */
+    NORMALIZE("sound.normalize"),
+    /** Trim threshold. */
+    TRIM("sound.trim"),
+    /** Fade-in time. */
+    FADE_IN("sound.fade_in"),
+    /** Fade-out time. */
+    FADE_OUT("sound.fade_out"),
+    /** Keep the source's mean. */
+    KEEP_DC("sound.keep_dc"),
+    /** Resampler design. */
+    RESAMPLER("sound.resampler"),
+    /** Loop points. */
+    LOOP("sound.loop"),
+    /** DAC bit depth. */
+    BITS("quantize.bits"),
+    /** Target sample rate. */
+    RATE("quantize.rate"),
+    /** Dither kind. */
+    DITHER("quantize.dither"),
+    /** Error-feedback noise shaping. */
+    SHAPING("quantize.shaping"),
+    /** What full scale maps onto. */
+    SPAN("quantize.span"),
+    /** Reconstruction filter after the DAC. */
+    FILTER("preview.filter"),
+    /** Preview WAV sample rate. */
+    PREVIEW_RATE("preview.rate"),
+    /** Longest preview. */
+    PREVIEW_LENGTH("preview.length"),
+    /** Reference voltage of the ideal ladder. */
+    FULL_SCALE("preview.full_scale"),
+    /** Target family of the player. */
+    FAMILY("target.family"),
+    /** CPU or timer clock. */
+    CPU_CLOCK("target.cpu_clock"),
+    /** Timer that paces the player. */
+    TIMER("target.timer"),
+    /** Pins of the ladder, bit 0 first. */
+    PINS("target.pins"),
+    /** Port width of the generic target. */
+    PORT_WIDTH("target.port_width"),
+    /** How codes become port values. */
+    PIN_STRATEGY("target.pin_strategy"),
+    /** How samples are stored. */
+    STORAGE("target.storage"),
+    /** Player engine. */
+    ENGINE("target.engine"),
+    /** Largest tick-rate error. */
+    RATE_TOLERANCE("target.rate_tolerance"),
+    /** Most flash the samples may take. */
+    FLASH_BUDGET("target.flash_budget"),
+    /** Attribute that keeps a bare array in flash. */
+    FLASH_ATTR("target.flash_attr"),
+    /** DDS start frequency. */
+    DDS_FREQUENCY("target.dds_frequency"),
+    /** DDS phase accumulator width. */
+    DDS_PHASE_BITS("target.dds_phase_bits"),
+    /** The user's own template folder. */
+    TEMPLATES("target.templates"),
+    /** The sweep program's step button. */
+    BUTTON("sweep.button"),
+    /** The sweep program's hold time per code. */
+    HOLD("sweep.hold");
+
+    private final String key;
+
+    Setting(String key) {
+        this.key = key;
+    }
+
+    /** The key as a project file spells it, section first: {@code quantize.rate}. */
+    public String key() {
+        return key;
+    }
+
+    /** The key's place-holder in a {@link SettingError} message: {@code {quantize.rate}}. */
+    public String ref() {
+        return "{" + key + "}";
+    }
+
+    /**
+     * An error about this setting. The message follows the setting's name: {@code RATE.error("must be 1 Hz..384
+     * kHz: %s", r)} reads "--rate must be …" on the command line and "FILE:LINE: quantize.rate must be …" from a
+     * project file; {@link #ref()} names another setting inside the text.
+     */
+    public SettingError error(String format, Object... args) {
+        return new SettingError(this, ref() + " " + String.format(java.util.Locale.ROOT, format, args), null);
+    }
+
+    /** Throws {@link #error} when {@code condition} is false. */
+    public void check(boolean condition, String format, Object... args) {
+        if (!condition) {
+            throw error(format, args);
+        }
+    }
+
+    /** The setting with this key. */
+    public static java.util.Optional<Setting> ofKey(String key) {
+        for (Setting s : values()) {
+            if (s.key.equals(key)) {
+                return java.util.Optional.of(s);
+            }
+        }
+        return java.util.Optional.empty();
+    }
+}
