@@ -33,7 +33,7 @@ public enum OutputSpan {
                 return s;
             }
         }
-        throw new InputError("--span must be full or nominal: " + text);
+        throw org.rungtone.internal.Setting.SPAN.error("must be full or nominal: %s", text);
     }
 
     /**

@@ -18,6 +18,8 @@ import org.rungtone.calibrate.OutputSpan;
 import org.rungtone.firmware.CNames;
 import org.rungtone.project.Build;
 import org.rungtone.project.BuildPlan;
+import org.rungtone.project.Boards;
+import org.rungtone.quantize.Compensation;
 import org.rungtone.quantize.Dither;
 import org.rungtone.quantize.ErrorFilter;
 import org.rungtone.report.BuildReport;
@@ -63,9 +65,10 @@ public final class BuildCommand implements Callable<Integer> {
     Dither dither;
 
     @Option(names = "--shaping", paramLabel = "none|first|second", defaultValue = "none",
+            converter = Converters.Shaping.class,
             description = "Error-feedback noise shaping: pushes quantization noise towards high frequencies"
                     + " (default ${DEFAULT-VALUE}).")
-    String shaping;
+    ErrorFilter shaping;
 
     @Option(names = "--seed", paramLabel = "<n>", defaultValue = "1",
             description = "Seed for dither; the same inputs and seed give identical outputs"
@@ -97,18 +100,18 @@ public final class BuildCommand implements Callable<Integer> {
     @Mixin
     LadderOptions ladder;
 
-    @Option(names = "--compensation", paramLabel = "on|off", defaultValue = "on",
+    @Option(names = "--compensation", paramLabel = "on|off", defaultValue = "on", converter = Converters.OnOff.class,
             description = "With a ladder or unit profile: quantize onto the board's real levels (on, default) or"
                     + " emit plain binary codes (off).")
-    String compensation;
+    Compensation compensation;
 
     @Mixin
     UnitOptions unit;
 
-    @Option(names = "--span", paramLabel = "full|nominal", defaultValue = "full",
+    @Option(names = "--span", paramLabel = "full|nominal", defaultValue = "full", converter = Converters.Span.class,
             description = "With compensation: map full scale onto everything the board reaches (full, default)"
                     + " or onto the ideal ladder's span, for the same amplitude in volts on every board.")
-    String span;
+    OutputSpan span;
 
     @Mixin
     FirmwareOptions firmware;
@@ -118,8 +121,6 @@ public final class BuildCommand implements Callable<Integer> {
 
     @Option(names = "--json", description = "Print the report as JSON instead of text.")
     boolean json;
-
-    private List<String> boardWarnings = List.of();
 
     @Override
     public Integer call() {
@@ -132,17 +133,17 @@ public final class BuildCommand implements Callable<Integer> {
                 .endsWith(".toml")) {
             return buildProject();
         }
-        OutputSpan outputSpan = OutputSpan.parse(span);
-        BuildPlan plan = plan();
+        Boards.Board board = unit.resolve(bits == null ? 0 : bits, ladder, false);
+        BuildPlan plan = plan(board);
         if (!common.quiet) {
-            for (String w : boardWarnings) {
+            for (String w : board.warnings()) {
                 spec.commandLine().getErr().println("rungtone: warning: " + w);
             }
         }
         ProgressLine line = ProgressLine.forTerminal(spec.commandLine().getErr(), common);
         BuildSummary summary;
         try {
-            summary = new Build(Version.get(), outputSpan, stage -> line.show("building " + plan.symbol() + ": "
+            summary = new Build(Version.get(), span, stage -> line.show("building " + plan.symbol() + ": "
                     + stage + " done")).run(plan);
         } finally {
             line.clear();
@@ -179,21 +180,19 @@ public final class BuildCommand implements Callable<Integer> {
             }
         }
         Project project = ProjectFile.load(source);
-        ProjectBuild.BoardResolver board = ProjectBoards.of(project, unit, ladder);
         ProjectBuild.Overrides o = new ProjectBuild.Overrides(
                 bits == null ? OptionalInt.empty() : OptionalInt.of(bits),
                 rateHz == null ? OptionalDouble.empty() : OptionalDouble.of(rateHz),
                 pr.hasMatchedOption("--dither") ? Optional.of(dither) : Optional.empty(),
-                pr.hasMatchedOption("--shaping") ? Optional.of(ErrorFilter.parse(shaping)) : Optional.empty(),
+                pr.hasMatchedOption("--shaping") ? Optional.of(shaping) : Optional.empty(),
                 pr.hasMatchedOption("--seed") ? Optional.of(seed) : Optional.empty(), Optional.ofNullable(out),
-                pr.hasMatchedOption("--compensation") ? Optional.of(onOff(compensation, "--compensation"))
-                        : Optional.empty(),
-                board, firmware::applyGiven, firmware.wantsPlayer());
+                pr.hasMatchedOption("--compensation") ? Optional.of(compensation) : Optional.empty(),
+                unit.path(), ladder, firmware::applyGiven, firmware.wantsPlayer());
         ProgressLine line = ProgressLine.forTerminal(spec.commandLine().getErr(), common);
         ProjectBuild.Result r;
         try {
-            OutputSpan outputSpan = pr.hasMatchedOption("--span") ? OutputSpan.parse(span)
-                    : project.quantize().span().map(OutputSpan::parse).orElse(OutputSpan.FULL);
+            OutputSpan outputSpan = pr.hasMatchedOption("--span") ? span
+                    : project.quantize().span().orElse(OutputSpan.FULL);
             r = new ProjectBuild(Version.get(), outputSpan, line::show).run(project, o);
         } finally {
             line.clear();
@@ -209,39 +208,19 @@ public final class BuildCommand implements Callable<Integer> {
         return 0;
     }
 
-    BuildPlan plan() {
-        String base = name != null ? name : stem(source);
-        String symbol = CNames.symbol(base);
-        Path outDir = out != null ? out : Path.of("rungtone-out", symbol);
-        UnitOptions.Board board = unit.resolve(bits == null ? 0 : bits, ladder, false);
-        boardWarnings = board.warnings();
-        int effectiveBits = bits != null ? bits : board.bits(8);
-        BuildPlan plan = new BuildPlan(source, channel, symbol, outDir, effectiveBits,
-                rateHz == null ? OptionalDouble.empty() : OptionalDouble.of(rateHz), dither,
-                ErrorFilter.parse(shaping), seed, conditioning.removeDc(), conditioning.trimDbfs(),
-                conditioning.gainDb(), conditioning.normalizeDbfs(), conditioning.fadeIn, conditioning.fadeOut,
-                conditioning.resamplerName(), fullScale, flashAttr);
-        if (board.levels().isPresent()) {
-            plan = plan.withBoard(board.levels().get(), onOff(compensation, "--compensation"));
-        }
-        return plan.withFirmware(firmware.request(), firmware.loopSpan(), firmware.flashBudgetBytes())
-                .withPreview(preview.filter(), preview.previewRateHz)
-                .withPreviewSeconds(preview.previewSeconds());
-    }
-
-    static boolean onOff(String text, String option) {
-        switch (text.toLowerCase(Locale.ROOT)) {
-            case "on":
-            case "true":
-            case "yes":
-                return true;
-            case "off":
-            case "false":
-            case "no":
-                return false;
-            default:
-                throw new org.rungtone.internal.InputError(option + " must be on or off: " + text);
-        }
+    BuildPlan plan(Boards.Board board) {
+        String symbol = CNames.symbol(name != null ? name : stem(source));
+        BuildPlan.Builder plan = BuildPlan.builder(source, symbol, out != null ? out : Path.of("rungtone-out", symbol))
+                .channel(channel).bits(bits != null ? bits : board.bits())
+                .rateHz(rateHz == null ? OptionalDouble.empty() : OptionalDouble.of(rateHz)).dither(dither)
+                .shaping(shaping).seed(seed).removeDc(conditioning.removeDc()).trimDbfs(conditioning.trimDbfs())
+                .gainDb(conditioning.gainDb()).normalizeDbfs(conditioning.normalizeDbfs())
+                .fades(conditioning.fadeIn, conditioning.fadeOut).resampler(conditioning.resampler())
+                .fullScaleVolts(fullScale).flashQualifier(flashAttr)
+                .player(firmware.request()).loop(firmware.loopSpan()).flashBudgetBytes(firmware.flashBudgetBytes())
+                .preview(preview.filter(), preview.previewRateHz).previewSeconds(preview.previewSeconds());
+        board.levels().ifPresent(levels -> plan.board(levels, compensation));
+        return plan.build();
     }
 
     static String stem(Path p) {

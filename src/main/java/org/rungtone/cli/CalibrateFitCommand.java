@@ -93,7 +93,7 @@ public final class CalibrateFitCommand implements Callable<Integer> {
             throw new InputError("--resolution must be a positive voltage below 10 V, e.g. 1mV: " + resolution);
         }
         AtomicFiles.checkFolderUsable(out);
-        Optional<LadderSpec> ladderSpec = ladder.given() ? Optional.of(ladder.toSpec(bits)) : Optional.empty();
+        Optional<LadderSpec> ladderSpec = ladder.given() ? Optional.of(ladder.spec(bits)) : Optional.empty();
         int bitsOrZero = bits != 0 ? bits : ladderSpec.map(LadderSpec::bits).orElse(0);
         Measurements m = MeasurementCsv.read(measurements, bitsOrZero);
         BoardFit.Settings settings = new BoardFit.Settings(resolution == null ? 0 : resolution,

@@ -6,6 +6,7 @@ import java.util.Locale;
 import java.util.OptionalDouble;
 import org.rungtone.condition.Conditioning;
 import org.rungtone.condition.Resampler;
+import org.rungtone.condition.ResamplerKind;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Option;
 
@@ -47,9 +48,10 @@ public final class ConditioningOptions {
     double fadeOut;
 
     @Option(names = "--resampler", paramLabel = "kaiser|tarsos", defaultValue = "kaiser",
+            converter = Converters.Resampler.class,
             description = "kaiser: polyphase filter with its stopband below the target's quantization noise"
                     + " (default); tarsos: TarsosDSP's resampler, about 70 dB stopband.")
-    String resampler;
+    ResamplerKind resampler;
 
     /** True unless --keep-dc. */
     boolean removeDc() {
@@ -75,9 +77,9 @@ public final class ConditioningOptions {
         return trimDbfs == null ? OptionalDouble.empty() : OptionalDouble.of(trimDbfs);
     }
 
-    /** The --resampler name in lower case, as written (checked where it is used). */
-    String resamplerName() {
-        return resampler.toLowerCase(Locale.ROOT);
+    /** The --resampler design. */
+    ResamplerKind resampler() {
+        return resampler;
     }
 
     /**
@@ -93,10 +95,9 @@ public final class ConditioningOptions {
      * The resampler for targets of up to {@code maxBits} bits: the Kaiser filter's stopband sits below
      * their quantization noise.
      *
-     * @throws org.rungtone.internal.InputError when --resampler names neither kaiser nor tarsos
      */
     Resampler resamplerFor(int maxBits) {
-        return Resampler.named(resamplerName(), maxBits);
+        return resampler.create(maxBits);
     }
 
     /** The settings in words, for reports: "DC removed, normalized to -1.0 dBFS, trim below -50.0 dBFS". */

@@ -1,6 +1,11 @@
 package org.rungtone.cli;
 
+import org.rungtone.calibrate.OutputSpan;
+import org.rungtone.condition.ResamplerKind;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.SettingError;
+import org.rungtone.quantize.Compensation;
+import org.rungtone.quantize.ErrorFilter;
 import org.rungtone.internal.Units;
 import picocli.CommandLine.ITypeConverter;
 import picocli.CommandLine.TypeConversionException;
@@ -71,6 +76,47 @@ final class Converters {
             } catch (InputError e) {
                 throw new TypeConversionException("'" + value + "' is not a byte count (e.g. 32000, 32k)");
             }
+        }
+    }
+
+    /** A choice read by its type's own parser; an unknown word is a usage error naming the choices. */
+    private static <T> T choice(String value, java.util.function.Function<String, T> parse) {
+        try {
+            return parse.apply(value);
+        } catch (SettingError e) {
+            throw new TypeConversionException(e.detail(OptionNames::of));
+        }
+    }
+
+    /** Resampler design: kaiser, tarsos. */
+    static final class Resampler implements ITypeConverter<ResamplerKind> {
+        @Override
+        public ResamplerKind convert(String value) {
+            return choice(value, ResamplerKind::parse);
+        }
+    }
+
+    /** Noise shaping: none, first, second. */
+    static final class Shaping implements ITypeConverter<ErrorFilter> {
+        @Override
+        public ErrorFilter convert(String value) {
+            return choice(value, ErrorFilter::parse);
+        }
+    }
+
+    /** Output span: full, nominal. */
+    static final class Span implements ITypeConverter<OutputSpan> {
+        @Override
+        public OutputSpan convert(String value) {
+            return choice(value, OutputSpan::parse);
+        }
+    }
+
+    /** Compensation: on, off. */
+    static final class OnOff implements ITypeConverter<Compensation> {
+        @Override
+        public Compensation convert(String value) {
+            return choice(value, Compensation::parse);
         }
     }
 }

@@ -57,7 +57,7 @@ public final class DemoCommand implements Callable<Integer> {
         }
         Project project = ProjectFile.load(scenario.resolve("greenhouse.toml"));
         ProjectBuild.Result r = new ProjectBuild(Version.get()).run(project,
-                ProjectBuild.Overrides.none(ProjectBoards.of(project, null, null)));
+                ProjectBuild.Overrides.none());
         PrintWriter w = spec.commandLine().getOut();
         if (!common.quiet) {
             w.print(ProjectReport.text(r.report()));

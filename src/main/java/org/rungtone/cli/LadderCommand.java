@@ -28,6 +28,7 @@ import org.rungtone.ladder.Part;
 import org.rungtone.ladder.PinCurrent;
 import org.rungtone.ladder.Spread;
 import org.rungtone.ladder.Stats;
+import org.rungtone.project.Boards;
 import org.rungtone.report.Json;
 import org.rungtone.report.Plots;
 import picocli.CommandLine.Command;
@@ -118,7 +119,7 @@ public final class LadderCommand implements Callable<Integer> {
             throw new InputError("--monte-carlo: need 1.." + MAX_BOARDS + " boards, got " + boards);
         }
         AtomicFiles.checkFolderUsable(out);
-        UnitOptions.Board board = unit.resolve(bits, ladder, true);
+        Boards.Board board = unit.resolve(bits, ladder, true);
         LadderSpec ladderSpec = board.spec().orElseThrow();
         List<String> pins = pins(ladderSpec.bits());
         LadderAnalysis analysis = LadderAnalysis.of(ladderSpec, limit);

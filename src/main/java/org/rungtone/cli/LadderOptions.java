@@ -9,11 +9,11 @@ import java.util.Optional;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.Units;
 import org.rungtone.ladder.ESeries;
-import org.rungtone.ladder.LadderFile;
+import org.rungtone.ladder.LadderDescription;
 import org.rungtone.ladder.LadderSpec;
 import org.rungtone.ladder.LadderSpecError;
+import org.rungtone.ladder.LadderTable;
 import org.rungtone.ladder.Topology;
-import org.tomlj.TomlTable;
 import picocli.CommandLine.Option;
 
 /**
@@ -21,7 +21,7 @@ import picocli.CommandLine.Option;
  * table) and one option per key of that table, which overrides the file. The bit depth is the core option
  * {@code --bits} of each command, passed in. Shared by every command that models a ladder.
  */
-public final class LadderOptions {
+public final class LadderOptions implements LadderDescription {
     @Option(names = "--ladder", paramLabel = "FILE",
             description = "Read the ladder from the [ladder] table of this TOML file; the options below"
                     + " override its keys.")
@@ -80,29 +80,55 @@ public final class LadderOptions {
     String outMax;
 
     /** True when a ladder file or any ladder option was given. */
+    @Override
     public boolean given() {
         return ladderFile != null || !overrides().isEmpty();
     }
 
+    /** True when the ladder file or options state the bit depth (bits, or a per-bit resistor list). */
+    @Override
+    public boolean statesBits() {
+        return resistors != null || ladderFile != null && LadderTable.read(ladderFile).statesBits();
+    }
+
     /** The ladder described by the file and options, defaults filling the rest; bits 0 keeps the file's. */
-    public LadderSpec toSpec(int bitsOrZero) {
-        return toSpec(null, null, bitsOrZero);
+    @Override
+    public LadderSpec spec(int bitsOrZero) {
+        return spec(Optional.empty(), bitsOrZero);
+    }
+
+    /** The options on top of a project's {@code [ladder]} table, which {@code --ladder FILE} replaces. */
+    @Override
+    public LadderDescription over(LadderTable base) {
+        LadderOptions self = this;
+        return new LadderDescription() {
+            @Override
+            public boolean given() {
+                return true;
+            }
+
+            @Override
+            public boolean statesBits() {
+                return self.resistors != null || (self.ladderFile != null ? LadderTable.read(self.ladderFile)
+                        : base).statesBits();
+            }
+
+            @Override
+            public LadderSpec spec(int bitsOrZero) {
+                return self.spec(Optional.of(base), bitsOrZero);
+            }
+        };
     }
 
     /**
-     * The ladder described by a project file's {@code [ladder]} table (may be null), replaced by
-     * {@code --ladder FILE} when given, with the command-line options on top.
+     * The ladder described by a project's table (when given), replaced by {@code --ladder FILE} when given,
+     * with the command-line options on top.
      *
      * @throws InputError naming the option, or the file and line, at fault
      */
-    public LadderSpec toSpec(TomlTable projectTable, Path projectFile, int bitsOrZero) {
-        TomlTable table = projectTable;
-        Path file = projectFile;
-        if (ladderFile != null) {
-            table = LadderFile.readTable(ladderFile);
-            file = ladderFile;
-        }
-        LadderSpec.Builder b = table == null ? LadderSpec.builder() : LadderFile.read(table, file);
+    private LadderSpec spec(Optional<LadderTable> projectTable, int bitsOrZero) {
+        Optional<LadderTable> table = ladderFile != null ? Optional.of(LadderTable.read(ladderFile)) : projectTable;
+        LadderSpec.Builder b = table.map(LadderTable::builder).orElseGet(LadderSpec::builder);
         Map<String, String> cli = overrides();
         applyOverrides(b);
         if (bitsOrZero != 0) {
@@ -119,16 +145,11 @@ public final class LadderOptions {
                 throw new InputError(cli.get(e.key()) + ": " + e.detail(), e);
             }
             String hint = bitsFromCli && e.key().equals("resistors") ? " (bits from --bits)" : "";
-            if (table != null) {
-                throw new InputError(LadderFile.where(table, file, e.key()) + ": " + e.detail() + hint, e);
+            if (table.isPresent()) {
+                throw new InputError(table.get().where(e.key()) + ": " + e.detail() + hint, e);
             }
             throw new InputError(e.getMessage() + hint, e);
         }
-    }
-
-    /** The described ladder, or empty when neither a file nor any ladder option was given. */
-    public Optional<LadderSpec> specIfGiven(int bitsOrZero) {
-        return given() ? Optional.of(toSpec(bitsOrZero)) : Optional.empty();
     }
 
     /** Ladder-file key to option name, for the options given. */

@@ -30,7 +30,7 @@ public final class PlanOptions {
 
     /** The described ladder. */
     LadderSpec spec() {
-        return ladder.toSpec(bits);
+        return ladder.spec(bits);
     }
 
     /** The codes to measure on a ladder with these modelled levels. */

@@ -253,7 +253,7 @@ public final class SurveyCommand implements Callable<Integer> {
         if (!ladder.given()) {
             return b -> LevelTable.ideal(b, IDEAL_FULL_SCALE_VOLTS);
         }
-        LadderSpec base = ladder.toSpec(0);
+        LadderSpec base = ladder.spec(0);
         return b -> {
             if (b != base.bits() && !base.resistors().isEmpty()) {
                 throw new InputError("the ladder lists " + base.resistors().size() + " resistors, so it can only"

@@ -21,18 +21,6 @@ public interface Resampler {
         return resample(source.read(from, to), targetRateHz);
     }
 
-    /**
-     * The resampler named {@code kaiser} (ours, stopband from the deepest bit depth {@code maxBits}) or
-     * {@code tarsos} (TarsosDSP's).
-     *
-     * @throws org.rungtone.internal.InputError for any other name
-     */
-    static Resampler named(String name, int maxBits) {
-        org.rungtone.internal.Checks.checkInput(name.equals("kaiser") || name.equals("tarsos"),
-                "--resampler must be kaiser or tarsos: %s", name);
-        return name.equals("tarsos") ? new TarsosResampler() : KaiserResampler.forBits(maxBits);
-    }
-
     /** A short name for reports. */
     String name();
 

@@ -83,6 +83,10 @@ public enum Setting {
     DDS_PHASE_BITS("target.dds_phase_bits"),
     /** The user's own template folder. */
     TEMPLATES("target.templates"),
+    /** The bit depths a survey tries. */
+    BITS_LIST("survey.bits_list"),
+    /** The sample rates a survey tries. */
+    RATES("survey.rates"),
     /** The sweep program's step button. */
     BUTTON("sweep.button"),
     /** The sweep program's hold time per code. */
@@ -111,6 +115,14 @@ public enum Setting {
      */
     public SettingError error(String format, Object... args) {
         return new SettingError(this, ref() + " " + String.format(java.util.Locale.ROOT, format, args), null);
+    }
+
+    /**
+     * An error about this setting whose text is free: {@code format} names settings through their
+     * {@link #ref()} place-holders, this one included.
+     */
+    public SettingError problem(String format, Object... args) {
+        return new SettingError(this, String.format(java.util.Locale.ROOT, format, args), null);
     }
 
     /** Throws {@link #error} when {@code condition} is false. */

@@ -38,6 +38,16 @@ public final class SettingError extends InputError {
         return oneLine(render(template, nameOf));
     }
 
+    /**
+     * The message without its leading setting name, for a reader that names the setting itself
+     * ({@code FILE:LINE: quantize.rate: must be ...}); other names rendered by {@code nameOf}.
+     */
+    public String detail(Function<Setting, String> nameOf) {
+        String lead = setting.ref() + " ";
+        String body = template.startsWith(lead) ? template.substring(lead.length()) : template;
+        return oneLine(render(body, nameOf));
+    }
+
     /** The same error about another setting (a value typed for one option checked under another's rule). */
     public SettingError about(Setting other) {
         return new SettingError(other, template.replace(setting.ref(), other.ref()), getCause());

@@ -130,16 +130,16 @@ public final class Build {
         long flash;
         // Every check that can refuse the build runs before the first file is written.
         FirmwareEmitter.Rendered firmware = null;
-        if (plan.firmware().isPresent()) {
-            FirmwareRequest.Builder fb = plan.firmware().get().toBuilder().name(plan.symbol())
+        if (plan.firmware().player().isPresent()) {
+            FirmwareRequest.Builder fb = plan.firmware().player().get().toBuilder().name(plan.symbol())
                     .toolVersion(toolVersion).settings(r.settings());
             fb.sound(clip(plan.symbol(), r));
             firmware = FirmwareEmitter.render(fb.build());
             flash = firmware.result().flashBytes();
         } else {
             flash = arrayBytes(r);
-            if (plan.flashBudgetBytes() > 0) {
-                FlashBudget.check(flash, plan.flashBudgetBytes(), FlashBudget.alternatives(r.emitted().length(),
+            if (plan.firmware().flashBudgetBytes() > 0) {
+                FlashBudget.check(flash, plan.firmware().flashBudgetBytes(), FlashBudget.alternatives(r.emitted().length(),
                         r.rateHz(), plan.bits(), SampleStorage.UNPACKED, 0));
             }
         }
@@ -183,15 +183,15 @@ public final class Build {
         AtomicFiles.writeString(txt, BuildReport.text(summary));
         Json.write(json, BuildReport.json(summary));
         HtmlReport.write(html, new HtmlReport.Page(plan.symbol(), toolVersion, List.of(), List.of(summary),
-                List.of(), flash, plan.flashBudgetBytes() > 0 ? OptionalLong.of(plan.flashBudgetBytes())
+                List.of(), flash, plan.firmware().flashBudgetBytes() > 0 ? OptionalLong.of(plan.firmware().flashBudgetBytes())
                         : OptionalLong.empty(), List.of(), Optional.empty()));
         return summary;
     }
 
     /** The firmware clip of a rendered sound, with its loop points. */
     public static SoundClip clip(String name, Rendered r) {
-        if (r.plan().loop().isPresent()) {
-            int[] lp = r.plan().loop().get().samples(r.rateHz(), r.emitted().length());
+        if (r.plan().firmware().loop().isPresent()) {
+            int[] lp = r.plan().firmware().loop().get().samples(r.rateHz(), r.emitted().length());
             return new SoundClip(name, r.emitted(), lp[0], lp[1]);
         }
         return SoundClip.of(name, r.emitted());
@@ -205,19 +205,19 @@ public final class Build {
     /** Emits the plain sample array of a rendered sound. */
     public List<Path> emitArray(String symbol, Rendered r, Path dir) {
         return new SampleArrayEmitter(Templates.bundled()).emit(new SampleArrayEmitter.Request(symbol,
-                r.emitted(), r.plan().flashQualifier(), toolVersion, r.settings()), dir);
+                r.emitted(), r.plan().firmware().flashQualifier(), toolVersion, r.settings()), dir);
     }
 
     /** The summary of a rendered sound with what emission added. */
     public BuildSummary summary(Rendered r, List<String> firmwareLines, long flash, List<Path> files,
             List<String> warnings, Map<String, Double> stageMillis) {
         BuildPlan plan = r.plan();
-        return new BuildSummary(toolVersion, plan.source(), r.layout(), plan.symbol(), plan.bits(), r.rateHz(),
-                r.emitted().length(), r.emitted().length() / r.rateHz(), plan.dither().label(),
-                plan.shaping().name(), plan.seed(), describe(plan, r.conditioned()), r.conditioned().resampler(),
+        return new BuildSummary(toolVersion, plan.source().file(), r.layout(), plan.symbol(), plan.bits(), r.rateHz(),
+                r.emitted().length(), r.emitted().length() / r.rateHz(), plan.quantize().dither().label(),
+                plan.quantize().shaping().name(), plan.quantize().seed(), describe(plan, r.conditioned()), r.conditioned().resampler(),
                 r.played().origin(), r.clippedSamples(), r.quality(), r.quality().get(r.quality().size() - 1)
                         .label(), r.shapingGainDb(), r.tone(),
-                new BuildSummary.PreviewInfo(plan.filter().describe(), plan.previewRateHz(),
+                new BuildSummary.PreviewInfo(plan.preview().filter().describe(), plan.preview().rateHz(),
                         r.preview().passbandTopHz(), r.preview().zohDroopDb(), r.preview().peak()),
                 firmwareLines, flash, files, warnings, stageMillis);
     }
@@ -254,27 +254,27 @@ public final class Build {
         Conditioner.Conditioned conditioned = prepared.conditioned();
         Signal reference = conditioned.signal();
         if (reference.length() < 2) {
-            throw InputError.inFile(plan.source(), "nothing is left to build after conditioning"
+            throw InputError.inFile(plan.source().file(), "nothing is left to build after conditioning"
                     + " (all trimmed?)");
         }
 
         List<String> warnings = new ArrayList<>(prepared.warnings());
         warnings.addAll(conditioned.warnings());
-        LevelTable ideal = LevelTable.ideal(plan.bits(), plan.fullScaleVolts());
+        LevelTable ideal = LevelTable.ideal(plan.bits(), plan.preview().fullScaleVolts());
         Quantizer.Quantized idealQ = quantizer(ideal, plan).apply(reference);
         Codes emitted = idealQ.codes();
         LevelTable played = ideal;
         long clipped = idealQ.clippedSamples();
         Optional<Codes> compensated = Optional.empty();
         double[] range = {ideal.minVolts(), ideal.maxVolts()};
-        if (plan.board().isPresent()) {
-            LevelTable board = plan.board().get();
+        if (plan.quantize().board().isPresent()) {
+            LevelTable board = plan.quantize().board().get();
             played = board;
             range = new double[] {board.minVolts(), board.maxVolts()};
-            if (plan.compensate()) {
+            if (plan.quantize().compensate()) {
                 range = span.volts(board, ideal);
-                Quantizer.Quantized q = new Quantizer(board, range[0], range[1], plan.dither(), plan.shaping(),
-                        plan.seed()).apply(reference);
+                Quantizer.Quantized q = new Quantizer(board, range[0], range[1], plan.quantize().dither(), plan.quantize().shaping(),
+                        plan.quantize().seed()).apply(reference);
                 compensated = Optional.of(q.codes());
                 emitted = q.codes();
                 clipped = q.clippedSamples();
@@ -288,14 +288,14 @@ public final class Build {
         // The preview is independent of the figures: render it on another core meanwhile.
         final Codes emittedCodes = emitted;
         final LevelTable playedTable = played;
-        int previewCodes = (int) Math.min(emitted.length(), Math.ceil(plan.previewSeconds() * rate));
+        int previewCodes = (int) Math.min(emitted.length(), Math.ceil(plan.preview().seconds() * rate));
         final Codes previewInput = previewCodes == emitted.length() ? emittedCodes : Codes.of(emitted.bits(),
                 rate, Arrays.copyOf(emitted.unsafeCodes(), previewCodes));
         if (previewCodes < emitted.length()) {
             warnings.add(String.format(Locale.ROOT, "preview.wav holds the first %.0f s of %.0f s; use"
                     + " --preview-length all for the whole sound", previewCodes / rate, emitted.length() / rate));
         }
-        AnalogModel model = new AnalogModel(plan.filter(), plan.previewRateHz());
+        AnalogModel model = new AnalogModel(plan.preview().filter(), plan.preview().rateHz());
         CompletableFuture<AnalogModel.Preview> previewJob = CompletableFuture.supplyAsync(
                 () -> model.render(previewInput, playedTable));
         // in-band figures stop where the analog output's passband does: rate/2, or a lower filter cutoff
@@ -303,7 +303,7 @@ public final class Build {
         AudioMetrics metrics = AudioMetrics.of(reference, cutoff);
         List<QualityReport> quality = new ArrayList<>();
         Spectrum errorSpectrum;
-        if (plan.board().isEmpty()) {
+        if (plan.quantize().board().isEmpty()) {
             AudioMetrics.Measured m = metrics.measureWithSpectrum("ideal ladder", idealQ.codes(), ideal);
             quality.add(m.report());
             errorSpectrum = m.errorSpectrum();
@@ -322,8 +322,8 @@ public final class Build {
         }
         QualityReport emittedQuality = quality.get(quality.size() - 1);
         Optional<Double> shapingGain = Optional.empty();
-        if (plan.shaping().order() > 0) {
-            Quantizer flat = new Quantizer(played, range[0], range[1], plan.dither(), ErrorFilter.NONE, plan.seed());
+        if (plan.quantize().shaping().order() > 0) {
+            Quantizer flat = new Quantizer(played, range[0], range[1], plan.quantize().dither(), ErrorFilter.NONE, plan.quantize().seed());
             double flatInBand = metrics.measure("flat", flat.apply(reference).codes(), played).inBandSnrDb();
             shapingGain = Optional.of(emittedQuality.inBandSnrDb() - flatInBand);
         }
@@ -352,10 +352,10 @@ public final class Build {
      * a long clip is never held at its own rate.
      */
     private static Prepared prepare(BuildPlan plan, Stopwatch watch) {
-        try (Sources.Opened opened = Sources.open(plan.source(), plan.channel(),
-                plan.rateHz().orElse(Double.NaN), plan.seed())) {
+        try (Sources.Opened opened = Sources.open(plan.source().file(), plan.source().channel(),
+                plan.conditioning().rateHz().orElse(Double.NaN), plan.quantize().seed())) {
             watch.lap("open");
-            double rate = plan.rateHz().orElse(Double.isNaN(opened.preferredRateHz()) ? BuildPlan.DEFAULT_RATE_HZ
+            double rate = plan.conditioning().rateHz().orElse(Double.isNaN(opened.preferredRateHz()) ? BuildPlan.DEFAULT_RATE_HZ
                     : opened.preferredRateHz());
             Conditioner.Conditioned conditioned;
             if (opened.wavetable()) {
@@ -364,14 +364,13 @@ public final class Build {
                 double[] cycle = new double[opened.samples().length()];
                 opened.samples().read(0, cycle, 0, cycle.length);
                 Signal table = Signal.wrap(cycle, rate);
-                Conditioning c = new Conditioning(plan.removeDc(), java.util.OptionalDouble.empty(), rate,
-                        plan.gainDb(), plan.normalizeDbfs(), 0, 0);
+                ConditioningSettings cs = plan.conditioning();
+                Conditioning c = new Conditioning(cs.removeDc(), java.util.OptionalDouble.empty(), rate, cs.gainDb(),
+                        cs.normalizeDbfs(), 0, 0);
                 conditioned = new Conditioner(KaiserResampler.forBits(plan.bits())).apply(table, c);
             } else {
-                Conditioning conditioning = new Conditioning(plan.removeDc(), plan.trimDbfs(), rate, plan.gainDb(),
-                        plan.normalizeDbfs(), plan.fadeInSeconds(), plan.fadeOutSeconds());
-                conditioned = new Conditioner(Resampler.named(plan.resampler(), plan.bits()))
-                        .apply(opened.samples(), conditioning);
+                conditioned = new Conditioner(plan.conditioning().resampler().create(plan.bits()))
+                        .apply(opened.samples(), plan.conditioning().at(rate));
             }
             watch.lap("condition");
             return new Prepared(opened.layout(), opened.warnings(), conditioned, rate);
@@ -379,21 +378,21 @@ public final class Build {
     }
 
     private static Quantizer quantizer(LevelTable table, BuildPlan plan) {
-        return new Quantizer(table, table.minVolts(), table.maxVolts(), plan.dither(), plan.shaping(), plan.seed());
+        return new Quantizer(table, table.minVolts(), table.maxVolts(), plan.quantize().dither(), plan.quantize().shaping(), plan.quantize().seed());
     }
 
     private List<String> settings(BuildPlan plan, String layout, Conditioner.Conditioned c,
             LevelTable played, double rate, double[] range) {
         return List.of(
                 "name: " + plan.symbol(),
-                "source: " + plan.source().getFileName() + " (" + layout + ")",
+                "source: " + plan.source().file().getFileName() + " (" + layout + ")",
                 "conditioning: " + describe(plan, c),
                 "target: " + plan.bits() + " bits at " + Units.format(rate, "Hz"),
-                "dither: " + plan.dither().label() + ", shaping: " + plan.shaping().name() + ", seed: "
-                        + plan.seed(),
+                "dither: " + plan.quantize().dither().label() + ", shaping: " + plan.quantize().shaping().name() + ", seed: "
+                        + plan.quantize().seed(),
                 "levels: " + played.origin() + ", " + Units.format(played.minVolts(), "V") + " .. "
                         + Units.format(played.maxVolts(), "V")
-                        + (plan.board().isPresent() ? (plan.compensate() ? ", compensated" + spanNote(range)
+                        + (plan.quantize().board().isPresent() ? (plan.quantize().compensate() ? ", compensated" + spanNote(range)
                                 : ", plain codes") : ""));
     }
 
@@ -458,20 +457,20 @@ public final class Build {
 
     private static String describe(BuildPlan plan, Conditioner.Conditioned c) {
         List<String> parts = new ArrayList<>();
-        parts.add(plan.removeDc() ? "DC removed" : "DC kept");
+        parts.add(plan.conditioning().removeDc() ? "DC removed" : "DC kept");
         if (c.trimmedStartSeconds() > 0 || c.trimmedEndSeconds() > 0) {
             parts.add(String.format(Locale.ROOT, "trimmed %.0f ms + %.0f ms", 1000 * c.trimmedStartSeconds(),
                     1000 * c.trimmedEndSeconds()));
         }
-        if (plan.normalizeDbfs().isPresent()) {
+        if (plan.conditioning().normalizeDbfs().isPresent()) {
             parts.add(String.format(Locale.ROOT, "normalized to %.1f dBFS (%+.1f dB)",
-                    plan.normalizeDbfs().getAsDouble(), c.gainDb()));
-        } else if (plan.gainDb().isPresent()) {
+                    plan.conditioning().normalizeDbfs().getAsDouble(), c.gainDb()));
+        } else if (plan.conditioning().gainDb().isPresent()) {
             parts.add(String.format(Locale.ROOT, "gain %+.1f dB", c.gainDb()));
         }
-        if (plan.fadeInSeconds() > 0 || plan.fadeOutSeconds() > 0) {
-            parts.add(String.format(Locale.ROOT, "fades %.0f/%.0f ms", 1000 * plan.fadeInSeconds(),
-                    1000 * plan.fadeOutSeconds()));
+        if (plan.conditioning().fadeInSeconds() > 0 || plan.conditioning().fadeOutSeconds() > 0) {
+            parts.add(String.format(Locale.ROOT, "fades %.0f/%.0f ms", 1000 * plan.conditioning().fadeInSeconds(),
+                    1000 * plan.conditioning().fadeOutSeconds()));
         }
         return String.join(", ", parts);
     }

@@ -1,54 +1,32 @@
 package org.rungtone.project;
 
 import java.nio.file.Path;
+import java.util.Objects;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import org.rungtone.analysis.ReconstructionFilter;
-import org.rungtone.condition.Resampler;
+import org.rungtone.condition.ResamplerKind;
 import org.rungtone.firmware.FirmwareRequest;
-import org.rungtone.firmware.FlashBudget;
-import org.rungtone.internal.Checks;
+import org.rungtone.ladder.LadderSpec;
 import org.rungtone.ladder.LevelTable;
+import org.rungtone.quantize.Compensation;
 import org.rungtone.quantize.Dither;
 import org.rungtone.quantize.ErrorFilter;
 
 /**
- * Everything one build of one sound needs, validated once, up front. Immutable.
+ * Everything one build of one sound needs, validated once, up front, in five parts. Immutable; made by
+ * {@link #builder}, which holds every default in one place.
  *
- * @param source the WAV file or .rung script
- * @param channel 0 to mix all channels down, 1..C to pick one
  * @param symbol the C symbol prefix (already sanitized)
  * @param outDir where the outputs go
- * @param bits DAC bit depth 1..16
- * @param rateHz target sample rate; empty means the script's declared rate, else 16 kHz
- * @param dither dither kind
- * @param shaping error-feedback filter
- * @param seed seed of every random process
- * @param removeDc subtract the mean before anything else
- * @param trimDbfs trim leading/trailing audio below this level
- * @param gainDb fixed gain
- * @param normalizeDbfs peak normalization target
- * @param fadeInSeconds fade-in
- * @param fadeOutSeconds fade-out
- * @param resampler "kaiser" (default) or "tarsos"
- * @param fullScaleVolts the ideal DAC's reference voltage, for reports
- * @param flashQualifier attribute that keeps arrays in flash
- * @param board the levels the real board produces (modelled ladder or measured unit profile), if known
- * @param compensate quantize onto the board's real levels (true) or emit plain binary codes (false)
- * @param filter the reconstruction filter after the DAC, for the preview and the in-band figures
- * @param previewRateHz the preview WAV's sample rate (44.1 or 48 kHz)
- * @param firmware the player to emit around the samples (everything but the sounds), or empty for the
- *     sample array alone
- * @param loop loop points of a looped sound
- * @param flashBudgetBytes the most flash the samples may take, 0 for no limit
- * @param previewSeconds the longest preview rendered (the first seconds of the sound); infinite for all
+ * @param source where the sound comes from
+ * @param conditioning how it is conditioned
+ * @param quantize how it becomes codes
+ * @param preview what the preview and the figures model after the DAC
+ * @param firmware what is emitted around the samples
  */
-public record BuildPlan(Path source, int channel, String symbol, Path outDir, int bits, OptionalDouble rateHz,
-        Dither dither, ErrorFilter shaping, long seed, boolean removeDc, OptionalDouble trimDbfs,
-        OptionalDouble gainDb, OptionalDouble normalizeDbfs, double fadeInSeconds, double fadeOutSeconds,
-        String resampler, double fullScaleVolts, String flashQualifier, Optional<LevelTable> board,
-        boolean compensate, ReconstructionFilter filter, double previewRateHz, Optional<FirmwareRequest> firmware,
-        Optional<LoopSpan> loop, long flashBudgetBytes, double previewSeconds) {
+public record BuildPlan(String symbol, Path outDir, SourceSettings source, ConditioningSettings conditioning,
+        QuantizeSettings quantize, PreviewSettings preview, FirmwareSettings firmware) {
 
     /** Longest preview by default: a minute is plenty to listen to; longer sounds are measured whole. */
     public static final double DEFAULT_PREVIEW_SECONDS = 60;
@@ -56,64 +34,200 @@ public record BuildPlan(Path source, int channel, String symbol, Path outDir, in
     /** Default sample rate when neither the user nor a script names one. */
     public static final double DEFAULT_RATE_HZ = 16_000;
 
-    /** Validates the plan. */
+    /** Reference voltage of the ideal ladder when none is given. */
+    public static final double DEFAULT_FULL_SCALE_VOLTS = 5.0;
+
+    /** Checks that every part is there. */
     public BuildPlan {
-        Checks.checkBits(bits);
-        rateHz.ifPresent(r -> Checks.checkInput(Double.isFinite(r) && r >= 1 && r <= 384_000,
-                "--rate must be 1 Hz..384 kHz: %s", r));
-        Checks.checkInput(channel >= 0 && channel <= 8, "--channel must be 0 (mix down) or 1..8: %d", channel);
-        Resampler.named(resampler, bits); // refuses an unknown name while the plan is made
-        Checks.checkInput(Double.isFinite(fullScaleVolts) && fullScaleVolts > 0,
-                "--full-scale must be a positive voltage: %s", fullScaleVolts);
-        board.ifPresent(t -> Checks.checkInput(t.bits() == bits, "the board's level table has %d bits but --bits"
-                + " is %d", t.bits(), bits));
-        Checks.checkInput(previewSeconds > 0, "--preview-length must be positive: %s", previewSeconds);
-        Checks.checkInput(flashBudgetBytes >= 0, "the flash budget (%s) must be positive: %d", FlashBudget.SETTING,
-                flashBudgetBytes);
-        Checks.checkInput(previewRateHz == 44_100 || previewRateHz == 48_000,
-                "--preview-rate must be 44.1k or 48k: %s", previewRateHz);
+        Objects.requireNonNull(symbol, "symbol");
+        Objects.requireNonNull(outDir, "outDir");
+        Objects.requireNonNull(source, "source");
+        Objects.requireNonNull(conditioning, "conditioning");
+        Objects.requireNonNull(quantize, "quantize");
+        Objects.requireNonNull(preview, "preview");
+        Objects.requireNonNull(firmware, "firmware");
     }
 
-    /** A plan for the ideal ladder, no reconstruction filter, preview at 44.1 kHz. */
-    public BuildPlan(Path source, int channel, String symbol, Path outDir, int bits, OptionalDouble rateHz,
-            Dither dither, ErrorFilter shaping, long seed, boolean removeDc, OptionalDouble trimDbfs,
-            OptionalDouble gainDb, OptionalDouble normalizeDbfs, double fadeInSeconds, double fadeOutSeconds,
-            String resampler, double fullScaleVolts, String flashQualifier) {
-        this(source, channel, symbol, outDir, bits, rateHz, dither, shaping, seed, removeDc, trimDbfs, gainDb,
-                normalizeDbfs, fadeInSeconds, fadeOutSeconds, resampler, fullScaleVolts, flashQualifier,
-                Optional.empty(), true, ReconstructionFilter.none(), 44_100, Optional.empty(), Optional.empty(), 0,
-                DEFAULT_PREVIEW_SECONDS);
+    /** A builder for a plan of {@code source} whose outputs, prefixed {@code symbol}, go to {@code outDir}. */
+    public static Builder builder(Path source, String symbol, Path outDir) {
+        return new Builder(source, symbol, outDir);
     }
 
-    /** The same plan on a board with these real levels. */
-    public BuildPlan withBoard(LevelTable levels, boolean compensateOnIt) {
-        return new BuildPlan(source, channel, symbol, outDir, bits, rateHz, dither, shaping, seed, removeDc,
-                trimDbfs, gainDb, normalizeDbfs, fadeInSeconds, fadeOutSeconds, resampler, fullScaleVolts,
-                flashQualifier, Optional.of(levels), compensateOnIt, filter, previewRateHz, firmware, loop,
-                flashBudgetBytes, previewSeconds);
+    /** The bit depth (shorthand for {@code quantize().bits()}). */
+    public int bits() {
+        return quantize.bits();
     }
 
-    /** The same plan with another reconstruction filter and preview rate. */
-    public BuildPlan withPreview(ReconstructionFilter newFilter, double newPreviewRateHz) {
-        return new BuildPlan(source, channel, symbol, outDir, bits, rateHz, dither, shaping, seed, removeDc,
-                trimDbfs, gainDb, normalizeDbfs, fadeInSeconds, fadeOutSeconds, resampler, fullScaleVolts,
-                flashQualifier, board, compensate, newFilter, newPreviewRateHz, firmware, loop, flashBudgetBytes,
-                previewSeconds);
-    }
+    /** Collects the settings of a plan; every default lives here. */
+    public static final class Builder {
+        private final Path source;
+        private final String symbol;
+        private final Path outDir;
+        private int channel;
+        private OptionalDouble rateHz = OptionalDouble.empty();
+        private boolean removeDc = true;
+        private OptionalDouble trimDbfs = OptionalDouble.empty();
+        private OptionalDouble gainDb = OptionalDouble.empty();
+        private OptionalDouble normalizeDbfs = OptionalDouble.empty();
+        private double fadeInSeconds;
+        private double fadeOutSeconds;
+        private ResamplerKind resampler = ResamplerKind.KAISER;
+        private int bits = LadderSpec.DEFAULT_BITS;
+        private Dither dither = Dither.TPDF;
+        private ErrorFilter shaping = ErrorFilter.NONE;
+        private long seed = 1;
+        private Optional<LevelTable> board = Optional.empty();
+        private Compensation compensation = Compensation.ON;
+        private ReconstructionFilter filter = ReconstructionFilter.none();
+        private double previewRateHz = 44_100;
+        private double previewSeconds = DEFAULT_PREVIEW_SECONDS;
+        private double fullScaleVolts = DEFAULT_FULL_SCALE_VOLTS;
+        private Optional<FirmwareRequest> player = Optional.empty();
+        private Optional<LoopSpan> loop = Optional.empty();
+        private long flashBudgetBytes;
+        private String flashQualifier = "";
 
-    /** The same plan with a player, loop points and flash budget. */
-    public BuildPlan withFirmware(Optional<FirmwareRequest> player, Optional<LoopSpan> loopPoints,
-            long budgetBytes) {
-        return new BuildPlan(source, channel, symbol, outDir, bits, rateHz, dither, shaping, seed, removeDc,
-                trimDbfs, gainDb, normalizeDbfs, fadeInSeconds, fadeOutSeconds, resampler, fullScaleVolts,
-                flashQualifier, board, compensate, filter, previewRateHz, player, loopPoints, budgetBytes,
-                previewSeconds);
-    }
+        private Builder(Path source, String symbol, Path outDir) {
+            this.source = source;
+            this.symbol = symbol;
+            this.outDir = outDir;
+        }
 
-    /** The same plan with another preview length limit (infinite: the whole sound). */
-    public BuildPlan withPreviewSeconds(double seconds) {
-        return new BuildPlan(source, channel, symbol, outDir, bits, rateHz, dither, shaping, seed, removeDc,
-                trimDbfs, gainDb, normalizeDbfs, fadeInSeconds, fadeOutSeconds, resampler, fullScaleVolts,
-                flashQualifier, board, compensate, filter, previewRateHz, firmware, loop, flashBudgetBytes, seconds);
+        /** 0 mixes all channels down (the default), 1..8 picks one. */
+        public Builder channel(int value) {
+            channel = value;
+            return this;
+        }
+
+        /** Target sample rate; empty (the default) means the script's own, else 16 kHz. */
+        public Builder rateHz(OptionalDouble value) {
+            rateHz = value;
+            return this;
+        }
+
+        /** Subtract the mean first (default true). */
+        public Builder removeDc(boolean value) {
+            removeDc = value;
+            return this;
+        }
+
+        /** Trim leading and trailing audio below this level (default: no trimming). */
+        public Builder trimDbfs(OptionalDouble value) {
+            trimDbfs = value;
+            return this;
+        }
+
+        /** Fixed gain (default none). */
+        public Builder gainDb(OptionalDouble value) {
+            gainDb = value;
+            return this;
+        }
+
+        /** Peak normalization target (default none). */
+        public Builder normalizeDbfs(OptionalDouble value) {
+            normalizeDbfs = value;
+            return this;
+        }
+
+        /** Fade-in and fade-out lengths (default 0). */
+        public Builder fades(double inSeconds, double outSeconds) {
+            fadeInSeconds = inSeconds;
+            fadeOutSeconds = outSeconds;
+            return this;
+        }
+
+        /** The resampler design (default kaiser). */
+        public Builder resampler(ResamplerKind value) {
+            resampler = value;
+            return this;
+        }
+
+        /** DAC bit depth (default {@link LadderSpec#DEFAULT_BITS}). */
+        public Builder bits(int value) {
+            bits = value;
+            return this;
+        }
+
+        /** Dither kind (default TPDF). */
+        public Builder dither(Dither value) {
+            dither = value;
+            return this;
+        }
+
+        /** Error-feedback filter (default none). */
+        public Builder shaping(ErrorFilter value) {
+            shaping = value;
+            return this;
+        }
+
+        /** Seed of every random process (default 1). */
+        public Builder seed(long value) {
+            seed = value;
+            return this;
+        }
+
+        /** The board's real levels and whether to quantize onto them (default: the ideal ladder). */
+        public Builder board(LevelTable levels, Compensation value) {
+            board = Optional.of(levels);
+            compensation = value;
+            return this;
+        }
+
+        /** Reconstruction filter and preview WAV rate (default: none at 44.1 kHz). */
+        public Builder preview(ReconstructionFilter value, double rateHzValue) {
+            filter = value;
+            previewRateHz = rateHzValue;
+            return this;
+        }
+
+        /** Longest preview (default a minute); infinite for the whole sound. */
+        public Builder previewSeconds(double value) {
+            previewSeconds = value;
+            return this;
+        }
+
+        /** Reference voltage of the ideal ladder (default 5 V). */
+        public Builder fullScaleVolts(double value) {
+            fullScaleVolts = value;
+            return this;
+        }
+
+        /** The player around the samples (default: the sample array alone). */
+        public Builder player(Optional<FirmwareRequest> value) {
+            player = value;
+            return this;
+        }
+
+        /** Loop points (default none). */
+        public Builder loop(Optional<LoopSpan> value) {
+            loop = value;
+            return this;
+        }
+
+        /** Flash budget in bytes, 0 (the default) for none. */
+        public Builder flashBudgetBytes(long value) {
+            flashBudgetBytes = value;
+            return this;
+        }
+
+        /** Attribute that keeps a bare sample array in flash (default none). */
+        public Builder flashQualifier(String value) {
+            flashQualifier = value;
+            return this;
+        }
+
+        /**
+         * The validated plan.
+         *
+         * @throws org.rungtone.internal.SettingError naming the setting at fault
+         */
+        public BuildPlan build() {
+            return new BuildPlan(symbol, outDir, new SourceSettings(source, channel),
+                    new ConditioningSettings(rateHz, removeDc, trimDbfs, gainDb, normalizeDbfs, fadeInSeconds,
+                            fadeOutSeconds, resampler),
+                    new QuantizeSettings(bits, dither, shaping, seed, board, compensation),
+                    new PreviewSettings(filter, previewRateHz, previewSeconds, fullScaleVolts),
+                    new FirmwareSettings(player, loop, flashBudgetBytes, flashQualifier));
+        }
     }
 }

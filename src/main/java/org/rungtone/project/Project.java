@@ -5,7 +5,16 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
-import org.tomlj.TomlTable;
+import org.rungtone.calibrate.OutputSpan;
+import org.rungtone.condition.ResamplerKind;
+import org.rungtone.firmware.PinStrategy;
+import org.rungtone.firmware.PlaybackEngine;
+import org.rungtone.firmware.SampleStorage;
+import org.rungtone.firmware.TimerKind;
+import org.rungtone.ladder.LadderTable;
+import org.rungtone.quantize.Compensation;
+import org.rungtone.quantize.Dither;
+import org.rungtone.quantize.ErrorFilter;
 
 /**
  * A project file as read: every value the user wrote, with nothing defaulted yet, so that command-line
@@ -25,7 +34,7 @@ import org.tomlj.TomlTable;
  * @param sounds the sounds, in file order
  */
 public record Project(Path file, String name, Optional<Path> outDir, Optional<Long> seed, Optional<Path> unitProfile,
-        Optional<Boolean> compensation, Target target, Optional<TomlTable> ladder, Quantize quantize,
+        Optional<Compensation> compensation, Target target, Optional<LadderTable> ladder, Quantize quantize,
         Preview preview, List<Sound> sounds) {
 
     /** Copies the sound list. */
@@ -51,9 +60,9 @@ public record Project(Path file, String name, Optional<Path> outDir, Optional<Lo
      * @param ddsPhaseBits DDS accumulator width
      * @param lines line of each key, for conflict messages
      */
-    public record Target(Optional<String> family, OptionalDouble cpuClockHz, Optional<String> timer,
-            Optional<String> pins, Optional<Long> portWidth, Optional<String> pinStrategy, Optional<String> storage,
-            Optional<String> engine, OptionalDouble rateTolerancePpm, OptionalDouble flashBudgetBytes,
+    public record Target(Optional<String> family, OptionalDouble cpuClockHz, Optional<TimerKind> timer,
+            Optional<String> pins, Optional<Long> portWidth, Optional<PinStrategy> pinStrategy,
+            Optional<SampleStorage> storage, Optional<PlaybackEngine> engine, OptionalDouble rateTolerancePpm, OptionalDouble flashBudgetBytes,
             Optional<String> flashAttr, OptionalDouble ddsFrequencyHz, Optional<Long> ddsPhaseBits,
             Map<String, Integer> lines) {
     }
@@ -68,8 +77,8 @@ public record Project(Path file, String name, Optional<Path> outDir, Optional<Lo
      * @param span full or nominal
      * @param lines line of each key
      */
-    public record Quantize(Optional<Long> bits, OptionalDouble rateHz, Optional<String> dither,
-            Optional<String> shaping, Optional<String> span, Map<String, Integer> lines) {
+    public record Quantize(Optional<Long> bits, OptionalDouble rateHz, Optional<Dither> dither,
+            Optional<ErrorFilter> shaping, Optional<OutputSpan> span, Map<String, Integer> lines) {
     }
 
     /**
@@ -102,6 +111,19 @@ public record Project(Path file, String name, Optional<Path> outDir, Optional<Lo
     public record Sound(int index, int line, String name, Path source, OptionalDouble rateHz,
             Optional<LoopSpan> loop, Optional<Long> channel, OptionalDouble gainDb, OptionalDouble normalizeDbfs,
             OptionalDouble trimDbfs, OptionalDouble fadeInSeconds, OptionalDouble fadeOutSeconds,
-            Optional<Boolean> keepDc, Optional<String> resampler) {
+            Optional<Boolean> keepDc, Optional<ResamplerKind> resampler) {
+    }
+
+    /**
+     * "FILE:LINE" of the key that holds {@code s} ({@code [quantize] rate}, {@code [target] pins}), or "FILE"
+     * when the file does not hold it (a default) or its line is not kept.
+     */
+    public String where(org.rungtone.internal.Setting s) {
+        String section = s.key().substring(0, s.key().indexOf('.'));
+        String key = s.key().substring(section.length() + 1);
+        Map<String, Integer> lines = section.equals("quantize") ? quantize.lines()
+                : section.equals("target") ? target.lines() : Map.of();
+        Integer line = lines.get(key);
+        return file + (line != null && line > 0 ? ":" + line : "");
     }
 }

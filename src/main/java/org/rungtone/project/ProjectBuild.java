@@ -25,8 +25,14 @@ import org.rungtone.firmware.SampleStorage;
 import org.rungtone.firmware.TimerKind;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.Setting;
+import org.rungtone.internal.SettingError;
 import org.rungtone.internal.Units;
+import org.rungtone.ladder.LadderDescription;
+import org.rungtone.ladder.LadderSpec;
 import org.rungtone.ladder.LevelTable;
+import org.rungtone.condition.ResamplerKind;
+import org.rungtone.quantize.Compensation;
 import org.rungtone.quantize.Dither;
 import org.rungtone.quantize.ErrorFilter;
 import org.rungtone.report.BuildSummary;
@@ -62,19 +68,6 @@ public final class ProjectBuild {
         this.progress = progress;
     }
 
-    /** Resolves the board's levels from the project's [ladder] table (or none) with command-line overrides. */
-    @FunctionalInterface
-    public interface BoardResolver {
-        /**
-         * The board's level table and its description, or empty for the ideal ladder.
-         *
-         * @param ladderTable the project's [ladder] table, or null
-         * @param file the project file
-         * @param bitsOrZero bits fixed by the command line or [quantize], 0 when open
-         */
-        Optional<LevelTable> resolve(TomlTable ladderTable, Path file, int bitsOrZero);
-    }
-
     /**
      * What the command line overrides. Empty values leave the file's settings alone.
      *
@@ -85,17 +78,47 @@ public final class ProjectBuild {
      * @param seed --seed
      * @param outDir --out
      * @param compensation --compensation
-     * @param board the board resolver (ladder options, unit profile)
+     * @param unit --unit, a measured unit profile that replaces the project's board
+     * @param ladder the command line's ladder description, on top of the project's [ladder] table
      * @param firmware applies the firmware options given on the command line to a request builder
      * @param wantsPlayer the command line asked for a player
      */
     public record Overrides(OptionalInt bits, OptionalDouble rateHz, Optional<Dither> dither,
-            Optional<ErrorFilter> shaping, Optional<Long> seed, Optional<Path> outDir, Optional<Boolean> compensation,
-            BoardResolver board, UnaryOperator<FirmwareRequest.Builder> firmware, boolean wantsPlayer) {
-        /** No overrides, the project's ladder as written. */
-        public static Overrides none(BoardResolver board) {
+            Optional<ErrorFilter> shaping, Optional<Long> seed, Optional<Path> outDir,
+            Optional<Compensation> compensation, Optional<Path> unit, LadderDescription ladder,
+            UnaryOperator<FirmwareRequest.Builder> firmware, boolean wantsPlayer) {
+        /**
+         * True when the command line may have given {@code s}: then an error about it names the option.
+         * Firmware options are not told apart: with any of them, every {@code target} setting counts.
+         */
+        boolean gives(Setting s) {
+            switch (s) {
+                case BITS:
+                    return bits.isPresent();
+                case RATE:
+                    return rateHz.isPresent();
+                case DITHER:
+                    return dither.isPresent();
+                case SHAPING:
+                    return shaping.isPresent();
+                case SEED:
+                    return seed.isPresent();
+                case OUT:
+                    return outDir.isPresent();
+                case COMPENSATION:
+                    return compensation.isPresent();
+                case UNIT:
+                    return unit.isPresent();
+                default:
+                    return s.key().startsWith("target.") && wantsPlayer;
+            }
+        }
+
+        /** No overrides: the project as written. */
+        public static Overrides none() {
             return new Overrides(OptionalInt.empty(), OptionalDouble.empty(), Optional.empty(), Optional.empty(),
-                    Optional.empty(), Optional.empty(), Optional.empty(), board, b -> b, false);
+                    Optional.empty(), Optional.empty(), Optional.empty(), Optional.empty(), LadderDescription.none(),
+                    b -> b, false);
         }
     }
 
@@ -121,6 +144,18 @@ public final class ProjectBuild {
      * @throws InputError naming the file, line and key, or the option, for anything the user can fix
      */
     public Result run(Project project, Overrides o) {
+        try {
+            return build(project, o);
+        } catch (SettingError e) {
+            if (o.gives(e.setting())) {
+                throw e; // the command line names its option
+            }
+            throw new InputError(project.where(e.setting()) + ": " + e.setting().key() + ": "
+                    + e.detail(Setting::key), e);
+        }
+    }
+
+    private Result build(Project project, Overrides o) {
         Map<String, String> settings = new LinkedHashMap<>();
         Path outDir = o.outDir().or(project::outDir)
                 .orElse(project.file().toAbsolutePath().getParent().resolve("rungtone-out").resolve(project.name()))
@@ -129,24 +164,23 @@ public final class ProjectBuild {
         AtomicFiles.checkFolderUsable(outDir);
         Project.Quantize q = project.quantize();
         int fixedBits = o.bits().isPresent() ? o.bits().getAsInt() : q.bits().map(Long::intValue).orElse(0);
-        Optional<LevelTable> board = o.board().resolve(project.ladder().orElse(null), project.file(), fixedBits);
-        int bits = fixedBits != 0 ? fixedBits : board.map(LevelTable::bits).orElse(8);
+        Optional<LevelTable> board = Boards.ofProject(project, o.unit(), o.ladder(), fixedBits);
+        int bits = fixedBits != 0 ? fixedBits : board.map(LevelTable::bits).orElse(LadderSpec.DEFAULT_BITS);
         settings.put("bits", bits + (fixedBits == 0 && board.isPresent() ? "  (board)"
                 : origin(o.bits().isPresent(), q.bits().isPresent())));
-        Dither dither = o.dither().orElse(q.dither().map(d -> Dither.valueOf(d.toUpperCase(Locale.ROOT)))
-                .orElse(Dither.TPDF));
+        Dither dither = o.dither().or(q::dither).orElse(Dither.TPDF);
         settings.put("dither", dither.label() + origin(o.dither().isPresent(), q.dither().isPresent()));
-        ErrorFilter shaping = o.shaping().orElse(q.shaping().map(ErrorFilter::parse).orElse(ErrorFilter.NONE));
+        ErrorFilter shaping = o.shaping().or(q::shaping).orElse(ErrorFilter.NONE);
         settings.put("shaping", shaping.name() + origin(o.shaping().isPresent(), q.shaping().isPresent()));
         long seed = o.seed().or(project::seed).orElse(1L);
         settings.put("seed", seed + origin(o.seed().isPresent(), project.seed().isPresent()));
-        boolean compensate = o.compensation().or(project::compensation).orElse(true);
+        Compensation compensation = o.compensation().or(project::compensation).orElse(Compensation.ON);
         settings.put("levels", board.map(LevelTable::origin).orElse("ideal ladder"));
         if (board.isPresent() && span != OutputSpan.FULL) {
             settings.put("span", span.key());
         }
         if (board.isPresent()) {
-            settings.put("compensation", (compensate ? "on" : "off")
+            settings.put("compensation", compensation.key()
                     + origin(o.compensation().isPresent(), project.compensation().isPresent()));
         }
         OptionalDouble projectRate = o.rateHz().isPresent() ? o.rateHz() : q.rateHz();
@@ -168,18 +202,19 @@ public final class ProjectBuild {
             OptionalDouble rate = o.rateHz().isPresent() ? o.rateHz() : s.rateHz().isPresent() ? s.rateHz()
                     : projectRate;
             String symbol = prefix + "_" + CNames.symbol(s.name());
-            BuildPlan plan = new BuildPlan(s.source(), s.channel().map(Long::intValue).orElse(0), symbol,
-                    outDir.resolve(CNames.symbol(s.name())), bits, rate, dither, shaping, seed,
-                    !s.keepDc().orElse(false), s.trimDbfs(), s.gainDb(),
-                    s.gainDb().isPresent() ? OptionalDouble.empty() : OptionalDouble.of(s.normalizeDbfs().orElse(-1)),
-                    s.fadeInSeconds().orElse(0), s.fadeOutSeconds().orElse(0), s.resampler().orElse("kaiser"),
-                    5.0, project.target().flashAttr().orElse(""));
-            if (board.isPresent()) {
-                plan = plan.withBoard(board.get(), compensate);
-            }
-            plan = plan.withPreview(pv.filter().orElse(ReconstructionFilter.none()), pv.rateHz().orElse(44_100))
-                    .withFirmware(Optional.empty(), s.loop(), 0);
-            rendered.add(soundBuild.render(plan));
+            BuildPlan.Builder plan = BuildPlan.builder(s.source(), symbol, outDir.resolve(CNames.symbol(s.name())))
+                    .channel(s.channel().map(Long::intValue).orElse(0)).bits(bits).rateHz(rate).dither(dither)
+                    .shaping(shaping).seed(seed).removeDc(!s.keepDc().orElse(false)).trimDbfs(s.trimDbfs())
+                    .gainDb(s.gainDb())
+                    .normalizeDbfs(s.gainDb().isPresent() ? OptionalDouble.empty()
+                            : OptionalDouble.of(s.normalizeDbfs().orElse(-1)))
+                    .fades(s.fadeInSeconds().orElse(0), s.fadeOutSeconds().orElse(0))
+                    .resampler(s.resampler().orElse(ResamplerKind.KAISER))
+                    .flashQualifier(project.target().flashAttr().orElse(""))
+                    .preview(pv.filter().orElse(ReconstructionFilter.none()), pv.rateHz().orElse(44_100))
+                    .loop(s.loop());
+            board.ifPresent(levels -> plan.board(levels, compensation));
+            rendered.add(soundBuild.render(plan.build()));
         }
 
         progress.accept("writing firmware, previews and reports");
@@ -278,15 +313,14 @@ public final class ProjectBuild {
         }
         FirmwareRequest.Builder b = FirmwareRequest.builder().family(t.family().orElse("generic"));
         t.cpuClockHz().ifPresent(b::cpuClockHz);
-        t.timer().ifPresent(x -> b.timer(TimerKind.parse(x)));
+        t.timer().ifPresent(b::timer);
         t.rateTolerancePpm().ifPresent(b::rateTolerancePpm);
         t.pins().ifPresent(b::pins);
         t.portWidth().ifPresent(x -> b.portWidth(x.intValue()));
-        t.pinStrategy().ifPresent(x -> b.pinStrategy(PinStrategy.parse(x)));
-        t.storage().ifPresent(x -> b.storage(SampleStorage.parse(x)));
+        t.pinStrategy().ifPresent(b::pinStrategy);
+        t.storage().ifPresent(b::storage);
         boolean anyLoop = p.sounds().stream().anyMatch(s -> s.loop().isPresent());
-        PlaybackEngine engine = t.engine().map(PlaybackEngine::parse)
-                .orElse(anyLoop ? PlaybackEngine.LOOP : PlaybackEngine.CLIP);
+        PlaybackEngine engine = t.engine().orElse(anyLoop ? PlaybackEngine.LOOP : PlaybackEngine.CLIP);
         b.engine(engine);
         if (engine == PlaybackEngine.DDS) {
             b.dds(new DdsSpec(t.ddsPhaseBits().map(Long::intValue).orElse(DdsSpec.DEFAULT_PHASE_BITS),

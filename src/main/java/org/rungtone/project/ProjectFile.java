@@ -12,7 +12,18 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import java.util.Locale;
+import org.rungtone.calibrate.OutputSpan;
+import org.rungtone.condition.ResamplerKind;
 import org.rungtone.firmware.CNames;
+import org.rungtone.firmware.PinStrategy;
+import org.rungtone.firmware.PlaybackEngine;
+import org.rungtone.firmware.SampleStorage;
+import org.rungtone.firmware.TimerKind;
+import org.rungtone.ladder.LadderTable;
+import org.rungtone.quantize.Compensation;
+import org.rungtone.quantize.Dither;
+import org.rungtone.quantize.ErrorFilter;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.TomlText;
 import org.tomlj.TomlParseError;
@@ -67,12 +78,12 @@ public final class ProjectFile {
         Optional<Path> out = project.string("out").map(base::resolve);
         Optional<Long> seed = project.integer("seed", Long.MIN_VALUE, Long.MAX_VALUE);
         Optional<Path> unit = project.string("unit").map(base::resolve);
-        Optional<Boolean> compensation = project.bool("compensation");
+        Optional<Compensation> compensation = project.bool("compensation").map(Compensation::of);
         project.rejectUnknown();
 
         Project.Target target = target(root.table("target"));
         root.declare("ladder");
-        Optional<org.tomlj.TomlTable> ladder = root.table("ladder").map(TomlFields::table);
+        Optional<LadderTable> ladder = root.table("ladder").map(t -> LadderTable.of(t.table(), file));
         Project.Quantize quantize = quantize(root.table("quantize"));
         Project.Preview preview = preview(root.table("preview"));
         List<TomlFields> soundTables = root.tables("sound");
@@ -122,9 +133,11 @@ public final class ProjectFile {
         }
         TomlFields f = t.get();
         Project.Target r = new Project.Target(f.choice("family", "generic", "avr", "cortexm"),
-                f.quantity("cpu_clock", "Hz"), f.string("timer"), f.string("pins"), f.integer("port_width", 8, 32),
-                f.choice("pin_strategy", "auto", "shift", "table", "scatter"),
-                f.choice("storage", "unpacked", "packed"), f.choice("engine", "clip", "loop", "dds"),
+                f.quantity("cpu_clock", "Hz"), f.parsed("timer", TimerKind::parse), f.string("pins"),
+                f.integer("port_width", 8, 32),
+                f.choice("pin_strategy", "auto", "shift", "table", "scatter").map(PinStrategy::parse),
+                f.choice("storage", "unpacked", "packed").map(SampleStorage::parse),
+                f.choice("engine", "clip", "loop", "dds").map(PlaybackEngine::parse),
                 f.quantity("rate_tolerance", ""), bytes(f, "flash_budget"), f.string("flash_attr"),
                 f.quantity("dds_frequency", "Hz"), f.integer("dds_phase_bits", 8, 32), lines(f));
         f.rejectUnknown();
@@ -150,8 +163,9 @@ public final class ProjectFile {
         }
         TomlFields f = t.get();
         Project.Quantize q = new Project.Quantize(f.integer("bits", 1, 16), f.quantity("rate", "Hz"),
-                f.choice("dither", "none", "rpdf", "tpdf"), f.choice("shaping", "none", "first", "second"),
-                f.choice("span", "full", "nominal"), lines(f));
+                f.choice("dither", "none", "rpdf", "tpdf").map(d -> Dither.valueOf(d.toUpperCase(Locale.ROOT))),
+                f.choice("shaping", "none", "first", "second").map(ErrorFilter::parse),
+                f.choice("span", "full", "nominal").map(OutputSpan::parse), lines(f));
         f.rejectUnknown();
         return q;
     }
@@ -190,7 +204,7 @@ public final class ProjectFile {
         Project.Sound s = new Project.Sound(index, f.line("name"), name, base.resolve(source),
                 f.quantity("rate", "Hz"), loop, f.integer("channel", 0, 8), f.decibels("gain"),
                 f.decibels("normalize"), f.decibels("trim"), f.quantity("fade_in", "s"), f.quantity("fade_out", "s"),
-                f.bool("keep_dc"), f.choice("resampler", "kaiser", "tarsos"));
+                f.bool("keep_dc"), f.choice("resampler", "kaiser", "tarsos").map(ResamplerKind::parse));
         f.rejectUnknown();
         if (s.gainDb().isPresent() && s.normalizeDbfs().isPresent()) {
             throw f.error("gain", "conflicts with normalize (line " + f.line("normalize") + "); keep one");

@@ -49,6 +49,19 @@ final class TomlFields {
         return p == null ? 0 : p.line();
     }
 
+    /**
+     * The string at {@code key} read by {@code parse}; a setting's error from it is reported at the key's line.
+     */
+    <T> Optional<T> parsed(String key, java.util.function.Function<String, T> parse) {
+        return string(key).map(text -> {
+            try {
+                return parse.apply(text);
+            } catch (org.rungtone.internal.SettingError e) {
+                throw error(key, e.detail(org.rungtone.internal.Setting::key));
+            }
+        });
+    }
+
     InputError error(String key, String message) {
         int line = line(key);
         return new InputError(file + (line > 0 ? ":" + line : "") + ": " + qualified(key) + ": " + message);

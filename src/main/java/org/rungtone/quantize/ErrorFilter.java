@@ -42,7 +42,7 @@ public final class ErrorFilter {
             case "second":
                 return SECOND_ORDER;
             default:
-                throw new org.rungtone.internal.InputError("--shaping must be none, first or second: " + text);
+                throw org.rungtone.internal.Setting.SHAPING.error("must be none, first or second: %s", text);
         }
     }
 

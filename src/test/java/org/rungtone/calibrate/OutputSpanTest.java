@@ -36,7 +36,7 @@ class OutputSpanTest {
                 () -> OutputSpan.NOMINAL.volts(board(6, 7), LevelTable.ideal(4, 5)));
         assertEquals("--span nominal: the board's levels (6V .. 7V) do not overlap the ideal span (0V .. 4.688V);"
                 + " use --span full", e.getMessage());
-        assertEquals("--span must be full or nominal: wide", assertThrows(InputError.class,
+        assertEquals("quantize.span must be full or nominal: wide", assertThrows(InputError.class,
                 () -> OutputSpan.parse("wide")).getMessage());
     }
 }

@@ -125,6 +125,22 @@ class ProjectBuildTest {
     }
 
     @Test
+    void aSettingErrorNamesTheProjectLineOrTheOptionWhereItWasTyped() throws IOException {
+        Path g = copyExample("greenhouse");
+        Path toml = g.resolve("greenhouse.toml");
+        Files.writeString(toml, Files.readString(toml).replace("rate   = \"16k\"", "rate   = \"500k\""));
+        Path out = dir.resolve("o4");
+        Cli.Run fromFile = Cli.run("build", toml.toString(), "--out", out.toString());
+        assertEquals(1, fromFile.exitCode(), fromFile.err());
+        assertEquals("rungtone: error: " + toml + ":35: quantize.rate: must be 1 Hz..384 kHz: 500000.0\n",
+                fromFile.err());
+        Cli.Run fromOption = Cli.run("build", toml.toString(), "--out", out.toString(), "--rate", "400k");
+        assertEquals(1, fromOption.exitCode(), fromOption.err());
+        assertEquals("rungtone: error: --rate must be 1 Hz..384 kHz: 400000.0\n", fromOption.err());
+        assertFalse(Files.exists(out));
+    }
+
+    @Test
     void singleSoundOptionsAreRefusedForProjects() throws IOException {
         Path g = copyExample("greenhouse");
         Cli.Run r = Cli.run("build", g.resolve("greenhouse.toml").toString(), "--trim", "-50");
