@@ -112,7 +112,7 @@ public final class Conditioner {
         long over = levelAndCount(y, g, fadeIn, fadeOut);
         if (over > 0) {
             warnings.add(String.format(Locale.ROOT, "%d samples exceed full scale after conditioning and will"
-                    + " clip; lower --gain or use --normalize", over));
+                    + " clip; lower the gain or normalize instead", over));
         }
         return new Conditioned(s, gainDb, trimmedStart, trimmedEnd, how, warnings);
     }

@@ -2,6 +2,7 @@ package org.rungtone.condition;
 
 import java.util.OptionalDouble;
 import org.rungtone.internal.Checks;
+import org.rungtone.internal.Setting;
 
 /**
  * What to do to a source before quantizing it, applied in this order: DC removal, silence trimming,
@@ -22,8 +23,9 @@ public record Conditioning(boolean removeDc, OptionalDouble trimBelowDbfs, doubl
     public Conditioning {
         Checks.checkInput(Double.isFinite(targetRateHz) && targetRateHz >= 1 && targetRateHz <= 384_000,
                 "target rate must be 1 Hz..384 kHz: %s Hz", targetRateHz);
-        Checks.checkInput(!(gainDb.isPresent() && normalizeDbfs.isPresent()),
-                "give either --gain or --normalize, not both");
+        if (gainDb.isPresent() && normalizeDbfs.isPresent()) {
+            throw Setting.GAIN.problem("give either %s or %s, not both", Setting.GAIN.ref(), Setting.NORMALIZE.ref());
+        }
         Checks.checkInput(fadeInSeconds >= 0 && fadeOutSeconds >= 0, "fade lengths must not be negative");
         gainDb.ifPresent(g -> Checks.checkInput(Double.isFinite(g) && Math.abs(g) <= 120,
                 "gain must be within ±120 dB: %s", g));

@@ -18,7 +18,7 @@ import java.nio.file.StandardCopyOption;
  */
 public final class AtomicFiles {
     /** The fix every folder message ends with; the folder may come from an option or a project file. */
-    private static final String CHOOSE = "choose another output folder (--out or project.out)";
+    private static final String CHOOSE = "choose another output folder (" + Setting.OUT.ref() + ")";
 
     private AtomicFiles() {
     }
@@ -37,18 +37,19 @@ public final class AtomicFiles {
      */
     public static Path prepareFolder(Path dir) {
         if (Files.exists(dir) && !Files.isDirectory(dir)) {
-            throw new InputError(dir + ": the output folder is an existing file; " + CHOOSE);
+            throw new SettingError(Setting.OUT, dir + ": the output folder is an existing file; " + CHOOSE, null);
         }
         try {
             Files.createDirectories(dir);
         } catch (FileAlreadyExistsException | NotDirectoryException e) {
-            throw new InputError(dir + ": cannot create output folder, a part of its path is a file; " + CHOOSE,
-                    e);
+            throw new SettingError(Setting.OUT, dir + ": cannot create output folder, a part of its path is a file; "
+                    + CHOOSE, e);
         } catch (IOException e) {
-            throw new InputError(dir + ": cannot create output folder (" + reason(e) + "); " + CHOOSE, e);
+            throw new SettingError(Setting.OUT, dir + ": cannot create output folder (" + reason(e) + "); " + CHOOSE,
+                    e);
         }
         if (!Files.isWritable(dir)) {
-            throw new InputError(dir + ": output folder is not writable; " + CHOOSE);
+            throw new SettingError(Setting.OUT, dir + ": output folder is not writable; " + CHOOSE, null);
         }
         return dir;
     }
@@ -68,10 +69,11 @@ public final class AtomicFiles {
             return;
         }
         if (!Files.isDirectory(p)) {
-            throw new InputError(dir + ": output folder cannot be created, " + p + " is a file; " + CHOOSE);
+            throw new SettingError(Setting.OUT, dir + ": output folder cannot be created, " + p + " is a file; "
+                    + CHOOSE, null);
         }
         if (!Files.isWritable(p)) {
-            throw new InputError(dir + ": output folder is not writable (" + p + "); " + CHOOSE);
+            throw new SettingError(Setting.OUT, dir + ": output folder is not writable (" + p + "); " + CHOOSE, null);
         }
     }
 

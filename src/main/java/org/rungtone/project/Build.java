@@ -292,8 +292,8 @@ public final class Build {
         final Codes previewInput = previewCodes == emitted.length() ? emittedCodes : Codes.of(emitted.bits(),
                 rate, Arrays.copyOf(emitted.unsafeCodes(), previewCodes));
         if (previewCodes < emitted.length()) {
-            warnings.add(String.format(Locale.ROOT, "preview.wav holds the first %.0f s of %.0f s; use"
-                    + " --preview-length all for the whole sound", previewCodes / rate, emitted.length() / rate));
+            warnings.add(String.format(Locale.ROOT, "preview.wav holds the first %.0f s of %.0f s; set"
+                    + " the preview length to all for the whole sound", previewCodes / rate, emitted.length() / rate));
         }
         AnalogModel model = new AnalogModel(plan.preview().filter(), plan.preview().rateHz());
         CompletableFuture<AnalogModel.Preview> previewJob = CompletableFuture.supplyAsync(

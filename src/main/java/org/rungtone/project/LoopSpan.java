@@ -3,6 +3,7 @@ package org.rungtone.project;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.Setting;
 import org.rungtone.internal.Units;
 
 /**
@@ -24,14 +25,13 @@ public record LoopSpan(double start, double end, boolean seconds) {
     public static LoopSpan parse(String text) {
         Matcher m = FORM.matcher(text == null ? "" : text);
         if (!m.matches()) {
-            throw new InputError("--loop '" + text + "' must be START:END in samples (1200:9600) or times"
-                    + " (0.25s:end)");
+            throw Setting.LOOP.error("'%s' must be START:END in samples (1200:9600) or times (0.25s:end)", text);
         }
         boolean secs = m.group(1).endsWith("s") || m.group(2).endsWith("s");
         double start = value(m.group(1), secs, text);
         double end = m.group(2).equals("end") ? Double.POSITIVE_INFINITY : value(m.group(2), secs, text);
         if (!(start >= 0) || !(end > start)) {
-            throw new InputError("--loop '" + text + "' needs 0 <= START < END");
+            throw Setting.LOOP.error("'%s' needs 0 <= START < END", text);
         }
         return new LoopSpan(start, end, secs);
     }
@@ -40,7 +40,7 @@ public record LoopSpan(double start, double end, boolean seconds) {
         try {
             return secs ? Units.parse(s, "s") : Units.parseCount(s);
         } catch (InputError e) {
-            throw new InputError("--loop '" + text + "': " + e.getMessage());
+            throw Setting.LOOP.error("'%s': %s", text, e.getMessage());
         }
     }
 
@@ -49,11 +49,11 @@ public record LoopSpan(double start, double end, boolean seconds) {
         long s = seconds ? Math.round(start * rateHz) : (long) start;
         long e = Double.isInfinite(end) ? length : seconds ? Math.round(end * rateHz) : (long) end;
         if (e > length) {
-            throw new InputError(String.format(java.util.Locale.ROOT, "--loop end %s is past the sound's end"
-                    + " (%d samples)", seconds ? Units.format(end, "s") : Long.toString(e), length));
+            throw Setting.LOOP.error("end %s is past the sound's end (%d samples)",
+                    seconds ? Units.format(end, "s") : Long.toString(e), length);
         }
         if (s >= e) {
-            throw new InputError("--loop start must come before its end");
+            throw Setting.LOOP.error("start must come before its end");
         }
         return new int[] {(int) s, (int) e};
     }

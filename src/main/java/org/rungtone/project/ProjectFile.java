@@ -194,13 +194,7 @@ public final class ProjectFile {
         String name = f.string("name").orElseThrow(() -> f.error("name", "is required, e.g. name = \"door_chime\""));
         String source = f.string("source").orElseThrow(() -> f.error("source", "is required: a .wav file or"
                 + " .rung script, relative to the project file"));
-        Optional<LoopSpan> loop = f.string("loop").map(text -> {
-            try {
-                return LoopSpan.parse(text);
-            } catch (InputError e) {
-                throw f.error("loop", e.getMessage().replace("--loop ", ""));
-            }
-        });
+        Optional<LoopSpan> loop = f.parsed("loop", LoopSpan::parse);
         Project.Sound s = new Project.Sound(index, f.line("name"), name, base.resolve(source),
                 f.quantity("rate", "Hz"), loop, f.integer("channel", 0, 8), f.decibels("gain"),
                 f.decibels("normalize"), f.decibels("trim"), f.quantity("fade_in", "s"), f.quantity("fade_out", "s"),

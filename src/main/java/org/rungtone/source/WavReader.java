@@ -14,6 +14,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.Setting;
 
 /**
  * Decodes WAV files (RIFF; Microsoft/IBM "Multimedia Programming Interface and Data Specifications 1.0",
@@ -107,8 +108,8 @@ public final class WavReader {
         try {
             d.parse(ch);
             if (channel < 0 || channel > d.format.channels()) {
-                throw InputError.inFile(file, "has " + d.format.channels() + " channel(s); --channel must be "
-                        + "0 (mix down) or 1.." + d.format.channels() + ": " + channel);
+                throw Setting.CHANNEL.problem("%s: has %d channel(s); %s must be 0 (mix down) or 1..%d: %d", file,
+                        d.format.channels(), Setting.CHANNEL.ref(), d.format.channels(), channel);
             }
             return new Stream(d, ch, channel);
         } catch (IOException e) {

@@ -256,8 +256,8 @@ class BadInputCatalogueTest {
                 d -> List.of("build", text(d, "p.toml", head + sound).toString())));
         c.add(bad("project: out below a regular file", "output folder cannot be created",
                 d -> project(d, "[project]\nname = \"bench\"\nout = \"notes.txt/out\"\n" + sound, "notes.txt")));
-        c.add(bad("project: out is a regular file", "notes.txt is a file; choose another output folder (--out or"
-                + " project.out)", d -> project(d, "[project]\nname = \"bench\"\nout = \"notes.txt\"\n" + sound,
+        c.add(bad("project: out is a regular file", "notes.txt is a file; choose another output folder"
+                + " (project.out)", d -> project(d, "[project]\nname = \"bench\"\nout = \"notes.txt\"\n" + sound,
                         "notes.txt")));
         c.add(bad("project: samples over the flash budget", "1,590 bytes over the 10-byte flash budget"
                 + " (--flash-budget or target.flash_budget)", d -> project(d, head + "\n[target]\nflash_budget = 10\n"

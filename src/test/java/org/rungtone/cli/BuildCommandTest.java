@@ -118,7 +118,7 @@ class BuildCommandTest {
         Cli.Run r = Cli.run("build", fixture().toString(), "--out", file.toString());
         assertEquals(1, r.exitCode());
         assertEquals("rungtone: error: " + file + ": output folder cannot be created, " + file
-                + " is a file; choose another output folder (--out or project.out)\n", r.err());
+                + " is a file; choose another output folder (--out)\n", r.err());
         Cli.Run r2 = Cli.run("build", fixture().toString(), "--out", file.resolve("sub").toString());
         assertEquals(1, r2.exitCode());
         assertEquals("x", Files.readString(file));

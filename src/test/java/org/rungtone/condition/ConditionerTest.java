@@ -94,7 +94,7 @@ class ConditionerTest {
     void rejectsContradictorySettings() {
         InputError e = assertThrows(InputError.class, () -> settings(false, NONE, 8000, OptionalDouble.of(1),
                 OptionalDouble.of(-1), 0, 0));
-        assertEquals("give either --gain or --normalize, not both", e.getMessage());
+        assertEquals("give either sound.gain or sound.normalize, not both", e.getMessage());
         assertEquals("target rate must be 1 Hz..384 kHz: 500000.0 Hz", assertThrows(InputError.class,
                 () -> settings(false, NONE, 500_000, NONE, NONE, 0, 0)).getMessage());
     }

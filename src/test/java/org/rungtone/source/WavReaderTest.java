@@ -156,7 +156,7 @@ class WavReaderTest {
         Path p = write("st.wav", f);
         assertArrayEquals(new double[] {-0.25, 0.75}, WavReader.read(p, 2).signal().samples(), 0);
         InputError e = assertThrows(InputError.class, () -> WavReader.read(p, 3));
-        assertEquals(p + ": has 2 channel(s); --channel must be 0 (mix down) or 1..2: 3", e.getMessage());
+        assertEquals(p + ": has 2 channel(s); sound.channel must be 0 (mix down) or 1..2: 3", e.getMessage());
     }
 
     static Stream<Arguments> badFiles() {
