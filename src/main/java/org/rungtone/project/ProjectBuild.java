@@ -155,7 +155,52 @@ public final class ProjectBuild {
         }
     }
 
+    /**
+     * The settings every sound of the project shares, with command-line overrides applied, and each one's
+     * value and origin for the reports.
+     */
+    private record Shared(Path outDir, int bits, Dither dither, ErrorFilter shaping, long seed,
+            Compensation compensation, Optional<LevelTable> board, OptionalDouble rateHz,
+            Map<String, String> settings) {
+    }
+
+    /** What emission wrote and said. */
+    private record Emitted(List<Path> files, List<String> firmwareLines, List<String> warnings, long flashBytes) {
+    }
+
     private Result build(Project project, Overrides o) {
+        Shared shared = settle(project, o);
+        Optional<FirmwareRequest> player = player(project, o, shared.settings());
+        if (player.isPresent()) {
+            checkOneRate(project, o, shared.rateHz());
+        }
+        java.util.concurrent.CompletableFuture<Void> plotsReady =
+                java.util.concurrent.CompletableFuture.runAsync(org.rungtone.report.Plots::warmUp);
+        List<SoundRenderer.Rendered> rendered = new ArrayList<>();
+        for (Project.Sound s : project.sounds()) {
+            String label = String.format(Locale.ROOT, "sound %d/%d %s", s.index(), project.sounds().size(),
+                    s.name());
+            rendered.add(new SoundRenderer(span, stage -> progress.accept(label + ": " + stage + " done"))
+                    .render(plan(project, s, o, shared)));
+        }
+        progress.accept("writing firmware, previews and reports");
+        Emitted emitted = emit(project, player, shared, rendered);
+        Jobs.join(plotsReady);
+        Build build = new Build(toolVersion);
+        List<Path> files = new ArrayList<>(emitted.files());
+        List<BuildSummary> summaries = new ArrayList<>();
+        for (SoundRenderer.Rendered r : rendered) {
+            List<Path> assets = Build.writeAssets(r, r.plan().outDir());
+            files.addAll(assets);
+            SampleStorage storage = player.map(FirmwareRequest::storage).orElse(SampleStorage.UNPACKED);
+            long soundBytes = storage.bytes(r.emitted().length(), r.plan().bits());
+            summaries.add(build.summary(r, List.of(), soundBytes, assets, r.warnings(), r.stageMillis()));
+        }
+        return writeReports(project, shared, summaries, emitted, files);
+    }
+
+    /** Decides the shared settings: command line over project file over defaults. */
+    private Shared settle(Project project, Overrides o) {
         Map<String, String> settings = new LinkedHashMap<>();
         Path outDir = o.outDir().or(project::outDir)
                 .orElse(project.file().toAbsolutePath().getParent().resolve("rungtone-out").resolve(project.name()))
@@ -183,95 +228,85 @@ public final class ProjectBuild {
             settings.put("compensation", compensation.key()
                     + origin(o.compensation().isPresent(), project.compensation().isPresent()));
         }
-        OptionalDouble projectRate = o.rateHz().isPresent() ? o.rateHz() : q.rateHz();
-        Optional<FirmwareRequest> player = player(project, o, settings);
-        if (player.isPresent()) {
-            checkOneRate(project, o, projectRate);
-        }
+        OptionalDouble rate = o.rateHz().isPresent() ? o.rateHz() : q.rateHz();
+        return new Shared(outDir, bits, dither, shaping, seed, compensation, board, rate, settings);
+    }
+
+    /** The build plan of one sound. */
+    private static BuildPlan plan(Project project, Project.Sound s, Overrides o, Shared shared) {
+        OptionalDouble rate = o.rateHz().isPresent() ? o.rateHz() : s.rateHz().isPresent() ? s.rateHz()
+                : shared.rateHz();
+        String symbol = CNames.symbol(project.name()) + "_" + CNames.symbol(s.name());
         Project.Preview pv = project.preview();
+        BuildPlan.Builder plan = BuildPlan.builder(s.source(), symbol,
+                        shared.outDir().resolve(CNames.symbol(s.name())))
+                .channel(s.channel().map(Long::intValue).orElse(0)).bits(shared.bits()).rateHz(rate)
+                .dither(shared.dither()).shaping(shared.shaping()).seed(shared.seed())
+                .removeDc(!s.keepDc().orElse(false)).trimDbfs(s.trimDbfs()).gainDb(s.gainDb())
+                .normalizeDbfs(s.gainDb().isPresent() ? OptionalDouble.empty()
+                        : OptionalDouble.of(s.normalizeDbfs().orElse(-1)))
+                .fades(s.fadeInSeconds().orElse(0), s.fadeOutSeconds().orElse(0))
+                .resampler(s.resampler().orElse(ResamplerKind.KAISER))
+                .flashQualifier(project.target().flashAttr().orElse(""))
+                .preview(pv.filter().orElse(ReconstructionFilter.none()), pv.rateHz().orElse(44_100))
+                .loop(s.loop());
+        shared.board().ifPresent(levels -> plan.board(levels, shared.compensation()));
+        return plan.build();
+    }
+
+    /** Emits one player for every sound, or each sound's bare sample array. */
+    private Emitted emit(Project project, Optional<FirmwareRequest> player, Shared shared,
+            List<SoundRenderer.Rendered> rendered) {
         String prefix = CNames.symbol(project.name());
-
-        java.util.concurrent.CompletableFuture<Void> plotsReady =
-                java.util.concurrent.CompletableFuture.runAsync(org.rungtone.report.Plots::warmUp);
-        List<Build.Rendered> rendered = new ArrayList<>();
-        Build build = new Build(toolVersion);
-        for (Project.Sound s : project.sounds()) {
-            String label = String.format(Locale.ROOT, "sound %d/%d %s", s.index(), project.sounds().size(),
-                    s.name());
-            Build soundBuild = new Build(toolVersion, span, stage -> progress.accept(label + ": " + stage + " done"));
-            OptionalDouble rate = o.rateHz().isPresent() ? o.rateHz() : s.rateHz().isPresent() ? s.rateHz()
-                    : projectRate;
-            String symbol = prefix + "_" + CNames.symbol(s.name());
-            BuildPlan.Builder plan = BuildPlan.builder(s.source(), symbol, outDir.resolve(CNames.symbol(s.name())))
-                    .channel(s.channel().map(Long::intValue).orElse(0)).bits(bits).rateHz(rate).dither(dither)
-                    .shaping(shaping).seed(seed).removeDc(!s.keepDc().orElse(false)).trimDbfs(s.trimDbfs())
-                    .gainDb(s.gainDb())
-                    .normalizeDbfs(s.gainDb().isPresent() ? OptionalDouble.empty()
-                            : OptionalDouble.of(s.normalizeDbfs().orElse(-1)))
-                    .fades(s.fadeInSeconds().orElse(0), s.fadeOutSeconds().orElse(0))
-                    .resampler(s.resampler().orElse(ResamplerKind.KAISER))
-                    .flashQualifier(project.target().flashAttr().orElse(""))
-                    .preview(pv.filter().orElse(ReconstructionFilter.none()), pv.rateHz().orElse(44_100))
-                    .loop(s.loop());
-            board.ifPresent(levels -> plan.board(levels, compensation));
-            rendered.add(soundBuild.render(plan.build()));
-        }
-
-        progress.accept("writing firmware, previews and reports");
-        List<Path> files = new ArrayList<>();
-        List<String> firmwareLines = new ArrayList<>();
-        List<String> warnings = new ArrayList<>();
-        long flash;
-        long budget = (long) project.target().flashBudgetBytes().orElse(0);
         if (player.isPresent()) {
             FirmwareRequest.Builder fb = player.get().toBuilder().name(prefix).toolVersion(toolVersion);
-            for (Map.Entry<String, String> e : settings.entrySet()) {
+            for (Map.Entry<String, String> e : shared.settings().entrySet()) {
                 fb.setting(e.getKey() + ": " + e.getValue());
             }
             for (int i = 0; i < rendered.size(); i++) {
                 fb.sound(Build.clip(project.sounds().get(i).name(), rendered.get(i)));
             }
-            EmitResult er = FirmwareEmitter.emit(fb.build(), outDir);
-            files.addAll(er.files());
-            firmwareLines.addAll(er.report());
-            warnings.addAll(er.warnings());
-            flash = er.flashBytes();
-        } else {
-            flash = 0;
-            for (Build.Rendered r : rendered) {
-                flash += Build.arrayBytes(r);
-            }
-            if (budget > 0) {
-                Build.Rendered first = rendered.get(0);
-                FlashBudget.check(flash, budget, FlashBudget.alternatives(flash * 8 / Math.max(8, bits <= 8 ? 8 : 16),
-                        first.rateHz(), bits, SampleStorage.UNPACKED, 0));
-            }
-            for (Build.Rendered r : rendered) {
-                files.addAll(build.emitArray(r.plan().symbol(), r, outDir));
-            }
+            EmitResult er = FirmwareEmitter.emit(fb.build(), shared.outDir());
+            return new Emitted(er.files(), er.report(), er.warnings(), er.flashBytes());
         }
-        Build.join(plotsReady);
-        List<BuildSummary> summaries = new ArrayList<>();
-        for (Build.Rendered r : rendered) {
-            List<Path> assets = Build.writeAssets(r, r.plan().outDir());
-            files.addAll(assets);
-            SampleStorage storage = player.map(FirmwareRequest::storage).orElse(SampleStorage.UNPACKED);
-            long soundBytes = storage.bytes(r.emitted().length(), r.plan().bits());
-            summaries.add(build.summary(r, List.of(), soundBytes, assets, r.warnings(), r.stageMillis()));
+        long flash = 0;
+        for (SoundRenderer.Rendered r : rendered) {
+            flash += Build.arrayBytes(r);
         }
+        long budget = (long) project.target().flashBudgetBytes().orElse(0);
+        int bits = shared.bits();
+        if (budget > 0) {
+            FlashBudget.check(flash, budget, FlashBudget.alternatives(flash * 8 / Math.max(8, bits <= 8 ? 8 : 16),
+                    rendered.get(0).rateHz(), bits, SampleStorage.UNPACKED, 0));
+        }
+        List<Path> files = new ArrayList<>();
+        Build build = new Build(toolVersion);
+        for (SoundRenderer.Rendered r : rendered) {
+            files.addAll(build.emitArray(r.plan().symbol(), r, shared.outDir()));
+        }
+        return new Emitted(files, List.of(), List.of(), flash);
+    }
+
+    /** Writes report.txt, report.json and report.html of the whole project. */
+    private Result writeReports(Project project, Shared shared, List<BuildSummary> summaries, Emitted emitted,
+            List<Path> files) {
+        Path outDir = shared.outDir();
         Path txt = outDir.resolve("report.txt");
         Path json = outDir.resolve("report.json");
         Path html = outDir.resolve("report.html");
         files.add(txt);
         files.add(json);
         files.add(html);
-        ProjectReport.Input in = new ProjectReport.Input(toolVersion, project.file(), project.name(), settings,
-                summaries, firmwareLines, flash, budget, files, warnings);
-        Result result = new Result(outDir, summaries, firmwareLines, flash, settings, files, warnings, in);
+        long budget = (long) project.target().flashBudgetBytes().orElse(0);
+        List<String> warnings = emitted.warnings();
+        ProjectReport.Input in = new ProjectReport.Input(toolVersion, project.file(), project.name(),
+                shared.settings(), summaries, emitted.firmwareLines(), emitted.flashBytes(), budget, files, warnings);
+        Result result = new Result(outDir, summaries, emitted.firmwareLines(), emitted.flashBytes(),
+                shared.settings(), files, warnings, in);
         AtomicFiles.writeString(txt, ProjectReport.text(in));
         Json.write(json, ProjectReport.json(in));
         HtmlReport.write(html, new HtmlReport.Page(project.name() + " (" + project.file().getFileName() + ")",
-                toolVersion, HtmlReport.Setting.of(settings), summaries, List.of(), flash,
+                toolVersion, HtmlReport.Setting.of(shared.settings()), summaries, List.of(), emitted.flashBytes(),
                 budget > 0 ? OptionalLong.of(budget) : OptionalLong.empty(), ProjectReport.warningsOf(in),
                 Optional.empty()));
         return result;

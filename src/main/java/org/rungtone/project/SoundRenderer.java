@@ -1,0 +1,328 @@
+package org.rungtone.project;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.concurrent.CompletableFuture;
+import java.util.function.Consumer;
+import org.rungtone.analysis.AnalogModel;
+import org.rungtone.analysis.AudioMetrics;
+import org.rungtone.analysis.QualityReport;
+import org.rungtone.analysis.SineFit;
+import org.rungtone.analysis.Spectrum;
+import org.rungtone.analysis.ToneAnalysis;
+import org.rungtone.analysis.ToneReport;
+import org.rungtone.calibrate.OutputSpan;
+import org.rungtone.condition.Conditioner;
+import org.rungtone.condition.Conditioning;
+import org.rungtone.condition.KaiserResampler;
+import org.rungtone.internal.InputError;
+import org.rungtone.internal.Units;
+import org.rungtone.ladder.LevelTable;
+import org.rungtone.quantize.Codes;
+import org.rungtone.quantize.ErrorFilter;
+import org.rungtone.quantize.Quantizer;
+import org.rungtone.source.Signal;
+
+/**
+ * Computes one sound in memory, writing nothing: read the source, condition it, quantize onto every ladder
+ * case, measure, render the analog preview.
+ *
+ * <p>Ladder cases: "ideal" is the source quantized onto the ideal ladder. With a board (modelled ladder or
+ * measured unit profile) two more: "board, plain codes" plays the ideal codes on the board's real levels,
+ * and "board, compensated" quantizes onto those real levels. The emitted codes are the compensated ones when
+ * compensation is on, else the plain ones; the preview is of the emitted codes on the board.
+ */
+public final class SoundRenderer {
+    /** A reference whose 4-parameter sine fit leaves less than this residual (dB) counts as a single tone. */
+    private static final double TONE_THRESHOLD_DB = 40;
+    /** A three-parameter fit at the spectral peak below this (dB) rules a single tone out at once. */
+    private static final double TONE_SCREEN_DB = 12;
+    private static final int TONE_SAMPLES = 1 << 16;
+    private static final int TONE_PROBE = 1 << 13;
+
+
+    private final OutputSpan span;
+    private final Consumer<String> progress;
+
+    /**
+     * A renderer whose compensated quantization maps full scale onto {@code span} of the board's levels, and
+     * that tells {@code progress} the name of every stage it finishes ("open", "condition", ...).
+     */
+    public SoundRenderer(OutputSpan span, Consumer<String> progress) {
+        this.span = span;
+        this.progress = progress;
+    }
+
+    /**
+     * One sound computed in memory: its codes and every figure, the preview and the plots' data, before any
+     * file is written.
+     *
+     * @param plan the plan it came from
+     * @param layout the source's description
+     * @param rateHz the target rate
+     * @param conditioned what conditioning did
+     * @param emitted the codes the firmware holds
+     * @param played the levels the board plays
+     * @param quality figures per ladder case, emitted case last
+     * @param shapingGainDb in-band gain of noise shaping, if used
+     * @param tone single-tone figures, if the source is one sine
+     * @param preview the analog preview
+     * @param errorSpectrum the emitted case's error spectrum, for its plot (null when the error is zero)
+     * @param toneSpectrum the output spectrum, for tones
+     * @param inBandCutoffHz top of the in-band figures
+     * @param clippedSamples samples beyond full scale
+     * @param settings "key: value" lines for the C header comment
+     * @param warnings what the user should know
+     * @param stageMillis timings so far
+     */
+    public record Rendered(BuildPlan plan, String layout, double rateHz, Conditioner.Conditioned conditioned,
+            Codes emitted, LevelTable played, List<QualityReport> quality, Optional<Double> shapingGainDb,
+            Optional<ToneReport> tone, AnalogModel.Preview preview, Spectrum errorSpectrum,
+            Optional<Spectrum> toneSpectrum, double inBandCutoffHz, long clippedSamples, List<String> settings,
+            List<String> warnings, Map<String, Double> stageMillis) {
+    }
+
+    /** The codes of every ladder case. */
+    private record Cases(Quantizer.Quantized ideal, LevelTable idealTable, Codes emitted, LevelTable played,
+            long clipped, Optional<Codes> compensated, double[] range) {
+    }
+
+    /** The figures of every ladder case, emitted case last. */
+    private record Figures(List<QualityReport> quality, Spectrum errorSpectrum, Optional<Double> shapingGainDb) {
+    }
+
+    /**
+     * Computes one sound without writing anything.
+     *
+     * @throws InputError for anything the user can fix
+     */
+    public Rendered render(BuildPlan plan) {
+        Stopwatch watch = new Stopwatch(progress);
+        Prepared prepared = prepare(plan, watch);
+        double rate = prepared.rateHz();
+        Conditioner.Conditioned conditioned = prepared.conditioned();
+        Signal reference = conditioned.signal();
+        if (reference.length() < 2) {
+            throw InputError.inFile(plan.source().file(), "nothing is left to build after conditioning"
+                    + " (all trimmed?)");
+        }
+        List<String> warnings = new ArrayList<>(prepared.warnings());
+        warnings.addAll(conditioned.warnings());
+        Cases cases = quantize(plan, reference);
+        watch.lap("quantize");
+        if (cases.clipped() > 0) {
+            warnings.add(cases.clipped() + " samples were beyond full scale and clipped");
+        }
+        AnalogModel model = new AnalogModel(plan.preview().filter(), plan.preview().rateHz());
+        // The preview is independent of the figures: render it on another core meanwhile.
+        CompletableFuture<AnalogModel.Preview> previewJob = startPreview(plan, cases, model, rate, warnings);
+        // in-band figures stop where the analog output's passband does: rate/2, or a lower filter cutoff
+        double cutoff = model.passbandTopHz(rate);
+        Figures figures = measure(plan, reference, cases, cutoff);
+        Optional<ToneReport> tone = Optional.empty();
+        Optional<Spectrum> toneSpectrum = Optional.empty();
+        if (isTone(reference)) {
+            Signal out = head(cases.emitted(), cases.played(), rate);
+            toneSpectrum = Optional.of(ToneAnalysis.spectrum(out));
+            tone = Optional.of(ToneAnalysis.analyze(out, toneSpectrum.get()));
+        }
+        watch.lap("analyze");
+        AnalogModel.Preview preview = Jobs.join(previewJob);
+        watch.lap("preview");
+        return new Rendered(plan, prepared.layout(), rate, conditioned, cases.emitted(), cases.played(),
+                figures.quality(), figures.shapingGainDb(), tone, preview, figures.errorSpectrum(), toneSpectrum,
+                cutoff, cases.clipped(), settings(plan, prepared.layout(), conditioned, cases.played(), rate,
+                        cases.range()), warnings, watch.laps());
+    }
+
+    /** Quantizes onto the ideal ladder and, with a board, onto its real levels when compensating. */
+    private Cases quantize(BuildPlan plan, Signal reference) {
+        QuantizeSettings q = plan.quantize();
+        LevelTable ideal = LevelTable.ideal(plan.bits(), plan.preview().fullScaleVolts());
+        Quantizer.Quantized idealQ = quantizer(ideal, plan).apply(reference);
+        if (q.board().isEmpty()) {
+            return new Cases(idealQ, ideal, idealQ.codes(), ideal, idealQ.clippedSamples(), Optional.empty(),
+                    new double[] {ideal.minVolts(), ideal.maxVolts()});
+        }
+        LevelTable board = q.board().get();
+        if (!q.compensate()) {
+            return new Cases(idealQ, ideal, idealQ.codes(), board, idealQ.clippedSamples(), Optional.empty(),
+                    new double[] {board.minVolts(), board.maxVolts()});
+        }
+        double[] range = span.volts(board, ideal);
+        Quantizer.Quantized c = new Quantizer(board, range[0], range[1], q.dither(), q.shaping(), q.seed())
+                .apply(reference);
+        return new Cases(idealQ, ideal, c.codes(), board, c.clippedSamples(), Optional.of(c.codes()), range);
+    }
+
+    /** Starts rendering the preview of the emitted codes (its first seconds) on another core. */
+    private static CompletableFuture<AnalogModel.Preview> startPreview(BuildPlan plan, Cases cases,
+            AnalogModel model, double rate, List<String> warnings) {
+        Codes emitted = cases.emitted();
+        int previewCodes = (int) Math.min(emitted.length(), Math.ceil(plan.preview().seconds() * rate));
+        Codes previewInput = previewCodes == emitted.length() ? emitted : Codes.of(emitted.bits(), rate,
+                Arrays.copyOf(emitted.unsafeCodes(), previewCodes));
+        if (previewCodes < emitted.length()) {
+            warnings.add(String.format(Locale.ROOT, "preview.wav holds the first %.0f s of %.0f s; set"
+                    + " the preview length to all for the whole sound", previewCodes / rate, emitted.length() / rate));
+        }
+        LevelTable played = cases.played();
+        return CompletableFuture.supplyAsync(() -> model.render(previewInput, played));
+    }
+
+    /** The quality figures of every ladder case and the shaping gain. */
+    private static Figures measure(BuildPlan plan, Signal reference, Cases cases, double cutoff) {
+        AudioMetrics metrics = AudioMetrics.of(reference, cutoff);
+        List<QualityReport> quality = new ArrayList<>();
+        Codes idealCodes = cases.ideal().codes();
+        LevelTable played = cases.played();
+        Spectrum errorSpectrum;
+        if (plan.quantize().board().isEmpty()) {
+            AudioMetrics.Measured m = metrics.measureWithSpectrum("ideal ladder", idealCodes, cases.idealTable());
+            quality.add(m.report());
+            errorSpectrum = m.errorSpectrum();
+        } else {
+            quality.add(metrics.measure("ideal ladder", idealCodes, cases.idealTable()));
+            AudioMetrics.Measured plain = metrics.measureWithSpectrum("board, plain codes", idealCodes, played);
+            quality.add(plain.report());
+            errorSpectrum = plain.errorSpectrum();
+            if (cases.compensated().isPresent()) {
+                AudioMetrics.Measured comp = metrics.measureWithSpectrum("board, compensated",
+                        cases.compensated().get(), played);
+                quality.add(comp.report());
+                errorSpectrum = comp.errorSpectrum();
+            }
+        }
+        Optional<Double> shapingGain = Optional.empty();
+        QuantizeSettings q = plan.quantize();
+        if (q.shaping().order() > 0) {
+            double[] range = cases.range();
+            Quantizer flat = new Quantizer(played, range[0], range[1], q.dither(), ErrorFilter.NONE, q.seed());
+            double flatInBand = metrics.measure("flat", flat.apply(reference).codes(), played).inBandSnrDb();
+            shapingGain = Optional.of(quality.get(quality.size() - 1).inBandSnrDb() - flatInBand);
+        }
+        return new Figures(quality, errorSpectrum, shapingGain);
+    }
+
+    /** The source's description, the conditioned reference and the target rate. */
+    private record Prepared(String layout, List<String> warnings, Conditioner.Conditioned conditioned,
+            double rateHz) {
+    }
+
+    /**
+     * Opens and conditions the source. A WAV source is decoded block by block as the resampler reads it, so
+     * a long clip is never held at its own rate.
+     */
+    private static Prepared prepare(BuildPlan plan, Stopwatch watch) {
+        ConditioningSettings cs = plan.conditioning();
+        try (Sources.Opened opened = Sources.open(plan.source().file(), plan.source().channel(),
+                cs.rateHz().orElse(Double.NaN), plan.quantize().seed())) {
+            watch.lap("open");
+            double rate = cs.rateHz().orElse(Double.isNaN(opened.preferredRateHz()) ? BuildPlan.DEFAULT_RATE_HZ
+                    : opened.preferredRateHz());
+            Conditioner.Conditioned conditioned;
+            if (opened.wavetable()) {
+                // One cycle: its samples are the table as it is, played at any rate by the DDS engine. Only DC
+                // removal and level apply; the codes are labelled with the playback rate.
+                double[] cycle = new double[opened.samples().length()];
+                opened.samples().read(0, cycle, 0, cycle.length);
+                Signal table = Signal.wrap(cycle, rate);
+                Conditioning c = new Conditioning(cs.removeDc(), java.util.OptionalDouble.empty(), rate, cs.gainDb(),
+                        cs.normalizeDbfs(), 0, 0);
+                conditioned = new Conditioner(KaiserResampler.forBits(plan.bits())).apply(table, c);
+            } else {
+                conditioned = new Conditioner(cs.resampler().create(plan.bits())).apply(opened.samples(), cs.at(rate));
+            }
+            watch.lap("condition");
+            return new Prepared(opened.layout(), opened.warnings(), conditioned, rate);
+        }
+    }
+
+    private static Quantizer quantizer(LevelTable table, BuildPlan plan) {
+        QuantizeSettings q = plan.quantize();
+        return new Quantizer(table, table.minVolts(), table.maxVolts(), q.dither(), q.shaping(), q.seed());
+    }
+
+    private List<String> settings(BuildPlan plan, String layout, Conditioner.Conditioned c,
+            LevelTable played, double rate, double[] range) {
+        QuantizeSettings q = plan.quantize();
+        return List.of(
+                "name: " + plan.symbol(),
+                "source: " + plan.source().file().getFileName() + " (" + layout + ")",
+                "conditioning: " + describe(plan, c),
+                "target: " + plan.bits() + " bits at " + Units.format(rate, "Hz"),
+                "dither: " + q.dither().label() + ", shaping: " + q.shaping().name() + ", seed: " + q.seed(),
+                "levels: " + played.origin() + ", " + Units.format(played.minVolts(), "V") + " .. "
+                        + Units.format(played.maxVolts(), "V")
+                        + (q.board().isPresent() ? (q.compensate() ? ", compensated" + spanNote(range)
+                                : ", plain codes") : ""));
+    }
+
+    private String spanNote(double[] range) {
+        return span == OutputSpan.FULL ? "" : ", span " + span.key() + " " + Units.format(range[0], "V") + " .. "
+                + Units.format(range[1], "V");
+    }
+
+    /** True when the reference is essentially one sine (IEEE Std 1241 sine fit), so tone figures apply. */
+    private static boolean isTone(Signal reference) {
+        // A quick look at the first 8192 samples decides; only a tone pays for the full analysis.
+        double[] probe = Arrays.copyOf(reference.unsafeSamples(), Math.min(reference.length(), TONE_PROBE));
+        if (probe.length < 256) {
+            return false;
+        }
+        SineFit.Result fit;
+        try {
+            double f0 = SineFit.estimateFrequencyHz(probe, reference.sampleRateHz());
+            // A three-parameter fit at the spectral peak is one pass. For a tone, a frequency error of δ bins
+            // leaves a residual of about (πδ)²/3 of its power: 35 dB below it at δ = 0.01, still 15 dB at
+            // δ = 0.1 (analytic, from the linear phase drift across the record); programme material stays far
+            // below the screen. Only candidates pay for the iterated four-parameter fit.
+            if (!(SineFit.fitKnownFrequency(probe, reference.sampleRateHz(), f0).sinadDb() > TONE_SCREEN_DB)) {
+                return false;
+            }
+            fit = SineFit.fit(probe, reference.sampleRateHz(), f0);
+        } catch (RuntimeException e) {
+            return false;
+        }
+        return fit.sinadDb() > TONE_THRESHOLD_DB;
+    }
+
+    /**
+     * The first {@value #TONE_SAMPLES} codes' levels in signal units: the table's span mapped onto full scale
+     * [-1, 1].
+     */
+    private static Signal head(Codes codes, LevelTable table, double rate) {
+        int[] c = codes.unsafeCodes();
+        double[] v = new double[Math.min(c.length, TONE_SAMPLES)];
+        double mid = 0.5 * (table.minVolts() + table.maxVolts());
+        double half = 0.5 * (table.maxVolts() - table.minVolts());
+        for (int i = 0; i < v.length; i++) {
+            v[i] = (table.volts(c[i]) - mid) / half;
+        }
+        return Signal.wrap(v, rate);
+    }
+
+    static String describe(BuildPlan plan, Conditioner.Conditioned c) {
+        List<String> parts = new ArrayList<>();
+        parts.add(plan.conditioning().removeDc() ? "DC removed" : "DC kept");
+        if (c.trimmedStartSeconds() > 0 || c.trimmedEndSeconds() > 0) {
+            parts.add(String.format(Locale.ROOT, "trimmed %.0f ms + %.0f ms", 1000 * c.trimmedStartSeconds(),
+                    1000 * c.trimmedEndSeconds()));
+        }
+        if (plan.conditioning().normalizeDbfs().isPresent()) {
+            parts.add(String.format(Locale.ROOT, "normalized to %.1f dBFS (%+.1f dB)",
+                    plan.conditioning().normalizeDbfs().getAsDouble(), c.gainDb()));
+        } else if (plan.conditioning().gainDb().isPresent()) {
+            parts.add(String.format(Locale.ROOT, "gain %+.1f dB", c.gainDb()));
+        }
+        if (plan.conditioning().fadeInSeconds() > 0 || plan.conditioning().fadeOutSeconds() > 0) {
+            parts.add(String.format(Locale.ROOT, "fades %.0f/%.0f ms", 1000 * plan.conditioning().fadeInSeconds(),
+                    1000 * plan.conditioning().fadeOutSeconds()));
+        }
+        return String.join(", ", parts);
+    }
+}
