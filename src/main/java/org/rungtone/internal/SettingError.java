@@ -58,7 +58,7 @@ public final class SettingError extends InputError {
         StringBuilder b = new StringBuilder();
         while (m.find()) {
             String key = m.group(1);
-            String name = Setting.ofKey(key).map(nameOf).orElse(key);
+            String name = Setting.ofKey(key).map(nameOf).orElse(m.group());
             m.appendReplacement(b, Matcher.quoteReplacement(name));
         }
         m.appendTail(b);
