@@ -14,7 +14,8 @@ import java.nio.file.StandardCopyOption;
 
 /**
  * The one way Rungtone writes files: into a temporary file beside the target, then an atomic move into
- * place, so a failed run never leaves a half-written file. Folder problems become {@link InputError}s.
+ * place, so a failed run never leaves a half-written file. Below an open {@link OutputFolder} the write goes
+ * to its staging folder. Folder problems become {@link InputError}s.
  */
 public final class AtomicFiles {
     /** The fix every folder message ends with; the folder may come from an option or a project file. */
@@ -35,23 +36,24 @@ public final class AtomicFiles {
      *
      * @throws InputError when the path is a file or cannot be created or written
      */
-    public static Path prepareFolder(Path dir) {
+    public static Path prepareFolder(Path folder) {
+        Path dir = OutputFolder.redirect(folder);
         if (Files.exists(dir) && !Files.isDirectory(dir)) {
-            throw new SettingError(Setting.OUT, dir + ": the output folder is an existing file; " + CHOOSE, null);
+            throw new SettingError(Setting.OUT, folder + ": the output folder is an existing file; " + CHOOSE, null);
         }
         try {
             Files.createDirectories(dir);
         } catch (FileAlreadyExistsException | NotDirectoryException e) {
-            throw new SettingError(Setting.OUT, dir + ": cannot create output folder, a part of its path is a file; "
+            throw new SettingError(Setting.OUT, folder + ": cannot create output folder, a part of its path is a file; "
                     + CHOOSE, e);
         } catch (IOException e) {
-            throw new SettingError(Setting.OUT, dir + ": cannot create output folder (" + reason(e) + "); " + CHOOSE,
+            throw new SettingError(Setting.OUT, folder + ": cannot create output folder (" + reason(e) + "); " + CHOOSE,
                     e);
         }
         if (!Files.isWritable(dir)) {
-            throw new SettingError(Setting.OUT, dir + ": output folder is not writable; " + CHOOSE, null);
+            throw new SettingError(Setting.OUT, folder + ": output folder is not writable; " + CHOOSE, null);
         }
-        return dir;
+        return folder;
     }
 
     /**
@@ -93,9 +95,9 @@ public final class AtomicFiles {
      * @throws InputError when the folder cannot be written
      */
     public static void write(Path target, Writer writer) {
-        Path abs = target.toAbsolutePath();
+        Path abs = OutputFolder.redirect(target);
         Path dir = abs.getParent();
-        prepareFolder(dir);
+        prepareFolder(target.toAbsolutePath().getParent());
         Path tmp = null;
         try {
             // Not Files.createTempFile: that makes the file owner-only; a new file here follows the umask.

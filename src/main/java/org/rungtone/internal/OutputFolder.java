@@ -1,0 +1,284 @@
+package org.rungtone.internal;
+
+import java.io.IOException;
+import java.nio.channels.FileChannel;
+import java.nio.channels.FileLock;
+import java.nio.channels.OverlappingFileLockException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.DirectoryNotEmptyException;
+import java.nio.file.FileVisitResult;
+import java.nio.file.Files;
+import java.nio.file.LinkOption;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.nio.file.SimpleFileVisitor;
+import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
+import java.nio.file.attribute.BasicFileAttributes;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Set;
+import java.util.TreeSet;
+import java.util.concurrent.CopyOnWriteArrayList;
+import java.util.stream.Stream;
+
+/**
+ * An output folder replaced as a whole. While it is open, every {@link AtomicFiles} write below the folder goes
+ * to a staging folder beside it; {@link #commit()} then puts the files the user put there (those not in the
+ * previous run's manifest) into the staging folder too, writes the new manifest and swaps the staging folder
+ * into place. Until then the folder stays exactly as it was: an error, an interrupt (the JVM's shutdown hook
+ * removes the staging folder) or a full disk leave it untouched and no staging folder behind. Files that the
+ * previous run wrote and this one does not are gone after the swap; files the user put there are kept.
+ *
+ * <p>A lock file beside the folder keeps two Rungtone commands from writing it at once: the second stops
+ * with an {@link InputError}. A swap cut short between its two renames is finished by the next open.
+ */
+public final class OutputFolder implements AutoCloseable {
+    /** The manifest of the files Rungtone wrote, one relative path a line, kept in the folder. */
+    public static final String MANIFEST = ".rungtone-files";
+    /** Most entries a folder may hold that Rungtone did not write: more means it is not an output folder. */
+    static final int MAX_FOREIGN_ENTRIES = 2_000;
+
+    private static final List<OutputFolder> ACTIVE = new CopyOnWriteArrayList<>();
+
+    private final Path dir;
+    private final Path staging;
+    private final Path backup;
+    private final FileChannel lockChannel;
+    private final FileLock lock;
+    private final Thread cleanup;
+    private boolean finished;
+
+    private OutputFolder(Path dir, FileChannel lockChannel, FileLock lock) throws IOException {
+        this.dir = dir;
+        this.lockChannel = lockChannel;
+        this.lock = lock;
+        String name = dir.getFileName().toString();
+        this.backup = dir.resolveSibling("." + name + ".rungtone-old");
+        this.staging = dir.resolveSibling("." + name + ".rungtone-new");
+        deleteTree(staging);
+        Files.createDirectories(staging);
+        this.cleanup = new Thread(this::abandon, "rungtone-output-cleanup");
+        Runtime.getRuntime().addShutdownHook(cleanup);
+        ACTIVE.add(this);
+    }
+
+    /**
+     * Opens {@code dir} for a new set of outputs.
+     *
+     * @throws InputError when the folder cannot be one (a file, not writable, the current folder or one of its
+     *     parents), or another Rungtone command is writing it
+     */
+    public static OutputFolder open(Path dir) {
+        Path abs = dir.toAbsolutePath().normalize();
+        AtomicFiles.checkFolderUsable(abs);
+        Path cwd = Path.of("").toAbsolutePath().normalize();
+        if (abs.getParent() == null || cwd.startsWith(abs)) {
+            throw new SettingError(Setting.OUT, dir + ": the output folder would be replaced as a whole, and it"
+                    + " holds the current folder; choose a folder of its own (" + Setting.OUT.ref() + ")", null);
+        }
+        FileChannel channel = null;
+        try {
+            Files.createDirectories(abs.getParent());
+            Path lockFile = abs.resolveSibling("." + abs.getFileName() + ".rungtone-lock");
+            channel = FileChannel.open(lockFile, StandardOpenOption.CREATE, StandardOpenOption.WRITE);
+            FileLock lock;
+            try {
+                lock = channel.tryLock();
+            } catch (OverlappingFileLockException e) {
+                lock = null;
+            }
+            if (lock == null) {
+                throw new InputError("another Rungtone command is writing " + dir + "; wait for it to finish");
+            }
+            recover(abs);
+            OutputFolder f = new OutputFolder(abs, channel, lock);
+            channel = null;
+            return f;
+        } catch (IOException e) {
+            throw new SettingError(Setting.OUT, dir + ": cannot prepare the output folder (" + e.getMessage()
+                    + "); choose another output folder (" + Setting.OUT.ref() + ")", e);
+        } finally {
+            closeQuietly(channel);
+        }
+    }
+
+    /** The final folder (absolute). */
+    public Path dir() {
+        return dir;
+    }
+
+    /** Where a write aimed at {@code target} goes now: its place in an open folder's staging, else itself. */
+    static Path redirect(Path target) {
+        Path abs = target.toAbsolutePath().normalize();
+        for (OutputFolder f : ACTIVE) {
+            if (abs.startsWith(f.dir)) {
+                return f.staging.resolve(f.dir.relativize(abs).toString());
+            }
+        }
+        return abs;
+    }
+
+    /**
+     * Puts the new outputs in place: the user's own files are carried over, the new manifest written, and the
+     * staging folder swapped with the folder.
+     *
+     * @throws InputError when the folder cannot be replaced; it is then as it was
+     */
+    public synchronized void commit() {
+        try {
+            Set<String> written = list(staging);
+            Set<String> previous = readManifest(dir);
+            carryOver(written, previous);
+            Files.writeString(staging.resolve(MANIFEST), manifest(written), StandardCharsets.UTF_8);
+            if (Files.exists(dir, LinkOption.NOFOLLOW_LINKS)) {
+                Files.move(dir, backup, StandardCopyOption.ATOMIC_MOVE);
+                Files.move(staging, dir, StandardCopyOption.ATOMIC_MOVE);
+                deleteTree(backup);
+            } else {
+                Files.move(staging, dir, StandardCopyOption.ATOMIC_MOVE);
+            }
+            finished = true;
+        } catch (IOException e) {
+            throw new SettingError(Setting.OUT, dir + ": cannot replace the output folder (" + e.getMessage()
+                    + "); it is as it was", e);
+        }
+    }
+
+    /** Removes the staging folder unless committed, and releases the lock. */
+    @Override
+    public void close() {
+        abandon();
+        ACTIVE.remove(this);
+        try {
+            Runtime.getRuntime().removeShutdownHook(cleanup);
+        } catch (IllegalStateException ignored) {
+            // the JVM is shutting down: the hook runs anyway
+        }
+        try {
+            lock.release();
+        } catch (IOException ignored) {
+            // the lock goes with the process
+        }
+        closeQuietly(lockChannel);
+    }
+
+    private synchronized void abandon() {
+        if (!finished) {
+            finished = true;
+            try {
+                deleteTree(staging);
+            } catch (IOException ignored) {
+                // a hidden staging folder is left; the next open removes it
+            }
+        }
+    }
+
+    /** Links (or copies) every file of the folder that no Rungtone run wrote into the staging folder. */
+    private void carryOver(Set<String> written, Set<String> previous) throws IOException {
+        if (!Files.isDirectory(dir)) {
+            return;
+        }
+        List<String> foreign = new ArrayList<>();
+        for (String rel : list(dir)) {
+            if (!previous.contains(rel) && !written.contains(rel) && !rel.equals(MANIFEST)) {
+                foreign.add(rel);
+            }
+        }
+        if (foreign.size() > MAX_FOREIGN_ENTRIES) {
+            throw new InputError(dir + " holds " + foreign.size() + " files Rungtone did not write; an output"
+                    + " folder is replaced as a whole, so choose a folder of its own (" + Setting.OUT.key() + ")");
+        }
+        for (String rel : foreign) {
+            Path from = dir.resolve(rel);
+            Path to = staging.resolve(rel);
+            Files.createDirectories(to.getParent());
+            try {
+                Files.createLink(to, from);
+            } catch (IOException | UnsupportedOperationException e) {
+                Files.copy(from, to, StandardCopyOption.COPY_ATTRIBUTES, LinkOption.NOFOLLOW_LINKS);
+            }
+        }
+    }
+
+    /** Finishes a swap that was cut short between its renames, and removes a leftover staging folder. */
+    private static void recover(Path dir) throws IOException {
+        Path backup = dir.resolveSibling("." + dir.getFileName() + ".rungtone-old");
+        if (Files.isDirectory(backup)) {
+            if (Files.exists(dir, LinkOption.NOFOLLOW_LINKS)) {
+                deleteTree(backup);
+            } else {
+                Files.move(backup, dir, StandardCopyOption.ATOMIC_MOVE);
+            }
+        }
+    }
+
+    private static Set<String> readManifest(Path dir) throws IOException {
+        Set<String> out = new TreeSet<>();
+        try {
+            for (String line : Files.readAllLines(dir.resolve(MANIFEST), StandardCharsets.UTF_8)) {
+                if (!line.isBlank() && !line.startsWith("#")) {
+                    out.add(line);
+                }
+            }
+        } catch (NoSuchFileException e) {
+            return out;
+        }
+        return out;
+    }
+
+    private static String manifest(Set<String> files) {
+        StringBuilder b = new StringBuilder("# Files the last Rungtone run wrote here; a new run replaces them."
+                + " Files not listed are yours and are kept.\n");
+        for (String f : files) {
+            b.append(f).append('\n');
+        }
+        return b.toString();
+    }
+
+    /** Every regular file below {@code root}, as relative paths with forward slashes, sorted. */
+    private static Set<String> list(Path root) throws IOException {
+        Set<String> out = new TreeSet<>();
+        if (!Files.isDirectory(root)) {
+            return out;
+        }
+        try (Stream<Path> s = Files.walk(root)) {
+            s.filter(p -> !Files.isDirectory(p, LinkOption.NOFOLLOW_LINKS))
+                    .forEach(p -> out.add(root.relativize(p).toString().replace('\\', '/')));
+        }
+        return out;
+    }
+
+    static void deleteTree(Path root) throws IOException {
+        if (!Files.exists(root, LinkOption.NOFOLLOW_LINKS)) {
+            return;
+        }
+        Files.walkFileTree(root, new SimpleFileVisitor<>() {
+            @Override
+            public FileVisitResult visitFile(Path file, BasicFileAttributes attrs) throws IOException {
+                Files.deleteIfExists(file);
+                return FileVisitResult.CONTINUE;
+            }
+
+            @Override
+            public FileVisitResult postVisitDirectory(Path d, IOException e) throws IOException {
+                try {
+                    Files.deleteIfExists(d);
+                } catch (DirectoryNotEmptyException ignored) {
+                    // a file appeared meanwhile; leave the folder
+                }
+                return FileVisitResult.CONTINUE;
+            }
+        });
+    }
+
+    private static void closeQuietly(FileChannel c) {
+        if (c != null) {
+            try {
+                c.close();
+            } catch (IOException ignored) {
+                // nothing to do
+            }
+        }
+    }
+}
