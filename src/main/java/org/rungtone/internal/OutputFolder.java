@@ -1,11 +1,9 @@
 package org.rungtone.internal;
 
 import java.io.IOException;
-import java.nio.channels.FileChannel;
-import java.nio.channels.FileLock;
-import java.nio.channels.OverlappingFileLockException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.DirectoryNotEmptyException;
+import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.FileVisitResult;
 import java.nio.file.Files;
 import java.nio.file.LinkOption;
@@ -13,7 +11,6 @@ import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.nio.file.SimpleFileVisitor;
 import java.nio.file.StandardCopyOption;
-import java.nio.file.StandardOpenOption;
 import java.nio.file.attribute.BasicFileAttributes;
 import java.util.ArrayList;
 import java.util.List;
@@ -30,34 +27,40 @@ import java.util.stream.Stream;
  * removes the staging folder) or a full disk leave it untouched and no staging folder behind. Files that the
  * previous run wrote and this one does not are gone after the swap; files the user put there are kept.
  *
- * <p>A lock file beside the folder keeps two Rungtone commands from writing it at once: the second stops
- * with an {@link InputError}. A swap cut short between its two renames is finished by the next open.
+ * <p>The staging folder is also the lock that keeps two Rungtone commands from writing the folder at once:
+ * the second stops with an {@link InputError}; one left by a run that was killed is removed. A swap cut short between its two renames is finished by the next open. A folder
+ * opened inside one already open is part of it: its commit and close do nothing.
  */
 public final class OutputFolder implements AutoCloseable {
     /** The manifest of the files Rungtone wrote, one relative path a line, kept in the folder. */
     public static final String MANIFEST = ".rungtone-files";
+    /** The staging folder's owner: the process id of the command writing it. */
+    private static final String OWNER = ".rungtone-owner";
     /** Most entries a folder may hold that Rungtone did not write: more means it is not an output folder. */
     static final int MAX_FOREIGN_ENTRIES = 2_000;
 
     private static final List<OutputFolder> ACTIVE = new CopyOnWriteArrayList<>();
 
     private final Path dir;
+    private final boolean nested;
     private final Path staging;
     private final Path backup;
-    private final FileChannel lockChannel;
-    private final FileLock lock;
     private final Thread cleanup;
     private boolean finished;
 
-    private OutputFolder(Path dir, FileChannel lockChannel, FileLock lock) throws IOException {
+    private OutputFolder(Path dir) {
         this.dir = dir;
-        this.lockChannel = lockChannel;
-        this.lock = lock;
-        String name = dir.getFileName().toString();
-        this.backup = dir.resolveSibling("." + name + ".rungtone-old");
-        this.staging = dir.resolveSibling("." + name + ".rungtone-new");
-        deleteTree(staging);
-        Files.createDirectories(staging);
+        this.nested = true;
+        this.staging = null;
+        this.backup = null;
+        this.cleanup = null;
+    }
+
+    private OutputFolder(Path dir, Path staging) {
+        this.dir = dir;
+        this.nested = false;
+        this.staging = staging;
+        this.backup = dir.resolveSibling("." + dir.getFileName() + ".rungtone-old");
         this.cleanup = new Thread(this::abandon, "rungtone-output-cleanup");
         Runtime.getRuntime().addShutdownHook(cleanup);
         ACTIVE.add(this);
@@ -71,41 +74,69 @@ public final class OutputFolder implements AutoCloseable {
      */
     public static OutputFolder open(Path dir) {
         Path abs = dir.toAbsolutePath().normalize();
+        for (OutputFolder f : ACTIVE) {
+            if (abs.startsWith(f.dir)) {
+                return new OutputFolder(abs); // inside a folder already open: its commit covers this one
+            }
+        }
         AtomicFiles.checkFolderUsable(abs);
         Path cwd = Path.of("").toAbsolutePath().normalize();
         if (abs.getParent() == null || cwd.startsWith(abs)) {
             throw new SettingError(Setting.OUT, dir + ": the output folder would be replaced as a whole, and it"
                     + " holds the current folder; choose a folder of its own (" + Setting.OUT.ref() + ")", null);
         }
-        FileChannel channel = null;
+        Path staging = abs.resolveSibling("." + abs.getFileName() + ".rungtone-new");
         try {
             Files.createDirectories(abs.getParent());
-            Path lockFile = abs.resolveSibling("." + abs.getFileName() + ".rungtone-lock");
-            channel = FileChannel.open(lockFile, StandardOpenOption.CREATE, StandardOpenOption.WRITE);
-            FileLock lock;
-            try {
-                lock = channel.tryLock();
-            } catch (OverlappingFileLockException e) {
-                lock = null;
-            }
-            if (lock == null) {
-                throw new InputError("another Rungtone command is writing " + dir + "; wait for it to finish");
-            }
+            claim(staging, dir);
             recover(abs);
-            OutputFolder f = new OutputFolder(abs, channel, lock);
-            channel = null;
-            return f;
+            return new OutputFolder(abs, staging);
         } catch (IOException e) {
             throw new SettingError(Setting.OUT, dir + ": cannot prepare the output folder (" + e.getMessage()
                     + "); choose another output folder (" + Setting.OUT.ref() + ")", e);
-        } finally {
-            closeQuietly(channel);
+        }
+    }
+
+    /**
+     * Makes the staging folder, which is the lock: it holds the process id of its owner. A staging folder
+     * whose owner has ended is left from an interrupted run and is removed.
+     */
+    private static void claim(Path staging, Path dir) throws IOException {
+        for (int attempt = 0; attempt < 2; attempt++) {
+            try {
+                Files.createDirectory(staging);
+                Files.writeString(staging.resolve(OWNER), Long.toString(ProcessHandle.current().pid()));
+                return;
+            } catch (FileAlreadyExistsException e) {
+                if (ownerAlive(staging)) {
+                    throw new InputError("another Rungtone command is writing " + dir + "; wait for it to finish");
+                }
+                deleteTree(staging);
+            }
+        }
+        throw new InputError("another Rungtone command is writing " + dir + "; wait for it to finish");
+    }
+
+    /** True when the staging folder's owner still runs, or it is too new to have written its owner. */
+    private static boolean ownerAlive(Path staging) throws IOException {
+        try {
+            long pid = Long.parseLong(Files.readString(staging.resolve(OWNER)).trim());
+            return pid != ProcessHandle.current().pid() && ProcessHandle.of(pid).map(ProcessHandle::isAlive)
+                    .orElse(false);
+        } catch (NoSuchFileException | NumberFormatException e) {
+            java.nio.file.attribute.FileTime made = Files.getLastModifiedTime(staging);
+            return System.currentTimeMillis() - made.toMillis() < 10_000;
         }
     }
 
     /** The final folder (absolute). */
     public Path dir() {
         return dir;
+    }
+
+    /** Where a file written below an open folder is until the commit: for reading it back before then. */
+    public static Path staged(Path target) {
+        return redirect(target);
     }
 
     /** Where a write aimed at {@code target} goes now: its place in an open folder's staging, else itself. */
@@ -126,7 +157,11 @@ public final class OutputFolder implements AutoCloseable {
      * @throws InputError when the folder cannot be replaced; it is then as it was
      */
     public synchronized void commit() {
+        if (nested) {
+            return;
+        }
         try {
+            Files.delete(staging.resolve(OWNER));
             Set<String> written = list(staging);
             Set<String> previous = readManifest(dir);
             carryOver(written, previous);
@@ -145,9 +180,12 @@ public final class OutputFolder implements AutoCloseable {
         }
     }
 
-    /** Removes the staging folder unless committed, and releases the lock. */
+    /** Removes the staging folder unless committed. */
     @Override
     public void close() {
+        if (nested) {
+            return;
+        }
         abandon();
         ACTIVE.remove(this);
         try {
@@ -155,12 +193,6 @@ public final class OutputFolder implements AutoCloseable {
         } catch (IllegalStateException ignored) {
             // the JVM is shutting down: the hook runs anyway
         }
-        try {
-            lock.release();
-        } catch (IOException ignored) {
-            // the lock goes with the process
-        }
-        closeQuietly(lockChannel);
     }
 
     private synchronized void abandon() {
@@ -270,15 +302,5 @@ public final class OutputFolder implements AutoCloseable {
                 return FileVisitResult.CONTINUE;
             }
         });
-    }
-
-    private static void closeQuietly(FileChannel c) {
-        if (c != null) {
-            try {
-                c.close();
-            } catch (IOException ignored) {
-                // nothing to do
-            }
-        }
     }
 }

@@ -32,6 +32,7 @@ import org.rungtone.firmware.SampleStorage;
 import org.rungtone.firmware.SoundClip;
 import org.rungtone.firmware.Templates;
 import org.rungtone.internal.AtomicFiles;
+import org.rungtone.internal.OutputFolder;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.Units;
 import org.rungtone.ladder.LevelTable;
@@ -72,12 +73,20 @@ public final class Build {
     }
 
     /**
-     * Runs the plan and writes every output into the plan's folder.
+     * Runs the plan and writes every output into the plan's folder, replacing the folder's previous outputs as
+     * a whole ({@link OutputFolder}).
      *
-     * @throws InputError for anything the user can fix; no output file is left half-written
+     * @throws InputError for anything the user can fix; the folder is then as it was
      */
     public BuildSummary run(BuildPlan plan) {
-        AtomicFiles.checkFolderUsable(plan.outDir());
+        try (OutputFolder folder = OutputFolder.open(plan.outDir())) {
+            BuildSummary summary = write(plan);
+            folder.commit();
+            return summary;
+        }
+    }
+
+    private BuildSummary write(BuildPlan plan) {
         CompletableFuture<Void> plotsReady = CompletableFuture.runAsync(Plots::warmUp);
         SoundRenderer.Rendered r = new SoundRenderer(span, progress).render(plan);
         Stopwatch watch = new Stopwatch(progress);
@@ -102,14 +111,8 @@ public final class Build {
                 files.addAll(emitArray(plan.symbol(), r, plan.outDir()));
             }
         } catch (RuntimeException e) {
-            // Leave nothing behind: wait for the assets and remove what they wrote.
-            try {
-                for (Path p : Jobs.join(assets)) {
-                    java.nio.file.Files.deleteIfExists(p);
-                }
-            } catch (RuntimeException | java.io.IOException suppressed) {
-                e.addSuppressed(suppressed);
-            }
+            // the staging folder goes once the assets are done with it
+            assets.handle((done, failed) -> null).join();
             throw e;
         }
         watch.lap("emit");

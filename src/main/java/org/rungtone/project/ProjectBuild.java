@@ -25,6 +25,7 @@ import org.rungtone.firmware.SampleStorage;
 import org.rungtone.firmware.TimerKind;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.OutputFolder;
 import org.rungtone.internal.Setting;
 import org.rungtone.internal.SettingError;
 import org.rungtone.internal.Units;
@@ -170,6 +171,14 @@ public final class ProjectBuild {
 
     private Result build(Project project, Overrides o) {
         Shared shared = settle(project, o);
+        try (OutputFolder folder = OutputFolder.open(shared.outDir())) {
+            Result r = build(project, o, shared);
+            folder.commit();
+            return r;
+        }
+    }
+
+    private Result build(Project project, Overrides o, Shared shared) {
         Optional<FirmwareRequest> player = player(project, o, shared.settings());
         if (player.isPresent()) {
             checkOneRate(project, o, shared.rateHz());

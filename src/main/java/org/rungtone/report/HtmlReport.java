@@ -391,7 +391,7 @@ public final class HtmlReport {
     private static byte[] readPng(Path f) {
         byte[] bytes;
         try {
-            bytes = Files.readAllBytes(f);
+            bytes = Files.readAllBytes(org.rungtone.internal.OutputFolder.staged(f));
         } catch (IOException e) {
             throw new InputError(f + ": cannot read this plot for report.html (" + e.getClass().getSimpleName()
                     + "); rebuild to write it again", e);

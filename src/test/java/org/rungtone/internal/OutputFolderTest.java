@@ -49,8 +49,7 @@ class OutputFolderTest {
         assertEquals("one", Files.readString(dir.resolve("a.c")));
         assertEquals("a.c", Files.readAllLines(dir.resolve(OutputFolder.MANIFEST)).get(1));
         try (Stream<Path> s = Files.list(tmp)) {
-            assertEquals(List.of("out"), s.map(p -> p.getFileName().toString())
-                    .filter(n -> !n.endsWith(".rungtone-lock")).toList());
+            assertEquals(List.of("out"), s.map(p -> p.getFileName().toString()).toList());
         }
     }
 
@@ -84,15 +83,24 @@ class OutputFolderTest {
     }
 
     @Test
-    void aSecondWriterIsRefused() {
+    void aSecondWriterIsRefusedAndAKilledOnesStagingRemoved() throws Exception {
         Path dir = tmp.resolve("out");
-        try (OutputFolder f = OutputFolder.open(dir)) {
-            InputError e = assertThrows(InputError.class, () -> OutputFolder.open(dir));
-            assertEquals("another Rungtone command is writing " + dir + "; wait for it to finish", e.getMessage());
-        }
-        try (OutputFolder again = OutputFolder.open(dir)) {
-            assertEquals(dir.toAbsolutePath(), again.dir());
-        }
+        Path staging = tmp.resolve(".out.rungtone-new");
+        Files.createDirectories(staging);
+        long alive = ProcessHandle.current().parent().orElseThrow().pid();
+        Files.writeString(staging.resolve(".rungtone-owner"), Long.toString(alive));
+        InputError e = assertThrows(InputError.class, () -> OutputFolder.open(dir));
+        assertEquals("another Rungtone command is writing " + dir + "; wait for it to finish", e.getMessage());
+
+        Process gone = new ProcessBuilder("true").start();
+        gone.waitFor();
+        Files.writeString(staging.resolve(".rungtone-owner"), Long.toString(gone.pid()));
+        Files.writeString(staging.resolve("half.c"), "half-written by a killed run");
+        build(dir, List.of("a.c"), "whole");
+        TreeMap<String, String> now = contents(dir);
+        now.remove(OutputFolder.MANIFEST);
+        assertEquals("{a.c=whole}", now.toString());
+        assertFalse(Files.exists(staging));
     }
 
     @Test
