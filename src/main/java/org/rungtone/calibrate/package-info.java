@@ -6,6 +6,8 @@
  * into {@code build}, {@code survey} and {@code ladder} ({@link org.rungtone.calibrate.UnitProfile}). A
  * simulated board ({@link org.rungtone.calibrate.SimulatedBoard}) stands in for the bench in demos and tests,
  * and {@link org.rungtone.calibrate.OutputSpan} chooses the span that compensated quantization maps onto.
- * Nothing here writes files: texts are returned for the command line to write.
+ * {@link org.rungtone.calibrate.UnitFit} and {@link org.rungtone.calibrate.BoardSimulation} are the work of
+ * {@code calibrate fit} and {@code calibrate simulate}. Nothing here writes files: texts and results are
+ * returned for the report to write.
  */
 package org.rungtone.calibrate;

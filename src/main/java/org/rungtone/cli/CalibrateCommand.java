@@ -1,22 +1,16 @@
 package org.rungtone.cli;
 
-import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.Locale;
 import java.util.concurrent.Callable;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVPrinter;
-import org.rungtone.calibrate.MeasurementPlan;
+import org.rungtone.calibrate.BoardSimulation;
 import org.rungtone.calibrate.SimulatedBoard;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.internal.InputError;
-import org.rungtone.internal.Units;
 import org.rungtone.ladder.LadderSpec;
-import org.rungtone.ladder.LevelTable;
-import org.rungtone.ladder.Part;
-import org.rungtone.ladder.Spread;
+import org.rungtone.report.CalibrationFiles;
+import org.rungtone.report.CalibrationReport;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -97,47 +91,16 @@ public final class CalibrateCommand implements Runnable {
             }
             SimulatedBoard.Meter meter = new SimulatedBoard.Meter(noise, resolution, repeat);
             AtomicFiles.checkFolderUsable(out);
-            LadderSpec s = codes.spec();
-            MeasurementPlan plan = codes.plan(s);
-            SimulatedBoard board = SimulatedBoard.draw(s, Spread.uniform(), seed);
-            Path readings = out.resolve("readings.csv");
-            Path truth = out.resolve("true-levels.csv");
-            String header = String.format(Locale.ROOT, "# Simulated board: %s drawn with seed %d; meter noise %s"
-                    + " rms, step %s, %d reading%s per code.%n", s.describe(), seed, Units.format(noise, "V"),
-                    Units.format(resolution, "V"), repeat, repeat == 1 ? "" : "s");
-            AtomicFiles.writeString(readings, header + board.filledCsv(plan, meter, seed * 31 + 7));
-            AtomicFiles.writeString(truth, levelsCsv(board.levels()));
+            LadderSpec ladder = codes.spec();
+            BoardSimulation.Result r = BoardSimulation.run(new BoardSimulation.Request(ladder, codes.choice(),
+                    meter, seed));
+            List<Path> files = CalibrationFiles.writeSimulation(r, out);
             PrintWriter o = spec.commandLine().getOut();
             if (!common.quiet) {
-                o.printf(Locale.ROOT, "Simulated board: %s, seed %d%n", s.describe(), seed);
-                List<Part> nominal = s.parts();
-                List<Part> drawn = board.ladder().parts();
-                for (int i = 0; i < drawn.size(); i++) {
-                    o.printf(Locale.ROOT, "  %-14s %10s  (%+.2f %%)%n", drawn.get(i).label(),
-                            Units.format(drawn.get(i).ohms(), ""), 100 * (drawn.get(i).ohms() / nominal.get(i).ohms()
-                                    - 1));
-                }
-                o.printf(Locale.ROOT, "  read at %d codes, %d time%s each; meter noise %s rms, step %s%n",
-                        plan.codes().size(), repeat, repeat == 1 ? "" : "s", Units.format(noise, "V"),
-                        Units.format(resolution, "V"));
-                o.printf(Locale.ROOT, "Wrote %s, %s%n", readings, truth);
-                o.printf(Locale.ROOT, "Next: rungtone calibrate fit %s (with the same ladder options)%n", readings);
+                o.print(CalibrationReport.simulationText(r, files));
             }
             o.flush();
             return 0;
-        }
-
-        private static String levelsCsv(LevelTable t) {
-            StringBuilder sb = new StringBuilder();
-            CSVFormat f = CSVFormat.DEFAULT.builder().setRecordSeparator("\n").setHeader("code", "volts").build();
-            try (CSVPrinter p = new CSVPrinter(sb, f)) {
-                for (int k = 0; k < t.size(); k++) {
-                    p.printRecord(k, String.format(Locale.ROOT, "%.9f", t.volts(k)));
-                }
-            } catch (IOException e) {
-                throw new IllegalStateException("CSV to memory failed", e);
-            }
-            return sb.toString();
         }
     }
 }

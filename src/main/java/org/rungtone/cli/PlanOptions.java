@@ -1,6 +1,7 @@
 package org.rungtone.cli;
 
-import org.rungtone.calibrate.MeasurementPlan;
+import java.util.OptionalInt;
+import org.rungtone.calibrate.CodeChoice;
 import org.rungtone.internal.InputError;
 import org.rungtone.ladder.LadderSpec;
 import picocli.CommandLine.Mixin;
@@ -33,9 +34,8 @@ public final class PlanOptions {
         return ladder.spec(bits);
     }
 
-    /** The codes to measure on a ladder with these modelled levels. */
-    MeasurementPlan plan(LadderSpec spec) {
-        return everyCode ? MeasurementPlan.everyCode(spec.levels())
-                : verify != null ? MeasurementPlan.of(spec.levels(), verify) : MeasurementPlan.of(spec.levels());
+    /** The choice of codes to measure. */
+    CodeChoice choice() {
+        return new CodeChoice(everyCode, verify == null ? OptionalInt.empty() : OptionalInt.of(verify));
     }
 }

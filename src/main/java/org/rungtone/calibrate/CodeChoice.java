@@ -1,0 +1,37 @@
+package org.rungtone.calibrate;
+
+import java.util.Objects;
+import java.util.OptionalInt;
+import org.rungtone.internal.Checks;
+import org.rungtone.ladder.LevelTable;
+
+/**
+ * Which codes a measurement plan holds: every code, the basis plus a given count of verification codes, or
+ * neither given, the default for the bit depth ({@link MeasurementPlan#of(LevelTable)}).
+ *
+ * @param everyCode measure every code
+ * @param verifyCount verification codes on top of the basis, when given
+ */
+public record CodeChoice(boolean everyCode, OptionalInt verifyCount) {
+    /**
+     * Checks the choice.
+     *
+     * @throws IllegalArgumentException when both every code and a verification count are asked for
+     * @throws org.rungtone.internal.InputError when the verification count is negative
+     */
+    public CodeChoice {
+        Objects.requireNonNull(verifyCount, "verifyCount");
+        Checks.checkArgument(!(everyCode && verifyCount.isPresent()),
+                "every code and a verification count exclude each other");
+        Checks.checkInput(verifyCount.orElse(0) >= 0, "--verify must be 0 or more: %d", verifyCount.orElse(0));
+    }
+
+    /** The plan of these codes on a ladder with these modelled levels. */
+    public MeasurementPlan plan(LevelTable expected) {
+        if (everyCode) {
+            return MeasurementPlan.everyCode(expected);
+        }
+        return verifyCount.isPresent() ? MeasurementPlan.of(expected, verifyCount.getAsInt())
+                : MeasurementPlan.of(expected);
+    }
+}

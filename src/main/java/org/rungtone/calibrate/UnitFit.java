@@ -1,0 +1,78 @@
+package org.rungtone.calibrate;
+
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.util.Objects;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import org.rungtone.internal.InputError;
+import org.rungtone.ladder.LadderSpec;
+
+/**
+ * The work of {@code calibrate fit}: reads a board's measurements, fits them ({@link BoardFit}) and makes the
+ * board's unit profile. Writes nothing; the report writes the profile and the residuals.
+ */
+public final class UnitFit {
+    private UnitFit() {
+    }
+
+    /**
+     * What to fit.
+     *
+     * @param measurements the readings file: a filled-in plan, or rows of code, volts
+     * @param bits bit depth, 0 for the ladder's, else the width of the file's binary column
+     * @param ladder the ladder the board was built as, when described
+     * @param board the board's name, empty for the readings' file name
+     * @param date the day of the readings
+     * @param resolutionVolts the meter's step, empty to take it from the readings' last digits
+     */
+    public record Request(Path measurements, int bits, Optional<LadderSpec> ladder, Optional<String> board,
+            LocalDate date, OptionalDouble resolutionVolts) {
+        /** Checks that every part is there. */
+        public Request {
+            Objects.requireNonNull(measurements, "measurements");
+            Objects.requireNonNull(ladder, "ladder");
+            Objects.requireNonNull(board, "board");
+            Objects.requireNonNull(date, "date");
+            Objects.requireNonNull(resolutionVolts, "resolutionVolts");
+        }
+    }
+
+    /**
+     * A fitted board.
+     *
+     * @param request what was fitted
+     * @param fit the models, residuals and chosen model
+     * @param profile the board's unit profile
+     */
+    public record Result(Request request, FitReport fit, UnitProfile profile) {
+    }
+
+    /**
+     * Reads, fits and makes the profile.
+     *
+     * @throws InputError when the readings cannot be read or fitted, or the board name is empty
+     */
+    public static Result run(Request r) {
+        Optional<LadderSpec> ladder = r.ladder();
+        int bitsOrZero = r.bits() != 0 ? r.bits() : ladder.map(LadderSpec::bits).orElse(0);
+        Measurements m = MeasurementCsv.read(r.measurements(), bitsOrZero);
+        BoardFit.Settings settings = new BoardFit.Settings(r.resolutionVolts().orElse(0),
+                ladder.map(s -> s.buffer().outMinVolts()).orElse(Double.NaN),
+                ladder.map(s -> s.buffer().outMaxVolts()).orElse(Double.NaN));
+        FitReport fit = BoardFit.fit(m, settings);
+        String board = r.board().map(String::trim).orElseGet(() -> stem(r.measurements()));
+        if (board.isEmpty()) {
+            throw new InputError("--board: the name is empty");
+        }
+        UnitProfile profile = UnitProfile.of(fit, board, r.date(), ladder.map(LadderSpec::describe).orElse(""));
+        return new Result(r, fit, profile);
+    }
+
+    /** The file name without its extension. */
+    static String stem(Path p) {
+        String f = p.getFileName() == null ? "board" : p.getFileName().toString();
+        int dot = f.lastIndexOf('.');
+        return dot > 0 ? f.substring(0, dot) : f;
+    }
+}
