@@ -51,6 +51,32 @@ public final class MeasurementCsv {
     }
 
     /**
+     * How many cells of the measured column of an existing file hold something: 0 for a fresh plan, -1 when the
+     * file cannot be read as a plan (then it may hold readings too).
+     */
+    public static int filledReadings(Path file) {
+        try {
+            String text = Files.readString(file, StandardCharsets.UTF_8);
+            CSVFormat format = CSVFormat.DEFAULT.builder().setCommentMarker('#').setHeader()
+                    .setSkipHeaderRecord(true).setIgnoreSurroundingSpaces(true).build();
+            int filled = 0;
+            try (CSVParser parser = CSVParser.parse(new StringReader(text), format)) {
+                if (!parser.getHeaderMap().containsKey("measured")) {
+                    return -1;
+                }
+                for (CSVRecord r : parser) {
+                    if (r.isMapped("measured") && r.isSet("measured") && !r.get("measured").isBlank()) {
+                        filled++;
+                    }
+                }
+            }
+            return filled;
+        } catch (IOException | RuntimeException e) {
+            return -1;
+        }
+    }
+
+    /**
      * Reads a measurement file of an N-bit board.
      *
      * @param bitsOrZero the bit depth, or 0 to take it from the width of the file's binary column

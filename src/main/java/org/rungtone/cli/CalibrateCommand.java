@@ -7,6 +7,7 @@ import java.util.concurrent.Callable;
 import org.rungtone.calibrate.BoardSimulation;
 import org.rungtone.calibrate.SimulatedBoard;
 import org.rungtone.internal.AtomicFiles;
+import org.rungtone.internal.OutputFolder;
 import org.rungtone.internal.InputError;
 import org.rungtone.ladder.LadderSpec;
 import org.rungtone.report.CalibrationFiles;
@@ -94,7 +95,11 @@ public final class CalibrateCommand implements Runnable {
             LadderSpec ladder = codes.spec();
             BoardSimulation.Result r = BoardSimulation.run(new BoardSimulation.Request(ladder, codes.choice(),
                     meter, seed));
-            List<Path> files = CalibrationFiles.writeSimulation(r, out);
+            List<Path> files;
+            try (OutputFolder folder = OutputFolder.open(out, "simulate")) {
+                files = CalibrationFiles.writeSimulation(r, out);
+                folder.commit();
+            }
             PrintWriter o = spec.commandLine().getOut();
             if (!common.quiet) {
                 o.print(CalibrationReport.simulationText(r, files));

@@ -10,6 +10,7 @@ import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 import org.rungtone.calibrate.UnitFit;
 import org.rungtone.internal.AtomicFiles;
+import org.rungtone.internal.OutputFolder;
 import org.rungtone.internal.InputError;
 import org.rungtone.ladder.LadderSpec;
 import org.rungtone.report.CalibrationFiles;
@@ -81,7 +82,11 @@ public final class CalibrateFitCommand implements Callable<Integer> {
         Optional<LadderSpec> ladderSpec = ladder.given() ? Optional.of(ladder.spec(bits)) : Optional.empty();
         UnitFit.Result r = UnitFit.run(new UnitFit.Request(measurements, bits, ladderSpec, Optional.ofNullable(board),
                 day, resolution == null ? OptionalDouble.empty() : OptionalDouble.of(resolution)));
-        List<Path> files = CalibrationFiles.writeProfile(r, out);
+        List<Path> files;
+        try (OutputFolder folder = OutputFolder.open(out, "fit")) {
+            files = CalibrationFiles.writeProfile(r, out);
+            folder.commit();
+        }
         PrintWriter o = spec.commandLine().getOut();
         if (json) {
             o.print(Json.toJson(UnitFitReport.json(r, files)));

@@ -9,6 +9,7 @@ import org.rungtone.calibrate.CodeChoice;
 import org.rungtone.firmware.FirmwareRequest;
 import org.rungtone.firmware.PlaybackEngine;
 import org.rungtone.internal.AtomicFiles;
+import org.rungtone.internal.OutputFolder;
 import org.rungtone.internal.InputError;
 import org.rungtone.ladder.LadderSpec;
 import org.rungtone.project.CalibrationPlan;
@@ -79,9 +80,14 @@ public final class CalibratePlanCommand implements Callable<Integer> {
         AtomicFiles.checkFolderUsable(out);
         LadderSpec ladderSpec = codes.spec();
         CodeChoice choice = codes.choice();
-        CalibrationReport.Plan plan = CalibrationPlan.run(new CalibrationPlan.Request(ladderSpec, choice,
-                sweepTarget(), name, Version.get(), holdSeconds, Optional.ofNullable(button), out));
-        List<Path> files = CalibrationFiles.writePlan(plan, out);
+        CalibrationReport.Plan plan;
+        List<Path> files;
+        try (OutputFolder folder = OutputFolder.open(out, "plan")) {
+            plan = CalibrationPlan.run(new CalibrationPlan.Request(ladderSpec, choice, sweepTarget(), name,
+                    Version.get(), holdSeconds, Optional.ofNullable(button), out));
+            files = CalibrationFiles.writePlan(plan, out);
+            folder.commit();
+        }
         PrintWriter o = spec.commandLine().getOut();
         if (json) {
             o.print(Json.toJson(CalibrationReport.planJson(plan, files)));

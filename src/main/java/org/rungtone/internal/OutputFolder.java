@@ -32,8 +32,8 @@ import java.util.stream.Stream;
  * opened inside one already open is part of it: its commit and close do nothing.
  */
 public final class OutputFolder implements AutoCloseable {
-    /** The manifest of the files Rungtone wrote, one relative path a line, kept in the folder. */
-    public static final String MANIFEST = ".rungtone-files";
+    /** The role of a build's outputs. */
+    public static final String BUILD = "build";
     /** The staging folder's owner: the process id of the command writing it. */
     private static final String OWNER = ".rungtone-owner";
     /** Most entries a folder may hold that Rungtone did not write: more means it is not an output folder. */
@@ -42,6 +42,7 @@ public final class OutputFolder implements AutoCloseable {
     private static final List<OutputFolder> ACTIVE = new CopyOnWriteArrayList<>();
 
     private final Path dir;
+    private final String manifest;
     private final boolean nested;
     private final Path staging;
     private final Path backup;
@@ -50,14 +51,16 @@ public final class OutputFolder implements AutoCloseable {
 
     private OutputFolder(Path dir) {
         this.dir = dir;
+        this.manifest = null;
         this.nested = true;
         this.staging = null;
         this.backup = null;
         this.cleanup = null;
     }
 
-    private OutputFolder(Path dir, Path staging) {
+    private OutputFolder(Path dir, String role, Path staging) {
         this.dir = dir;
+        this.manifest = manifestName(role);
         this.nested = false;
         this.staging = staging;
         this.backup = dir.resolveSibling("." + dir.getFileName() + ".rungtone-old");
@@ -66,13 +69,24 @@ public final class OutputFolder implements AutoCloseable {
         ACTIVE.add(this);
     }
 
+    /** The manifest of a role's files, one relative path a line, kept in the folder. */
+    public static String manifestName(String role) {
+        return ".rungtone-" + role + "-files";
+    }
+
+    /** Opens {@code dir} for a new set of a build's outputs. */
+    public static OutputFolder open(Path dir) {
+        return open(dir, BUILD);
+    }
+
     /**
-     * Opens {@code dir} for a new set of outputs.
+     * Opens {@code dir} for a new set of outputs of one role ({@code build}, {@code survey}, {@code plan}, ...):
+     * the files that other roles wrote there are kept like the user's own.
      *
      * @throws InputError when the folder cannot be one (a file, not writable, the current folder or one of its
      *     parents), or another Rungtone command is writing it
      */
-    public static OutputFolder open(Path dir) {
+    public static OutputFolder open(Path dir, String role) {
         Path abs = dir.toAbsolutePath().normalize();
         for (OutputFolder f : ACTIVE) {
             if (abs.startsWith(f.dir)) {
@@ -90,7 +104,7 @@ public final class OutputFolder implements AutoCloseable {
             Files.createDirectories(abs.getParent());
             claim(staging, dir);
             recover(abs);
-            return new OutputFolder(abs, staging);
+            return new OutputFolder(abs, role, staging);
         } catch (IOException e) {
             throw new SettingError(Setting.OUT, dir + ": cannot prepare the output folder (" + e.getMessage()
                     + "); choose another output folder (" + Setting.OUT.ref() + ")", e);
@@ -163,9 +177,9 @@ public final class OutputFolder implements AutoCloseable {
         try {
             Files.delete(staging.resolve(OWNER));
             Set<String> written = list(staging);
-            Set<String> previous = readManifest(dir);
+            Set<String> previous = readManifest(dir.resolve(manifest));
             carryOver(written, previous);
-            Files.writeString(staging.resolve(MANIFEST), manifest(written), StandardCharsets.UTF_8);
+            Files.writeString(staging.resolve(manifest), manifestText(written), StandardCharsets.UTF_8);
             if (Files.exists(dir, LinkOption.NOFOLLOW_LINKS)) {
                 Files.move(dir, backup, StandardCopyOption.ATOMIC_MOVE);
                 Files.move(staging, dir, StandardCopyOption.ATOMIC_MOVE);
@@ -213,7 +227,7 @@ public final class OutputFolder implements AutoCloseable {
         }
         List<String> foreign = new ArrayList<>();
         for (String rel : list(dir)) {
-            if (!previous.contains(rel) && !written.contains(rel) && !rel.equals(MANIFEST)) {
+            if (!previous.contains(rel) && !written.contains(rel) && !rel.equals(manifest)) {
                 foreign.add(rel);
             }
         }
@@ -245,10 +259,10 @@ public final class OutputFolder implements AutoCloseable {
         }
     }
 
-    private static Set<String> readManifest(Path dir) throws IOException {
+    private static Set<String> readManifest(Path file) throws IOException {
         Set<String> out = new TreeSet<>();
         try {
-            for (String line : Files.readAllLines(dir.resolve(MANIFEST), StandardCharsets.UTF_8)) {
+            for (String line : Files.readAllLines(file, StandardCharsets.UTF_8)) {
                 if (!line.isBlank() && !line.startsWith("#")) {
                     out.add(line);
                 }
@@ -259,7 +273,7 @@ public final class OutputFolder implements AutoCloseable {
         return out;
     }
 
-    private static String manifest(Set<String> files) {
+    private static String manifestText(Set<String> files) {
         StringBuilder b = new StringBuilder("# Files the last Rungtone run wrote here; a new run replaces them."
                 + " Files not listed are yours and are kept.\n");
         for (String f : files) {

@@ -14,6 +14,7 @@ import org.rungtone.calibrate.MeasurementPlan;
 import org.rungtone.calibrate.SimulatedBoard;
 import org.rungtone.calibrate.UnitFit;
 import org.rungtone.internal.AtomicFiles;
+import org.rungtone.internal.Setting;
 import org.rungtone.internal.Units;
 import org.rungtone.ladder.LevelTable;
 
@@ -35,9 +36,23 @@ public final class CalibrationFiles {
     private CalibrationFiles() {
     }
 
-    /** Writes the plan's CSV; returns it, then the sweep program's files. */
+    /**
+     * Writes the plan's CSV; returns it, then the sweep program's files.
+     *
+     * @throws org.rungtone.internal.SettingError when a plan there already holds readings: they are never
+     *     overwritten
+     */
     public static List<Path> writePlan(CalibrationReport.Plan p, Path out) {
         Path csv = out.resolve(PLAN_CSV);
+        if (java.nio.file.Files.exists(csv)) {
+            int filled = org.rungtone.calibrate.MeasurementCsv.filledReadings(csv);
+            if (filled != 0) {
+                throw Setting.OUT.problem("%s: %s; rename it (e.g. to readings.csv) to keep it, or write the new"
+                        + " plan elsewhere (%s)", csv, filled > 0 ? "already holds " + filled + " reading"
+                        + (filled == 1 ? "" : "s") : "is not a fresh plan and may hold readings",
+                        Setting.OUT.ref());
+            }
+        }
         AtomicFiles.writeString(csv, p.plan().csv());
         List<Path> files = new ArrayList<>();
         files.add(csv);

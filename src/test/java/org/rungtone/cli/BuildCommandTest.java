@@ -43,12 +43,12 @@ class BuildCommandTest {
         assertTrue(json.contains("\"samples\": 8000"), json);
         try (Stream<Path> s = Files.list(out)) {
             List<String> withManifest = new java.util.ArrayList<>(expected);
-            withManifest.add(".rungtone-files");
+            withManifest.add(".rungtone-build-files");
             assertEquals(withManifest.stream().sorted().toList(),
                     s.map(p -> p.getFileName().toString()).sorted().toList(), "no temporary files left behind");
         }
         // the manifest lists exactly the files the build wrote
-        assertEquals(expected.stream().sorted().toList(), Files.readAllLines(out.resolve(".rungtone-files"))
+        assertEquals(expected.stream().sorted().toList(), Files.readAllLines(out.resolve(".rungtone-build-files"))
                 .stream().skip(1).toList());
         // the fixture is C5, 523.25 Hz: the fitted frequency shows as 523.2 or 523.3 depending on the dither
         java.util.regex.Matcher tone = java.util.regex.Pattern.compile("single tone at 523\\.[23]Hz: SINAD"

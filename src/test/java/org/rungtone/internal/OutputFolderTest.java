@@ -47,7 +47,7 @@ class OutputFolderTest {
             f.commit();
         }
         assertEquals("one", Files.readString(dir.resolve("a.c")));
-        assertEquals("a.c", Files.readAllLines(dir.resolve(OutputFolder.MANIFEST)).get(1));
+        assertEquals("a.c", Files.readAllLines(dir.resolve(OutputFolder.manifestName(OutputFolder.BUILD))).get(1));
         try (Stream<Path> s = Files.list(tmp)) {
             assertEquals(List.of("out"), s.map(p -> p.getFileName().toString()).toList());
         }
@@ -61,7 +61,7 @@ class OutputFolderTest {
         Files.writeString(dir.resolve("door/listened.txt"), "mine too");
         build(dir, List.of("x.h", "door/preview.wav"), "v2");
         TreeMap<String, String> now = contents(dir);
-        now.remove(OutputFolder.MANIFEST);
+        now.remove(OutputFolder.manifestName(OutputFolder.BUILD));
         assertEquals("{door/listened.txt=mine too, door/preview.wav=v2, notes.txt=mine, x.h=v2}", now.toString());
         assertFalse(Files.exists(dir.resolve("bell")), "a sound removed from the project loses its folder");
     }
@@ -98,7 +98,7 @@ class OutputFolderTest {
         Files.writeString(staging.resolve("half.c"), "half-written by a killed run");
         build(dir, List.of("a.c"), "whole");
         TreeMap<String, String> now = contents(dir);
-        now.remove(OutputFolder.MANIFEST);
+        now.remove(OutputFolder.manifestName(OutputFolder.BUILD));
         assertEquals("{a.c=whole}", now.toString());
         assertFalse(Files.exists(staging));
     }
