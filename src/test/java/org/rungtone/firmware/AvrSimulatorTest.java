@@ -1,0 +1,378 @@
+package org.rungtone.firmware;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.junit.jupiter.api.Assertions.fail;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
+import org.rungtone.internal.AtomicFiles;
+import org.rungtone.quantize.Codes;
+import org.rungtone.testing.AvrSimulator;
+import org.rungtone.testing.AvrTrace;
+import org.rungtone.testing.AvrTrace.Interrupt;
+import org.rungtone.testing.AvrTrace.Write;
+
+/**
+ * Runs emitted AVR players, built with avr-gcc for the ATmega328P at 16 MHz, in simavr and checks them at
+ * the pins: the code the port writes put on the ladder at every tick is the sample array, pins outside the
+ * map keep their levels, the interrupt comes every timer period the build reports, and the pins change the
+ * same number of cycles after every interrupt. Each build's interrupt length is measured and printed as a
+ * table (cycles per tick, worst and mean while playing, after the sound ended).
+ */
+class AvrSimulatorTest {
+    /** Levels main() gives the pins outside the map before the player starts; they must never change. */
+    private static final int PORT_PATTERN = 0xA5;
+    private static final int DDR_PATTERN = 0x5A;
+    /** ATmega328P ports and the pins they have: PC7 does not exist (datasheet, "Pin Configurations"). */
+    private static final Map<String, Integer> PORT_PINS = new LinkedHashMap<>(Map.of("B", 0xFF, "C", 0x7F,
+            "D", 0xFF));
+    /** The idle loop is one RJMP (2 cycles): the interrupt waits for it at most one cycle. */
+    private static final int ENTRY_JITTER_CYCLES = 1;
+    private static final int CLIP_SAMPLES = 240;
+    private static final int LOOP_SAMPLES = 200;
+    private static final int LOOP_START = 40;
+    private static final int LOOP_END = 160;
+    private static final int LOOP_TICKS = 400;
+    private static final int TICKS_AFTER_END = 12;
+    private static final Map<String, String> TABLE = Collections.synchronizedMap(new LinkedHashMap<>());
+    private static final Map<Build, CompletableFuture<Run>> RUNS = new HashMap<>();
+    private static ExecutorService pool;
+
+    @TempDir
+    static Path root;
+
+    /** One AVR build: pins, storage, engine, sample rate and timer. */
+    record Build(String pins, SampleStorage storage, PlaybackEngine engine, int rateHz, TimerKind timer) {
+        @Override
+        public String toString() {
+            return String.format(Locale.ROOT, "%-26s %-8s %-4s %5d Hz %s", pins, storage.optionName(),
+                    engine.optionName(), rateHz, timer.optionName());
+        }
+    }
+
+    /**
+     * A simulated build.
+     *
+     * @param result what the emitter reported
+     * @param period CPU cycles per tick of the solved timer
+     * @param played the codes of the sound main() starts
+     * @param trace what the program did in the simulator
+     */
+    record Run(EmitResult result, long period, int[] played, AvrTrace trace) {
+    }
+
+    static Stream<Build> builds() {
+        List<Build> out = new ArrayList<>();
+        // One port, and the same six bits scattered over three ports. Pins as the datasheet names them.
+        for (String pins : List.of("PD2-PD7", "PD2,PD7,PC0,PC1,PB2,PB1")) {
+            for (SampleStorage storage : SampleStorage.values()) {
+                for (PlaybackEngine engine : List.of(PlaybackEngine.CLIP, PlaybackEngine.LOOP)) {
+                    for (int rate : new int[] {8000, 22050}) {
+                        out.add(new Build(pins, storage, engine, rate, TimerKind.AVR_TIMER1));
+                    }
+                }
+            }
+        }
+        // A whole port (plain OUT), and ten bits over two ports on an 8-bit timer with a prescaler.
+        out.add(new Build("PD0-PD7", SampleStorage.UNPACKED, PlaybackEngine.CLIP, 8000, TimerKind.AVR_TIMER1));
+        out.add(new Build("PD2-PD7,PB0-PB3", SampleStorage.PACKED, PlaybackEngine.CLIP, 16000,
+                TimerKind.AVR_TIMER0));
+        out.add(new Build("PD2-PD7,PB0-PB3", SampleStorage.UNPACKED, PlaybackEngine.LOOP, 16000,
+                TimerKind.AVR_TIMER2));
+        return out.stream();
+    }
+
+    /** Codes that visit many levels and flip every bit often: i * 37 + offset, modulo 2^bits. */
+    static int[] codes(int bits, int length, int offset) {
+        int[] c = new int[length];
+        for (int i = 0; i < length; i++) {
+            c[i] = (i * 37 + offset) & ((1 << bits) - 1);
+        }
+        return c;
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("builds")
+    void playerPutsEverySampleOnThePinsAtTheTimerRate(Build b) {
+        Run r = prepared(b);
+        PinMap map = PinMap.parse(b.pins(), 8);
+        boolean loop = b.engine() == PlaybackEngine.LOOP;
+        assertEquals(Math.round(16e6 / b.rateHz()), r.period(), "the timer period is the nearest to the rate");
+        Ticks t = Ticks.of(r.trace(), map);
+        assertEquals(1 << (map.bits() - 1), t.initCode, "init parks the ladder mid-range");
+        List<Integer> want = loop ? looped(r.played(), t.codes.size()) : toList(r.played());
+        if (loop) {
+            assertTrue(t.codes.size() >= LOOP_TICKS, "looping for the whole run: " + t.codes.size() + " ticks");
+        } else {
+            assertTrue(t.after.size() >= TICKS_AFTER_END - 2, "interrupts after the end: " + t.after.size());
+        }
+        assertEquals(want, t.codes, "codes at the pins, tick by tick");
+        // The first tick may wait for the end of play()'s critical section: periods count from the second.
+        assertTickPeriod(t.playing.subList(1, t.playing.size()), r.period());
+        assertEquals(1, t.playing.stream().map(i -> firstWriteOffset(r.trace(), i)).distinct().count(),
+                "the pins change the same number of cycles after every interrupt");
+        record(b, r, t);
+    }
+
+    /**
+     * The run of {@code b}. The first call starts every build of the matrix on two threads (emit, avr-gcc,
+     * simulation), so the compilers of two builds run side by side; later calls wait for their own.
+     */
+    private static Run prepared(Build b) {
+        CToolchain.require("avr-gcc");
+        AvrSimulator sim = AvrSimulator.get();
+        synchronized (RUNS) {
+            if (pool == null) {
+                pool = Executors.newFixedThreadPool(2);
+                for (Build each : builds().toList()) {
+                    Path dir = root.resolve("build" + RUNS.size());
+                    RUNS.put(each, CompletableFuture.supplyAsync(() -> simulate(each, sim, dir), pool));
+                }
+            }
+        }
+        try {
+            return RUNS.get(b).join();
+        } catch (CompletionException e) {
+            if (e.getCause() instanceof Error error) {
+                throw error;
+            }
+            throw e;
+        }
+    }
+
+    /** Emits {@code b} with a main() that starts sound 1, compiles it and runs it in the simulator. */
+    private static Run simulate(Build b, AvrSimulator sim, Path dir) {
+        PinMap map = PinMap.parse(b.pins(), 8);
+        boolean loop = b.engine() == PlaybackEngine.LOOP;
+        int[] played = codes(map.bits(), loop ? LOOP_SAMPLES : CLIP_SAMPLES, 5);
+        FirmwareRequest.Builder request = FirmwareRequest.builder().family("avr").name("player").toolVersion("test")
+                .pins(b.pins()).storage(b.storage()).engine(b.engine()).timer(b.timer()).cpuClockHz(16e6)
+                .sound("other", Codes.of(map.bits(), b.rateHz(), codes(map.bits(), 50, 11)));
+        if (loop) {
+            request.sound("played", Codes.of(map.bits(), b.rateHz(), played), LOOP_START, LOOP_END);
+        } else {
+            request.sound("played", Codes.of(map.bits(), b.rateHz(), played));
+        }
+        EmitResult result = FirmwareEmitter.emit(request.build(), dir);
+        long period = result.timer().orElseThrow().cyclesPerTick();
+        AtomicFiles.writeString(dir.resolve("main.c"), mainProgram(map, loop ? "player_loop" : "player_play"));
+        CToolchain.compileClean(dir, CToolchain.cmd(CToolchain.cmd(AvrSimulator.AVR_GCC, CToolchain.STRICT),
+                List.of("-o", "player.elf", "main.c", "player.c", "player_data.c")));
+        int ticks = loop ? LOOP_TICKS : played.length + TICKS_AFTER_END;
+        return new Run(result, period, played, sim.run(dir.resolve("player.elf"), (ticks + 4) * period + 20_000));
+    }
+
+    @Test
+    void harnessCountsABareInterruptAsTheDatasheetDoes() {
+        CToolchain.require("avr-gcc");
+        AvrSimulator sim = AvrSimulator.get();
+        Path dir = root.resolve("bare");
+        AtomicFiles.writeString(dir.resolve("bare.c"), """
+                #include <avr/io.h>
+                #include <avr/interrupt.h>
+                ISR(TIMER1_COMPA_vect, ISR_NAKED)
+                {
+                    reti();
+                }
+                int main(void)
+                {
+                    TCCR1A = 0u;
+                    TCCR1B = (uint8_t)(_BV(WGM12) | _BV(CS10));
+                    OCR1A = 999u;
+                    TIMSK1 = _BV(OCIE1A);
+                    sei();
+                    for (;;) {
+                    }
+                }
+                """);
+        CToolchain.compileClean(dir, CToolchain.cmd(AvrSimulator.AVR_GCC, List.of("-o", "bare.elf", "bare.c")));
+        AvrTrace trace = sim.run(dir.resolve("bare.elf"), 20_000);
+        // ATmega328P datasheet: 4-cycle interrupt response; AVR instruction set manual: JMP 3 cycles (the
+        // vector), RETI 4 cycles (16-bit program counter). CTC period = (OCR1A + 1) * prescaler = 1000.
+        assertTrue(trace.interrupts().size() >= 15, "interrupts: " + trace.interrupts().size());
+        trace.interrupts().forEach(i -> assertEquals(4 + 3 + 4, i.cycles(), "bare interrupt at " + i));
+        assertTickPeriod(trace.interrupts(), 1000);
+    }
+
+    @AfterAll
+    static void printTable() {
+        if (pool != null) {
+            pool.shutdownNow();
+        }
+        if (TABLE.isEmpty()) {
+            return;
+        }
+        StringBuilder s = new StringBuilder(String.format(Locale.ROOT, "%n[rungtone firmware tests] ATmega328P"
+                + " timer interrupt in simavr, cycles including the 4-cycle response%n%-26s %-8s %-4s %8s %-6s"
+                + " %-8s %6s %6s %7s %9s%n", "pins", "storage", "eng.", "rate", "timer", "strategy", "tick",
+                "worst", "mean", "after end"));
+        TABLE.values().forEach(s::append);
+        System.out.print(s);
+    }
+
+    private static void record(Build b, Run r, Ticks t) {
+        long worst = t.playing.stream().mapToLong(Interrupt::cycles).max().orElseThrow();
+        double mean = t.playing.stream().mapToLong(Interrupt::cycles).average().orElseThrow();
+        String after = t.after.isEmpty() ? "-" : Long.toString(t.after.stream().mapToLong(Interrupt::cycles)
+                .max().orElseThrow());
+        TABLE.put(b.toString(), String.format(Locale.ROOT, "%s %-8s %6d %6d %7.1f %9s%n", b,
+                r.result().pinStrategy().name().toLowerCase(Locale.ROOT), r.period(), worst, mean, after));
+    }
+
+    /** A program that sets the other pins to a pattern, starts the player on sound 1 and idles. */
+    private static String mainProgram(PinMap map, String start) {
+        StringBuilder setup = new StringBuilder();
+        PORT_PINS.forEach((port, pins) -> {
+            int free = pins & ~(int) map.mask(port);
+            setup.append(String.format(Locale.ROOT, "    PORT%s = 0x%02Xu;%n    DDR%s = 0x%02Xu;%n", port,
+                    PORT_PATTERN & free, port, DDR_PATTERN & free));
+        });
+        return "#include <avr/io.h>\n#include \"player.h\"\n\nint main(void)\n{\n" + setup
+                + "    GPIOR0 = 1u;\n    player_init();\n    GPIOR0 = 2u;\n    " + start + "(1u);\n"
+                + "    GPIOR0 = 3u;\n    for (;;) {\n    }\n}\n";
+    }
+
+    /** Each interrupt starts within the idle loop's jitter of one timer period after the one before. */
+    private static void assertTickPeriod(List<Interrupt> interrupts, long period) {
+        for (int i = 1; i < interrupts.size(); i++) {
+            long gap = interrupts.get(i).entryCycle() - interrupts.get(i - 1).entryCycle();
+            assertTrue(Math.abs(gap - period) <= ENTRY_JITTER_CYCLES, "interrupt " + i + " came " + gap
+                    + " cycles after the one before; the timer period is " + period);
+        }
+        long span = interrupts.get(interrupts.size() - 1).entryCycle() - interrupts.get(0).entryCycle();
+        assertTrue(Math.abs(span - (interrupts.size() - 1) * period) <= ENTRY_JITTER_CYCLES,
+                "mean interrupt period " + span + " / " + (interrupts.size() - 1));
+    }
+
+    private static long firstWriteOffset(AvrTrace trace, Interrupt i) {
+        return trace.writes().stream().filter(i::contains).mapToLong(Write::cycle).min().orElseThrow()
+                - i.entryCycle();
+    }
+
+    /** The loop engine's order: samples up to the loop end, then the loop again and again. */
+    private static List<Integer> looped(int[] samples, int ticks) {
+        List<Integer> out = new ArrayList<>(ticks);
+        int pos = 0;
+        while (out.size() < ticks) {
+            out.add(samples[pos]);
+            pos = pos + 1 == LOOP_END ? LOOP_START : pos + 1;
+        }
+        return out;
+    }
+
+    private static List<Integer> toList(int[] a) {
+        List<Integer> out = new ArrayList<>(a.length);
+        for (int v : a) {
+            out.add(v);
+        }
+        return out;
+    }
+
+    /**
+     * The trace cut into ticks and checked write by write: the code init parks the ladder at; the
+     * interrupts that wrote the ports (one write per ladder port, in the map's port order) and the code each
+     * left on the pins; the interrupts after the last of those.
+     */
+    private static final class Ticks {
+        int initCode;
+        final List<Integer> codes = new ArrayList<>();
+        final List<Interrupt> playing = new ArrayList<>();
+        final List<Interrupt> after = new ArrayList<>();
+
+        static Ticks of(AvrTrace trace, PinMap map) {
+            Ticks t = new Ticks();
+            long setupDone = trace.marker("GPIOR0", 1);
+            long initDone = trace.marker("GPIOR0", 2);
+            Map<String, Integer> image = new HashMap<>();
+            List<Write> pending = new ArrayList<>();
+            int w = 0;
+            List<Write> writes = trace.writes();
+            for (Interrupt i : trace.interrupts()) {
+                pending.clear();
+                for (; w < writes.size() && writes.get(w).cycle() < i.exitCycle(); w++) {
+                    Write x = writes.get(w);
+                    checkOtherPins(x, map, setupDone);
+                    image.put(x.register(), x.value());
+                    if (x.cycle() > initDone && !x.register().equals("GPIOR0")) {
+                        if (!i.contains(x)) {
+                            fail("port write outside the timer interrupt: " + x);
+                        }
+                        pending.add(x);
+                    }
+                    if (x.register().equals("GPIOR0") && x.value() == 2) {
+                        t.initCode = decode(image, map);
+                        checkOutputs(image, map);
+                    }
+                }
+                t.tick(i, pending, image, map);
+            }
+            return t;
+        }
+
+        private void tick(Interrupt i, List<Write> writes, Map<String, Integer> image, PinMap map) {
+            if (writes.isEmpty()) {
+                if (!playing.isEmpty()) {
+                    after.add(i);
+                }
+                return;
+            }
+            if (!after.isEmpty()) {
+                fail("the interrupt at cycle " + after.get(0).entryCycle() + " wrote no code, but later ones did");
+            }
+            List<String> order = writes.stream().map(Write::register).toList();
+            assertEquals(map.ports().stream().map(p -> "PORT" + p).toList(), order, "port writes at tick "
+                    + playing.size());
+            playing.add(i);
+            codes.add(decode(image, map));
+        }
+
+        /** Pins outside the map keep main()'s pattern; PINx (toggle) is never written. */
+        private static void checkOtherPins(Write x, PinMap map, long setupDone) {
+            String r = x.register();
+            if (x.cycle() < setupDone || r.equals("GPIOR0")) {
+                return;
+            }
+            if (r.startsWith("PIN")) {
+                fail("write to " + r + " toggles pins: " + x);
+            }
+            String port = r.substring(r.length() - 1);
+            int free = PORT_PINS.get(port) & ~(int) map.mask(port);
+            int pattern = (r.startsWith("DDR") ? DDR_PATTERN : PORT_PATTERN) & free;
+            assertEquals(pattern, x.value() & free, "pins outside the map changed by " + x);
+        }
+
+        /** After init, every ladder pin is an output. */
+        private static void checkOutputs(Map<String, Integer> image, PinMap map) {
+            for (String port : map.ports()) {
+                int mask = (int) map.mask(port);
+                assertEquals(mask, image.getOrDefault("DDR" + port, 0) & mask, "DDR" + port + " after init");
+            }
+        }
+
+        private static int decode(Map<String, Integer> image, PinMap map) {
+            int code = 0;
+            for (int bit = 0; bit < map.bits(); bit++) {
+                Pin p = map.pin(bit);
+                code |= ((image.getOrDefault("PORT" + p.port(), 0) >> p.pin()) & 1) << bit;
+            }
+            return code;
+        }
+    }
+}
