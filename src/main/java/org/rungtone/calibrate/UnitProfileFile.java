@@ -109,7 +109,7 @@ final class UnitProfileFile {
     static UnitProfile load(Path file) {
         String text;
         try {
-            text = Files.readString(file, StandardCharsets.UTF_8);
+            text = Files.readString(org.rungtone.internal.OutputFolder.staged(file), StandardCharsets.UTF_8);
         } catch (NoSuchFileException e) {
             throw new InputError(file + ": no such file (a unit profile is written by 'rungtone calibrate fit')",
                     e);

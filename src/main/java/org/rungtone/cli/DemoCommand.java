@@ -6,6 +6,7 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.rungtone.internal.AtomicFiles;
+import org.rungtone.internal.OutputFolder;
 import org.rungtone.internal.InputError;
 import org.rungtone.project.Project;
 import org.rungtone.project.ProjectBuild;
@@ -44,7 +45,25 @@ public final class DemoCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         Path scenario = out.resolve("scenario");
-        AtomicFiles.checkFolderUsable(out);
+        ProjectBuild.Result r;
+        try (OutputFolder folder = OutputFolder.open(out, "demo")) {
+            r = run(scenario);
+            folder.commit();
+        }
+        PrintWriter w = spec.commandLine().getOut();
+        if (!common.quiet) {
+            w.print(ProjectReport.text(r.report()));
+            w.println();
+            w.println("Demo done. Outputs are in " + r.outDir());
+            w.println("Open report.html there, listen to the preview.wav files (start with the volume low),");
+            w.println("and look at greenhouse.h for the player's API. The scenario is in " + scenario.toAbsolutePath());
+        }
+        w.flush();
+        return 0;
+    }
+
+    /** Writes the scenario into the (staged) demo folder and builds it there. */
+    private static ProjectBuild.Result run(Path scenario) throws IOException {
         for (String f : FILES) {
             byte[] bytes = resource("examples/" + SCENARIO + "/" + f);
             if (f.endsWith(".toml")) {
@@ -56,18 +75,7 @@ public final class DemoCommand implements Callable<Integer> {
             AtomicFiles.writeBytes(scenario.resolve(f), bytes);
         }
         Project project = ProjectFile.load(scenario.resolve("greenhouse.toml"));
-        ProjectBuild.Result r = new ProjectBuild(Version.get()).run(project,
-                ProjectBuild.Overrides.none());
-        PrintWriter w = spec.commandLine().getOut();
-        if (!common.quiet) {
-            w.print(ProjectReport.text(r.report()));
-            w.println();
-            w.println("Demo done. Outputs are in " + r.outDir());
-            w.println("Open report.html there, listen to the preview.wav files (start with the volume low),");
-            w.println("and look at greenhouse.h for the player's API. The scenario is in " + scenario.toAbsolutePath());
-        }
-        w.flush();
-        return 0;
+        return new ProjectBuild(Version.get()).run(project, ProjectBuild.Overrides.none());
     }
 
     static byte[] resource(String name) throws IOException {

@@ -148,9 +148,13 @@ public final class OutputFolder implements AutoCloseable {
         return dir;
     }
 
-    /** Where a file written below an open folder is until the commit: for reading it back before then. */
+    /**
+     * Where a file written below an open folder is until the commit, for reading it back before then; any
+     * other path as it is.
+     */
     public static Path staged(Path target) {
-        return redirect(target);
+        Path staged = redirect(target);
+        return Files.exists(staged) ? staged : target;
     }
 
     /** Where a write aimed at {@code target} goes now: its place in an open folder's staging, else itself. */

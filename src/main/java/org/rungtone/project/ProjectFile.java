@@ -25,6 +25,7 @@ import org.rungtone.quantize.Compensation;
 import org.rungtone.quantize.Dither;
 import org.rungtone.quantize.ErrorFilter;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.OutputFolder;
 import org.rungtone.internal.TomlText;
 import org.tomlj.TomlParseError;
 import org.tomlj.TomlParseResult;
@@ -46,7 +47,7 @@ public final class ProjectFile {
     public static Project load(Path file) {
         String text;
         try {
-            text = Files.readString(file);
+            text = Files.readString(OutputFolder.staged(file));
         } catch (NoSuchFileException e) {
             throw InputError.inFile(file, "no such file", e);
         } catch (CharacterCodingException e) {

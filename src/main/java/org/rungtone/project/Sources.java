@@ -1,6 +1,7 @@
 package org.rungtone.project;
 
 import java.nio.file.Path;
+import org.rungtone.internal.OutputFolder;
 import java.util.List;
 import java.util.Locale;
 import org.rungtone.internal.InputError;
@@ -47,13 +48,13 @@ public final class Sources {
     public static Opened open(Path source, int channel, double scriptRateHz, long seed) {
         String name = source.getFileName() == null ? "" : source.getFileName().toString().toLowerCase(Locale.ROOT);
         if (name.endsWith(".wav") || name.endsWith(".wave")) {
-            WavReader.Stream w = WavReader.open(source, channel);
+            WavReader.Stream w = WavReader.open(OutputFolder.staged(source), channel);
             String layout = w.format().describe() + (w.format().channels() > 1
                     ? (channel == 0 ? ", mixed down" : ", channel " + channel) : "");
             return new Opened(w, layout, w.warnings(), Double.NaN, false);
         }
         if (name.endsWith(".rung")) {
-            RungScript script = RungScript.load(source);
+            RungScript script = RungScript.load(OutputFolder.staged(source));
             Signal s = script.render(scriptRateHz, seed);
             String layout = script.kind() == RungScript.Kind.CLIP
                     ? String.format(Locale.ROOT, "rung script, clip of %.3f s rendered at %s", script.durationSeconds(),
