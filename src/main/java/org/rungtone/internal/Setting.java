@@ -55,6 +55,14 @@ public enum Setting {
     PREVIEW_LENGTH("preview.length"),
     /** Reference voltage of the ideal ladder. */
     FULL_SCALE("preview.full_scale"),
+    /** The survey's bit depths. */
+    SURVEY_BITS("survey.bits_list"),
+    /** The survey's sample rates. */
+    SURVEY_RATES("survey.rates"),
+    /** The survey's least acceptable SINAD. */
+    TARGET_SINAD("survey.target_sinad"),
+    /** The survey's least acceptable effective number of bits. */
+    TARGET_ENOB("survey.target_enob"),
     /** Target family of the player. */
     FAMILY("target.family"),
     /** CPU or timer clock. */
