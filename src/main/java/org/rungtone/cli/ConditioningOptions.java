@@ -1,12 +1,9 @@
 package org.rungtone.cli;
 
-import java.util.ArrayList;
-import java.util.List;
 import java.util.Locale;
 import java.util.OptionalDouble;
-import org.rungtone.condition.Conditioning;
-import org.rungtone.condition.Resampler;
 import org.rungtone.condition.ResamplerKind;
+import org.rungtone.project.ConditioningSettings;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Option;
 
@@ -82,34 +79,9 @@ public final class ConditioningOptions {
         return resampler;
     }
 
-    /**
-     * The conditioning to one target rate.
-     *
-     * @throws org.rungtone.internal.InputError when a value is out of range
-     */
-    Conditioning toRate(double targetRateHz) {
-        return new Conditioning(removeDc(), trimDbfs(), targetRateHz, gainDb(), normalizeDbfs(), fadeIn, fadeOut);
-    }
-
-    /**
-     * The resampler for targets of up to {@code maxBits} bits: the Kaiser filter's stopband sits below
-     * their quantization noise.
-     *
-     */
-    Resampler resamplerFor(int maxBits) {
-        return resampler.create(maxBits);
-    }
-
-    /** The settings in words, for reports: "DC removed, normalized to -1.0 dBFS, trim below -50.0 dBFS". */
-    String describe() {
-        List<String> parts = new ArrayList<>();
-        parts.add(removeDc() ? "DC removed" : "DC kept");
-        trimDbfs().ifPresent(t -> parts.add(String.format(Locale.ROOT, "trim below %.1f dBFS", t)));
-        gainDb().ifPresent(g -> parts.add(String.format(Locale.ROOT, "gain %+.1f dB", g)));
-        normalizeDbfs().ifPresent(n -> parts.add(String.format(Locale.ROOT, "normalized to %.1f dBFS", n)));
-        if (fadeIn > 0 || fadeOut > 0) {
-            parts.add(String.format(Locale.ROOT, "fades %.0f/%.0f ms", 1000 * fadeIn, 1000 * fadeOut));
-        }
-        return String.join(", ", parts);
+    /** The settings at a rate chosen elsewhere (each rate of a survey). */
+    ConditioningSettings settings() {
+        return new ConditioningSettings(OptionalDouble.empty(), removeDc(), trimDbfs(), gainDb(), normalizeDbfs(),
+                fadeIn, fadeOut, resampler);
     }
 }

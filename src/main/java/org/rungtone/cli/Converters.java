@@ -1,5 +1,6 @@
 package org.rungtone.cli;
 
+import org.rungtone.analysis.ReconstructionFilter;
 import org.rungtone.calibrate.OutputSpan;
 import org.rungtone.condition.ResamplerKind;
 import org.rungtone.internal.InputError;
@@ -53,6 +54,18 @@ final class Converters {
         public Double convert(String value) {
             try {
                 return Units.parseDecibels(value);
+            } catch (InputError e) {
+                throw new TypeConversionException(e.getMessage());
+            }
+        }
+    }
+
+    /** A reconstruction filter: none, rc:HZ or lp2:HZ[:Q] (see {@link ReconstructionFilter#parse}). */
+    static final class Filter implements ITypeConverter<ReconstructionFilter> {
+        @Override
+        public ReconstructionFilter convert(String value) {
+            try {
+                return ReconstructionFilter.parse(value);
             } catch (InputError e) {
                 throw new TypeConversionException(e.getMessage());
             }

@@ -55,6 +55,14 @@ public enum Setting {
     PREVIEW_LENGTH("preview.length"),
     /** Reference voltage of the ideal ladder. */
     FULL_SCALE("preview.full_scale"),
+    /** The survey's bit depths. */
+    SURVEY_BITS("survey.bits_list"),
+    /** The survey's sample rates. */
+    SURVEY_RATES("survey.rates"),
+    /** The survey's least acceptable SINAD. */
+    TARGET_SINAD("survey.target_sinad"),
+    /** The survey's least acceptable effective number of bits. */
+    TARGET_ENOB("survey.target_enob"),
     /** Target family of the player. */
     FAMILY("target.family"),
     /** CPU or timer clock. */
@@ -83,10 +91,6 @@ public enum Setting {
     DDS_PHASE_BITS("target.dds_phase_bits"),
     /** The user's own template folder. */
     TEMPLATES("target.templates"),
-    /** The bit depths a survey tries. */
-    BITS_LIST("survey.bits_list"),
-    /** The sample rates a survey tries. */
-    RATES("survey.rates"),
     /** The sweep program's step button. */
     BUTTON("sweep.button"),
     /** The sweep program's hold time per code. */

@@ -134,8 +134,8 @@ public final class Boards {
             LevelTable measured = decide(profile, ladder, OptionalInt.empty(), false).levels().orElseThrow();
             return b -> {
                 if (b != measured.bits()) {
-                    throw Setting.BITS_LIST.problem("the unit profile has %d bits; survey it with %s %d",
-                            measured.bits(), Setting.BITS_LIST.ref(), measured.bits());
+                    throw Setting.SURVEY_BITS.problem("the unit profile has %d bits; survey it with %s %d",
+                            measured.bits(), Setting.SURVEY_BITS.ref(), measured.bits());
                 }
                 return measured;
             };

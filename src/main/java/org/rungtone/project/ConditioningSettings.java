@@ -1,5 +1,8 @@
 package org.rungtone.project;
 
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
 import java.util.OptionalDouble;
 import org.rungtone.condition.Conditioning;
 import org.rungtone.condition.ResamplerKind;
@@ -30,5 +33,18 @@ public record ConditioningSettings(OptionalDouble rateHz, boolean removeDc, Opti
     public Conditioning at(double targetRateHz) {
         return new Conditioning(removeDc, trimDbfs, targetRateHz, gainDb, normalizeDbfs, fadeInSeconds,
                 fadeOutSeconds);
+    }
+
+    /** The settings in words, for reports: "DC removed, normalized to -1.0 dBFS, trim below -50.0 dBFS". */
+    public String describe() {
+        List<String> parts = new ArrayList<>();
+        parts.add(removeDc ? "DC removed" : "DC kept");
+        trimDbfs.ifPresent(t -> parts.add(String.format(Locale.ROOT, "trim below %.1f dBFS", t)));
+        gainDb.ifPresent(g -> parts.add(String.format(Locale.ROOT, "gain %+.1f dB", g)));
+        normalizeDbfs.ifPresent(n -> parts.add(String.format(Locale.ROOT, "normalized to %.1f dBFS", n)));
+        if (fadeInSeconds > 0 || fadeOutSeconds > 0) {
+            parts.add(String.format(Locale.ROOT, "fades %.0f/%.0f ms", 1000 * fadeInSeconds, 1000 * fadeOutSeconds));
+        }
+        return String.join(", ", parts);
     }
 }

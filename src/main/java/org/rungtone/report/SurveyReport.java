@@ -156,6 +156,17 @@ public final class SurveyReport {
                 khz(best.rateHz()), fixed(best.sinadDb(), 1), fixed(best.enobBits(), 2));
     }
 
+    /**
+     * One line of stage timings, for --verbose: "stage timings: load and survey 900 ms, previews 0 ms, files
+     * 40 ms".
+     */
+    public static String timings(Map<String, Double> stageMillis) {
+        StringBuilder b = new StringBuilder("stage timings:");
+        stageMillis.forEach((k, v) -> b.append(String.format(Locale.ROOT, " %s %.0f ms,", k, v)));
+        b.setLength(b.length() - 1);
+        return b.toString();
+    }
+
     /** The JSON report, with the stable field names documented in the README. */
     public static Map<String, Object> json(SurveyResult result, Context c) {
         Map<String, Object> m = new LinkedHashMap<>();

@@ -8,7 +8,9 @@ import com.google.gson.JsonObject;
 import com.google.gson.JsonParser;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import org.junit.jupiter.api.Test;
 import org.rungtone.analysis.SurveyResult;
 import org.rungtone.analysis.SurveyRow;
@@ -130,6 +132,15 @@ class SurveyReportTest {
         JsonObject first = o.getAsJsonArray("rows").get(0).getAsJsonObject();
         assertEquals(ROW_FIELDS, new ArrayList<>(first.keySet()));
         assertEquals("inf", first.get("sinad_db").getAsString());
+    }
+
+    @Test
+    void timingsAreOneLineInStageOrder() {
+        Map<String, Double> laps = new LinkedHashMap<>();
+        laps.put("load and survey", 812.4);
+        laps.put("previews", 0.2);
+        laps.put("files", 39.6);
+        assertEquals("stage timings: load and survey 812 ms, previews 0 ms, files 40 ms", SurveyReport.timings(laps));
     }
 
     @Test

@@ -1,0 +1,117 @@
+package org.rungtone.cli;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.rungtone.internal.Setting;
+import org.rungtone.internal.Units;
+import picocli.CommandLine.ITypeConverter;
+import picocli.CommandLine.TypeConversionException;
+
+/**
+ * The survey's list options, --bits-list and --rates: read as written (malformed text is a usage error), then
+ * checked against the survey's rules (a value out of range or repeated is bad input naming its setting).
+ */
+final class SurveyLists {
+    private SurveyLists() {
+    }
+
+    /** A --bits-list value: ranges {@code a..b} and single depths, as written. */
+    record BitList(String text, List<Range> ranges) {
+        /** Copies the ranges. */
+        BitList {
+            ranges = List.copyOf(ranges);
+        }
+
+        /**
+         * The depths in order.
+         *
+         * @throws org.rungtone.internal.SettingError when a depth is outside 1..16 or repeats
+         */
+        List<Integer> expand() {
+            List<Integer> out = new ArrayList<>();
+            for (Range r : ranges) {
+                for (int end : new int[] {r.first(), r.last()}) {
+                    Setting.SURVEY_BITS.check(end >= 1 && end <= 16, "%s: bit depth must be 1..16: %d", text, end);
+                }
+                for (int b = r.first(); b <= r.last(); b++) {
+                    Setting.SURVEY_BITS.check(!out.contains(b), "%s: %d appears twice; give each depth once", text,
+                            b);
+                    out.add(b);
+                }
+            }
+            return out;
+        }
+
+        /** Depths {@code first} to {@code last}, both included; a single depth is a range of one. */
+        record Range(int first, int last) {
+        }
+
+        /** Reads "1..12", "4,6,8", "2..4,8"; malformed text is a usage error. */
+        static final class Parser implements ITypeConverter<BitList> {
+            @Override
+            public BitList convert(String value) {
+                List<Range> ranges = new ArrayList<>();
+                for (String item : value.split(",", -1)) {
+                    String[] ends = item.trim().split("\\.\\.", -1);
+                    if (ends.length > 2) {
+                        throw new TypeConversionException("'" + item + "' is not a bit depth or a range like 4..10");
+                    }
+                    int from = depth(ends[0], item);
+                    int to = ends.length == 2 ? depth(ends[1], item) : from;
+                    if (to < from) {
+                        throw new TypeConversionException("the range '" + item + "' runs backwards; write "
+                                + to + ".." + from);
+                    }
+                    ranges.add(new Range(from, to));
+                }
+                return new BitList(value, ranges);
+            }
+
+            private static int depth(String text, String item) {
+                try {
+                    return Integer.parseInt(text.trim());
+                } catch (NumberFormatException e) {
+                    throw new TypeConversionException("'" + item + "' is not a bit depth or a range like 4..10"
+                            + " (e.g. --bits-list 1..12 or 4,6,8)");
+                }
+            }
+        }
+    }
+
+    /** A --rates value: sample rates in hertz, as written. */
+    record RateList(String text, List<Double> ratesHz) {
+        /** Copies the rates. */
+        RateList {
+            ratesHz = List.copyOf(ratesHz);
+        }
+
+        /**
+         * The rates, checked.
+         *
+         * @throws org.rungtone.internal.SettingError when a rate is outside 1 Hz..384 kHz or repeats
+         */
+        List<Double> checked() {
+            List<Double> out = new ArrayList<>();
+            for (double r : ratesHz) {
+                Setting.SURVEY_RATES.check(r >= 1 && r <= 384_000, "%s: a sample rate must be 1 Hz..384 kHz: %s",
+                        text, Units.format(r, "Hz"));
+                Setting.SURVEY_RATES.check(!out.contains(r), "%s: %s appears twice; give each rate once", text,
+                        Units.format(r, "Hz"));
+                out.add(r);
+            }
+            return out;
+        }
+
+        /** Reads "8k,11.025k,16kHz"; malformed text is a usage error. */
+        static final class Parser implements ITypeConverter<RateList> {
+            @Override
+            public RateList convert(String value) {
+                List<Double> rates = new ArrayList<>();
+                for (String item : value.split(",", -1)) {
+                    rates.add(new Converters.Hertz().convert(item));
+                }
+                return new RateList(value, rates);
+            }
+        }
+    }
+}
