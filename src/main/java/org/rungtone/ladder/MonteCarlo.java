@@ -38,6 +38,11 @@ public final class MonteCarlo {
         this.spread = spread;
     }
 
+    /** The number of boards simulated. */
+    public int boards() {
+        return boards;
+    }
+
     /** Simulates boards of the nominal network of {@code spec}. */
     public MonteCarloResult run(LadderSpec spec) {
         return run(Ladder.nominal(spec), n -> { });

@@ -2,6 +2,8 @@ package org.rungtone.ladder;
 
 import java.util.SplittableRandom;
 import org.rungtone.internal.Checks;
+import org.rungtone.internal.InputError;
+import org.rungtone.internal.Units;
 
 /**
  * How Monte Carlo draws a resistor's deviation from its nominal value: uniform within ± the tolerance (the
@@ -35,6 +37,25 @@ public record Spread(Kind kind, double sigma) {
     /** Gaussian with relative sigma {@code sigma}. */
     public static Spread gaussian(double sigma) {
         return new Spread(Kind.GAUSSIAN, sigma);
+    }
+
+    /**
+     * A Gaussian spread from the user's text: a percentage with its % sign, above 0 and at most 50 %.
+     *
+     * @throws InputError when the text is not such a percentage; the caller names where it came from
+     */
+    public static Spread parseGaussian(String sigmaPercent) {
+        if (!sigmaPercent.trim().endsWith("%")) {
+            throw new InputError("write it as a percentage, e.g. 1.7%");
+        }
+        double sigma = Units.parse(sigmaPercent, "%");
+        if (!(sigma > 0) || Double.isInfinite(sigma)) {
+            throw new InputError("must be a positive value, got " + sigmaPercent);
+        }
+        if (sigma > 0.5) {
+            throw new InputError("must be at most 50%, got " + sigmaPercent);
+        }
+        return gaussian(sigma);
     }
 
     /** One relative deviation: the value is {@code nominal · (1 + deviation)}. */

@@ -5,6 +5,7 @@
  * LSB end for R-2R, full nodal analysis as reference), IEEE 1658 linearity
  * ({@link org.rungtone.ladder.Linearity}), Monte Carlo tolerance analysis
  * ({@link org.rungtone.ladder.MonteCarlo}), IEC 60063 preferred-value series and resistor proposals
- * ({@link org.rungtone.ladder.LadderDesigner}).
+ * ({@link org.rungtone.ladder.LadderDesigner}), and the study that gathers them for the ladder report
+ * ({@link org.rungtone.ladder.LadderStudy}).
  */
 package org.rungtone.ladder;
