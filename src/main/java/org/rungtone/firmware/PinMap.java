@@ -10,6 +10,7 @@ import java.util.TreeMap;
 import java.util.TreeSet;
 import org.rungtone.internal.Checks;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.Setting;
 
 /**
  * Which GPIO pin drives which bit of the DAC code: bit i of the code goes to pin {@code pin(i)}, on up to
@@ -68,18 +69,18 @@ public final class PinMap {
     /**
      * Parses the notation described in the class comment.
      *
-     * @param text the pin list as the user wrote it (the value of {@code --pins})
+     * @param text the pin list as the user wrote it (the value of {@link Setting#PINS})
      * @param portWidth bits per port register: 8, 16 or 32
      * @throws InputError naming the column of the problem: bad syntax, a pin beyond the port width, a pin
      *     listed twice, a range across ports, more than four ports or more than sixteen pins
      */
     public static PinMap parse(String text, int portWidth) {
-        Checks.checkInput(portWidth == 8 || portWidth == 16 || portWidth == 32,
-                "--port-width must be 8, 16 or 32: %d", portWidth);
+        Setting.PORT_WIDTH.check(portWidth == 8 || portWidth == 16 || portWidth == 32, "must be 8, 16 or 32: %d",
+                portWidth);
         String t = text == null ? "" : text;
         if (t.isBlank()) {
-            throw new InputError("--pins is empty; list one pin per code bit, bit 0 first,"
-                    + " e.g. B0-B5 or A3,A7,C0,C1");
+            throw Setting.PINS.error("is empty; list one pin per code bit, bit 0 first, e.g. B0-B5 or"
+                    + " A3,A7,C0,C1");
         }
         return new Parser(t, portWidth).parse();
     }
@@ -156,14 +157,12 @@ public final class PinMap {
     public PinStrategy resolve(PinStrategy requested) {
         switch (requested) {
             case SHIFT:
-                Checks.checkInput(shiftable(), "--pin-strategy shift needs the pins of each port in the order"
-                        + " and spacing of their code bits (e.g. B0-B5); %s needs table or scatter",
-                        notation());
+                Setting.PIN_STRATEGY.check(shiftable(), "shift needs the pins of each port in the order and"
+                        + " spacing of their code bits (e.g. B0-B5); %s needs table or scatter", notation());
                 return PinStrategy.SHIFT;
             case TABLE:
-                Checks.checkInput(bits() <= TABLE_MAX_BITS, "--pin-strategy table for %d bits needs %d"
-                        + " entries per port; tables stop at %d bits, use scatter", bits(), 1 << bits(),
-                        TABLE_MAX_BITS);
+                Setting.PIN_STRATEGY.check(bits() <= TABLE_MAX_BITS, "table for %d bits needs %d entries per"
+                        + " port; tables stop at %d bits, use scatter", bits(), 1 << bits(), TABLE_MAX_BITS);
                 return PinStrategy.TABLE;
             case SCATTER:
                 return PinStrategy.SCATTER;
@@ -227,9 +226,8 @@ public final class PinMap {
      * @throws InputError when the counts differ
      */
     public void requireBits(int codeBits) {
-        Checks.checkInput(codeBits == bits(), "--pins %s lists %d pin%s but the codes have %d bits;"
-                + " list exactly one pin per bit, bit 0 first", notation(), bits(), bits() == 1 ? "" : "s",
-                codeBits);
+        Setting.PINS.check(codeBits == bits(), "%s lists %d pin%s but the codes have %d bits; list exactly one"
+                + " pin per bit, bit 0 first", notation(), bits(), bits() == 1 ? "" : "s", codeBits);
     }
 
     /** The map in canonical notation: runs of three or more neighbouring pins written as ranges. */
@@ -452,7 +450,7 @@ public final class PinMap {
         }
 
         private InputError error(String what) {
-            return new InputError("--pins '" + text + "': " + what);
+            return Setting.PINS.error("'%s': %s", text, what);
         }
     }
 }

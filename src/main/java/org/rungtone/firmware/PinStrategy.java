@@ -2,6 +2,7 @@ package org.rungtone.firmware;
 
 import java.util.Locale;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.Setting;
 
 /**
  * How the emitted code turns a DAC code into port values.
@@ -43,6 +44,6 @@ public enum PinStrategy {
                 return s;
             }
         }
-        throw new InputError("--pin-strategy '" + text + "' is unknown; use auto, shift, table or scatter");
+        throw Setting.PIN_STRATEGY.error("'%s' is unknown; use auto, shift, table or scatter", text);
     }
 }

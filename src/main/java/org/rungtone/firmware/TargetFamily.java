@@ -3,6 +3,7 @@ package org.rungtone.firmware;
 import java.util.List;
 import java.util.Locale;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.Setting;
 
 /**
  * A family of target parts with its own template folder: how ports are written, where tables live and
@@ -80,7 +81,7 @@ public enum TargetFamily {
                 return f;
             }
         }
-        throw new InputError("--target '" + text + "' is unknown; known target families: " + knownNames());
+        throw Setting.FAMILY.error("'%s' is unknown; known target families: %s", text, knownNames());
     }
 
     /** The known families as the option spells them: {@code generic, avr, cortexm}. */

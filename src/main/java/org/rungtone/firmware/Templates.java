@@ -14,10 +14,11 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.ConcurrentHashMap;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.Setting;
 
 /**
  * Finds and renders the logic-free C templates: from the jar's {@code templates/} folder, or from a user's
- * folder given explicitly with {@code --templates DIR} (same layout: one folder per target family). Rendering
+ * folder given explicitly ({@link Setting#TEMPLATES}; same layout: one folder per target family). Rendering
  * uses JMustache with no escaping (the output is C, not HTML) and fails on missing values.
  */
 public final class Templates {
@@ -51,7 +52,7 @@ public final class Templates {
      */
     public static Templates fromFolder(Path dir) {
         if (!Files.isDirectory(dir)) {
-            throw new InputError(dir + ": --templates folder does not exist");
+            throw Refusal.of(Setting.TEMPLATES, "%s: %s folder does not exist", dir, Setting.TEMPLATES.ref());
         }
         return new Templates(Optional.of(dir));
     }
@@ -156,8 +157,8 @@ public final class Templates {
             if (userDir.isPresent()) {
                 Path p = userDir.get().resolve(relative);
                 if (!Files.isRegularFile(p)) {
-                    throw new InputError(p + ": template not found in --templates folder (copy the bundled"
-                            + " templates folder and edit it)");
+                    throw Refusal.of(Setting.TEMPLATES, "%s: template not found in %s folder (copy the bundled"
+                            + " templates folder and edit it)", p, Setting.TEMPLATES.ref());
                 }
                 return Files.readString(p, StandardCharsets.UTF_8);
             }

@@ -6,6 +6,7 @@ import java.util.Locale;
 import java.util.stream.Collectors;
 import java.util.stream.IntStream;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.Setting;
 
 /**
  * A hardware timer family that raises the sample-rate interrupt: its counter width, the prescalers it
@@ -109,6 +110,6 @@ public enum TimerKind {
             }
             names.add(k.optionName);
         }
-        throw new InputError("--timer '" + text + "' is unknown; use one of " + String.join(", ", names));
+        throw Setting.TIMER.error("'%s' is unknown; use one of %s", text, String.join(", ", names));
     }
 }

@@ -6,7 +6,6 @@ import java.util.OptionalDouble;
 import org.rungtone.analysis.ReconstructionFilter;
 import org.rungtone.condition.Resampler;
 import org.rungtone.firmware.FirmwareRequest;
-import org.rungtone.firmware.FlashBudget;
 import org.rungtone.internal.Checks;
 import org.rungtone.ladder.LevelTable;
 import org.rungtone.quantize.Dither;
@@ -68,8 +67,8 @@ public record BuildPlan(Path source, int channel, String symbol, Path outDir, in
         board.ifPresent(t -> Checks.checkInput(t.bits() == bits, "the board's level table has %d bits but --bits"
                 + " is %d", t.bits(), bits));
         Checks.checkInput(previewSeconds > 0, "--preview-length must be positive: %s", previewSeconds);
-        Checks.checkInput(flashBudgetBytes >= 0, "the flash budget (%s) must be positive: %d", FlashBudget.SETTING,
-                flashBudgetBytes);
+        Checks.checkInput(flashBudgetBytes >= 0, "the flash budget (%s) must be positive: %d",
+                "--flash-budget or target.flash_budget", flashBudgetBytes);
         Checks.checkInput(previewRateHz == 44_100 || previewRateHz == 48_000,
                 "--preview-rate must be 44.1k or 48k: %s", previewRateHz);
     }

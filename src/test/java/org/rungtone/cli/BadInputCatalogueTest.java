@@ -183,7 +183,7 @@ class BadInputCatalogueTest {
         c.add(bad("build: DDS option without the dds engine", "--dds-frequency and --dds-phase-bits set up the"
                 + " dds engine; add --engine dds", d -> build(d, wavFile(d), "--dds-frequency", "440")));
         c.add(bad("build: samples over the flash budget", "1,590 bytes over the 10-byte flash budget"
-                + " (--flash-budget or target.flash_budget); no smaller bit depth or rate fits either",
+                + " (--flash-budget); no smaller bit depth or rate fits either",
                 d -> build(d, wavFile(d), "--flash-budget", "10")));
     }
 
@@ -260,7 +260,7 @@ class BadInputCatalogueTest {
                 + " project.out)", d -> project(d, "[project]\nname = \"bench\"\nout = \"notes.txt\"\n" + sound,
                         "notes.txt")));
         c.add(bad("project: samples over the flash budget", "1,590 bytes over the 10-byte flash budget"
-                + " (--flash-budget or target.flash_budget)", d -> project(d, head + "\n[target]\nflash_budget = 10\n"
+                + " (--flash-budget)", d -> project(d, head + "\n[target]\nflash_budget = 10\n"
                         + sound)));
         c.add(bad("project: 0 bits", "p.toml:6: quantize.bits: must be 1..16, got 0",
                 d -> project(d, head + "\n[quantize]\nbits = 0\n" + sound)));

@@ -52,18 +52,18 @@ class PinMapTest {
 
     @ParameterizedTest
     @CsvSource(delimiter = '|', value = {
-        "A3,A3|--pins 'A3,A3': pin A3 at column 4 is already bit 0; each pin may appear once",
-        "B0-B3,B2|--pins 'B0-B3,B2': pin B2 at column 7 is already bit 2; each pin may appear once",
-        "B0-B9|--pins 'B0-B9': pin B9 at column 4 is beyond the 8-bit port (pins 0-7)",
-        "C0,C8|--pins 'C0,C8': pin C8 at column 4 is beyond the 8-bit port (pins 0-7)",
-        "B0-C3|--pins 'B0-C3': range at column 1 runs from port B to port C; a range stays on one port,"
+        "A3,A3|target.pins 'A3,A3': pin A3 at column 4 is already bit 0; each pin may appear once",
+        "B0-B3,B2|target.pins 'B0-B3,B2': pin B2 at column 7 is already bit 2; each pin may appear once",
+        "B0-B9|target.pins 'B0-B9': pin B9 at column 4 is beyond the 8-bit port (pins 0-7)",
+        "C0,C8|target.pins 'C0,C8': pin C8 at column 4 is beyond the 8-bit port (pins 0-7)",
+        "B0-C3|target.pins 'B0-C3': range at column 1 runs from port B to port C; a range stays on one port,"
                 + " e.g. B0-B7,C0-C3",
-        "A0,B0,C0,D0,E0|--pins 'A0,B0,C0,D0,E0': port E at column 13 would be a fifth port; at most 4 ports",
-        "B0;B1|--pins 'B0;B1': unexpected ';' at column 3; write pins like B3, ranges like B0-B5, separated"
+        "A0,B0,C0,D0,E0|target.pins 'A0,B0,C0,D0,E0': port E at column 13 would be a fifth port; at most 4 ports",
+        "B0;B1|target.pins 'B0;B1': unexpected ';' at column 3; write pins like B3, ranges like B0-B5, separated"
                 + " by commas",
-        "B|--pins 'B': expected a pin number after port B at column 2",
-        "B0,|--pins 'B0,': a pin is missing at the end; write pins like B3, ranges like B0-B5",
-        "#3|--pins '#3': expected a pin such as B3 or 1.3 at column 1, found '#'",
+        "B|target.pins 'B': expected a pin number after port B at column 2",
+        "B0,|target.pins 'B0,': a pin is missing at the end; write pins like B3, ranges like B0-B5",
+        "#3|target.pins '#3': expected a pin such as B3 or 1.3 at column 1, found '#'",
     })
     void rejectsBadMapsNamingTheColumn(String text, String message) {
         assertEquals(message, assertThrows(InputError.class, () -> PinMap.parse(text, 8)).getMessage());
@@ -71,11 +71,11 @@ class PinMapTest {
 
     @Test
     void rejectsMoreThanSixteenPinsAnEmptyMapAndOddWidths() {
-        assertEquals("--pins 'A0-A15,B0': pin B0 at column 8 is pin 17; codes have at most 16 bits, one pin each",
+        assertEquals("target.pins 'A0-A15,B0': pin B0 at column 8 is pin 17; codes have at most 16 bits, one pin each",
                 assertThrows(InputError.class, () -> PinMap.parse("A0-A15,B0", 16)).getMessage());
-        assertEquals("--pins is empty; list one pin per code bit, bit 0 first, e.g. B0-B5 or A3,A7,C0,C1",
+        assertEquals("target.pins is empty; list one pin per code bit, bit 0 first, e.g. B0-B5 or A3,A7,C0,C1",
                 assertThrows(InputError.class, () -> PinMap.parse("  ", 8)).getMessage());
-        assertEquals("--port-width must be 8, 16 or 32: 12",
+        assertEquals("target.port_width must be 8, 16 or 32: 12",
                 assertThrows(InputError.class, () -> PinMap.parse("B0", 12)).getMessage());
     }
 
@@ -83,7 +83,7 @@ class PinMapTest {
     void rejectsMoreBitsThanPins() {
         PinMap m = PinMap.parse("B0-B5", 8);
         m.requireBits(6);
-        assertEquals("--pins B0-B5 lists 6 pins but the codes have 8 bits; list exactly one pin per bit, bit 0"
+        assertEquals("target.pins B0-B5 lists 6 pins but the codes have 8 bits; list exactly one pin per bit, bit 0"
                 + " first", assertThrows(InputError.class, () -> m.requireBits(8)).getMessage());
     }
 
@@ -138,10 +138,10 @@ class PinMapTest {
 
     @Test
     void refusesForcedStrategiesThatCannotWork() {
-        assertEquals("--pin-strategy shift needs the pins of each port in the order and spacing of their code"
+        assertEquals("target.pin_strategy shift needs the pins of each port in the order and spacing of their code"
                 + " bits (e.g. B0-B5); A3,A7,C0,C1 needs table or scatter", assertThrows(InputError.class,
                         () -> PinMap.parse("A3,A7,C0,C1", 8).resolve(PinStrategy.SHIFT)).getMessage());
-        assertEquals("--pin-strategy table for 13 bits needs 8192 entries per port; tables stop at 12 bits,"
+        assertEquals("target.pin_strategy table for 13 bits needs 8192 entries per port; tables stop at 12 bits,"
                 + " use scatter", assertThrows(InputError.class,
                         () -> PinMap.parse("A0-A12", 16).resolve(PinStrategy.TABLE)).getMessage());
     }
