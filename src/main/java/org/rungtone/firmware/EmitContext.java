@@ -244,7 +244,7 @@ final class EmitContext {
         c.put("timer1", k == TimerKind.AVR_TIMER1);
         c.put("timer2", k == TimerKind.AVR_TIMER2);
         c.put("systick", k == TimerKind.SYSTICK);
-        c.put("tim", k == TimerKind.TIM16 || k == TimerKind.TIM32);
+        c.put("tim", k == TimerKind.GENERAL16 || k == TimerKind.GENERAL32);
         if (t == null) {
             return;
         }
@@ -257,7 +257,7 @@ final class EmitContext {
             c.put("vector", "TIMER" + k.optionName().charAt(5) + "_COMPA_vect");
         }
         // STM32F4 defaults (RM0090): TIM2 is 32-bit at 0x40000000, IRQ 28; TIM3 16-bit at 0x40000400, IRQ 29.
-        boolean wide = k == TimerKind.TIM32;
+        boolean wide = k == TimerKind.GENERAL32;
         c.put("timName", wide ? "TIM2" : "TIM3");
         c.put("timBase", wide ? "0x40000000" : "0x40000400");
         c.put("timIrq", wide ? 28 : 29);

@@ -65,13 +65,13 @@ final class EmitPlan {
         Setting.PORT_WIDTH.check(family.portWidths().contains(width), "%d is not available for target %s; use %s",
                 width, family.folder(), family.portWidths());
         PinMap map = r.pinMap().orElseGet(() -> PinMap.parse(r.pins().orElseThrow(() -> Setting.PINS.error(
-                "is required: list one pin per code bit, bit 0 first, e.g. B0-B%d", bits - 1)), width));
+                "is required: list one pin per code bit, bit 0 first, e.g. PB0-PB%d", bits - 1)), width));
         Setting.PINS.check(map.portWidth() == width, "was parsed for %d-bit ports, but the target uses %d",
                 map.portWidth(), width);
         if (family.letterPortsOnly()) {
             for (Pin p : map.pins()) {
                 Setting.PINS.check(!p.numberedPort(), "%s: target %s names its ports by letter (PORTB, GPIOB);"
-                        + " write e.g. B0 instead of %s", map.notation(), family.folder(), p.name());
+                        + " write e.g. PB0 instead of %s", map.notation(), family.folder(), p.name());
             }
         }
         map.requireBits(bits);
@@ -211,10 +211,10 @@ final class EmitPlan {
             // the pin rules are the ladder's; the value is the button's
             throw e.setting() == Setting.PINS ? e.about(Setting.BUTTON) : e;
         }
-        Setting.BUTTON.check(one.bits() == 1, "'%s' must name one pin, e.g. D2", text);
+        Setting.BUTTON.check(one.bits() == 1, "'%s' must name one pin, e.g. PD2", text);
         Pin b = one.pin(0);
         Setting.BUTTON.check(!family.letterPortsOnly() || !b.numberedPort(), "%s: target %s names its ports by"
-                + " letter; write e.g. D2", text, family.folder());
+                + " letter; write e.g. PD2", text, family.folder());
         int bit = map.pins().indexOf(b);
         Setting.BUTTON.check(bit < 0, "%s is also ladder bit %d in %s; choose a free pin", b.name(), bit,
                 Setting.PINS.ref());

@@ -8,6 +8,8 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.TreeMap;
 import java.util.TreeSet;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import org.rungtone.internal.Checks;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.Setting;
@@ -18,12 +20,14 @@ import org.rungtone.internal.Setting;
  *
  * <p>Notation (bit 0 first, items separated by commas, spaces allowed around them):
  * <ul>
- *   <li>a pin: a port letter and a pin number, {@code B3}; the datasheet prefix P is allowed ({@code PB3});
- *       ports named by number are written with a dot ({@code 1.3} or {@code P1.3});</li>
- *   <li>a range on one port: {@code B0-B5} (bits take B0, B1, ... B5) or descending {@code B5-B0}; the
- *       second port may be left out: {@code B0-5}.</li>
+ *   <li>a pin, the way the part's datasheet names it: P, the port letter and the pin number, {@code PB3};
+ *       ports named by number are written with a dot ({@code P1.3} or {@code 1.3}). The short form
+ *       {@code B3} is refused with the datasheet form as a hint: {@code D2} reads to many as a board's
+ *       silk-screen label, not as the part's pin;</li>
+ *   <li>a range on one port: {@code PB0-PB5} (bits take PB0, PB1, ... PB5) or descending {@code PB5-PB0};
+ *       the second port may be left out: {@code PB0-5}.</li>
  * </ul>
- * Examples: {@code B0-B5}, {@code A3,A7,C0,C1}, {@code D2-D7,B0,B1}, {@code P1.0-P1.7}.
+ * Examples: {@code PB0-PB5}, {@code PA3,PA7,PC0,PC1}, {@code PD2-PD7,PB0,PB1}, {@code P1.0-P1.7}.
  *
  * <p>Immutable.
  */
@@ -79,8 +83,8 @@ public final class PinMap {
                 portWidth);
         String t = text == null ? "" : text;
         if (t.isBlank()) {
-            throw Setting.PINS.error("is empty; list one pin per code bit, bit 0 first, e.g. B0-B5 or"
-                    + " A3,A7,C0,C1");
+            throw Setting.PINS.error("is empty; list one pin per code bit, bit 0 first, e.g. PB0-PB5 or"
+                    + " PA3,PA7,PC0,PC1");
         }
         return new Parser(t, portWidth).parse();
     }
@@ -158,7 +162,7 @@ public final class PinMap {
         switch (requested) {
             case SHIFT:
                 Setting.PIN_STRATEGY.check(shiftable(), "shift needs the pins of each port in the order and"
-                        + " spacing of their code bits (e.g. B0-B5); %s needs table or scatter", notation());
+                        + " spacing of their code bits (e.g. PB0-PB5); %s needs table or scatter", notation());
                 return PinStrategy.SHIFT;
             case TABLE:
                 Setting.PIN_STRATEGY.check(bits() <= TABLE_MAX_BITS, "table for %d bits needs %d entries per"
@@ -287,6 +291,9 @@ public final class PinMap {
 
     /** A one-pass reader of the notation that reports 1-based columns. */
     private static final class Parser {
+        /** A port letter written without its P, at the start of an item or a range's end: D2, B0-B5. */
+        private static final Pattern SHORT_PIN = Pattern.compile("(^|[,\\s-]\\s*)([A-Za-z])(?=\\d+(?![\\d.]))");
+
         private final String text;
         private final int portWidth;
         private final List<Pin> pins = new ArrayList<>();
@@ -337,7 +344,7 @@ public final class PinMap {
                 }
                 if (peek() != ',') {
                     throw error("unexpected '" + peek() + "' at column " + (pos + 1)
-                            + "; write pins like B3, ranges like B0-B5, separated by commas");
+                            + "; write pins like PB3, ranges like PB0-PB5, separated by commas");
                 }
                 pos++;
             }
@@ -368,31 +375,43 @@ public final class PinMap {
         private Pin pin() {
             int column = pos + 1;
             char c = peek();
+            boolean p = c == 'P' || c == 'p';
             String port;
             boolean numbered;
-            if ((c == 'P' || c == 'p') && Character.isLetter(peekAt(pos + 1))
-                    && Character.isDigit(peekAt(pos + 2))) {
-                pos++;
-                port = String.valueOf(Character.toUpperCase(peek()));
-                pos++;
-                numbered = false;
-            } else if ((c == 'P' || c == 'p') && numberedPortAt(pos + 1)) {
+            if (p && numberedPortAt(pos + 1)) {
                 pos++;
                 port = numberedPort();
                 numbered = true;
             } else if (Character.isDigit(c) && numberedPortAt(pos)) {
                 port = numberedPort();
                 numbered = true;
-            } else if (Character.isLetter(c) && c < 128) {
-                port = String.valueOf(Character.toUpperCase(c));
-                pos++;
+            } else if (p && asciiLetter(peekAt(pos + 1))) {
+                port = String.valueOf(Character.toUpperCase(peekAt(pos + 1)));
+                pos += 2;
                 numbered = false;
+            } else if (asciiLetter(c) && Character.isDigit(peekAt(pos + 1))) {
+                throw error("write port pins the way the datasheet names them: " + datasheetForm(text));
             } else if (pos >= text.length()) {
-                throw error("a pin is missing at the end; write pins like B3, ranges like B0-B5");
+                throw error("a pin is missing at the end; write pins like PB3, ranges like PB0-PB5");
             } else {
-                throw error("expected a pin such as B3 or 1.3 at column " + column + ", found '" + c + "'");
+                throw error("expected a pin such as PB3 or P1.3 at column " + column + ", found '" + c + "'");
             }
             return new Pin(port, pinNumber(port, numbered, column));
+        }
+
+        private static boolean asciiLetter(char c) {
+            return (c >= 'A' && c <= 'Z') || (c >= 'a' && c <= 'z');
+        }
+
+        /** The list with a P before every port letter written without one: {@code D2-D7} is PD2-PD7. */
+        private static String datasheetForm(String text) {
+            Matcher m = SHORT_PIN.matcher(text);
+            StringBuilder b = new StringBuilder();
+            while (m.find()) {
+                m.appendReplacement(b, m.group(1) + "P" + m.group(2).toUpperCase(Locale.ROOT));
+            }
+            m.appendTail(b);
+            return b.toString().trim();
         }
 
         private int pinNumber(String port, boolean numbered, int column) {
@@ -400,14 +419,15 @@ public final class PinMap {
             while (Character.isDigit(peek())) {
                 pos++;
             }
-            String portText = numbered ? port + "." : port;
             if (start == pos) {
-                throw error("expected a pin number after port " + portText + " at column " + (pos + 1));
+                throw error("expected a pin number after port " + (numbered ? port + "." : port) + " at column "
+                        + (pos + 1));
             }
             String digits = text.substring(start, pos);
             int n = digits.length() > 3 ? Integer.MAX_VALUE : Integer.parseInt(digits);
             if (n >= portWidth) {
-                throw error("pin " + portText + digits + " at column " + column + " is beyond the "
+                throw error("pin P" + (numbered ? port + "." : port) + digits + " at column " + column
+                        + " is beyond the "
                         + portWidth + "-bit port (pins 0-" + (portWidth - 1) + ")");
             }
             return n;

@@ -9,7 +9,7 @@ import org.rungtone.internal.Setting;
  *
  * <ul>
  *   <li>{@link #SHIFT}: one mask and one shift per port; possible when, on every port, each pin sits the
- *       same distance from its code bit (for example contiguous ascending pins such as {@code B0-B5}).</li>
+ *       same distance from its code bit (for example contiguous ascending pins such as {@code PB0-PB5}).</li>
  *   <li>{@link #TABLE}: a lookup table of 2^N port values per port, read from flash: constant time for any
  *       assignment.</li>
  *   <li>{@link #SCATTER}: masks and shifts, one per group of bits that keep the same distance to their

@@ -49,12 +49,12 @@ public final class SweepSpec {
 
     /**
      * A sweep that moves to the next code at each press of the button on {@code buttonPin} (pin notation of
-     * {@link PinMap}, e.g. {@code D2}).
+     * {@link PinMap}, e.g. {@code PD2}).
      *
      * @throws org.rungtone.internal.InputError when a code does not fit
      */
     public static SweepSpec onButton(int bits, int[] codes, String buttonPin) {
-        Setting.BUTTON.check(buttonPin != null && !buttonPin.isBlank(), "needs a pin, e.g. D2");
+        Setting.BUTTON.check(buttonPin != null && !buttonPin.isBlank(), "needs a pin, e.g. PD2");
         return new SweepSpec(bits, codes, 0, Optional.of(buttonPin.trim()));
     }
 

@@ -34,14 +34,14 @@ class FirmwareEmitterTest {
 
     /** A small door-chime project: two 4-bit sounds on scattered pins, looped, packed. */
     private static FirmwareRequest.Builder chimeProject() {
-        return FirmwareRequest.builder().name("Door Chime").toolVersion("0.1.0-test").pins("A3,A7,C0,C1")
+        return FirmwareRequest.builder().name("Door Chime").toolVersion("0.1.0-test").pins("PA3,PA7,PC0,PC1")
                 .storage(SampleStorage.PACKED).engine(PlaybackEngine.LOOP)
                 .sound("ding", ramp(4, 24, 8000), 4, 20).sound("dong", ramp(4, 10, 8000))
                 .setting("source: examples/greenhouse/chime.wav");
     }
 
     private static FirmwareRequest.Builder avrProject() {
-        return FirmwareRequest.builder().family("avr").name("alarm").toolVersion("0.1.0-test").pins("D2-D7")
+        return FirmwareRequest.builder().family("avr").name("alarm").toolVersion("0.1.0-test").pins("PD2-PD7")
                 .cpuClockHz(16e6).sound("warble", ramp(6, 16, 22050));
     }
 
@@ -94,7 +94,7 @@ class FirmwareEmitterTest {
 
     @Test
     void reportsTheGlitchBetweenPorts() {
-        FirmwareRequest r = avrProject().pins("B0-B2,D5-D7").build();
+        FirmwareRequest r = avrProject().pins("PB0-PB2,PD5-PD7").build();
         List<String> report = FirmwareEmitter.render(r).result().report();
         // B is shared with other pins: in/andi/or/out, 4 cycles at 16 MHz = 250 ns before D follows
         assertTrue(report.stream().anyMatch(l -> l.startsWith("port update: ports B then D in this fixed order,"
@@ -103,7 +103,7 @@ class FirmwareEmitterTest {
 
     @Test
     void reportsTableSizeAndDdsTuning() {
-        FirmwareRequest r = FirmwareRequest.builder().name("sweepgen").pins("A3,A7,C0,C1,B2,B1")
+        FirmwareRequest r = FirmwareRequest.builder().name("sweepgen").pins("PA3,PA7,PC0,PC1,PB2,PB1")
                 .engine(PlaybackEngine.DDS).sound("sine", Codes.of(6, 16000, Dds.sineTable(8, 6)))
                 .dds(DdsSpec.of(440)).build();
         List<String> report = FirmwareEmitter.render(r).result().report();
@@ -168,20 +168,28 @@ class FirmwareEmitterTest {
 
     @Test
     void refusesDuplicatePins() {
-        assertRefused("target.pins 'D2-D6,D4': pin D4 at column 7 is already bit 2; each pin may appear once",
-                b -> b.pins("D2-D6,D4"), avrProject());
+        assertRefused("target.pins 'PD2-PD6,PD4': pin PD4 at column 9 is already bit 2; each pin may appear once",
+                b -> b.pins("PD2-PD6,PD4"), avrProject());
     }
 
     @Test
     void refusesAPinBeyondThePortWidth() {
-        assertRefused("target.pins 'D3-D8': pin D8 at column 4 is beyond the 8-bit port (pins 0-7)",
-                b -> b.pins("D3-D8"), avrProject());
+        assertRefused("target.pins 'PD3-PD8': pin PD8 at column 5 is beyond the 8-bit port (pins 0-7)",
+                b -> b.pins("PD3-PD8"), avrProject());
     }
 
     @Test
     void refusesMoreBitsThanPins() {
-        assertRefused("target.pins D2-D6 lists 5 pins but the codes have 6 bits; list exactly one pin per bit, bit 0"
-                + " first", b -> b.pins("D2-D6"), avrProject());
+        assertRefused("target.pins PD2-PD6 lists 5 pins but the codes have 6 bits; list exactly one pin per bit,"
+                + " bit 0 first", b -> b.pins("PD2-PD6"), avrProject());
+    }
+
+    @Test
+    void refusesPinsWrittenWithoutTheirPortPrefix() {
+        assertRefused("target.pins 'D2-D7': write port pins the way the datasheet names them: PD2-PD7",
+                b -> b.pins("D2-D7"), avrProject());
+        assertRefused("sweep.button 'D2': write port pins the way the datasheet names them: PD2",
+                b -> b.pins("PB0-PB5").sweep(SweepSpec.onButton(6, new int[] {1, 2}, "D2")), avrProject());
     }
 
     @Test
@@ -195,7 +203,7 @@ class FirmwareEmitterTest {
         // timer0 at 16 MHz is no slower than 16 MHz / (1024 * 256) = 61.04 Hz
         assertRefused("quantize.rate 40 Hz is too slow for timer0 (8-bit, prescalers 1/8/64/256/1024) at a 16 MHz"
                 + " clock: the slowest is 61.0352 Hz; choose a wider target.timer or a higher quantize.rate",
-                b -> FirmwareRequest.builder().family("avr").name("alarm").pins("D2-D7").cpuClockHz(16e6)
+                b -> FirmwareRequest.builder().family("avr").name("alarm").pins("PD2-PD7").cpuClockHz(16e6)
                         .timer(TimerKind.AVR_TIMER0).sound("hum", ramp(6, 16, 40)), avrProject());
         assertRefused("quantize.rate 22.05 kHz cannot be made within 100 ppm by timer1 (16-bit, prescalers"
                 + " 1/8/64/256/1024) at a 16 MHz clock: the closest is 22.0386 kHz (-518.5 ppm, prescaler 1,"
@@ -217,7 +225,7 @@ class FirmwareEmitterTest {
         // 11,025 samples at 11.025 kHz, 7 bits packed: ceil(11,025 * 7 / 8) + 4 = 9,651 bytes.
         assertRefused("the samples need 16,004 bytes, 6,004 bytes over the 10,000-byte flash budget"
                 + " (target.flash_budget); 7-bit packed at 11.025 kHz would fit (9,651 bytes)",
-                b -> FirmwareRequest.builder().name("chime").pins("B0-B7")
+                b -> FirmwareRequest.builder().name("chime").pins("PB0-PB7")
                         .sound("chime", ramp(8, 16000, 16000)).flashBudgetBytes(10000), avrProject());
     }
 
@@ -243,22 +251,22 @@ class FirmwareEmitterTest {
                 + " quantize.rate",
                 b -> b.sound("fast", ramp(4, 4, 16000)), chimeProject());
         assertRefused("the dds wavetable 'wave' has 100 samples; it needs a power of two from 2 to 65536 (one"
-                + " period)", b -> FirmwareRequest.builder().name("osc").pins("B0-B5").engine(PlaybackEngine.DDS)
+                + " period)", b -> FirmwareRequest.builder().name("osc").pins("PB0-PB5").engine(PlaybackEngine.DDS)
                         .sound("wave", ramp(6, 100, 8000)), chimeProject());
     }
 
     @Test
     void aButtonRefusedByThePinRulesNamesTheButton() {
         SettingError e = assertThrows(SettingError.class, () -> FirmwareEmitter.render(avrProject()
-                .sweep(SweepSpec.onButton(6, new int[] {1, 2}, "D9")).build()));
+                .sweep(SweepSpec.onButton(6, new int[] {1, 2}, "PD9")).build()));
         assertEquals(Setting.BUTTON, e.setting());
-        assertEquals("--button 'D9': pin D9 at column 1 is beyond the 8-bit port (pins 0-7)",
+        assertEquals("--button 'PD9': pin PD9 at column 1 is beyond the 8-bit port (pins 0-7)",
                 e.render(TimerSolverTest::optionName));
     }
 
     @Test
     void refusesAButtonOnALadderPin() {
-        assertRefused("sweep.button D3 is also ladder bit 1 in target.pins; choose a free pin",
-                b -> b.sweep(SweepSpec.onButton(6, new int[] {1, 2}, "D3")), avrProject());
+        assertRefused("sweep.button PD3 is also ladder bit 1 in target.pins; choose a free pin",
+                b -> b.sweep(SweepSpec.onButton(6, new int[] {1, 2}, "PD3")), avrProject());
     }
 }

@@ -47,7 +47,7 @@ class TimerSolverTest {
     void generalTimerPicksTheSmallestExactPrescaler() {
         // 1 Hz from 84 MHz needs p * period = 84,000,000 with period <= 65,536: the smallest divisor of
         // 84,000,000 = 2^8 * 3 * 5^6 * 7 that leaves a period of at most 65,536 is 1,344 (period 62,500).
-        TimerSetting s = TimerSolver.solve(84e6, TimerKind.TIM16, 1, 0);
+        TimerSetting s = TimerSolver.solve(84e6, TimerKind.GENERAL16, 1, 0);
         assertEquals(1344, s.prescaler());
         assertEquals(62499, s.reload());
         assertEquals(0, s.errorPpm(), 1e-9);
@@ -94,14 +94,18 @@ class TimerSolverTest {
     void describesTheSetting() {
         assertEquals("timer1 at 16 MHz: prescaler 1, OCR1A = 725 (726 cycles per tick), 22.0386 kHz (-518.5 ppm)",
                 TimerSolver.solve(16e6, TimerKind.AVR_TIMER1, 22050, 1000).describe());
-        assertEquals("tim16 at 84 MHz: prescaler 1344 (PSC = 1343), ARR = 62499 (84000000 cycles per tick), 1 Hz"
-                + " (+0.0 ppm)", TimerSolver.solve(84e6, TimerKind.TIM16, 1, 0).describe());
+        assertEquals("general16 at 84 MHz: prescaler 1344 (PSC = 1343), ARR = 62499 (84000000 cycles per tick), 1 Hz"
+                + " (+0.0 ppm)", TimerSolver.solve(84e6, TimerKind.GENERAL16, 1, 0).describe());
     }
 
     @Test
     void parsesTimerNames() {
         assertEquals(TimerKind.AVR_TIMER2, TimerKind.parse("Timer2"));
-        assertEquals("target.timer 'tc3' is unknown; use one of timer0, timer1, timer2, systick, tim16, tim32",
+        assertEquals("target.timer 'tc3' is unknown; use one of timer0, timer1, timer2, systick, general16,"
+                + " general32",
                 assertThrows(InputError.class, () -> TimerKind.parse("tc3")).getMessage());
+        // the former spellings get the new name
+        assertEquals("target.timer 'TIM32' is now called general32 (a general-purpose timer with a 32-bit counter)",
+                assertThrows(InputError.class, () -> TimerKind.parse("TIM32")).getMessage());
     }
 }
