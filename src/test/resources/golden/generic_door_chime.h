@@ -37,6 +37,11 @@
 #define DOOR_CHIME_FLASH
 #endif
 
+/* C linkage for the functions and tables below, so C++ code can include this header too. */
+#ifdef __cplusplus
+extern "C" {
+#endif
+
 /* Codes are offset binary, N bits: 0 .. DOOR_CHIME_MAX_CODE; DOOR_CHIME_MID_CODE is the middle of the range. */
 #define DOOR_CHIME_BITS 4u
 #define DOOR_CHIME_MAX_CODE 0x0Fu
@@ -91,5 +96,9 @@ extern const door_chime_port_t door_chime_pins_C[1u << DOOR_CHIME_BITS] DOOR_CHI
  * macro yourself (see DOOR_CHIME_CONFIG_HEADER in door_chime.c), it calls this function, which you write
  * for your part. */
 void door_chime_port_write(uint8_t port, door_chime_port_t value, door_chime_port_t mask);
+
+#ifdef __cplusplus
+}
+#endif
 
 #endif /* DOOR_CHIME_H */
