@@ -11,7 +11,7 @@
  *   target: avr (8-bit AVR, ATmega328P register names), CPU clock 16 MHz
  *   engine: clip, one-shot playback of 1 sound
  *   tick rate: 22.05 kHz requested; timer1 at 16 MHz: prescaler 1, OCR1A = 725 (726 cycles per tick), 22.0386 kHz (-518.5 ppm)
- *   pins: D2-D7 on 8-bit ports: bit 0 (LSB) -> D2, bit 1 -> D3, bit 2 -> D4, bit 3 -> D5, bit 4 -> D6, bit 5 (MSB) -> D7
+ *   pins: PD2-PD7 on 8-bit ports: bit 0 (LSB) -> PD2, bit 1 -> PD3, bit 2 -> PD4, bit 3 -> PD5, bit 4 -> PD6, bit 5 (MSB) -> PD7
  *   pin strategy: shift and mask, one per port
  *   port update: port D, PORTx written directly where the ladder owns the whole port, else masked read-modify-write; other pins keep their levels
  *   storage: uint8_t per sample, 16 bytes for 16 samples (6-bit packed: 12 bytes)
@@ -48,7 +48,7 @@
 #define ALARM_READ_SAMPLE(addr) pgm_read_byte(addr)
 #define ALARM_READ_INDEX(addr) pgm_read_word(addr)
 #define ALARM_READ_PORT(addr) pgm_read_byte(addr)
-#define ALARM_READ_SWEEP(addr) pgm_read_byte(addr)
+#define ALARM_READ_STEP_CODE(addr) pgm_read_byte(addr)
 
 /* Critical section: interrupts off, then the previous state back (SREG holds the I flag). */
 #define ALARM_LOCK_STATE uint8_t

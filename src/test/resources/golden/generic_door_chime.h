@@ -11,7 +11,7 @@
  *   target: generic C99, pins through the port hook door_chime_port_write()
  *   engine: loop, playback of 2 sounds with loop points
  *   tick rate: 8 kHz (call door_chime_tick() from your timer interrupt at this rate)
- *   pins: A3,A7,C0,C1 on 8-bit ports: bit 0 (LSB) -> A3, bit 1 -> A7, bit 2 -> C0, bit 3 (MSB) -> C1
+ *   pins: PA3,PA7,PC0,PC1 on 8-bit ports: bit 0 (LSB) -> PA3, bit 1 -> PA7, bit 2 -> PC0, bit 3 (MSB) -> PC1
  *   pin strategy: lookup table, 2 port(s) x 16 entries x 1 byte(s) = 32 bytes
  *   port update: ports A then C in this fixed order, the gap between writes depends on your port hook; in between, the ladder shows a mix of the old and new code (a short glitch); one port-hook call per port with the ladder-pin mask
  *   storage: 4-bit packed, 17 bytes for 34 samples (uint8_t per sample: 34 bytes)
@@ -37,6 +37,11 @@
 #define DOOR_CHIME_FLASH
 #endif
 
+/* C linkage for the functions and tables below, so C++ code can include this header too. */
+#ifdef __cplusplus
+extern "C" {
+#endif
+
 /* Codes are offset binary, N bits: 0 .. DOOR_CHIME_MAX_CODE; DOOR_CHIME_MID_CODE is the middle of the range. */
 #define DOOR_CHIME_BITS 4u
 #define DOOR_CHIME_MAX_CODE 0x0Fu
@@ -47,9 +52,9 @@
 /* Ladder ports, updated in this order (index = port argument of the port hook where there is one). */
 #define DOOR_CHIME_PORT_COUNT 2u
 #define DOOR_CHIME_PORT_A 0u
-#define DOOR_CHIME_PORT_A_MASK 0x88u  /* A3 = bit 0, A7 = bit 1 */
+#define DOOR_CHIME_PORT_A_MASK 0x88u  /* PA3 = bit 0, PA7 = bit 1 */
 #define DOOR_CHIME_PORT_C 1u
-#define DOOR_CHIME_PORT_C_MASK 0x03u  /* C0 = bit 2, C1 = bit 3 */
+#define DOOR_CHIME_PORT_C_MASK 0x03u  /* PC0 = bit 2, PC1 = bit 3 */
 
 typedef uint8_t door_chime_port_t;   /* one port register */
 typedef uint16_t door_chime_index_t;  /* index into the sample table */
@@ -91,5 +96,9 @@ extern const door_chime_port_t door_chime_pins_C[1u << DOOR_CHIME_BITS] DOOR_CHI
  * macro yourself (see DOOR_CHIME_CONFIG_HEADER in door_chime.c), it calls this function, which you write
  * for your part. */
 void door_chime_port_write(uint8_t port, door_chime_port_t value, door_chime_port_t mask);
+
+#ifdef __cplusplus
+}
+#endif
 
 #endif /* DOOR_CHIME_H */

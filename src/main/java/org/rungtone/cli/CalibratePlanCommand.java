@@ -32,7 +32,7 @@ import picocli.CommandLine.Spec;
         footerHeading = "%nExample:%n",
         footer = {"  rungtone calibrate plan \\",
             "      --ladder examples/calibration/greenhouse-r2r.toml \\",
-            "      --target avr --pins D2-D7 --cpu-clock 16MHz --button B0 \\",
+            "      --target avr --pins PD2-PD7 --cpu-clock 16MHz --button PB0 \\",
             "      --out greenhouse-cal",
             "  (writes plan.csv, sweep.h, sweep.c and sweep_data.c into greenhouse-cal/)"})
 public final class CalibratePlanCommand implements Callable<Integer> {
@@ -50,7 +50,8 @@ public final class CalibratePlanCommand implements Callable<Integer> {
     double holdSeconds;
 
     @Option(names = "--button", paramLabel = "PIN",
-            description = "Step to the next code on each press of a button on this pin (to ground) instead.")
+            description = "Step to the next code on each press of a button on this pin (to ground) instead,"
+                    + " e.g. PB0.")
     String button;
 
     @Mixin

@@ -21,7 +21,7 @@ import picocli.CommandLine.Spec;
 @Command(name = "demo",
         header = "Build the bundled greenhouse example end to end.", mixinStandardHelpOptions = true,
         description = {"Build the bundled example: a greenhouse controller (8-bit AVR) that plays a door chime",
-            "and a looping frost alarm through a 6-bit R-2R ladder of 5 %% resistors on pins D2-D7,",
+            "and a looping frost alarm through a 6-bit R-2R ladder of 5 %% resistors on pins PD2-PD7,",
             "compensated with the board's measured levels (a simulated calibration).",
             "The scenario's files are copied next to the outputs so you can change and rebuild them."},
         footerHeading = "%nExample:%n",

@@ -24,7 +24,8 @@ public final class FirmwareOptions {
     String target;
 
     @Option(names = "--pins", paramLabel = "<pins>",
-            description = "One pin per code bit, bit 0 (LSB) first: B0-B5, A3,A7,C0,C1, P1.0-P1.7.")
+            description = "One pin per code bit, bit 0 (LSB) first, as the part's datasheet names them: PB0-PB5,"
+                    + " PA3,PA7,PC0,PC1, P1.0-P1.7.")
     String pins;
 
     @Option(names = "--cpu-clock", paramLabel = "<hz>", converter = Converters.Hertz.class,
@@ -32,7 +33,8 @@ public final class FirmwareOptions {
     Double cpuClockHz;
 
     @Option(names = "--timer", paramLabel = "<timer>",
-            description = "timer0, timer1, timer2 (avr); systick, tim16, tim32 (cortexm).")
+            description = "timer0, timer1, timer2 (avr); systick, general16, general32 (cortexm: a general-purpose"
+                    + " timer with a 16- or 32-bit counter).")
     String timer;
 
     @Option(names = "--rate-tolerance", paramLabel = "<ppm>",

@@ -28,9 +28,9 @@ import picocli.CommandLine.Spec;
 public final class InitCommand implements Callable<Integer> {
     /** Pins and clock that make a sensible start per family. */
     private static final Map<String, String[]> FAMILY = Map.of(
-            "generic", new String[] {"A0-A%d", "", ""},
-            "avr", new String[] {"D%d-D%d", "16MHz", "timer1"},
-            "cortexm", new String[] {"B0-B%d", "72MHz", "systick"});
+            "generic", new String[] {"PA0-PA%d", "", ""},
+            "avr", new String[] {"PD%d-PD%d", "16MHz", "timer1"},
+            "cortexm", new String[] {"PB0-PB%d", "72MHz", "systick"});
 
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
@@ -98,7 +98,7 @@ public final class InitCommand implements Callable<Integer> {
 
     String render(String project, String family, String topo) {
         String[] f = FAMILY.get(family);
-        // AVR: keep D0/D1 free for the serial port when the ladder fits on D2..D7
+        // AVR: keep PD0/PD1 free for the serial port when the ladder fits on PD2..PD7
         String pins = family.equals("avr") ? (bits <= 6 ? String.format(Locale.ROOT, f[0], 2, bits + 1)
                 : String.format(Locale.ROOT, f[0], 0, bits - 1)) : String.format(Locale.ROOT, f[0], bits - 1);
         StringBuilder b = new StringBuilder();

@@ -3,10 +3,11 @@ package org.rungtone.firmware;
 import java.util.Locale;
 import java.util.Set;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.Setting;
 
 /**
- * C identifier rules in one place: turns a user's {@code --name} into a symbol prefix that is a valid C99
- * identifier, avoids keywords and reserved names, and derives macro names from it.
+ * C identifier rules in one place: turns the user's name setting ({@link Setting#NAME}) into a symbol prefix
+ * that is a valid C99 identifier, avoids keywords and reserved names, and derives macro names from it.
  */
 public final class CNames {
     private static final Set<String> KEYWORDS = Set.of("auto", "break", "case", "char", "const", "continue",
@@ -44,19 +45,19 @@ public final class CNames {
         }
         String s = b.toString();
         if (s.isEmpty()) {
-            throw new InputError("--name '" + raw + "' has no letters or digits to make a C symbol from;"
-                    + " use e.g. --name door_chime");
+            throw Setting.NAME.error("'%s' has no letters or digits to make a C symbol from; use e.g. %s"
+                    + " door_chime", raw, Setting.NAME.ref());
         }
         if (Character.isDigit(s.charAt(0))) {
             s = "snd_" + s;
         }
         if (KEYWORDS.contains(s)) {
-            throw new InputError("--name '" + raw + "' would make the C keyword '" + s
-                    + "'; choose another name, e.g. " + s + "_sound");
+            throw Setting.NAME.error("'%s' would make the C keyword '%s'; choose another name, e.g. %s_sound",
+                    raw, s, s);
         }
         if (s.length() > 40) {
-            throw new InputError("--name '" + raw + "' is too long for a C symbol prefix (" + s.length()
-                    + " characters, at most 40)");
+            throw Setting.NAME.error("'%s' is too long for a C symbol prefix (%d characters, at most 40)", raw,
+                    s.length());
         }
         return s;
     }

@@ -1,6 +1,6 @@
 package org.rungtone.firmware;
 
-import org.rungtone.internal.Checks;
+import org.rungtone.internal.Setting;
 
 /**
  * Settings of the DDS engine; the wavetable is the request's one sound, 2^k codes long.
@@ -16,9 +16,9 @@ public record DdsSpec(int phaseBits, double frequencyHz) {
 
     /** Checks the fields. */
     public DdsSpec {
-        Checks.checkInput(phaseBits >= 1 && phaseBits <= 32, "--dds-phase-bits must be 1..32: %d", phaseBits);
-        Checks.checkInput(Double.isFinite(frequencyHz) && frequencyHz >= 0,
-                "--dds-frequency must be zero or positive: %s", frequencyHz);
+        Setting.DDS_PHASE_BITS.check(phaseBits >= 1 && phaseBits <= 32, "must be 1..32: %d", phaseBits);
+        Setting.DDS_FREQUENCY.check(Double.isFinite(frequencyHz) && frequencyHz >= 0,
+                "must be zero or positive: %s", frequencyHz);
     }
 
     /** A 32-bit accumulator starting at {@code frequencyHz}. */

@@ -7,6 +7,8 @@ import java.util.Map;
 import java.util.Optional;
 import org.rungtone.internal.Checks;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.Setting;
+import org.rungtone.internal.SettingError;
 import org.rungtone.quantize.Codes;
 
 /**
@@ -45,7 +47,8 @@ final class EmitPlan {
 
     private EmitPlan(FirmwareRequest r) {
         request = r;
-        Checks.checkInput(r.name() != null, "--name is required: it prefixes every C symbol, e.g. --name chime");
+        Setting.NAME.check(r.name() != null, "is required: it prefixes every C symbol, e.g. %s chime",
+                Setting.NAME.ref());
         symbol = CNames.symbol(r.name());
         macro = CNames.macro(symbol);
         String[] resolved = resolveFamily(r);
@@ -59,16 +62,16 @@ final class EmitPlan {
         requestedRateHz = engine == PlaybackEngine.SWEEP ? SweepSpec.TICK_HZ : commonRate(sounds);
 
         int width = r.portWidth().orElse(r.pinMap().map(PinMap::portWidth).orElse(family.defaultPortWidth()));
-        Checks.checkInput(family.portWidths().contains(width), "--port-width %d is not available for target"
-                + " %s; use %s", width, family.folder(), family.portWidths());
-        PinMap map = r.pinMap().orElseGet(() -> PinMap.parse(r.pins().orElseThrow(() -> new InputError(
-                "--pins is required: list one pin per code bit, bit 0 first, e.g. B0-B" + (bits - 1))), width));
-        Checks.checkInput(map.portWidth() == width, "--pins was parsed for %d-bit ports, but the target uses %d",
+        Setting.PORT_WIDTH.check(family.portWidths().contains(width), "%d is not available for target %s; use %s",
+                width, family.folder(), family.portWidths());
+        PinMap map = r.pinMap().orElseGet(() -> PinMap.parse(r.pins().orElseThrow(() -> Setting.PINS.error(
+                "is required: list one pin per code bit, bit 0 first, e.g. PB0-PB%d", bits - 1)), width));
+        Setting.PINS.check(map.portWidth() == width, "was parsed for %d-bit ports, but the target uses %d",
                 map.portWidth(), width);
         if (family.letterPortsOnly()) {
             for (Pin p : map.pins()) {
-                Checks.checkInput(!p.numberedPort(), "--pins %s: target %s names its ports by letter (PORTB,"
-                        + " GPIOB); write e.g. B0 instead of %s", map.notation(), family.folder(), p.name());
+                Setting.PINS.check(!p.numberedPort(), "%s: target %s names its ports by letter (PORTB, GPIOB);"
+                        + " write e.g. PB0 instead of %s", map.notation(), family.folder(), p.name());
             }
         }
         map.requireBits(bits);
@@ -125,7 +128,7 @@ final class EmitPlan {
             TargetFamily f = TargetFamily.parse(name);
             return new String[] {f.folder(), f.folder()};
         } catch (InputError e) {
-            // A user's --templates folder may add a family; it is driven like the generic one.
+            // A user's own template folder may add a family; it is driven like the generic one.
             if (!name.isEmpty() && name.matches("[A-Za-z0-9_-]+")
                     && r.templates().exists(name, "player.c.mustache")) {
                 return new String[] {TargetFamily.GENERIC.folder(), name};
@@ -148,8 +151,8 @@ final class EmitPlan {
                 Checks.checkInput(n >= 2 && n <= 65536 && Integer.bitCount(n) == 1, "the dds wavetable '%s'"
                         + " has %d samples; it needs a power of two from 2 to 65536 (one period)",
                         sounds.get(0).name(), n);
-                Checks.checkInput(r.dds().phaseBits() >= Integer.numberOfTrailingZeros(n), "--dds-phase-bits"
-                        + " %d is fewer than the %d bits that index the %d-entry table", r.dds().phaseBits(),
+                Setting.DDS_PHASE_BITS.check(r.dds().phaseBits() >= Integer.numberOfTrailingZeros(n), "%d is"
+                        + " fewer than the %d bits that index the %d-entry table", r.dds().phaseBits(),
                         Integer.numberOfTrailingZeros(n), n);
                 break;
             default:
@@ -189,9 +192,9 @@ final class EmitPlan {
     private static double commonRate(List<SoundClip> list) {
         double rate = list.get(0).codes().sampleRateHz();
         for (SoundClip s : list) {
-            Checks.checkInput(s.codes().sampleRateHz() == rate, "sounds '%s' (%s) and '%s' (%s) differ in"
-                    + " sample rate; resample them to one --rate", list.get(0).name(), Fmt.hz(rate), s.name(),
-                    Fmt.hz(s.codes().sampleRateHz()));
+            Refusal.check(Setting.RATE, s.codes().sampleRateHz() == rate, "sounds '%s' (%s) and '%s' (%s) differ"
+                    + " in sample rate; resample them to one %s", list.get(0).name(), Fmt.hz(rate), s.name(),
+                    Fmt.hz(s.codes().sampleRateHz()), Setting.RATE.ref());
         }
         return rate;
     }
@@ -204,16 +207,17 @@ final class EmitPlan {
         PinMap one;
         try {
             one = PinMap.parse(text, width);
-        } catch (InputError e) {
-            throw new InputError(e.getMessage().replace("--pins", "--button"), e);
+        } catch (SettingError e) {
+            // the pin rules are the ladder's; the value is the button's
+            throw e.setting() == Setting.PINS ? e.about(Setting.BUTTON) : e;
         }
-        Checks.checkInput(one.bits() == 1, "--button '%s' must name one pin, e.g. D2", text);
+        Setting.BUTTON.check(one.bits() == 1, "'%s' must name one pin, e.g. PD2", text);
         Pin b = one.pin(0);
-        Checks.checkInput(!family.letterPortsOnly() || !b.numberedPort(), "--button %s: target %s names its"
-                + " ports by letter; write e.g. D2", text, family.folder());
+        Setting.BUTTON.check(!family.letterPortsOnly() || !b.numberedPort(), "%s: target %s names its ports by"
+                + " letter; write e.g. PD2", text, family.folder());
         int bit = map.pins().indexOf(b);
-        Checks.checkInput(bit < 0, "--button %s is also ladder bit %d in --pins; choose a free pin", b.name(),
-                bit);
+        Setting.BUTTON.check(bit < 0, "%s is also ladder bit %d in %s; choose a free pin", b.name(), bit,
+                Setting.PINS.ref());
         return Optional.of(b);
     }
 
@@ -226,14 +230,14 @@ final class EmitPlan {
             }
             return Optional.empty();
         }
-        Checks.checkInput(!Double.isNaN(r.cpuClockHz()), "--cpu-clock is required for target %s (the clock"
-                + " that drives the timer, e.g. 16MHz)", family.folder());
+        Setting.CPU_CLOCK.check(!Double.isNaN(r.cpuClockHz()), "is required for target %s (the clock that drives"
+                + " the timer, e.g. 16MHz)", family.folder());
         TimerKind kind = r.timer().orElse(family.defaultTimer());
         if (!family.timers().contains(kind)) {
             List<String> names = new ArrayList<>();
             family.timers().forEach(t -> names.add(t.optionName()));
-            throw new InputError("--timer " + kind.optionName() + " is not available on target " + family.folder()
-                    + "; use " + String.join(", ", names));
+            throw Setting.TIMER.error("%s is not available on target %s; use %s", kind.optionName(),
+                    family.folder(), String.join(", ", names));
         }
         return Optional.of(TimerSolver.solve(r.cpuClockHz(), kind, requestedRateHz, r.rateTolerancePpm()));
     }
@@ -265,7 +269,7 @@ final class EmitPlan {
     }
 
     private long ddsTuning(DdsSpec dds) {
-        Checks.checkInput(dds.frequencyHz() < tickRateHz, "--dds-frequency %s is not below the tick rate %s",
+        Setting.DDS_FREQUENCY.check(dds.frequencyHz() < tickRateHz, "%s is not below the tick rate %s",
                 Fmt.hz(dds.frequencyHz()), Fmt.hz(tickRateHz));
         return Dds.tuningWord(dds.frequencyHz(), tickRateHz, dds.phaseBits());
     }
@@ -273,10 +277,12 @@ final class EmitPlan {
     private void checkSizes() {
         long total = totalBytes();
         if (total > family.maxTableBytes()) {
-            throw new InputError("target " + family.folder() + ": the tables need " + Fmt.bytes(total)
-                    + " bytes, more than the " + Fmt.bytes(family.maxTableBytes()) + " bytes that"
-                    + " pgm_read_byte can reach; use " + (storage == SampleStorage.PACKED ? ""
-                            : "--storage packed, ") + "a lower --rate, fewer --bits or a shorter sound");
+            // the first fix the message proposes is the setting it is about
+            boolean packed = storage == SampleStorage.PACKED;
+            throw Refusal.of(packed ? Setting.RATE : Setting.STORAGE, "target %s: the tables need %s bytes, more"
+                    + " than the %s bytes that pgm_read_byte can reach; use %sa lower %s, fewer %s or a shorter"
+                    + " sound", family.folder(), Fmt.bytes(total), Fmt.bytes(family.maxTableBytes()),
+                    packed ? "" : Setting.STORAGE.ref() + " packed, ", Setting.RATE.ref(), Setting.BITS.ref());
         }
         long budget = request.flashBudgetBytes();
         if (budget > 0) {
@@ -291,7 +297,7 @@ final class EmitPlan {
         if (timer.isPresent() && !family.timers().isEmpty()
                 && timer.get().cyclesPerTick() < MIN_CYCLES_PER_TICK) {
             warnings.add("only " + timer.get().cyclesPerTick() + " CPU cycles per tick: the interrupt may not"
-                    + " finish in time; lower --rate or raise --cpu-clock");
+                    + " finish in time; lower the sample rate or raise the CPU clock");
         }
         if (timer.map(TimerSetting::kind).orElse(null) == TimerKind.AVR_TIMER0) {
             warnings.add("timer0 also runs the Arduino core's millis() and delay(); they stop working");
@@ -300,8 +306,8 @@ final class EmitPlan {
             warnings.add("SysTick is taken by the player: an RTOS or HAL tick that uses it loses its rate");
         }
         if (engine == PlaybackEngine.DDS && request.dds().frequencyHz() >= tickRateHz / 2) {
-            warnings.add("--dds-frequency " + Fmt.hz(request.dds().frequencyHz()) + " is at or above half the"
-                    + " tick rate: it aliases");
+            warnings.add("the DDS start frequency " + Fmt.hz(request.dds().frequencyHz()) + " is at or above half"
+                    + " the tick rate: it aliases");
         }
     }
 }

@@ -65,7 +65,7 @@ final class EmitReport {
             default:
                 return p.folder.equals(TargetFamily.GENERIC.folder())
                         ? "target: generic C99, pins through the port hook " + p.symbol + "_port_write()" + clock
-                        : "target: " + p.folder + " (templates from --templates, driven like generic)" + clock;
+                        : "target: " + p.folder + " (the user's own templates, driven like generic)" + clock;
         }
     }
 

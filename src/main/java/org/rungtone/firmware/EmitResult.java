@@ -11,7 +11,7 @@ import java.util.Optional;
  * @param report one line per topic (target, engine, tick rate and timer, pins, strategy, port update and
  *     glitch, storage, flash, sounds, DDS, sweep), also the parameters in every file's header comment
  * @param flashBytes bytes of the emitted tables (samples, sound table, pin tables, sweep codes), without code
- * @param timer the solved timer, when the target programs one (or a hint for generic with --timer)
+ * @param timer the solved timer, when the target programs one (or a hint for generic when a timer is named)
  * @param pinStrategy the strategy used for the pins
  * @param warnings problems that do not stop the build
  */

@@ -50,18 +50,18 @@ public final class FirmwareEmitter {
         List<String> report = EmitReport.lines(plan);
         List<String> parameters = new ArrayList<>(report);
         parameters.addAll(request.settings());
-        Map<String, Object> shared = EmitContext.build(plan, parameters);
+        PlayerView view = PlayerView.of(plan, parameters);
         Templates t = request.templates();
         String h = plan.symbol + ".h";
         String c = plan.symbol + ".c";
         String d = plan.symbol + "_data.c";
         Map<String, Templates.Output> files = new LinkedHashMap<>();
         files.put(h, t.prepare(plan.folder, "player.h.mustache",
-                EmitContext.forFile(shared, h, "ladder-DAC player interface", true)));
-        files.put(c, t.prepare(plan.folder, "player.c.mustache",
-                EmitContext.forFile(shared, c, "ladder-DAC player", true)));
-        files.put(d, t.prepare(plan.folder, "data.c.mustache",
-                EmitContext.forFile(shared, d, "ladder-DAC player tables", false)));
+                view.forFile(h, "ladder-DAC player interface", true), view.streams()));
+        files.put(c, t.prepare(plan.folder, "player.c.mustache", view.forFile(c, "ladder-DAC player", true),
+                view.streams()));
+        files.put(d, t.prepare(plan.folder, "data.c.mustache", view.forFile(d, "ladder-DAC player tables", false),
+                view.streams()));
         EmitResult result = new EmitResult(List.of(), report, plan.totalBytes(), plan.timer, plan.strategy,
                 plan.warnings);
         return new Rendered(files, result);

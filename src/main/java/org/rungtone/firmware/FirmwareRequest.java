@@ -72,7 +72,7 @@ public final class FirmwareRequest {
         return templates;
     }
 
-    /** The user's {@code --name}, made into the symbol prefix. */
+    /** The user's name setting, made into the symbol prefix. */
     public String name() {
         return name;
     }
@@ -214,7 +214,7 @@ public final class FirmwareRequest {
             return this;
         }
 
-        /** The {@code --name} from which the C symbol prefix is made. */
+        /** The name from which the C symbol prefix is made. */
         public Builder name(String value) {
             name = value;
             return this;

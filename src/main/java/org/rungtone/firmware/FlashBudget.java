@@ -3,17 +3,14 @@ package org.rungtone.firmware;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
-import org.rungtone.internal.Checks;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.Setting;
 
 /**
- * Checks the emitted tables against the user's flash budget ({@code --flash-budget} on the command line,
- * {@code flash_budget} in a project file's {@code [target]} table) and, when they do not fit, names a setting
- * that would.
+ * Checks the emitted tables against the user's flash budget ({@link Setting#FLASH_BUDGET}) and, when they do
+ * not fit, names a setting that would.
  */
 public final class FlashBudget {
-    /** How messages name the setting, wherever the budget came from. */
-    public static final String SETTING = "--flash-budget or target.flash_budget";
     /** Sample rates tried when proposing a smaller setting, highest first. */
     private static final double[] RATES_HZ = {48000, 44100, 32000, 22050, 16000, 11025, 8000, 6000, 4000};
     /** Proposals drop at most this many bits. */
@@ -36,23 +33,26 @@ public final class FlashBudget {
      *
      * @param candidates settings to propose, in order of preference: the message names the first that fits
      * @throws InputError when over budget, e.g. "the samples need 12,345 bytes, 2,345 bytes over the 10,000-byte
-     *     flash budget (--flash-budget or target.flash_budget); 6-bit packed at 8 kHz would fit (7,812 bytes)"
+     *     flash budget (target.flash_budget); 6-bit packed at 8 kHz would fit (7,812 bytes)", the setting
+     *     named as the user typed it
      */
     public static void check(long neededBytes, long budgetBytes, List<Candidate> candidates) {
-        Checks.checkInput(budgetBytes > 0, "the flash budget (%s) must be positive: %d", SETTING, budgetBytes);
+        Refusal.check(Setting.FLASH_BUDGET, budgetBytes > 0, "the flash budget (%s) must be positive: %d",
+                Setting.FLASH_BUDGET.ref(), budgetBytes);
         if (neededBytes <= budgetBytes) {
             return;
         }
         String head = "the samples need " + Fmt.bytes(neededBytes) + " bytes, " + Fmt.bytes(neededBytes - budgetBytes)
-                + " bytes over the " + Fmt.bytes(budgetBytes) + "-byte flash budget (" + SETTING + ")";
+                + " bytes over the " + Fmt.bytes(budgetBytes) + "-byte flash budget (" + Setting.FLASH_BUDGET.ref()
+                + ")";
         for (Candidate c : candidates) {
             if (c.bytes() <= budgetBytes) {
-                throw new InputError(head + "; " + c.label() + " would fit (" + Fmt.bytes(c.bytes())
-                        + " bytes)");
+                throw Refusal.of(Setting.FLASH_BUDGET, "%s; %s would fit (%s bytes)", head, c.label(),
+                        Fmt.bytes(c.bytes()));
             }
         }
-        throw new InputError(head + "; no smaller bit depth or rate fits either: shorten the sound or raise"
-                + " the budget");
+        throw Refusal.of(Setting.FLASH_BUDGET, "%s; no smaller bit depth or rate fits either: shorten the sound or"
+                + " raise the budget", head);
     }
 
     /**

@@ -5,7 +5,8 @@ import org.rungtone.internal.Checks;
 
 /**
  * One GPIO pin: a port name (a letter such as {@code B}, or a number such as {@code 1} for parts that number
- * their ports) and a pin number on that port.
+ * their ports) and a pin number on that port. Written the way the part's datasheet names it: {@code PB3},
+ * {@code P1.3}.
  *
  * @param port upper-case letter or decimal number
  * @param pin pin number, 0 = least significant bit of the port register
@@ -23,14 +24,14 @@ public record Pin(String port, int pin) {
         Checks.checkArgument(pin >= 0 && pin < 32, "pin number must be 0..31: %d", pin);
     }
 
-    /** True when the port is named by a number ({@code 1.3}) rather than a letter ({@code B3}). */
+    /** True when the port is named by a number ({@code P1.3}) rather than a letter ({@code PB3}). */
     public boolean numberedPort() {
         return Character.isDigit(port.charAt(0));
     }
 
-    /** The pin as the notation writes it: {@code B3} or {@code 1.3}. */
+    /** The pin as the datasheet writes it: {@code PB3} or {@code P1.3}. */
     public String name() {
-        return numberedPort() ? port + "." + pin : port + pin;
+        return numberedPort() ? "P" + port + "." + pin : "P" + port + pin;
     }
 
     @Override

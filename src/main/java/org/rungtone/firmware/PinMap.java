@@ -10,6 +10,7 @@ import java.util.TreeMap;
 import java.util.TreeSet;
 import org.rungtone.internal.Checks;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.Setting;
 
 /**
  * Which GPIO pin drives which bit of the DAC code: bit i of the code goes to pin {@code pin(i)}, on up to
@@ -17,12 +18,14 @@ import org.rungtone.internal.InputError;
  *
  * <p>Notation (bit 0 first, items separated by commas, spaces allowed around them):
  * <ul>
- *   <li>a pin: a port letter and a pin number, {@code B3}; the datasheet prefix P is allowed ({@code PB3});
- *       ports named by number are written with a dot ({@code 1.3} or {@code P1.3});</li>
- *   <li>a range on one port: {@code B0-B5} (bits take B0, B1, ... B5) or descending {@code B5-B0}; the
- *       second port may be left out: {@code B0-5}.</li>
+ *   <li>a pin, the way the part's datasheet names it: P, the port letter and the pin number, {@code PB3};
+ *       ports named by number are written with a dot ({@code P1.3} or {@code 1.3}). The short form
+ *       {@code B3} is refused with the datasheet form as a hint: {@code D2} reads to many as a board's
+ *       silk-screen label, not as the part's pin;</li>
+ *   <li>a range on one port: {@code PB0-PB5} (bits take PB0, PB1, ... PB5) or descending {@code PB5-PB0};
+ *       the second port may be left out: {@code PB0-5}.</li>
  * </ul>
- * Examples: {@code B0-B5}, {@code A3,A7,C0,C1}, {@code D2-D7,B0,B1}, {@code P1.0-P1.7}.
+ * Examples: {@code PB0-PB5}, {@code PA3,PA7,PC0,PC1}, {@code PD2-PD7,PB0,PB1}, {@code P1.0-P1.7}.
  *
  * <p>Immutable.
  */
@@ -68,20 +71,20 @@ public final class PinMap {
     /**
      * Parses the notation described in the class comment.
      *
-     * @param text the pin list as the user wrote it (the value of {@code --pins})
+     * @param text the pin list as the user wrote it (the value of {@link Setting#PINS})
      * @param portWidth bits per port register: 8, 16 or 32
      * @throws InputError naming the column of the problem: bad syntax, a pin beyond the port width, a pin
      *     listed twice, a range across ports, more than four ports or more than sixteen pins
      */
     public static PinMap parse(String text, int portWidth) {
-        Checks.checkInput(portWidth == 8 || portWidth == 16 || portWidth == 32,
-                "--port-width must be 8, 16 or 32: %d", portWidth);
+        Setting.PORT_WIDTH.check(portWidth == 8 || portWidth == 16 || portWidth == 32, "must be 8, 16 or 32: %d",
+                portWidth);
         String t = text == null ? "" : text;
         if (t.isBlank()) {
-            throw new InputError("--pins is empty; list one pin per code bit, bit 0 first,"
-                    + " e.g. B0-B5 or A3,A7,C0,C1");
+            throw Setting.PINS.error("is empty; list one pin per code bit, bit 0 first, e.g. PB0-PB5 or"
+                    + " PA3,PA7,PC0,PC1");
         }
-        return new Parser(t, portWidth).parse();
+        return new PinMap(portWidth, new PinListParser(t, portWidth).parse());
     }
 
     /** Bits per port register. */
@@ -156,14 +159,12 @@ public final class PinMap {
     public PinStrategy resolve(PinStrategy requested) {
         switch (requested) {
             case SHIFT:
-                Checks.checkInput(shiftable(), "--pin-strategy shift needs the pins of each port in the order"
-                        + " and spacing of their code bits (e.g. B0-B5); %s needs table or scatter",
-                        notation());
+                Setting.PIN_STRATEGY.check(shiftable(), "shift needs the pins of each port in the order and"
+                        + " spacing of their code bits (e.g. PB0-PB5); %s needs table or scatter", notation());
                 return PinStrategy.SHIFT;
             case TABLE:
-                Checks.checkInput(bits() <= TABLE_MAX_BITS, "--pin-strategy table for %d bits needs %d"
-                        + " entries per port; tables stop at %d bits, use scatter", bits(), 1 << bits(),
-                        TABLE_MAX_BITS);
+                Setting.PIN_STRATEGY.check(bits() <= TABLE_MAX_BITS, "table for %d bits needs %d entries per"
+                        + " port; tables stop at %d bits, use scatter", bits(), 1 << bits(), TABLE_MAX_BITS);
                 return PinStrategy.TABLE;
             case SCATTER:
                 return PinStrategy.SCATTER;
@@ -227,9 +228,8 @@ public final class PinMap {
      * @throws InputError when the counts differ
      */
     public void requireBits(int codeBits) {
-        Checks.checkInput(codeBits == bits(), "--pins %s lists %d pin%s but the codes have %d bits;"
-                + " list exactly one pin per bit, bit 0 first", notation(), bits(), bits() == 1 ? "" : "s",
-                codeBits);
+        Setting.PINS.check(codeBits == bits(), "%s lists %d pin%s but the codes have %d bits; list exactly one"
+                + " pin per bit, bit 0 first", notation(), bits(), bits() == 1 ? "" : "s", codeBits);
     }
 
     /** The map in canonical notation: runs of three or more neighbouring pins written as ranges. */
@@ -285,174 +285,5 @@ public final class PinMap {
     @Override
     public String toString() {
         return notation() + " (" + portWidth + "-bit ports)";
-    }
-
-    /** A one-pass reader of the notation that reports 1-based columns. */
-    private static final class Parser {
-        private final String text;
-        private final int portWidth;
-        private final List<Pin> pins = new ArrayList<>();
-        private final Map<Pin, Integer> bitOf = new LinkedHashMap<>();
-        private final List<String> ports = new ArrayList<>();
-        private int pos;
-
-        Parser(String text, int portWidth) {
-            this.text = text;
-            this.portWidth = portWidth;
-        }
-
-        PinMap parse() {
-            while (true) {
-                skipSpaces();
-                int itemColumn = pos + 1;
-                Pin first = pin();
-                skipSpaces();
-                if (peek() == '-') {
-                    pos++;
-                    skipSpaces();
-                    int secondColumn = pos + 1;
-                    Pin last;
-                    if (Character.isDigit(peek()) && !numberedPortAhead()) {
-                        last = new Pin(first.port(), pinNumber(first.port(), first.numberedPort(), secondColumn));
-                    } else {
-                        last = pin();
-                    }
-                    if (!last.port().equals(first.port())) {
-                        throw error("range at column " + itemColumn + " runs from port " + first.port()
-                                + " to port " + last.port() + "; a range stays on one port, e.g. "
-                                + first.name() + "-" + new Pin(first.port(), portWidth - 1).name() + ","
-                                + new Pin(last.port(), 0).name() + "-" + last.name());
-                    }
-                    int step = last.pin() >= first.pin() ? 1 : -1;
-                    for (int p = first.pin(); ; p += step) {
-                        add(new Pin(first.port(), p), p == first.pin() ? itemColumn : secondColumn);
-                        if (p == last.pin()) {
-                            break;
-                        }
-                    }
-                } else {
-                    add(first, itemColumn);
-                }
-                skipSpaces();
-                if (pos >= text.length()) {
-                    break;
-                }
-                if (peek() != ',') {
-                    throw error("unexpected '" + peek() + "' at column " + (pos + 1)
-                            + "; write pins like B3, ranges like B0-B5, separated by commas");
-                }
-                pos++;
-            }
-            return new PinMap(portWidth, pins);
-        }
-
-        private void add(Pin pin, int column) {
-            Integer earlier = bitOf.get(pin);
-            if (earlier != null) {
-                throw error("pin " + pin.name() + " at column " + column + " is already bit " + earlier
-                        + "; each pin may appear once");
-            }
-            if (!ports.contains(pin.port())) {
-                if (ports.size() == MAX_PORTS) {
-                    throw error("port " + pin.port() + " at column " + column + " would be a fifth port;"
-                            + " at most " + MAX_PORTS + " ports");
-                }
-                ports.add(pin.port());
-            }
-            if (pins.size() == MAX_PINS) {
-                throw error("pin " + pin.name() + " at column " + column + " is pin " + (MAX_PINS + 1)
-                        + "; codes have at most " + MAX_PINS + " bits, one pin each");
-            }
-            bitOf.put(pin, pins.size());
-            pins.add(pin);
-        }
-
-        private Pin pin() {
-            int column = pos + 1;
-            char c = peek();
-            String port;
-            boolean numbered;
-            if ((c == 'P' || c == 'p') && Character.isLetter(peekAt(pos + 1))
-                    && Character.isDigit(peekAt(pos + 2))) {
-                pos++;
-                port = String.valueOf(Character.toUpperCase(peek()));
-                pos++;
-                numbered = false;
-            } else if ((c == 'P' || c == 'p') && numberedPortAt(pos + 1)) {
-                pos++;
-                port = numberedPort();
-                numbered = true;
-            } else if (Character.isDigit(c) && numberedPortAt(pos)) {
-                port = numberedPort();
-                numbered = true;
-            } else if (Character.isLetter(c) && c < 128) {
-                port = String.valueOf(Character.toUpperCase(c));
-                pos++;
-                numbered = false;
-            } else if (pos >= text.length()) {
-                throw error("a pin is missing at the end; write pins like B3, ranges like B0-B5");
-            } else {
-                throw error("expected a pin such as B3 or 1.3 at column " + column + ", found '" + c + "'");
-            }
-            return new Pin(port, pinNumber(port, numbered, column));
-        }
-
-        private int pinNumber(String port, boolean numbered, int column) {
-            int start = pos;
-            while (Character.isDigit(peek())) {
-                pos++;
-            }
-            String portText = numbered ? port + "." : port;
-            if (start == pos) {
-                throw error("expected a pin number after port " + portText + " at column " + (pos + 1));
-            }
-            String digits = text.substring(start, pos);
-            int n = digits.length() > 3 ? Integer.MAX_VALUE : Integer.parseInt(digits);
-            if (n >= portWidth) {
-                throw error("pin " + portText + digits + " at column " + column + " is beyond the "
-                        + portWidth + "-bit port (pins 0-" + (portWidth - 1) + ")");
-            }
-            return n;
-        }
-
-        private boolean numberedPortAhead() {
-            return numberedPortAt(pos);
-        }
-
-        private boolean numberedPortAt(int at) {
-            int i = at;
-            while (Character.isDigit(peekAt(i))) {
-                i++;
-            }
-            return i > at && peekAt(i) == '.';
-        }
-
-        private String numberedPort() {
-            int start = pos;
-            while (Character.isDigit(peek())) {
-                pos++;
-            }
-            String digits = text.substring(start, pos);
-            pos++;
-            return digits.length() > 3 ? digits : Integer.toString(Integer.parseInt(digits));
-        }
-
-        private void skipSpaces() {
-            while (pos < text.length() && Character.isWhitespace(text.charAt(pos))) {
-                pos++;
-            }
-        }
-
-        private char peek() {
-            return peekAt(pos);
-        }
-
-        private char peekAt(int i) {
-            return i < text.length() ? text.charAt(i) : '\0';
-        }
-
-        private InputError error(String what) {
-            return new InputError("--pins '" + text + "': " + what);
-        }
     }
 }

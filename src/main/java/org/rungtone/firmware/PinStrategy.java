@@ -2,13 +2,14 @@ package org.rungtone.firmware;
 
 import java.util.Locale;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.Setting;
 
 /**
  * How the emitted code turns a DAC code into port values.
  *
  * <ul>
  *   <li>{@link #SHIFT}: one mask and one shift per port; possible when, on every port, each pin sits the
- *       same distance from its code bit (for example contiguous ascending pins such as {@code B0-B5}).</li>
+ *       same distance from its code bit (for example contiguous ascending pins such as {@code PB0-PB5}).</li>
  *   <li>{@link #TABLE}: a lookup table of 2^N port values per port, read from flash: constant time for any
  *       assignment.</li>
  *   <li>{@link #SCATTER}: masks and shifts, one per group of bits that keep the same distance to their
@@ -43,6 +44,6 @@ public enum PinStrategy {
                 return s;
             }
         }
-        throw new InputError("--pin-strategy '" + text + "' is unknown; use auto, shift, table or scatter");
+        throw Setting.PIN_STRATEGY.error("'%s' is unknown; use auto, shift, table or scatter", text);
     }
 }

@@ -2,6 +2,7 @@ package org.rungtone.firmware;
 
 import java.util.Locale;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.Setting;
 
 /** What the emitted player does at every tick. */
 public enum PlaybackEngine {
@@ -30,6 +31,6 @@ public enum PlaybackEngine {
                 return e;
             }
         }
-        throw new InputError("--engine '" + text + "' is unknown; use clip, loop, dds or sweep");
+        throw Setting.ENGINE.error("'%s' is unknown; use clip, loop, dds or sweep", text);
     }
 }

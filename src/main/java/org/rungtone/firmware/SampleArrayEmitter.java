@@ -1,11 +1,7 @@
 package org.rungtone.firmware;
 
 import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Locale;
-import java.util.Map;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.quantize.Codes;
 
@@ -15,8 +11,6 @@ import org.rungtone.quantize.Codes;
  * header comment that records the tool version, the source and every setting.
  */
 public final class SampleArrayEmitter {
-    private static final int PER_LINE = 16;
-
     private final Templates templates;
 
     /** An emitter rendering from the given templates. */
@@ -48,44 +42,16 @@ public final class SampleArrayEmitter {
      * @return the files written, header first
      */
     public List<Path> emit(Request request, Path outDir) {
-        Map<String, Object> ctx = context(request);
+        SampleArrayView view = SampleArrayView.of(request);
+        List<Templates.Stream> streams = List.of(view.array().data());
         // Both templates render before either file is written; the sample array then goes straight to its
         // file, so millions of samples are never one string.
-        Templates.Output header = templates.prepare("generic", "samples.h.mustache", ctx);
-        Templates.Output source = templates.prepare("generic", "samples.c.mustache", ctx);
+        Templates.Output header = templates.prepare("generic", "samples.h.mustache", view, streams);
+        Templates.Output source = templates.prepare("generic", "samples.c.mustache", view, streams);
         Path h = outDir.resolve(request.symbol() + ".h");
         Path c = outDir.resolve(request.symbol() + ".c");
         AtomicFiles.write(h, header::writeTo);
         AtomicFiles.write(c, source::writeTo);
         return List.of(h, c);
-    }
-
-    /** The template context: every value the templates may show, already formatted. */
-    Map<String, Object> context(Request r) {
-        Codes codes = r.codes();
-        int bits = codes.bits();
-        Map<String, Object> ctx = new LinkedHashMap<>();
-        ctx.put("symbol", r.symbol());
-        ctx.put("macro", CNames.macro(r.symbol()));
-        ctx.put("guard", CNames.macro(r.symbol()) + "_H");
-        ctx.put("toolVersion", r.toolVersion());
-        ctx.put("ctype", bits <= 8 ? "uint8_t" : "uint16_t");
-        ctx.put("bits", bits);
-        ctx.put("length", codes.length());
-        ctx.put("rateHz", Math.round(codes.sampleRateHz()));
-        ctx.put("maxCode", CLiterals.hex((1L << bits) - 1, CLiterals.hexDigits(bits)));
-        ctx.put("midCode", CLiterals.hex(1L << (bits - 1), CLiterals.hexDigits(bits)));
-        ctx.put("flash", r.flashQualifier().isEmpty() ? "" : " " + r.flashQualifier());
-        ctx.put("bytes", (long) codes.length() * (bits <= 8 ? 1 : 2));
-        List<String> settings = new ArrayList<>();
-        for (String s : r.settings()) {
-            settings.add(s.replace("*/", "* /"));
-        }
-        ctx.put("settings", settings);
-        ctx.put("data", (Templates.Streamed) out -> CLiterals.writeArrayBody(codes.unsafeCodes(),
-                CLiterals.hexDigits(bits), PER_LINE, "    ", out));
-        ctx.put("durationMs", String.format(Locale.ROOT, "%.1f", 1000.0 * codes.length()
-                / codes.sampleRateHz()));
-        return ctx;
     }
 }

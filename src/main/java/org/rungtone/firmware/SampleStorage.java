@@ -2,6 +2,7 @@ package org.rungtone.firmware;
 
 import java.util.Locale;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.Setting;
 
 /**
  * How codes are laid out in flash: one {@code uint8_t} (N &lt;= 8) or {@code uint16_t} (N &gt; 8) per
@@ -39,6 +40,6 @@ public enum SampleStorage {
                 return s;
             }
         }
-        throw new InputError("--storage '" + text + "' is unknown; use unpacked or packed");
+        throw Setting.STORAGE.error("'%s' is unknown; use unpacked or packed", text);
     }
 }

@@ -3,6 +3,7 @@ package org.rungtone.firmware;
 import java.util.Arrays;
 import java.util.Optional;
 import org.rungtone.internal.Checks;
+import org.rungtone.internal.Setting;
 
 /**
  * The measurement sweep: put each code on the ladder in turn, holding it for {@code holdMillis} or until
@@ -41,19 +42,19 @@ public final class SweepSpec {
      * @throws org.rungtone.internal.InputError when a code does not fit, or the hold is not positive
      */
     public static SweepSpec holding(int bits, int[] codes, double holdMillis) {
-        Checks.checkInput(Double.isFinite(holdMillis) && holdMillis > 0,
-                "--hold must be a positive time: %s ms", holdMillis);
+        Setting.HOLD.check(Double.isFinite(holdMillis) && holdMillis > 0, "must be a positive time: %s ms",
+                holdMillis);
         return new SweepSpec(bits, codes, holdMillis, Optional.empty());
     }
 
     /**
      * A sweep that moves to the next code at each press of the button on {@code buttonPin} (pin notation of
-     * {@link PinMap}, e.g. {@code D2}).
+     * {@link PinMap}, e.g. {@code PD2}).
      *
      * @throws org.rungtone.internal.InputError when a code does not fit
      */
     public static SweepSpec onButton(int bits, int[] codes, String buttonPin) {
-        Checks.checkInput(buttonPin != null && !buttonPin.isBlank(), "--button needs a pin, e.g. D2");
+        Setting.BUTTON.check(buttonPin != null && !buttonPin.isBlank(), "needs a pin, e.g. PD2");
         return new SweepSpec(bits, codes, 0, Optional.of(buttonPin.trim()));
     }
 

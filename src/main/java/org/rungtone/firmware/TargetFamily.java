@@ -3,6 +3,7 @@ package org.rungtone.firmware;
 import java.util.List;
 import java.util.Locale;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.Setting;
 
 /**
  * A family of target parts with its own template folder: how ports are written, where tables live and
@@ -14,8 +15,8 @@ public enum TargetFamily {
     /** 8-bit AVR-class parts (register names of the ATmega328P): PORTx/DDRx, CTC timers, PROGMEM tables. */
     AVR("avr", List.of(8), 8, List.of(TimerKind.AVR_TIMER1, TimerKind.AVR_TIMER0, TimerKind.AVR_TIMER2),
             TimerKind.AVR_TIMER1),
-    /** 32-bit Cortex-M-class parts: GPIO with a BSRR set/reset register, SysTick or a TIMx interrupt. */
-    CORTEXM("cortexm", List.of(16), 16, List.of(TimerKind.SYSTICK, TimerKind.TIM16, TimerKind.TIM32),
+    /** 32-bit Cortex-M-class parts: GPIO with a BSRR set/reset register, SysTick or a general-purpose timer. */
+    CORTEXM("cortexm", List.of(16), 16, List.of(TimerKind.SYSTICK, TimerKind.GENERAL16, TimerKind.GENERAL32),
             TimerKind.SYSTICK);
 
     private final String folder;
@@ -80,7 +81,7 @@ public enum TargetFamily {
                 return f;
             }
         }
-        throw new InputError("--target '" + text + "' is unknown; known target families: " + knownNames());
+        throw Setting.FAMILY.error("'%s' is unknown; known target families: %s", text, knownNames());
     }
 
     /** The known families as the option spells them: {@code generic, avr, cortexm}. */

@@ -10,15 +10,20 @@ import java.io.StringReader;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.ConcurrentHashMap;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.Setting;
 
 /**
  * Finds and renders the logic-free C templates: from the jar's {@code templates/} folder, or from a user's
- * folder given explicitly with {@code --templates DIR} (same layout: one folder per target family). Rendering
- * uses JMustache with no escaping (the output is C, not HTML) and fails on missing values.
+ * folder given explicitly ({@link Setting#TEMPLATES}; same layout: one folder per target family). Rendering
+ * uses JMustache with no escaping (the output is C, not HTML) and is strict: a value, a section or a part of
+ * a dotted name ({@code {{timer.reload}}}) that the context does not have is an error, not an empty string.
+ * The contexts are view records ({@link PlayerView}, {@link SampleArrayView}); JMustache reads a record's
+ * components through their accessors.
  */
 public final class Templates {
     /** Marks a streamed value in rendered text; a control character no template or value contains. */
@@ -34,8 +39,7 @@ public final class Templates {
         // Partials ({{> common/engine_clip.c}}) resolve against the same root as the templates themselves.
         this.compiler = Mustache.compiler()
                 .withEscaper(Escapers.NONE)
-                .strictSections(false)
-                .defaultValue(null)
+                .strictSections(true)
                 .withLoader(partial -> new StringReader(loadPath(partial + ".mustache")));
     }
 
@@ -51,7 +55,7 @@ public final class Templates {
      */
     public static Templates fromFolder(Path dir) {
         if (!Files.isDirectory(dir)) {
-            throw new InputError(dir + ": --templates folder does not exist");
+            throw Refusal.of(Setting.TEMPLATES, "%s: %s folder does not exist", dir, Setting.TEMPLATES.ref());
         }
         return new Templates(Optional.of(dir));
     }
@@ -64,11 +68,7 @@ public final class Templates {
         return Templates.class.getClassLoader().getResource("templates/" + family + "/" + name) != null;
     }
 
-    /**
-     * A long value (a sample array's text) written straight to the output file instead of being built as one
-     * string: {@link #prepare} renders the template with a marker in its place, {@link Output#writeTo} streams
-     * the value there.
-     */
+    /** Writes a long value's UTF-8 text (a sample array's body) to a file's stream. */
     @FunctionalInterface
     public interface Streamed {
         /** Writes the value's UTF-8 text to {@code out}. */
@@ -76,25 +76,45 @@ public final class Templates {
     }
 
     /**
-     * Renders {@code family/name} now, with a marker where each {@link Streamed} value goes: every template
-     * error surfaces here, before anything is written, and the long values are written only by
-     * {@link Output#writeTo}.
-     *
-     * @throws InputError when the template is missing or refers to a value that is not there
+     * A long value in a template context, written straight to the output file instead of being built as one
+     * string: in the rendered text a marker (its {@link #toString()}) holds its place, and
+     * {@link Output#writeTo} streams the value there.
      */
-    public Output prepare(String family, String name, Map<?, ?> context) {
-        Map<Object, Object> marked = new java.util.LinkedHashMap<>();
-        Map<String, Streamed> streams = new java.util.HashMap<>();
-        for (Map.Entry<?, ?> e : context.entrySet()) {
-            if (e.getValue() instanceof Streamed st) {
-                String marker = MARK + Integer.toString(streams.size()) + MARK;
-                streams.put(marker, st);
-                marked.put(e.getKey(), marker);
-            } else {
-                marked.put(e.getKey(), e.getValue());
-            }
+    public static final class Stream {
+        private static final java.util.concurrent.atomic.AtomicLong NEXT = new java.util.concurrent.atomic.AtomicLong();
+
+        private final String marker = MARK + Long.toString(NEXT.getAndIncrement()) + MARK;
+        private final Streamed value;
+
+        private Stream(Streamed value) {
+            this.value = value;
         }
-        return new Output(execute(family, name, marked), streams);
+
+        /** The marker that holds the value's place in the rendered text. */
+        @Override
+        public String toString() {
+            return marker;
+        }
+    }
+
+    /** A context value that {@code value} writes to the file when the rendered template is written. */
+    public static Stream stream(Streamed value) {
+        return new Stream(java.util.Objects.requireNonNull(value));
+    }
+
+    /**
+     * Renders {@code family/name} now over {@code context}, with a marker where each of its {@code streams}
+     * goes: every template error surfaces here, before anything is written, and the long values are written
+     * only by {@link Output#writeTo}.
+     *
+     * @throws InputError when the template is missing or refers to a value the context does not have
+     */
+    public Output prepare(String family, String name, Object context, List<Stream> streams) {
+        Map<String, Streamed> byMarker = new java.util.HashMap<>();
+        for (Stream st : streams) {
+            byMarker.put(st.marker, st.value);
+        }
+        return new Output(execute(family, name, context), byMarker);
     }
 
     /** A rendered template whose {@link Streamed} values are written when it is. */
@@ -118,7 +138,11 @@ public final class Templates {
                     return;
                 }
                 out.write(text.substring(at, open).getBytes(StandardCharsets.UTF_8));
-                streams.get(text.substring(open, close + 1)).writeTo(out);
+                Streamed value = streams.get(text.substring(open, close + 1));
+                if (value == null) {
+                    throw new IllegalStateException("a streamed value was rendered but not handed to prepare");
+                }
+                value.writeTo(out);
                 at = close + 1;
             }
         }
@@ -156,8 +180,8 @@ public final class Templates {
             if (userDir.isPresent()) {
                 Path p = userDir.get().resolve(relative);
                 if (!Files.isRegularFile(p)) {
-                    throw new InputError(p + ": template not found in --templates folder (copy the bundled"
-                            + " templates folder and edit it)");
+                    throw Refusal.of(Setting.TEMPLATES, "%s: template not found in %s folder (copy the bundled"
+                            + " templates folder and edit it)", p, Setting.TEMPLATES.ref());
                 }
                 return Files.readString(p, StandardCharsets.UTF_8);
             }

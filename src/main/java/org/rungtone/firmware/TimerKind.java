@@ -6,6 +6,7 @@ import java.util.Locale;
 import java.util.stream.Collectors;
 import java.util.stream.IntStream;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.Setting;
 
 /**
  * A hardware timer family that raises the sample-rate interrupt: its counter width, the prescalers it
@@ -16,7 +17,8 @@ import org.rungtone.internal.InputError;
  * mode (Microchip ATmega328P datasheet, clock select bits CSn2:0); the ARMv7-M SysTick (24-bit, reload in
  * SYST_RVR, clocked by the processor clock; ARMv7-M Architecture Reference Manual, B3.3); a general-purpose
  * timer with a 16-bit prescaler register (PSC = prescaler − 1) and a 16- or 32-bit auto-reload register ARR,
- * as on STM32 TIMx.
+ * as on STM32 TIMx. The option names say what is driven ({@code general16}: a general-purpose timer with a
+ * 16-bit counter), not which vendor peripheral the template defaults to.
  */
 public enum TimerKind {
     /** AVR 8-bit Timer/Counter0, CTC on OCR0A. */
@@ -27,10 +29,10 @@ public enum TimerKind {
     AVR_TIMER2("timer2", 8, new int[] {1, 8, 32, 64, 128, 256, 1024}, "OCR2A"),
     /** Cortex-M SysTick: 24-bit down counter, no prescaler. */
     SYSTICK("systick", 24, new int[] {1}, "SYST_RVR"),
-    /** General-purpose timer, 16-bit counter, prescaler 1..65536. */
-    TIM16("tim16", 16, null, "ARR"),
-    /** General-purpose timer, 32-bit counter, prescaler 1..65536. */
-    TIM32("tim32", 32, null, "ARR");
+    /** General-purpose timer, 16-bit counter, prescaler 1..65536 (TIM3 of an STM32F4 by default). */
+    GENERAL16("general16", 16, null, "ARR"),
+    /** General-purpose timer, 32-bit counter, prescaler 1..65536 (TIM2 of an STM32F4 by default). */
+    GENERAL32("general32", 32, null, "ARR");
 
     private static final int GENERAL_MAX_PRESCALER = 65536;
 
@@ -46,7 +48,7 @@ public enum TimerKind {
         this.reloadRegister = reloadRegister;
     }
 
-    /** The option spelling, e.g. {@code timer1}, {@code systick}, {@code tim16}. */
+    /** The option spelling, e.g. {@code timer1}, {@code systick}, {@code general16}. */
     public String optionName() {
         return optionName;
     }
@@ -98,7 +100,8 @@ public enum TimerKind {
     /**
      * Parses the option spelling.
      *
-     * @throws InputError when the text names no timer
+     * @throws InputError when the text names no timer, or names one by its former spelling (the message
+     *     gives the new one)
      */
     public static TimerKind parse(String text) {
         String t = text == null ? "" : text.trim().toLowerCase(Locale.ROOT);
@@ -109,6 +112,11 @@ public enum TimerKind {
             }
             names.add(k.optionName);
         }
-        throw new InputError("--timer '" + text + "' is unknown; use one of " + String.join(", ", names));
+        // the spellings before the general-purpose timers were named for what they are
+        if (t.equals("tim16") || t.equals("tim32")) {
+            throw Setting.TIMER.error("'%s' is now called general%s (a general-purpose timer with a %s-bit"
+                    + " counter)", text, t.substring(3), t.substring(3));
+        }
+        throw Setting.TIMER.error("'%s' is unknown; use one of %s", text, String.join(", ", names));
     }
 }

@@ -2,6 +2,8 @@ package org.rungtone.firmware;
 
 import org.rungtone.internal.Checks;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.Setting;
+import org.rungtone.internal.Units;
 
 /**
  * Chooses the prescaler and reload value that bring a timer's interrupt rate closest to a requested sample
@@ -30,29 +32,31 @@ public final class TimerSolver {
      *     comes within the tolerance (the message names the closest setting)
      */
     public static TimerSetting solve(double clockHz, TimerKind kind, double rateHz, double tolerancePpm) {
-        Checks.checkPositive(clockHz, "--cpu-clock");
-        Checks.checkPositive(rateHz, "--rate");
-        Checks.checkInput(Double.isFinite(tolerancePpm) && tolerancePpm >= 0,
-                "--rate-tolerance must be zero or positive: %s", tolerancePpm);
+        Setting.CPU_CLOCK.check(Double.isFinite(clockHz) && clockHz > 0, "must be a positive number: %s",
+                Units.format(clockHz, ""));
+        Setting.RATE.check(Double.isFinite(rateHz) && rateHz > 0, "must be a positive number: %s",
+                Units.format(rateHz, ""));
+        Setting.RATE_TOLERANCE.check(Double.isFinite(tolerancePpm) && tolerancePpm >= 0,
+                "must be zero or positive: %s", tolerancePpm);
         double fastest = clockHz / 2;
         double slowest = clockHz / ((double) kind.maxPrescaler() * (kind.maxReload() + 1));
         if (rateHz > fastest) {
-            throw new InputError("--rate " + Fmt.hz(rateHz) + " is too fast for " + kind.describe() + " at a "
-                    + Fmt.hz(clockHz) + " clock: the fastest is " + Fmt.hz(fastest)
-                    + "; lower --rate or raise --cpu-clock");
+            throw Setting.RATE.error("%s is too fast for %s at a %s clock: the fastest is %s; lower %s or raise %s",
+                    Fmt.hz(rateHz), kind.describe(), Fmt.hz(clockHz), Fmt.hz(fastest), Setting.RATE.ref(),
+                    Setting.CPU_CLOCK.ref());
         }
         if (rateHz < slowest * (1 - tolerancePpm * 1e-6)) {
-            throw new InputError("--rate " + Fmt.hz(rateHz) + " is too slow for " + kind.describe() + " at a "
-                    + Fmt.hz(clockHz) + " clock: the slowest is " + Fmt.hz(slowest)
-                    + "; choose a wider --timer or a higher --rate");
+            throw Setting.RATE.error("%s is too slow for %s at a %s clock: the slowest is %s; choose a wider %s"
+                    + " or a higher %s", Fmt.hz(rateHz), kind.describe(), Fmt.hz(clockHz), Fmt.hz(slowest),
+                    Setting.TIMER.ref(), Setting.RATE.ref());
         }
         TimerSetting best = closest(clockHz, kind, rateHz);
         if (Math.abs(best.errorPpm()) > tolerancePpm) {
-            throw new InputError("--rate " + Fmt.hz(rateHz) + " cannot be made within " + Fmt.plain(tolerancePpm,
-                    1) + " ppm by " + kind.describe() + " at a " + Fmt.hz(clockHz) + " clock: the closest is "
-                    + Fmt.hz(best.achievedHz()) + " (" + Fmt.ppm(best.errorPpm()) + " ppm, prescaler "
-                    + best.prescaler() + ", " + kind.reloadRegister() + " = " + best.reload() + "); use --rate "
-                    + Fmt.plain(best.achievedHz(), 3) + " or raise --rate-tolerance");
+            throw Setting.RATE.error("%s cannot be made within %s ppm by %s at a %s clock: the closest is %s (%s"
+                    + " ppm, prescaler %d, %s = %d); use %s %s or raise %s", Fmt.hz(rateHz),
+                    Fmt.plain(tolerancePpm, 1), kind.describe(), Fmt.hz(clockHz), Fmt.hz(best.achievedHz()),
+                    Fmt.ppm(best.errorPpm()), best.prescaler(), kind.reloadRegister(), best.reload(),
+                    Setting.RATE.ref(), Fmt.plain(best.achievedHz(), 3), Setting.RATE_TOLERANCE.ref());
         }
         return best;
     }

@@ -118,7 +118,8 @@ public enum Setting {
      * project file; {@link #ref()} names another setting inside the text.
      */
     public SettingError error(String format, Object... args) {
-        return new SettingError(this, ref() + " " + String.format(java.util.Locale.ROOT, format, args), null);
+        return new SettingError(this, ref() + " " + String.format(java.util.Locale.ROOT, format, quoted(args)),
+                null);
     }
 
     /**
@@ -126,7 +127,22 @@ public enum Setting {
      * {@link #ref()} place-holders, this one included.
      */
     public SettingError problem(String format, Object... args) {
-        return new SettingError(this, String.format(java.util.Locale.ROOT, format, args), null);
+        return new SettingError(this, String.format(java.util.Locale.ROOT, format, quoted(args)), null);
+    }
+
+    /** The arguments with a brace in the user's text kept from reading as a place-holder. */
+    private static Object[] quoted(Object[] args) {
+        Object[] out = args.clone();
+        for (int i = 0; i < out.length; i++) {
+            if (out[i] instanceof CharSequence || out[i] instanceof java.nio.file.Path) {
+                String text = out[i].toString();
+                // a place-holder of ours is passed as a whole argument; anything else is the user's text
+                if (!text.matches("\\{[a-z_]+\\.[a-z_]+\\}")) {
+                    out[i] = text.replace("{", SettingError.OPEN_BRACE);
+                }
+            }
+        }
+        return out;
     }
 
     /** Throws {@link #error} when {@code condition} is false. */

@@ -11,6 +11,8 @@ import java.util.regex.Pattern;
  */
 public final class SettingError extends InputError {
     private static final long serialVersionUID = 1L;
+    /** Stands for a brace of the user's own text in a template until it is rendered. */
+    static final String OPEN_BRACE = "\u0001";
     private static final Pattern REF = Pattern.compile("\\{([a-z_]+\\.[a-z_]+)\\}");
 
     private final Setting setting;
@@ -62,6 +64,6 @@ public final class SettingError extends InputError {
             m.appendReplacement(b, Matcher.quoteReplacement(name));
         }
         m.appendTail(b);
-        return b.toString();
+        return b.toString().replace(OPEN_BRACE, "{");
     }
 }

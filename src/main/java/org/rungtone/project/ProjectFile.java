@@ -26,6 +26,7 @@ import org.rungtone.quantize.Dither;
 import org.rungtone.quantize.ErrorFilter;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.OutputFolder;
+import org.rungtone.internal.SettingError;
 import org.rungtone.internal.TomlText;
 import org.tomlj.TomlParseError;
 import org.tomlj.TomlParseResult;
@@ -73,8 +74,8 @@ public final class ProjectFile {
                 + " name = \"greenhouse\""));
         try {
             CNames.symbol(name);
-        } catch (InputError e) {
-            throw project.error("name", e.getMessage().replace("--name", "the name"));
+        } catch (SettingError e) {
+            throw project.error("name", e.render(setting -> "the name"));
         }
         Optional<Path> out = project.string("out").map(base::resolve);
         Optional<Long> seed = project.integer("seed", Long.MIN_VALUE, Long.MAX_VALUE);
@@ -99,8 +100,8 @@ public final class ProjectFile {
             String symbol;
             try {
                 symbol = CNames.symbol(s.name());
-            } catch (InputError e) {
-                throw soundTables.get(i).error("name", e.getMessage().replace("--name", "the name"));
+            } catch (SettingError e) {
+                throw soundTables.get(i).error("name", e.render(setting -> "the name"));
             }
             if (!symbols.add(symbol)) {
                 throw soundTables.get(i).error("name", "'" + s.name() + "' gives the C name '" + symbol

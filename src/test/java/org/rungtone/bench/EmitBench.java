@@ -70,7 +70,7 @@ public class EmitBench {
 
     @Benchmark
     public EmitResult player() {
-        FirmwareRequest request = FirmwareRequest.builder().family("cortexm").name("bench").pins("B0-B7")
+        FirmwareRequest request = FirmwareRequest.builder().family("cortexm").name("bench").pins("PB0-PB7")
                 .cpuClockHz(16e6).storage(SampleStorage.valueOf(storage.toUpperCase(java.util.Locale.ROOT)))
                 .sound("noise", codes).build();
         return FirmwareEmitter.emit(request, out);

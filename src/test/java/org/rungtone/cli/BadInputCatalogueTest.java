@@ -155,35 +155,38 @@ class BadInputCatalogueTest {
     }
 
     private static void pinAndTargetCases(List<Case> c) {
-        c.add(bad("build: the same pin twice", "pin B0 at column 4 is already bit 0; each pin may appear once",
+        c.add(bad("build: the same pin twice", "pin PB0 at column 5 is already bit 0; each pin may appear once",
                 d -> build(d, wavFile(d), "--target", "avr", "--cpu-clock", "16MHz", "--bits", "6", "--pins",
-                        "B0,B0,B1,B2,B3,B4")));
-        c.add(bad("build: pin beyond the port width", "pin B9 at column 4 is beyond the 8-bit port (pins 0-7)",
+                        "PB0,PB0,PB1,PB2,PB3,PB4")));
+        c.add(bad("build: pin beyond the port width", "pin PB9 at column 5 is beyond the 8-bit port (pins 0-7)",
                 d -> build(d, wavFile(d), "--target", "generic", "--bits", "10", "--port-width", "8",
-                        "--pins", "B0-B9")));
-        c.add(bad("build: fewer pins than bits", "--pins B0-B3 lists 4 pins but the codes have 6 bits",
+                        "--pins", "PB0-PB9")));
+        c.add(bad("build: a port letter without its P", "--pins 'D2-D7': write port pins the way the datasheet"
+                + " names them: PD2-PD7", d -> build(d, wavFile(d), "--target", "avr", "--cpu-clock", "16MHz",
+                        "--bits", "6", "--pins", "D2-D7")));
+        c.add(bad("build: fewer pins than bits", "--pins PB0-PB3 lists 4 pins but the codes have 6 bits",
                 d -> build(d, wavFile(d), "--target", "avr", "--cpu-clock", "16MHz", "--bits", "6", "--pins",
-                        "B0-B3")));
+                        "PB0-PB3")));
         c.add(bad("build: unknown target family", "--target 'pic' is unknown; known target families: generic, "
                 + "avr, cortexm", d -> build(d, wavFile(d), "--target", "pic")));
         c.add(bad("build: rate the timer cannot reach", "--rate 16 kHz is too fast for timer1",
-                d -> build(d, wavFile(d), "--target", "avr", "--pins", "B0-B5", "--bits", "6", "--cpu-clock",
+                d -> build(d, wavFile(d), "--target", "avr", "--pins", "PB0-PB5", "--bits", "6", "--cpu-clock",
                         "1kHz", "--rate", "16k")));
         // 5 s at 16 kHz, 8 bits: 80,000 bytes of samples, past the 64 KiB pgm_read_byte reaches on an AVR
         c.add(bad("build: AVR tables beyond 64 KiB", "the tables need 80,008 bytes, more than the 65,536 bytes"
                 + " that pgm_read_byte can reach; use --storage packed, a lower --rate, fewer --bits or a shorter"
                 + " sound", d -> build(d, write(d, "siren.wav", WavFixtures.sine16(16_000, 5.0, 440, 0.5)),
                         "--target", "avr", "--cpu-clock", "16MHz", "--bits", "8", "--rate", "16k", "--pins",
-                        "D0-D7")));
+                        "PD0-PD7")));
         c.add(bad("build: AVR tables beyond 64 KiB, already packed", "more than the 65,536 bytes that"
                 + " pgm_read_byte can reach; use a lower --rate, fewer --bits or a shorter sound",
                 d -> build(d, write(d, "siren.wav", WavFixtures.sine16(16_000, 5.0, 440, 0.5)), "--target", "avr",
-                        "--cpu-clock", "16MHz", "--bits", "8", "--rate", "16k", "--pins", "D0-D7", "--storage",
+                        "--cpu-clock", "16MHz", "--bits", "8", "--rate", "16k", "--pins", "PD0-PD7", "--storage",
                         "packed")));
         c.add(bad("build: DDS option without the dds engine", "--dds-frequency and --dds-phase-bits set up the"
                 + " dds engine; add --engine dds", d -> build(d, wavFile(d), "--dds-frequency", "440")));
         c.add(bad("build: samples over the flash budget", "1,590 bytes over the 10-byte flash budget"
-                + " (--flash-budget or target.flash_budget); no smaller bit depth or rate fits either",
+                + " (--flash-budget); no smaller bit depth or rate fits either",
                 d -> build(d, wavFile(d), "--flash-budget", "10")));
     }
 
@@ -228,7 +231,7 @@ class BadInputCatalogueTest {
         c.add(bad("project: gain and normalize together", "sound[1].gain: conflicts with normalize (line 9)",
                 d -> project(d, head + sound + "gain = 3\nnormalize = -1\n")));
         c.add(bad("project: flash_attr with a target family", "target.flash_attr: applies only to bare sample "
-                + "arrays", d -> project(d, head + "\n[target]\nfamily = \"avr\"\npins = \"D2-D7\"\n"
+                + "arrays", d -> project(d, head + "\n[target]\nfamily = \"avr\"\npins = \"PD2-PD7\"\n"
                         + "flash_attr = \"PROGMEM\"\n" + sound)));
         c.add(bad("project: a preview option on the command line", "--filter does not apply to a project file;"
                 + " set filter in the project's [preview] table", d -> withArgs(project(d, head + sound),
@@ -259,8 +262,8 @@ class BadInputCatalogueTest {
         c.add(bad("project: out is a regular file", "notes.txt is a file; choose another output folder"
                 + " (project.out)", d -> project(d, "[project]\nname = \"bench\"\nout = \"notes.txt\"\n" + sound,
                         "notes.txt")));
-        c.add(bad("project: samples over the flash budget", "1,590 bytes over the 10-byte flash budget"
-                + " (--flash-budget or target.flash_budget)", d -> project(d, head + "\n[target]\nflash_budget = 10\n"
+        c.add(bad("project: samples over the flash budget", "p.toml:6: target.flash_budget: the samples need"
+                + " 1,600 bytes, 1,590 bytes over the 10-byte flash budget (target.flash_budget)", d -> project(d, head + "\n[target]\nflash_budget = 10\n"
                         + sound)));
         c.add(bad("project: 0 bits", "p.toml:6: quantize.bits: must be 1..16, got 0",
                 d -> project(d, head + "\n[quantize]\nbits = 0\n" + sound)));

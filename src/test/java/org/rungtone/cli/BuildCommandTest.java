@@ -133,7 +133,7 @@ class BuildCommandTest {
     void emitsACompletePlayerForATarget() throws IOException {
         Path out = dir.resolve("avr");
         Cli.Run r = Cli.run("build", fixture().toString(), "--bits", "6", "--target", "avr", "--cpu-clock", "16MHz",
-                "--pins", "D2-D7", "--out", out.toString(), "--name", "bell");
+                "--pins", "PD2-PD7", "--out", out.toString(), "--name", "bell");
         assertEquals(0, r.exitCode(), r.err());
         for (String f : List.of("bell.h", "bell.c", "bell_data.c")) {
             assertTrue(Files.exists(out.resolve(f)), f);
@@ -167,7 +167,7 @@ class BuildCommandTest {
     @Test
     void badPinsAreBadInput() throws IOException {
         Path out = dir.resolve("pins");
-        Cli.Run r = Cli.run("build", fixture().toString(), "--bits", "6", "--pins", "B0-B4", "--out",
+        Cli.Run r = Cli.run("build", fixture().toString(), "--bits", "6", "--pins", "PB0-PB4", "--out",
                 out.toString());
         assertEquals(1, r.exitCode(), r.err());
         assertEquals(1, r.err().strip().split("\n").length, r.err());

@@ -100,7 +100,7 @@ class CalibratePlanSweepTest {
 
     @Test
     void hostSweepHoldsExactlyThePlannedCodesInOrder() {
-        String pins = "A3,A7,C0,C1,B2,B1,B5,B6";
+        String pins = "PA3,PA7,PC0,PC1,PB2,PB1,PB5,PB6";
         List<Integer> codes = plannedCodes(plan("--target", "generic", "--pins", pins, "--hold", "3ms"));
         assertEquals(8 + 2 + 16, codes.size(), "basis (0, all ones, 8 single bits) and 2N check codes");
         List<Integer> states = run(pins, "0", "0");
@@ -115,8 +115,8 @@ class CalibratePlanSweepTest {
 
     @Test
     void hostSweepStepsOnEachButtonPress() {
-        String pins = "B0-B7";
-        List<Integer> codes = plannedCodes(plan("--target", "generic", "--pins", pins, "--button", "D2"));
+        String pins = "PB0-PB7";
+        List<Integer> codes = plannedCodes(plan("--target", "generic", "--pins", pins, "--button", "PD2"));
         List<Integer> states = run(pins, "100", "40");
         List<Integer> distinct = new ArrayList<>();
         for (int s : states) {
@@ -133,14 +133,14 @@ class CalibratePlanSweepTest {
     @Test
     void avrSweepCompilesWithAvrGcc() {
         require("avr-gcc");
-        plan("--target", "avr", "--pins", "D2-D7,B0,B1", "--cpu-clock", "16MHz", "--button", "C5");
+        plan("--target", "avr", "--pins", "PD2-PD7,PB0,PB1", "--cpu-clock", "16MHz", "--button", "PC5");
         compile(List.of("avr-gcc", "-mmcu=atmega328p", "-Os", "-c"), "sweep.c", "sweep_data.c");
     }
 
     @Test
     void cortexmSweepCompilesWithArmGcc() {
         require("arm-none-eabi-gcc");
-        plan("--target", "cortexm", "--pins", "B8-B15", "--cpu-clock", "72MHz", "--hold", "2s");
+        plan("--target", "cortexm", "--pins", "PB8-PB15", "--cpu-clock", "72MHz", "--hold", "2s");
         compile(List.of("arm-none-eabi-gcc", "-mcpu=cortex-m3", "-mthumb", "-ffreestanding", "-Os", "-c"),
                 "sweep.c", "sweep_data.c");
     }

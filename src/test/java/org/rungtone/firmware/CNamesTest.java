@@ -17,9 +17,10 @@ class CNamesTest {
 
     @Test
     void rejectsNamesThatCannotBecomeIdentifiers() {
-        assertEquals("--name '!!!' has no letters or digits to make a C symbol from; use e.g. --name door_chime",
+        assertEquals("sound.name '!!!' has no letters or digits to make a C symbol from; use e.g. sound.name"
+                + " door_chime",
                 assertThrows(InputError.class, () -> CNames.symbol("!!!")).getMessage());
-        assertEquals("--name 'int' would make the C keyword 'int'; choose another name, e.g. int_sound",
+        assertEquals("sound.name 'int' would make the C keyword 'int'; choose another name, e.g. int_sound",
                 assertThrows(InputError.class, () -> CNames.symbol("int")).getMessage());
     }
 }

@@ -16,6 +16,8 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.Setting;
+import org.rungtone.internal.SettingError;
 import org.rungtone.quantize.Codes;
 
 class FirmwareEmitterTest {
@@ -32,14 +34,14 @@ class FirmwareEmitterTest {
 
     /** A small door-chime project: two 4-bit sounds on scattered pins, looped, packed. */
     private static FirmwareRequest.Builder chimeProject() {
-        return FirmwareRequest.builder().name("Door Chime").toolVersion("0.1.0-test").pins("A3,A7,C0,C1")
+        return FirmwareRequest.builder().name("Door Chime").toolVersion("0.1.0-test").pins("PA3,PA7,PC0,PC1")
                 .storage(SampleStorage.PACKED).engine(PlaybackEngine.LOOP)
                 .sound("ding", ramp(4, 24, 8000), 4, 20).sound("dong", ramp(4, 10, 8000))
                 .setting("source: examples/greenhouse/chime.wav");
     }
 
     private static FirmwareRequest.Builder avrProject() {
-        return FirmwareRequest.builder().family("avr").name("alarm").toolVersion("0.1.0-test").pins("D2-D7")
+        return FirmwareRequest.builder().family("avr").name("alarm").toolVersion("0.1.0-test").pins("PD2-PD7")
                 .cpuClockHz(16e6).sound("warble", ramp(6, 16, 22050));
     }
 
@@ -92,7 +94,7 @@ class FirmwareEmitterTest {
 
     @Test
     void reportsTheGlitchBetweenPorts() {
-        FirmwareRequest r = avrProject().pins("B0-B2,D5-D7").build();
+        FirmwareRequest r = avrProject().pins("PB0-PB2,PD5-PD7").build();
         List<String> report = FirmwareEmitter.render(r).result().report();
         // B is shared with other pins: in/andi/or/out, 4 cycles at 16 MHz = 250 ns before D follows
         assertTrue(report.stream().anyMatch(l -> l.startsWith("port update: ports B then D in this fixed order,"
@@ -101,7 +103,7 @@ class FirmwareEmitterTest {
 
     @Test
     void reportsTableSizeAndDdsTuning() {
-        FirmwareRequest r = FirmwareRequest.builder().name("sweepgen").pins("A3,A7,C0,C1,B2,B1")
+        FirmwareRequest r = FirmwareRequest.builder().name("sweepgen").pins("PA3,PA7,PC0,PC1,PB2,PB1")
                 .engine(PlaybackEngine.DDS).sound("sine", Codes.of(6, 16000, Dds.sineTable(8, 6)))
                 .dds(DdsSpec.of(440)).build();
         List<String> report = FirmwareEmitter.render(r).result().report();
@@ -134,7 +136,23 @@ class FirmwareEmitterTest {
         FirmwareEmitter.Rendered out = FirmwareEmitter.render(r);
         assertEquals("/* pic player.c.mustache for door_chime */\n", out.files().get("door_chime.c"));
         assertTrue(out.result().report().contains(
-                "target: pic (templates from --templates, driven like generic)"));
+                "target: pic (the user's own templates, driven like generic)"));
+    }
+
+    @Test
+    void aMissingUserTemplateNamesTheTemplatesSetting() throws IOException {
+        Path t = dir.resolve("templates");
+        AtomicFiles.writeString(t.resolve("pic").resolve("player.c.mustache"), "{{> common/header}}\n");
+        SettingError e = assertThrows(SettingError.class, () -> FirmwareEmitter.render(chimeProject().family("pic")
+                .templates(Templates.fromFolder(t)).build()));
+        assertEquals(Setting.TEMPLATES, e.setting());
+        assertEquals(t.resolve("pic/player.h.mustache") + ": template not found in --templates folder (copy the"
+                + " bundled templates folder and edit it)", e.render(TimerSolverTest::optionName));
+        AtomicFiles.writeString(t.resolve("pic").resolve("player.h.mustache"), "{{> common/header}}\n");
+        e = assertThrows(SettingError.class, () -> FirmwareEmitter.render(chimeProject().family("pic")
+                .templates(Templates.fromFolder(t)).build()));
+        assertEquals(t.resolve("common/header.mustache") + ": template not found in target.templates folder (copy"
+                + " the bundled templates folder and edit it)", e.getMessage());
     }
 
     // Bad input: one clear line each, and nothing written.
@@ -150,46 +168,54 @@ class FirmwareEmitterTest {
 
     @Test
     void refusesDuplicatePins() {
-        assertRefused("--pins 'D2-D6,D4': pin D4 at column 7 is already bit 2; each pin may appear once",
-                b -> b.pins("D2-D6,D4"), avrProject());
+        assertRefused("target.pins 'PD2-PD6,PD4': pin PD4 at column 9 is already bit 2; each pin may appear once",
+                b -> b.pins("PD2-PD6,PD4"), avrProject());
     }
 
     @Test
     void refusesAPinBeyondThePortWidth() {
-        assertRefused("--pins 'D3-D8': pin D8 at column 4 is beyond the 8-bit port (pins 0-7)",
-                b -> b.pins("D3-D8"), avrProject());
+        assertRefused("target.pins 'PD3-PD8': pin PD8 at column 5 is beyond the 8-bit port (pins 0-7)",
+                b -> b.pins("PD3-PD8"), avrProject());
     }
 
     @Test
     void refusesMoreBitsThanPins() {
-        assertRefused("--pins D2-D6 lists 5 pins but the codes have 6 bits; list exactly one pin per bit, bit 0"
-                + " first", b -> b.pins("D2-D6"), avrProject());
+        assertRefused("target.pins PD2-PD6 lists 5 pins but the codes have 6 bits; list exactly one pin per bit,"
+                + " bit 0 first", b -> b.pins("PD2-PD6"), avrProject());
+    }
+
+    @Test
+    void refusesPinsWrittenWithoutTheirPortPrefix() {
+        assertRefused("target.pins 'D2-D7': write port pins the way the datasheet names them: PD2-PD7",
+                b -> b.pins("D2-D7"), avrProject());
+        assertRefused("sweep.button 'D2': write port pins the way the datasheet names them: PD2",
+                b -> b.pins("PB0-PB5").sweep(SweepSpec.onButton(6, new int[] {1, 2}, "D2")), avrProject());
     }
 
     @Test
     void refusesAnUnknownTarget() {
-        assertRefused("--target 'pic' is unknown; known target families: generic, avr, cortexm",
+        assertRefused("target.family 'pic' is unknown; known target families: generic, avr, cortexm",
                 b -> b.family("pic"), avrProject());
     }
 
     @Test
     void refusesARateTheClockCannotMake() {
         // timer0 at 16 MHz is no slower than 16 MHz / (1024 * 256) = 61.04 Hz
-        assertRefused("--rate 40 Hz is too slow for timer0 (8-bit, prescalers 1/8/64/256/1024) at a 16 MHz"
-                + " clock: the slowest is 61.0352 Hz; choose a wider --timer or a higher --rate",
-                b -> FirmwareRequest.builder().family("avr").name("alarm").pins("D2-D7").cpuClockHz(16e6)
+        assertRefused("quantize.rate 40 Hz is too slow for timer0 (8-bit, prescalers 1/8/64/256/1024) at a 16 MHz"
+                + " clock: the slowest is 61.0352 Hz; choose a wider target.timer or a higher quantize.rate",
+                b -> FirmwareRequest.builder().family("avr").name("alarm").pins("PD2-PD7").cpuClockHz(16e6)
                         .timer(TimerKind.AVR_TIMER0).sound("hum", ramp(6, 16, 40)), avrProject());
-        assertRefused("--rate 22.05 kHz cannot be made within 100 ppm by timer1 (16-bit, prescalers"
+        assertRefused("quantize.rate 22.05 kHz cannot be made within 100 ppm by timer1 (16-bit, prescalers"
                 + " 1/8/64/256/1024) at a 16 MHz clock: the closest is 22.0386 kHz (-518.5 ppm, prescaler 1,"
-                + " OCR1A = 725); use --rate 22038.567 or raise --rate-tolerance",
+                + " OCR1A = 725); use quantize.rate 22038.567 or raise target.rate_tolerance",
                 b -> b.rateTolerancePpm(100), avrProject());
     }
 
     @Test
     void refusesATimerTheFamilyDoesNotHave() {
-        assertRefused("--timer systick is not available on target avr; use timer1, timer0, timer2",
+        assertRefused("target.timer systick is not available on target avr; use timer1, timer0, timer2",
                 b -> b.timer(TimerKind.SYSTICK), avrProject());
-        assertRefused("--cpu-clock is required for target avr (the clock that drives the timer, e.g. 16MHz)",
+        assertRefused("target.cpu_clock is required for target avr (the clock that drives the timer, e.g. 16MHz)",
                 b -> b.cpuClockHz(Double.NaN), avrProject());
     }
 
@@ -197,17 +223,18 @@ class FirmwareEmitterTest {
     void refusesAnOverBudgetBuildAndProposesASetting() {
         // 16,000 unpacked 8-bit samples at 16 kHz plus a 4-byte sound table. The largest smaller setting:
         // 11,025 samples at 11.025 kHz, 7 bits packed: ceil(11,025 * 7 / 8) + 4 = 9,651 bytes.
-        assertRefused("the samples need 16,004 bytes, 6,004 bytes over the 10,000-byte flash budget (--flash-budget or"
-                + " target.flash_budget); 7-bit packed at 11.025 kHz would fit (9,651 bytes)",
-                b -> FirmwareRequest.builder().name("chime").pins("B0-B7")
+        assertRefused("the samples need 16,004 bytes, 6,004 bytes over the 10,000-byte flash budget"
+                + " (target.flash_budget); 7-bit packed at 11.025 kHz would fit (9,651 bytes)",
+                b -> FirmwareRequest.builder().name("chime").pins("PB0-PB7")
                         .sound("chime", ramp(8, 16000, 16000)).flashBudgetBytes(10000), avrProject());
     }
 
     @Test
     void refusesNamesThatCannotBecomeCIdentifiers() {
-        assertRefused("--name '***' has no letters or digits to make a C symbol from; use e.g. --name door_chime",
+        assertRefused("sound.name '***' has no letters or digits to make a C symbol from; use e.g. sound.name"
+                + " door_chime",
                 b -> b.name("***"), avrProject());
-        assertRefused("--name 'int' would make the C keyword 'int'; choose another name, e.g. int_sound",
+        assertRefused("sound.name 'int' would make the C keyword 'int'; choose another name, e.g. int_sound",
                 b -> b.name("int"), avrProject());
         assertRefused("sound name '!' cannot become a C identifier; use letters, digits and underscores, not a C"
                 + " keyword, at most 40 characters, e.g. door_chime", b -> b.sound("!", ramp(6, 16, 22050)),
@@ -220,16 +247,26 @@ class FirmwareEmitterTest {
 
     @Test
     void refusesMismatchedSounds() {
-        assertRefused("sounds 'ding' (8 kHz) and 'fast' (16 kHz) differ in sample rate; resample them to one --rate",
+        assertRefused("sounds 'ding' (8 kHz) and 'fast' (16 kHz) differ in sample rate; resample them to one"
+                + " quantize.rate",
                 b -> b.sound("fast", ramp(4, 4, 16000)), chimeProject());
         assertRefused("the dds wavetable 'wave' has 100 samples; it needs a power of two from 2 to 65536 (one"
-                + " period)", b -> FirmwareRequest.builder().name("osc").pins("B0-B5").engine(PlaybackEngine.DDS)
+                + " period)", b -> FirmwareRequest.builder().name("osc").pins("PB0-PB5").engine(PlaybackEngine.DDS)
                         .sound("wave", ramp(6, 100, 8000)), chimeProject());
     }
 
     @Test
+    void aButtonRefusedByThePinRulesNamesTheButton() {
+        SettingError e = assertThrows(SettingError.class, () -> FirmwareEmitter.render(avrProject()
+                .sweep(SweepSpec.onButton(6, new int[] {1, 2}, "PD9")).build()));
+        assertEquals(Setting.BUTTON, e.setting());
+        assertEquals("--button 'PD9': pin PD9 at column 1 is beyond the 8-bit port (pins 0-7)",
+                e.render(TimerSolverTest::optionName));
+    }
+
+    @Test
     void refusesAButtonOnALadderPin() {
-        assertRefused("--button D3 is also ladder bit 1 in --pins; choose a free pin",
-                b -> b.sweep(SweepSpec.onButton(6, new int[] {1, 2}, "D3")), avrProject());
+        assertRefused("sweep.button PD3 is also ladder bit 1 in target.pins; choose a free pin",
+                b -> b.sweep(SweepSpec.onButton(6, new int[] {1, 2}, "PD3")), avrProject());
     }
 }

@@ -18,7 +18,7 @@ class FlashBudgetTest {
         List<FlashBudget.Candidate> c = List.of(new FlashBudget.Candidate("8-bit packed at 11.025 kHz", 11000),
                 new FlashBudget.Candidate("6-bit packed at 8 kHz", 7812));
         assertEquals("the samples need 12,345 bytes, 2,345 bytes over the 10,000-byte flash budget"
-                + " (--flash-budget or target.flash_budget); 6-bit packed at 8 kHz would fit (7,812 bytes)",
+                + " (target.flash_budget); 6-bit packed at 8 kHz would fit (7,812 bytes)",
                 assertThrows(InputError.class,
                         () -> FlashBudget.check(12345, 10000, c)).getMessage());
     }
@@ -30,7 +30,7 @@ class FlashBudgetTest {
         // With a 21,000-byte budget the largest that fits is 5-bit packed at 16 kHz (20,000 bytes).
         List<FlashBudget.Candidate> c = FlashBudget.alternatives(32000, 16000, 8, SampleStorage.UNPACKED, 0);
         assertEquals("the samples need 32,000 bytes, 11,000 bytes over the 21,000-byte flash budget"
-                + " (--flash-budget or target.flash_budget); 5-bit packed at 16 kHz would fit (20,000 bytes)",
+                + " (target.flash_budget); 5-bit packed at 16 kHz would fit (20,000 bytes)",
                 assertThrows(InputError.class,
                         () -> FlashBudget.check(32000, 21000, c)).getMessage());
     }
@@ -39,7 +39,7 @@ class FlashBudgetTest {
     void saysSoWhenNothingFits() {
         List<FlashBudget.Candidate> c = FlashBudget.alternatives(800000, 8000, 8, SampleStorage.PACKED, 0);
         assertEquals("the samples need 800,000 bytes, 799,900 bytes over the 100-byte flash budget"
-                + " (--flash-budget or target.flash_budget); no smaller bit depth or rate fits either: shorten the"
+                + " (target.flash_budget); no smaller bit depth or rate fits either: shorten the"
                 + " sound or raise the budget", assertThrows(
                         InputError.class, () -> FlashBudget.check(800000, 100, c)).getMessage());
     }

@@ -43,12 +43,12 @@ class HostReplayTest {
     static Stream<Arguments> pinMaps() {
         List<Arguments> out = new ArrayList<>();
         String[][] maps = {
-            {"B0-B5", "8"},                  // contiguous: one shift
-            {"A3,A7,C0,C1,B2,B1", "8"},      // scattered over three ports: lookup tables
-            {"B2-B5,D6,D7", "8"},            // two ports, one shift each
-            {"A26-A31", "32"},               // the top of a 32-bit port
+            {"PB0-PB5", "8"},                  // contiguous: one shift
+            {"PA3,PA7,PC0,PC1,PB2,PB1", "8"},      // scattered over three ports: lookup tables
+            {"PB2-PB5,PD6,PD7", "8"},            // two ports, one shift each
+            {"PA26-PA31", "32"},               // the top of a 32-bit port
             {"P1.7-P1.2", "16"},             // a numbered port, descending
-            {"A0-A5,B7,B5,B3,B1,C4,C0", "8"} // 12 bits over three ports: scatter code
+            {"PA0-PA5,PB7,PB5,PB3,PB1,PC4,PC0", "8"} // 12 bits over three ports: scatter code
         };
         for (String[] m : maps) {
             for (SampleStorage s : SampleStorage.values()) {
@@ -84,7 +84,7 @@ class HostReplayTest {
             bc[i] = 63 - bc[i];
         }
         Codes inverted = Codes.of(6, 8000, bc);
-        FirmwareRequest r = base("D2-D7", 8, SampleStorage.PACKED).sound("door", a).sound("alarm", inverted)
+        FirmwareRequest r = base("PD2-PD7", 8, SampleStorage.PACKED).sound("door", a).sound("alarm", inverted)
                 .build();
         assertEquals(toList(bc), MockPortRun.tickCodes(MockPortRun.run(r, dir, false, "1", "0", "0")));
     }
@@ -95,7 +95,7 @@ class HostReplayTest {
         int loopStart = 20;
         int loopEnd = 60;
         int beforeRelease = 250;
-        FirmwareRequest r = base("A3,A7,C0,C1,B2,B1", 8, SampleStorage.PACKED).engine(PlaybackEngine.LOOP)
+        FirmwareRequest r = base("PA3,PA7,PC0,PC1,PB2,PB1", 8, SampleStorage.PACKED).engine(PlaybackEngine.LOOP)
                 .sound("chime", codes, loopStart, loopEnd).build();
         List<Integer> got = MockPortRun.tickCodes(MockPortRun.run(r, dir, true, "0", "1",
                 Integer.toString(beforeRelease)));
@@ -129,7 +129,7 @@ class HostReplayTest {
     @MethodSource("ddsCases")
     void ddsMatchesTheReferenceModel(int phaseBits, int bits, SampleStorage storage, int hz) {
         int[] table = Dds.sineTable(8, bits);
-        String pins = bits == 8 ? "B0-B7" : bits == 10 ? "B0-B7,C0,C1" : "A0-A5,B7,B5,B3,B1,C4,C0";
+        String pins = bits == 8 ? "PB0-PB7" : bits == 10 ? "PB0-PB7,PC0,PC1" : "PA0-PA5,PB7,PB5,PB3,PB1,PC4,PC0";
         FirmwareRequest r = base(pins, 8, storage).engine(PlaybackEngine.DDS)
                 .sound("sine", Codes.of(bits, 8000, table)).dds(new DdsSpec(phaseBits, 1000)).build();
         List<Event> events = MockPortRun.run(r, dir, false, Integer.toString(hz), "3000");
@@ -142,7 +142,7 @@ class HostReplayTest {
     @Test
     void sweepHoldsEachCodeForTheGivenTicks() {
         int[] codes = {0, 63, 1, 62, 32};
-        FirmwareRequest r = base("B0,B1,D7,D6,C0,C1", 8, SampleStorage.UNPACKED)
+        FirmwareRequest r = base("PB0,PB1,PD7,PD6,PC0,PC1", 8, SampleStorage.UNPACKED)
                 .sweep(SweepSpec.holding(6, codes, 3)).build();
         List<Event> events = MockPortRun.run(r, dir, false);
         Event start = events.stream().filter(e -> e.kind() == 'S').findFirst().orElseThrow();
@@ -156,8 +156,8 @@ class HostReplayTest {
     @Test
     void sweepAdvancesOnDebouncedPresses() {
         int[] codes = {5, 40, 17};
-        FirmwareRequest r = base("B0-B5", 8, SampleStorage.UNPACKED)
-                .sweep(SweepSpec.onButton(6, codes, "D2")).build();
+        FirmwareRequest r = base("PB0-PB5", 8, SampleStorage.UNPACKED)
+                .sweep(SweepSpec.onButton(6, codes, "PD2")).build();
         // presses (tick ranges): long, a 5-tick bounce, long, long
         List<Event> events = MockPortRun.run(r, dir, false, "100", "160", "300", "305", "400", "460", "600",
                 "700");

@@ -104,7 +104,7 @@ final class MockPortRun {
                         tick();
                     }
                 }
-            #elif defined(MOCK_SWEEP_COUNT)
+            #elif defined(MOCK_STEP_COUNT)
                 {
                     int i;
                     for (i = 1; i + 1 < argc && presses < 8; i += 2) {

@@ -5,6 +5,8 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 
 import org.junit.jupiter.api.Test;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.Setting;
+import org.rungtone.internal.SettingError;
 
 class TimerSolverTest {
     @Test
@@ -45,7 +47,7 @@ class TimerSolverTest {
     void generalTimerPicksTheSmallestExactPrescaler() {
         // 1 Hz from 84 MHz needs p * period = 84,000,000 with period <= 65,536: the smallest divisor of
         // 84,000,000 = 2^8 * 3 * 5^6 * 7 that leaves a period of at most 65,536 is 1,344 (period 62,500).
-        TimerSetting s = TimerSolver.solve(84e6, TimerKind.TIM16, 1, 0);
+        TimerSetting s = TimerSolver.solve(84e6, TimerKind.GENERAL16, 1, 0);
         assertEquals(1344, s.prescaler());
         assertEquals(62499, s.reload());
         assertEquals(0, s.errorPpm(), 1e-9);
@@ -54,37 +56,56 @@ class TimerSolverTest {
     @Test
     void refusesARateOutsideTheTimersRange() {
         // slowest: 16 MHz / (1024 * 256) = 61.035 Hz
-        assertEquals("--rate 10 Hz is too slow for timer0 (8-bit, prescalers 1/8/64/256/1024) at a 16 MHz clock:"
-                + " the slowest is 61.0352 Hz; choose a wider --timer or a higher --rate",
+        assertEquals("quantize.rate 10 Hz is too slow for timer0 (8-bit, prescalers 1/8/64/256/1024) at a 16 MHz"
+                + " clock: the slowest is 61.0352 Hz; choose a wider target.timer or a higher quantize.rate",
                 assertThrows(InputError.class, () -> TimerSolver.solve(16e6, TimerKind.AVR_TIMER0, 10, 1000))
                         .getMessage());
-        assertEquals("--rate 10 MHz is too fast for systick (24-bit, no prescaler) at a 16 MHz clock: the fastest"
-                + " is 8 MHz; lower --rate or raise --cpu-clock",
+        assertEquals("quantize.rate 10 MHz is too fast for systick (24-bit, no prescaler) at a 16 MHz clock: the"
+                + " fastest is 8 MHz; lower quantize.rate or raise target.cpu_clock",
                 assertThrows(InputError.class, () -> TimerSolver.solve(16e6, TimerKind.SYSTICK, 10e6, 1000))
                         .getMessage());
     }
 
     @Test
     void refusesWhenNothingIsWithinTolerance() {
-        assertEquals("--rate 22.05 kHz cannot be made within 100 ppm by timer1 (16-bit, prescalers"
+        assertEquals("quantize.rate 22.05 kHz cannot be made within 100 ppm by timer1 (16-bit, prescalers"
                 + " 1/8/64/256/1024) at a 16 MHz clock: the closest is 22.0386 kHz (-518.5 ppm, prescaler 1,"
-                + " OCR1A = 725); use --rate 22038.567 or raise --rate-tolerance",
+                + " OCR1A = 725); use quantize.rate 22038.567 or raise target.rate_tolerance",
                 assertThrows(InputError.class, () -> TimerSolver.solve(16e6, TimerKind.AVR_TIMER1, 22050, 100))
                         .getMessage());
+    }
+
+    @Test
+    void errorsNameTheirSettingsWhereverTheUserTypedThem() {
+        SettingError e = assertThrows(SettingError.class, () -> TimerSolver.solve(16e6, TimerKind.SYSTICK, 10e6,
+                1000));
+        assertEquals(Setting.RATE, e.setting());
+        // the command line's names (cli.OptionNames): the option's text stays what it always was
+        assertEquals("--rate 10 MHz is too fast for systick (24-bit, no prescaler) at a 16 MHz clock: the fastest"
+                + " is 8 MHz; lower --rate or raise --cpu-clock", e.render(TimerSolverTest::optionName));
+    }
+
+    /** A setting's option as the command line spells most of them: {@code target.cpu_clock} is --cpu-clock. */
+    static String optionName(Setting s) {
+        return "--" + s.key().substring(s.key().indexOf('.') + 1).replace('_', '-');
     }
 
     @Test
     void describesTheSetting() {
         assertEquals("timer1 at 16 MHz: prescaler 1, OCR1A = 725 (726 cycles per tick), 22.0386 kHz (-518.5 ppm)",
                 TimerSolver.solve(16e6, TimerKind.AVR_TIMER1, 22050, 1000).describe());
-        assertEquals("tim16 at 84 MHz: prescaler 1344 (PSC = 1343), ARR = 62499 (84000000 cycles per tick), 1 Hz"
-                + " (+0.0 ppm)", TimerSolver.solve(84e6, TimerKind.TIM16, 1, 0).describe());
+        assertEquals("general16 at 84 MHz: prescaler 1344 (PSC = 1343), ARR = 62499 (84000000 cycles per tick), 1 Hz"
+                + " (+0.0 ppm)", TimerSolver.solve(84e6, TimerKind.GENERAL16, 1, 0).describe());
     }
 
     @Test
     void parsesTimerNames() {
         assertEquals(TimerKind.AVR_TIMER2, TimerKind.parse("Timer2"));
-        assertEquals("--timer 'tc3' is unknown; use one of timer0, timer1, timer2, systick, tim16, tim32",
+        assertEquals("target.timer 'tc3' is unknown; use one of timer0, timer1, timer2, systick, general16,"
+                + " general32",
                 assertThrows(InputError.class, () -> TimerKind.parse("tc3")).getMessage());
+        // the former spellings get the new name
+        assertEquals("target.timer 'TIM32' is now called general32 (a general-purpose timer with a 32-bit counter)",
+                assertThrows(InputError.class, () -> TimerKind.parse("TIM32")).getMessage());
     }
 }

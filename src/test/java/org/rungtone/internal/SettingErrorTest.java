@@ -45,6 +45,13 @@ class SettingErrorTest {
     }
 
     @Test
+    void aBraceInTheUsersTextIsNeverReadAsASetting() {
+        SettingError e = Setting.PINS.error("'%s' is not a pin; see %s", "{quantize.rate}x", Setting.RATE.ref());
+        assertEquals("--pins '{quantize.rate}x' is not a pin; see --rate",
+                e.render(s -> s == Setting.PINS ? "--pins" : "--rate"));
+    }
+
+    @Test
     void checkThrowsOnlyWhenTheConditionFails() {
         Setting.BITS.check(true, "must be 1..16: %d", 4);
         SettingError e = assertThrows(SettingError.class, () -> Setting.BITS.check(false, "must be 1..16: %d", 0));

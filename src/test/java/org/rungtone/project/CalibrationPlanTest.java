@@ -51,7 +51,7 @@ class CalibrationPlanTest {
 
     @Test
     void targetSettingsWriteTheSweepProgramOfThePlannedCodes() throws IOException {
-        CalibrationReport.Plan p = plan(Optional.of(FirmwareRequest.builder().family("generic").pins("B0-B5")
+        CalibrationReport.Plan p = plan(Optional.of(FirmwareRequest.builder().family("generic").pins("PB0-PB5")
                 .build()));
         assertTrue(p.sweep().isPresent());
         assertEquals(List.of("sweep.c", "sweep.h", "sweep_data.c"), written());

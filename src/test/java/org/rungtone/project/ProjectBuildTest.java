@@ -101,7 +101,7 @@ class ProjectBuildTest {
         Files.writeString(toml, Files.readString(toml).replaceFirst("(?m)^unit = .*$", ""));
         Path out = dir.resolve("o2");
         Cli.Run r = Cli.run("build", g.resolve("greenhouse.toml").toString(), "--out", out.toString(), "--bits",
-                "5", "--dither", "none", "--target", "generic", "--pins", "A0-A4", "--json");
+                "5", "--dither", "none", "--target", "generic", "--pins", "PA0-PA4", "--json");
         assertEquals(0, r.exitCode(), r.err());
         assertTrue(r.out().contains("\"bits\": \"5  (command line)\""), r.out());
         assertTrue(r.out().contains("\"dither\": \"none  (command line)\""), r.out());

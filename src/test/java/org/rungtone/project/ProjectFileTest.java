@@ -19,7 +19,7 @@ class ProjectFileTest {
     @Test
     void readsEverySection() {
         Project p = ProjectFile.parse(HEAD + "seed = 7\n[target]\nfamily = \"avr\"\ncpu_clock = \"16MHz\"\n"
-                + "pins = \"D2-D7\"\nflash_budget = \"28k\"\n[quantize]\nbits = 6\nrate = \"16k\"\n"
+                + "pins = \"PD2-PD7\"\nflash_budget = \"28k\"\n[quantize]\nbits = 6\nrate = \"16k\"\n"
                 + "dither = \"rpdf\"\n[preview]\nfilter = \"lp2:6k\"\n" + SOUND + "loop = \"0.1s:end\"\n"
                 + "fade_in = \"5ms\"\n[[sound]]\nname = \"alarm\"\nsource = \"alarm.rung\"\n", FILE);
         assertEquals("board", p.name());
@@ -69,7 +69,7 @@ class ProjectFileTest {
                 Arguments.of("bad filter", HEAD + "[preview]\nfilter = \"lp3:5k\"\n" + SOUND,
                         "board.toml:4: preview.filter: 'lp3:5k' is not a filter; write none, rc:3.4k or"
                                 + " lp2:3.4k[:0.707]"),
-                Arguments.of("attr with player", HEAD + "[target]\npins = \"B0-B5\"\nflash_attr = \"PROGMEM\"\n"
+                Arguments.of("attr with player", HEAD + "[target]\npins = \"PB0-PB5\"\nflash_attr = \"PROGMEM\"\n"
                         + SOUND, "board.toml:5: target.flash_attr: applies only to bare sample arrays; a player's"
                         + " family places its tables in flash itself (remove flash_attr or family/pins)"));
     }

@@ -38,7 +38,7 @@ class ReproducibilityPropertiesTest {
             Path out = dir.resolve("out");
             String[] args = {"build", wav.toString(), "--bits", Integer.toString(bits), "--rate", "8k",
                 "--dither", "tpdf", "--seed", Long.toString(seed), "--target", "avr", "--pins",
-                "B0-B" + (bits - 1), "--cpu-clock", "16MHz", "--storage", "packed", "--out", out.toString(),
+                "PB0-PB" + (bits - 1), "--cpu-clock", "16MHz", "--storage", "packed", "--out", out.toString(),
                 "--quiet"};
             Cli.Run first = Cli.run(args);
             assertEquals(0, first.exitCode(), first.err());

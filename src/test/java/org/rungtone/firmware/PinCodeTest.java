@@ -4,22 +4,10 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import org.junit.jupiter.api.Test;
 
-class EmitContextTest {
-    @Test
-    void avrClockSelectBitsFollowTheDatasheetTables() {
-        // ATmega328P datasheet, "Clock Select Bit Description" (from memory): timers 0 and 1 use
-        // CSn2:0 = 1..5 for prescalers 1, 8, 64, 256, 1024; timer 2 uses 1..7 for 1, 8, 32, 64, 128, 256, 1024.
-        assertEquals("_BV(CS10)", EmitContext.avrClockSelect(TimerKind.AVR_TIMER1, 1));
-        assertEquals("(_BV(CS11) | _BV(CS10))", EmitContext.avrClockSelect(TimerKind.AVR_TIMER1, 64));
-        assertEquals("(_BV(CS02) | _BV(CS00))", EmitContext.avrClockSelect(TimerKind.AVR_TIMER0, 1024));
-        assertEquals("_BV(CS02)", EmitContext.avrClockSelect(TimerKind.AVR_TIMER0, 256));
-        assertEquals("(_BV(CS21) | _BV(CS20))", EmitContext.avrClockSelect(TimerKind.AVR_TIMER2, 32));
-        assertEquals("(_BV(CS22) | _BV(CS21) | _BV(CS20))", EmitContext.avrClockSelect(TimerKind.AVR_TIMER2, 1024));
-    }
-
+class PinCodeTest {
     @Test
     void pinCodeUsesOneTermPerDisplacementGroup() {
-        PinMap m = PinMap.parse("A3,A7,C0,C1", 8);
+        PinMap m = PinMap.parse("PA3,PA7,PC0,PC1", 8);
         assertEquals("    const x_port_t v_a = (x_port_t)(((code & 0x0001u) << 3) | ((code & 0x0002u) << 6));",
                 PinCode.compute(m, PinStrategy.SCATTER, "A", "x", "X"));
         assertEquals("    const x_port_t v_c = (x_port_t)((code & 0x000Cu) >> 2);",
@@ -27,12 +15,12 @@ class EmitContextTest {
         assertEquals("    const x_port_t v_c = (x_port_t)X_READ_PORT(&x_pins_C[code]);",
                 PinCode.compute(m, PinStrategy.TABLE, "C", "x", "X"));
         assertEquals("    const x_port_t v_b = (x_port_t)(((uint32_t)code & 0x003Fu) << 26);",
-                PinCode.compute(PinMap.parse("B26-B31", 32), PinStrategy.SHIFT, "B", "x", "X"));
+                PinCode.compute(PinMap.parse("PB26-PB31", 32), PinStrategy.SHIFT, "B", "x", "X"));
     }
 
     @Test
     void pinTablesHoldThePortLevelsOfEveryCode() {
-        PinMap m = PinMap.parse("A3,A7,C0,C1", 8);
+        PinMap m = PinMap.parse("PA3,PA7,PC0,PC1", 8);
         int[] a = PinCode.table(m, "A");
         int[] c = PinCode.table(m, "C");
         for (int code = 0; code < 16; code++) {

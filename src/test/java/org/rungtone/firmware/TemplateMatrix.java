@@ -1,0 +1,115 @@
+package org.rungtone.firmware;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.rungtone.quantize.Codes;
+
+/**
+ * The requests that exercise every template of a family: contiguous, scattered, multi-port and wide pin maps
+ * (plus forced strategies), packed and unpacked storage, every engine, the sweep with and without a button,
+ * and the family's timers in turn. Each request has its own symbol prefix ({@code c000}, {@code c001}, ...),
+ * so one family's files can be compiled in one run.
+ */
+final class TemplateMatrix {
+    /** Engine and storage combinations per pin case: three engines twice, plus two sweeps. */
+    static final int CASES_PER_PIN_MAP = 8;
+
+    private TemplateMatrix() {
+    }
+
+    /** A pin case: map, port width, forced strategy. */
+    private record PinCase(String pins, int width, PinStrategy strategy) {
+    }
+
+    /**
+     * One combination.
+     *
+     * @param name the symbol prefix
+     * @param engine clip, loop, dds, sweep or button (a sweep advanced by a button)
+     */
+    record Case(String name, String engine, FirmwareRequest request) {
+    }
+
+    private static List<PinCase> pinCases(TargetFamily family) {
+        List<PinCase> out = new ArrayList<>();
+        if (family == TargetFamily.CORTEXM) {
+            out.add(new PinCase("PB0-PB5", 16, PinStrategy.AUTO));
+            out.add(new PinCase("PA3,PA7,PC0,PC1,PB2,PB1", 16, PinStrategy.AUTO));
+            out.add(new PinCase("PB10-PB15,PC0,PC1", 16, PinStrategy.AUTO));
+            out.add(new PinCase("PA0-PA5,PB15,PB13,PB3,PB1,PC4,PC0", 16, PinStrategy.AUTO));
+        } else if (family == TargetFamily.AVR) {
+            // ports B, C and D, as on the ATmega328P
+            out.add(new PinCase("PB0-PB5", 8, PinStrategy.AUTO));
+            out.add(new PinCase("PD2,PD7,PC0,PC1,PB2,PB1", 8, PinStrategy.AUTO));
+            out.add(new PinCase("PB2-PB5,PD6,PD7", 8, PinStrategy.AUTO));
+            out.add(new PinCase("PD0-PD5,PB7,PB5,PB3,PB1,PC4,PC0", 8, PinStrategy.AUTO));
+            out.add(new PinCase("PD0-PD7", 8, PinStrategy.AUTO));
+        } else {
+            out.add(new PinCase("PB0-PB5", 8, PinStrategy.AUTO));
+            out.add(new PinCase("PA3,PA7,PC0,PC1,PB2,PB1", 8, PinStrategy.AUTO));
+            out.add(new PinCase("PB2-PB5,PD6,PD7", 8, PinStrategy.AUTO));
+            out.add(new PinCase("PA0-PA5,PB7,PB5,PB3,PB1,PC4,PC0", 8, PinStrategy.AUTO));
+        }
+        out.add(new PinCase(out.get(0).pins(), out.get(0).width(), PinStrategy.TABLE));
+        out.add(new PinCase(out.get(1).pins(), out.get(1).width(), PinStrategy.SCATTER));
+        if (family == TargetFamily.GENERIC) {
+            out.add(new PinCase("PA26-PA31,PB0,PB31", 32, PinStrategy.AUTO));
+            out.add(new PinCase("PA26-PA31,PB0,PB31", 32, PinStrategy.TABLE));
+            out.add(new PinCase("P1.0-P1.3,P2.7,P2.6", 16, PinStrategy.AUTO));
+        }
+        return out;
+    }
+
+    private static String buttonPin(TargetFamily family, PinCase pc) {
+        if (family == TargetFamily.AVR) {
+            return "PC5";
+        }
+        return pc.pins().startsWith("P1.") ? "P3.0" : "PE5";
+    }
+
+    /** Every combination for {@code family}, numbered from {@code c000}. */
+    static List<Case> cases(TargetFamily family) {
+        List<Case> out = new ArrayList<>();
+        // generic programs no timer; every other case there names one, so the timer hint is rendered too
+        List<TimerKind> timers = family.timers().isEmpty() ? List.of(TimerKind.GENERAL16) : family.timers();
+        int n = 0;
+        for (PinCase pc : pinCases(family)) {
+            int bits = PinMap.parse(pc.pins(), pc.width()).bits();
+            for (SampleStorage storage : SampleStorage.values()) {
+                // the sweep stores no samples: its code does not depend on the storage
+                List<String> engines = storage == SampleStorage.UNPACKED
+                        ? List.of("clip", "loop", "dds", "sweep", "button") : List.of("clip", "loop", "dds");
+                for (String engine : engines) {
+                    String name = String.format(Locale.ROOT, "c%03d", n);
+                    FirmwareRequest.Builder b = FirmwareRequest.builder().family(family.folder()).name(name)
+                            .toolVersion("test").pins(pc.pins()).portWidth(pc.width()).pinStrategy(pc.strategy())
+                            .storage(storage).cpuClockHz(16e6);
+                    if (family != TargetFamily.GENERIC || n % 2 == 1) {
+                        b.timer(timers.get(n % timers.size()));
+                    }
+                    out.add(new Case(name, engine, withEngine(b, engine, bits, buttonPin(family, pc)).build()));
+                    n++;
+                }
+            }
+        }
+        return out;
+    }
+
+    private static FirmwareRequest.Builder withEngine(FirmwareRequest.Builder b, String engine, int bits,
+            String button) {
+        switch (engine) {
+            case "clip":
+                return b.sound("door", HostReplayTest.chime(bits, 200)).sound("bell", HostReplayTest.chime(bits, 120));
+            case "loop":
+                return b.engine(PlaybackEngine.LOOP).sound("warble", HostReplayTest.chime(bits, 300), 50, 250);
+            case "dds":
+                return b.engine(PlaybackEngine.DDS).sound("sine", Codes.of(bits, 8000, Dds.sineTable(6, bits)))
+                        .dds(DdsSpec.of(440));
+            case "sweep":
+                return b.sweep(SweepSpec.holding(bits, new int[] {0, (1 << bits) - 1, 1}, 500));
+            default:
+                return b.sweep(SweepSpec.onButton(bits, new int[] {0, 3, 1 << (bits - 1)}, button));
+        }
+    }
+}
