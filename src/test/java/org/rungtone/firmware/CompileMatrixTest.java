@@ -12,6 +12,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.quantize.Codes;
+import org.rungtone.testing.CToolchain;
 
 /**
  * Every family's output for contiguous, scattered, multi-port and wide scattered pin maps (plus forced
