@@ -49,7 +49,7 @@ import com.tngtech.archunit.lang.ArchRule;
  * has to be placed in this table.
  */
 @AnalyzeClasses(packages = "org.rungtone", importOptions = ImportOption.DoNotIncludeTests.class)
-class ArchitectureTest {
+final class ArchitectureTest {
     private static final String[] BELOW_ANALYSIS = {"calibrate", "quantize", "condition", "script", "source",
         "ladder", "internal"};
 
@@ -96,6 +96,9 @@ class ArchitectureTest {
     static final ArchRule ONLY_CLI_USES_PICOCLI = noClasses()
             .that().resideOutsideOfPackage("org.rungtone.cli..")
             .should().dependOnClassesThat().resideInAPackage("picocli..");
+
+    private ArchitectureTest() {
+    }
 
     private static String[] plus(String... layers) {
         String[] all = new String[layers.length + BELOW_ANALYSIS.length];

@@ -30,7 +30,7 @@ public final class KaiserKernel {
         this.i0Beta = Bessel.i0(beta);
     }
 
-    /** A low-pass at input rate {@code rateHz}, flat to {@code passHz}, {@code attenuationDb} down from {@code stopHz}. */
+    /** A low-pass at {@code rateHz}, flat to {@code passHz} and {@code attenuationDb} down from {@code stopHz}. */
     public static KaiserKernel lowPass(double rateHz, double passHz, double stopHz, double attenuationDb) {
         return new KaiserKernel((passHz + stopHz) / 2 / rateHz, halfWidth(rateHz, passHz, stopHz, attenuationDb),
                 beta(attenuationDb));
