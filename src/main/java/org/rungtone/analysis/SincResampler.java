@@ -1,12 +1,11 @@
 package org.rungtone.analysis;
 
-import org.rungtone.internal.Bessel;
+import org.rungtone.condition.KaiserKernel;
 import org.rungtone.internal.Checks;
 
 /**
- * Band-limited resampling by any ratio with a Kaiser-windowed sinc (J. F. Kaiser, "Nonrecursive Digital
- * Filter Design Using the I0-sinh Window Function", Proc. IEEE ISCAS 1974; length {@code (A − 8) /
- * (2.285·Δω)}, {@code β = 0.1102·(A − 8.7)} for stopband attenuation A dB and transition Δω rad/sample).
+ * Band-limited resampling by any ratio with a Kaiser-windowed sinc, the one design of {@link KaiserKernel}
+ * (window length, β and window are the conditioning resampler's too).
  *
  * <p>The low-pass kernel {@code h(t)} (t in input samples) is tabulated at 512 phases per input sample and
  * interpolated linearly between phases (error below −110 dB for kernels that pass at most a quarter of
@@ -38,15 +37,11 @@ final class SincResampler {
         Checks.checkArgument(stopHz > passHz && stopHz < inRateHz / 2, "bad resampler band edges");
         Checks.checkArgument(extraTaps.length % 2 == 1 || extraTaps.length == 0, "extra taps must be odd");
         ratio = inRateHz / outRateHz;
-        double dw = 2 * Math.PI * (stopHz - passHz) / inRateHz;
-        double windowHalf = Math.ceil((attenuationDb - 8) / (2.285 * dw) / 2);
-        double beta = 0.1102 * (attenuationDb - 8.7);
-        double fc = 0.5 * (passHz + stopHz) / inRateHz;
+        KaiserKernel h = KaiserKernel.lowPass(inRateHz, passHz, stopHz, attenuationDb);
         int extraHalf = extraTaps.length / 2;
-        half = (int) windowHalf + extraHalf + 1;
+        half = h.halfWidth() + extraHalf + 1;
         int taps = 2 * half;
         table = new double[(PHASES + 1) * taps];
-        double i0Beta = Bessel.i0(beta);
         // The extra taps shift the kernel by whole samples, which keeps the phase: each phase's kernel is
         // evaluated once at taps + 2·extraHalf points and the extra FIR is applied to that row.
         double[] row = new double[taps + 2 * extraHalf];
@@ -54,7 +49,7 @@ final class SincResampler {
             double frac = (double) p / PHASES;
             for (int k2 = 0; k2 < row.length; k2++) {
                 // row[k2] is the kernel at t = (k2 - extraHalf) - half + 1 - frac
-                row[k2] = kernel(k2 - extraHalf - half + 1 - frac, fc, windowHalf, beta, i0Beta);
+                row[k2] = h.at(k2 - extraHalf - half + 1 - frac);
             }
             for (int k = 0; k < taps; k++) {
                 double v;
@@ -70,16 +65,6 @@ final class SincResampler {
                 table[p * taps + k] = v;
             }
         }
-    }
-
-    private static double kernel(double t, double fc, double windowHalf, double beta, double i0Beta) {
-        double u = t / windowHalf;
-        if (Math.abs(u) >= 1) {
-            return 0;
-        }
-        double x = 2 * fc * t;
-        double sinc = x == 0 ? 1 : Math.sin(Math.PI * x) / (Math.PI * x);
-        return 2 * fc * sinc * Bessel.i0(beta * Math.sqrt(1 - u * u)) / i0Beta;
     }
 
     /** Half the kernel length in input samples: an output at input time c reads inputs c − half + 1 .. c + half. */

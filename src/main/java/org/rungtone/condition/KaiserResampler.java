@@ -1,6 +1,5 @@
 package org.rungtone.condition;
 
-import org.rungtone.internal.Bessel;
 import java.util.stream.IntStream;
 import org.rungtone.internal.Checks;
 import org.rungtone.source.SampleSource;
@@ -11,10 +10,9 @@ import org.rungtone.source.Signal;
  * caller, typically from the target bit depth so that aliases sit below the quantization noise.
  *
  * <p>Each output sample at input time t is {@code Σ x[k]·h(t − k)}, with
- * {@code h(τ) = 2fc·sinc(2fc·τ)·w(τ)}, fc the cutoff in cycles per input sample and w a Kaiser window.
+ * h the {@link KaiserKernel} (its window length, β and window are designed there, for every resampler).
  * The passband ends at {@code passbandFraction} of the lower Nyquist frequency and the stopband starts at
- * that Nyquist frequency. Window length and β follow Kaiser's formulas: β = 0.1102(A − 8.7) for A &gt; 50 dB,
- * N = (A − 7.95)/(14.36·Δf) (Oppenheim &amp; Schafer, Discrete-Time Signal Processing, 3rd ed., §7.6).
+ * that Nyquist frequency.
  * When the ratio of the rates is a fraction with a denominator of at most 4096 every output phase has its
  * own exact coefficient row; otherwise 1024 rows are interpolated linearly. Output samples are computed in
  * parallel blocks across the available cores; results do not depend on the number of cores.
@@ -194,8 +192,7 @@ public final class KaiserResampler implements Resampler {
 
     /** Taps of a Kaiser low-pass at rate {@code fin} from {@code passHz} to {@code stopHz}. */
     private int tapsFor(double fin, double passHz, double stopHz) {
-        int n = (int) Math.ceil((stopbandDb - 7.95) / (14.36 * (stopHz - passHz) / fin));
-        return 2 * Math.max(2, (n + 1) / 2);
+        return 2 * KaiserKernel.halfWidth(fin, passHz, stopHz, stopbandDb);
     }
 
     /** The coefficient table for one pair of rates. */
@@ -211,25 +208,19 @@ public final class KaiserResampler implements Resampler {
         /** A low-pass from rate {@code fin} to {@code fout}, flat to {@code passHz}, stopped from {@code stopHz}. */
         Kernel(double fin, double fout, double passHz, double stopHz, long[] frac) {
             step = fin / fout;
-            double cutoff = (passHz + stopHz) / 2 / fin;
-            half = tapsFor(fin, passHz, stopHz) / 2;
+            KaiserKernel h = KaiserKernel.lowPass(fin, passHz, stopHz, stopbandDb);
+            half = h.halfWidth();
             taps = 2 * half;
-            double beta = stopbandDb > 50 ? 0.1102 * (stopbandDb - 8.7)
-                    : 0.5842 * Math.pow(stopbandDb - 21, 0.4) + 0.07886 * (stopbandDb - 21);
             exact = isExact(frac);
             num = exact ? frac[0] : 0;
             den = exact ? frac[1] : INTERPOLATED_PHASES;
             int phases = (int) den + (exact ? 0 : 1);
             rows = new double[phases][taps];
-            double i0Beta = Bessel.i0(beta);
             for (int p = 0; p < phases; p++) {
                 double phase = (double) p / den;
                 for (int j = 0; j < taps; j++) {
                     // tap j multiplies x[floor(t) - half + 1 + j]; its distance from t is:
-                    double tau = (j - half + 1) - phase;
-                    double r = tau / half;
-                    double w = Math.abs(r) >= 1 ? 0 : Bessel.i0(beta * Math.sqrt(1 - r * r)) / i0Beta;
-                    rows[p][j] = 2 * cutoff * sinc(2 * cutoff * tau) * w;
+                    rows[p][j] = h.at((j - half + 1) - phase);
                 }
             }
         }
@@ -317,14 +308,6 @@ public final class KaiserResampler implements Resampler {
 
     private static long gcd(long a, long b) {
         return b == 0 ? a : gcd(b, a % b);
-    }
-
-    private static double sinc(double x) {
-        if (Math.abs(x) < 1e-12) {
-            return 1;
-        }
-        double px = Math.PI * x;
-        return Math.sin(px) / px;
     }
 
 }

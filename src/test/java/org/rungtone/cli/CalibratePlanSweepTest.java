@@ -2,9 +2,7 @@ package org.rungtone.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.junit.jupiter.api.Assertions.fail;
 
-import java.io.File;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -12,14 +10,13 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.rungtone.calibrate.MeasurementCsv;
 import org.rungtone.calibrate.Measurements;
 import org.rungtone.firmware.PinMap;
 import org.rungtone.internal.AtomicFiles;
-import org.rungtone.testing.CCompiler;
+import org.rungtone.testing.CToolchain;
 import org.rungtone.testing.Cli;
 
 /**
@@ -30,7 +27,6 @@ import org.rungtone.testing.Cli;
  * unless RUNGTONE_REQUIRE_CROSS is set).
  */
 class CalibratePlanSweepTest {
-    private static final List<String> STRICT = List.of("-std=c99", "-Wall", "-Wextra", "-Werror", "-pedantic");
     private static final String HARNESS = """
             #include <stdio.h>
             #include <stdlib.h>
@@ -132,14 +128,14 @@ class CalibratePlanSweepTest {
 
     @Test
     void avrSweepCompilesWithAvrGcc() {
-        require("avr-gcc");
+        CToolchain.require("avr-gcc");
         plan("--target", "avr", "--pins", "PD2-PD7,PB0,PB1", "--cpu-clock", "16MHz", "--button", "PC5");
         compile(List.of("avr-gcc", "-mmcu=atmega328p", "-Os", "-c"), "sweep.c", "sweep_data.c");
     }
 
     @Test
     void cortexmSweepCompilesWithArmGcc() {
-        require("arm-none-eabi-gcc");
+        CToolchain.require("arm-none-eabi-gcc");
         plan("--target", "cortexm", "--pins", "PB8-PB15", "--cpu-clock", "72MHz", "--hold", "2s");
         compile(List.of("arm-none-eabi-gcc", "-mcpu=cortex-m3", "-mthumb", "-ffreestanding", "-Os", "-c"),
                 "sweep.c", "sweep_data.c");
@@ -147,14 +143,14 @@ class CalibratePlanSweepTest {
 
     /** Runs the generic sweep in the harness; returns the code on the pins after start and each tick. */
     private List<Integer> run(String pins, String period, String width) {
-        require("gcc");
+        CToolchain.require("gcc");
         AtomicFiles.writeString(dir.resolve("harness.c"), HARNESS);
         List<String> cc = new ArrayList<>(List.of("gcc"));
-        cc.addAll(STRICT);
+        cc.addAll(CToolchain.STRICT);
         cc.addAll(List.of("-O1", "-o", "replay", "harness.c", "sweep.c", "sweep_data.c"));
-        String diag = exec(cc);
+        String diag = CToolchain.run(dir, cc);
         assertEquals("", diag.strip(), "compiler printed diagnostics");
-        String out = exec(List.of(dir.resolve("replay").toString(), period, width));
+        String out = CToolchain.run(dir, List.of(dir.resolve("replay").toString(), period, width));
         return replay(out, PinMap.parse(pins, 8));
     }
 
@@ -184,44 +180,12 @@ class CalibratePlanSweepTest {
 
     private void compile(List<String> base, String... sources) {
         List<String> cmd = new ArrayList<>(base);
-        cmd.addAll(STRICT);
+        cmd.addAll(CToolchain.STRICT);
         cmd.addAll(List.of(sources));
-        assertEquals("", exec(cmd).strip(), "compiler printed diagnostics");
+        assertEquals("", CToolchain.run(dir, cmd).strip(), "compiler printed diagnostics");
         for (String s : sources) {
             assertTrue(Files.isRegularFile(dir.resolve(s.replace(".c", ".o"))), s + " made no object");
         }
-    }
-
-    private String exec(List<String> cmd) {
-        try {
-            CCompiler.Result r = CCompiler.run(dir, cmd);
-            if (r.exitCode() != 0) {
-                fail(String.join(" ", cmd) + " exited " + r.exitCode() + ":\n" + r.output());
-            }
-            return r.output();
-        } catch (IOException e) {
-            throw new IllegalStateException("cannot run " + cmd.get(0), e);
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException(e);
-        }
-    }
-
-    /** Skips the test when the compiler is missing, unless RUNGTONE_REQUIRE_CROSS is set (as the firmware tests). */
-    private static void require(String compiler) {
-        String path = System.getenv("PATH");
-        if (path != null) {
-            for (String d : path.split(File.pathSeparator)) {
-                if (Files.isExecutable(Path.of(d, compiler))) {
-                    return;
-                }
-            }
-        }
-        String required = System.getenv("RUNGTONE_REQUIRE_CROSS");
-        if (required != null && !required.isEmpty()) {
-            fail(compiler + " is not installed but RUNGTONE_REQUIRE_CROSS is set");
-        }
-        Assumptions.assumeTrue(false, compiler + " not found on PATH; skipping");
     }
 
     private static String read(Path p) {

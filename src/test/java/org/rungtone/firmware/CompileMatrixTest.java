@@ -10,6 +10,7 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.rungtone.internal.AtomicFiles;
+import org.rungtone.testing.CToolchain;
 
 /**
  * Every family's output for the {@link TemplateMatrix}: contiguous, scattered, multi-port and wide scattered

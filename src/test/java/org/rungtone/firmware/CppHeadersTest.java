@@ -7,6 +7,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.rungtone.testing.CToolchain;
 import org.junit.jupiter.api.io.TempDir;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.quantize.Codes;

@@ -10,6 +10,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.rungtone.internal.AtomicFiles;
+import org.rungtone.testing.CToolchain;
 
 /**
  * Builds emitted generic C (symbol prefix {@code mock}) on the host with a harness whose port hook prints

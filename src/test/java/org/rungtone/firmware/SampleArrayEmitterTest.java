@@ -15,7 +15,7 @@ import org.rungtone.quantize.Codes;
 import org.rungtone.quantize.Dither;
 import org.rungtone.quantize.Quantizer;
 import org.rungtone.source.Signal;
-import org.rungtone.testing.CCompiler;
+import org.rungtone.testing.CToolchain;
 
 class SampleArrayEmitterTest {
     @TempDir
@@ -49,10 +49,11 @@ class SampleArrayEmitterTest {
                 "    return 0;",
                 "}", ""));
         CToolchain.require("gcc");
-        CCompiler.Result cc = CCompiler.run(dir, CCompiler.strictGcc("-o", "dump", "main.c", "door_chime.c"));
+        CToolchain.Result cc = CToolchain.exec(dir, CToolchain.cmd(List.of("gcc"), CToolchain.cmd(CToolchain.STRICT,
+                List.of("-O1", "-o", "dump", "main.c", "door_chime.c"))));
         assertEquals(0, cc.exitCode(), cc.output());
         assertEquals("", cc.output());
-        CCompiler.Result run = CCompiler.run(dir, List.of("./dump"));
+        CToolchain.Result run = CToolchain.exec(dir, List.of("./dump"));
         String[] lines = run.output().split("\n");
         assertEquals("1234 16000 " + bits, lines[0]);
         assertEquals(1235, lines.length);

@@ -10,7 +10,7 @@ import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.rungtone.firmware.CToolchain;
+import org.rungtone.testing.CToolchain;
 import org.rungtone.testing.Cli;
 
 /** Project files built end to end through the command line, as users run them. */

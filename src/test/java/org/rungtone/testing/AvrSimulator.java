@@ -49,7 +49,7 @@ public final class AvrSimulator {
         if (built != null) {
             return built;
         }
-        if (!CCompiler.available("gcc")) {
+        if (!CToolchain.available("gcc")) {
             missing("gcc is not installed");
         }
         Optional<Path> include = INCLUDE_DIRS.stream().filter(d -> Files.isRegularFile(d.resolve("sim_avr.h")))
@@ -61,7 +61,7 @@ public final class AvrSimulator {
         try {
             Files.createDirectories(BUILD_DIR);
             Path exe = BUILD_DIR.resolve("simavr-harness").toAbsolutePath();
-            CCompiler.Result r = CCompiler.run(BUILD_DIR, List.of("gcc", "-std=gnu99", "-O2", "-Wall", "-Wextra",
+            CToolchain.Result r = CToolchain.exec(BUILD_DIR, List.of("gcc", "-std=gnu99", "-O2", "-Wall", "-Wextra",
                     "-Werror", "-I" + include.get(), SOURCE.toAbsolutePath().toString(), "-lsimavr", "-o",
                     exe.toString()));
             if (r.exitCode() != 0 || !r.output().isBlank()) {
@@ -71,9 +71,6 @@ public final class AvrSimulator {
             return built;
         } catch (IOException e) {
             throw new IllegalStateException("cannot build the simavr harness", e);
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException(e);
         }
     }
 

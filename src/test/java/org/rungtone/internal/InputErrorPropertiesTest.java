@@ -1,4 +1,4 @@
-package org.rungtone.properties;
+package org.rungtone.internal;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -9,7 +9,6 @@ import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.Provide;
 import org.junit.jupiter.api.Test;
-import org.rungtone.internal.InputError;
 import org.rungtone.script.ScriptError;
 
 /**

@@ -1,4 +1,4 @@
-package org.rungtone.properties;
+package org.rungtone.firmware;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -14,9 +14,6 @@ import net.jqwik.api.Arbitrary;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.Provide;
-import org.rungtone.firmware.Pin;
-import org.rungtone.firmware.PinMap;
-import org.rungtone.firmware.PortWrite;
 
 /**
  * Random valid pin maps (1..16 distinct pins on up to four ports of 8, 16 or 32 bits): the port writes for a

@@ -1,4 +1,4 @@
-package org.rungtone.firmware;
+package org.rungtone.testing;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.fail;
@@ -14,9 +14,9 @@ import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.Assumptions;
 
 /**
- * The C compilers the firmware tests use: host gcc, avr-gcc, arm-none-eabi-gcc. A missing compiler skips
- * its tests with a printed reason, unless the environment variable RUNGTONE_REQUIRE_CROSS is set (CI), in
- * which case it fails them.
+ * The one helper through which tests run C compilers (host gcc, avr-gcc, arm-none-eabi-gcc) and the programs
+ * built with them. A missing compiler skips its tests with a printed reason, unless the environment variable
+ * RUNGTONE_REQUIRE_CROSS is set (CI), in which case it fails them.
  */
 public final class CToolchain {
     /** Warning flags every emitted file must pass without a warning. */
@@ -27,7 +27,7 @@ public final class CToolchain {
 
     /** Skips (or, with RUNGTONE_REQUIRE_CROSS, fails) the calling test when {@code compiler} is absent. */
     public static void require(String compiler) {
-        if (onPath(compiler)) {
+        if (available(compiler)) {
             return;
         }
         String required = System.getenv("RUNGTONE_REQUIRE_CROSS");
@@ -39,7 +39,8 @@ public final class CToolchain {
         Assumptions.assumeTrue(false, reason);
     }
 
-    static boolean onPath(String program) {
+    /** True when {@code program} is an executable on the PATH. */
+    public static boolean available(String program) {
         String path = System.getenv("PATH");
         if (path == null) {
             return false;
@@ -53,12 +54,12 @@ public final class CToolchain {
     }
 
     /** Runs a command in {@code dir}; fails the test with the command's output when it exits non-zero. */
-    static String run(Path dir, List<String> command) {
-        ProcessResult r = exec(dir, command);
-        if (r.exitCode != 0) {
-            fail(String.join(" ", command) + " exited " + r.exitCode + ":\n" + r.output);
+    public static String run(Path dir, List<String> command) {
+        Result r = exec(dir, command);
+        if (r.exitCode() != 0) {
+            fail(String.join(" ", command) + " exited " + r.exitCode() + ":\n" + r.output());
         }
-        return r.output;
+        return r.output();
     }
 
     /** Compiles, failing on any diagnostic at all (warnings are errors, and nothing else may be printed). */
@@ -74,16 +75,20 @@ public final class CToolchain {
     public static void compileClean(Path dir, List<String> base, List<String> sources) {
         int half = sources.size() / 2;
         List<List<String>> parts = List.of(sources.subList(0, half), sources.subList(half, sources.size()));
-        List<ProcessResult> results = parts.parallelStream().map(p -> exec(dir, cmd(base, p))).toList();
+        List<Result> results = parts.parallelStream().map(p -> exec(dir, cmd(base, p))).toList();
         for (int i = 0; i < results.size(); i++) {
-            ProcessResult r = results.get(i);
-            if (r.exitCode != 0 || !r.output.isBlank()) {
-                fail(String.join(" ", cmd(base, parts.get(i))) + " exited " + r.exitCode + ":\n" + r.output);
+            Result r = results.get(i);
+            if (r.exitCode() != 0 || !r.output().isBlank()) {
+                fail(String.join(" ", cmd(base, parts.get(i))) + " exited " + r.exitCode() + ":\n" + r.output());
             }
         }
     }
 
-    static ProcessResult exec(Path dir, List<String> command) {
+    /**
+     * Runs a command in {@code dir}, waiting at most two minutes, and returns its exit code and output
+     * (stdout and stderr together) whatever the exit code.
+     */
+    public static Result exec(Path dir, List<String> command) {
         try {
             Path log = Files.createTempFile(dir, "run", ".log");
             Process p = new ProcessBuilder(command).directory(dir.toFile()).redirectErrorStream(true)
@@ -94,7 +99,7 @@ public final class CToolchain {
             }
             String out = Files.readString(log, StandardCharsets.UTF_8);
             Files.delete(log);
-            return new ProcessResult(p.exitValue(), out);
+            return new Result(p.exitValue(), out);
         } catch (IOException e) {
             throw new IllegalStateException("cannot run " + command.get(0), e);
         } catch (InterruptedException e) {
@@ -110,6 +115,12 @@ public final class CToolchain {
         return all;
     }
 
-    record ProcessResult(int exitCode, String output) {
+    /**
+     * The outcome of a process.
+     *
+     * @param exitCode exit code
+     * @param output stdout and stderr together
+     */
+    public record Result(int exitCode, String output) {
     }
 }

@@ -1,4 +1,4 @@
-package org.rungtone.properties;
+package org.rungtone.firmware;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -9,7 +9,6 @@ import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.Provide;
 import net.jqwik.api.constraints.IntRange;
-import org.rungtone.firmware.SamplePacking;
 
 /** Packed samples read back exactly, for every code width 1..16, sequentially and by random access. */
 class SamplePackingPropertiesTest {

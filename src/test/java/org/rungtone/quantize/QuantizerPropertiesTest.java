@@ -1,4 +1,4 @@
-package org.rungtone.properties;
+package org.rungtone.quantize;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -14,10 +14,6 @@ import net.jqwik.api.Provide;
 import net.jqwik.api.constraints.DoubleRange;
 import net.jqwik.api.constraints.Size;
 import org.rungtone.ladder.LevelTable;
-import org.rungtone.quantize.Codes;
-import org.rungtone.quantize.Dither;
-import org.rungtone.quantize.ErrorFilter;
-import org.rungtone.quantize.Quantizer;
 import org.rungtone.source.Signal;
 
 /**

@@ -1,4 +1,4 @@
-package org.rungtone.properties;
+package org.rungtone.cli;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
