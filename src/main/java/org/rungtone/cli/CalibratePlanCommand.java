@@ -71,8 +71,8 @@ public final class CalibratePlanCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         codes.check();
-        if (firmware.engine != null && PlaybackEngine.parse(firmware.engine) != PlaybackEngine.SWEEP) {
-            throw new InputError("--engine " + firmware.engine + ": a measurement plan always emits the sweep"
+        if (firmware.engine != null && firmware.engine != PlaybackEngine.SWEEP) {
+            throw new InputError("--engine " + firmware.engine.name().toLowerCase(java.util.Locale.ROOT) + ": a measurement plan always emits the sweep"
                     + " program; leave --engine out");
         }
         if (firmware.loop != null || firmware.ddsFrequencyHz != null) {

@@ -3,6 +3,10 @@ package org.rungtone.cli;
 import org.rungtone.analysis.ReconstructionFilter;
 import org.rungtone.calibrate.OutputSpan;
 import org.rungtone.condition.ResamplerKind;
+import org.rungtone.firmware.PinStrategy;
+import org.rungtone.firmware.PlaybackEngine;
+import org.rungtone.firmware.SampleStorage;
+import org.rungtone.firmware.TimerKind;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.SettingError;
 import org.rungtone.quantize.Compensation;
@@ -98,6 +102,8 @@ final class Converters {
             return parse.apply(value);
         } catch (SettingError e) {
             throw new TypeConversionException(e.detail(OptionNames::of));
+        } catch (InputError e) {
+            throw new TypeConversionException(e.getMessage());
         }
     }
 
@@ -130,6 +136,38 @@ final class Converters {
         @Override
         public Compensation convert(String value) {
             return choice(value, Compensation::parse);
+        }
+    }
+
+    /** Timer: timer0..2, systick, general16, general32. */
+    static final class Timer implements ITypeConverter<TimerKind> {
+        @Override
+        public TimerKind convert(String value) {
+            return choice(value, TimerKind::parse);
+        }
+    }
+
+    /** Pin strategy: auto, shift, table, scatter. */
+    static final class Strategy implements ITypeConverter<PinStrategy> {
+        @Override
+        public PinStrategy convert(String value) {
+            return choice(value, PinStrategy::parse);
+        }
+    }
+
+    /** Sample storage: unpacked, packed. */
+    static final class Storage implements ITypeConverter<SampleStorage> {
+        @Override
+        public SampleStorage convert(String value) {
+            return choice(value, SampleStorage::parse);
+        }
+    }
+
+    /** Player engine: clip, loop, dds, sweep. */
+    static final class Engine implements ITypeConverter<PlaybackEngine> {
+        @Override
+        public PlaybackEngine convert(String value) {
+            return choice(value, PlaybackEngine::parse);
         }
     }
 }

@@ -18,6 +18,7 @@ import picocli.CommandLine.Option;
  * flash budget. Without --target, --pins or --engine only the sample array is emitted.
  */
 public final class FirmwareOptions {
+    // a name, not an enum: a --templates folder may add a family of its own
     @Option(names = "--target", paramLabel = "generic|avr|cortexm",
             description = "Emit a complete player for this target family (default: only the sample array,"
                     + " or 'generic' when --pins is given).")
@@ -32,10 +33,10 @@ public final class FirmwareOptions {
             description = "CPU or timer clock, e.g. 16MHz; the timer reload is computed from it.")
     Double cpuClockHz;
 
-    @Option(names = "--timer", paramLabel = "<timer>",
+    @Option(names = "--timer", paramLabel = "<timer>", converter = Converters.Timer.class,
             description = "timer0, timer1, timer2 (avr); systick, general16, general32 (cortexm: a general-purpose"
                     + " timer with a 16- or 32-bit counter).")
-    String timer;
+    TimerKind timer;
 
     @Option(names = "--rate-tolerance", paramLabel = "<ppm>",
             description = "Largest sample-rate error the timer may have, in ppm (default 1000).")
@@ -45,17 +46,17 @@ public final class FirmwareOptions {
             + " 16 or 32.")
     Integer portWidth;
 
-    @Option(names = "--pin-strategy", paramLabel = "auto|shift|table|scatter",
+    @Option(names = "--pin-strategy", paramLabel = "auto|shift|table|scatter", converter = Converters.Strategy.class,
             description = "How codes become port values (default auto: shift when the pins allow it).")
-    String pinStrategy;
+    PinStrategy pinStrategy;
 
-    @Option(names = "--storage", paramLabel = "unpacked|packed",
+    @Option(names = "--storage", paramLabel = "unpacked|packed", converter = Converters.Storage.class,
             description = "Samples one per byte/word, or bit-packed (default unpacked).")
-    String storage;
+    SampleStorage storage;
 
-    @Option(names = "--engine", paramLabel = "clip|loop|dds|sweep",
+    @Option(names = "--engine", paramLabel = "clip|loop|dds|sweep", converter = Converters.Engine.class,
             description = "Player engine: one-shot clip, looped clip, DDS wavetable oscillator (default clip).")
-    String engine;
+    PlaybackEngine engine;
 
     @Option(names = "--loop", paramLabel = "START:END",
             description = "Loop points of a looped sound, in samples (1200:9600) or times (0.25s:end).")
@@ -105,7 +106,7 @@ public final class FirmwareOptions {
             b.cpuClockHz(cpuClockHz);
         }
         if (timer != null) {
-            b.timer(TimerKind.parse(timer));
+            b.timer(timer);
         }
         if (rateTolerancePpm != null) {
             b.rateTolerancePpm(rateTolerancePpm);
@@ -117,13 +118,13 @@ public final class FirmwareOptions {
             b.portWidth(portWidth);
         }
         if (pinStrategy != null) {
-            b.pinStrategy(PinStrategy.parse(pinStrategy));
+            b.pinStrategy(pinStrategy);
         }
         if (storage != null) {
-            b.storage(SampleStorage.parse(storage));
+            b.storage(storage);
         }
         if (engine != null) {
-            b.engine(PlaybackEngine.parse(engine));
+            b.engine(engine);
         }
         if (ddsPhaseBits != null || ddsFrequencyHz != null) {
             if (b.engine() != PlaybackEngine.DDS) {

@@ -1,19 +1,14 @@
 package org.rungtone.cli;
 
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import org.rungtone.internal.InputError;
-import org.rungtone.internal.Units;
-import org.rungtone.ladder.ESeries;
 import org.rungtone.ladder.LadderDescription;
+import org.rungtone.ladder.LadderOverrides;
 import org.rungtone.ladder.LadderSpec;
-import org.rungtone.ladder.LadderSpecError;
 import org.rungtone.ladder.LadderTable;
-import org.rungtone.ladder.Topology;
 import picocli.CommandLine.Option;
 
 /**
@@ -79,177 +74,54 @@ public final class LadderOptions implements LadderDescription {
             description = "Highest output the buffer reaches (default: logic high).")
     String outMax;
 
-    /** True when a ladder file or any ladder option was given. */
+    /** The options as a ladder description: the file, with the options given on top. */
+    private LadderOverrides description() {
+        Map<String, String> values = new LinkedHashMap<>();
+        put(values, "topology", topology);
+        put(values, "base_r", baseR);
+        put(values, "series", series);
+        put(values, "tolerance", tolerance);
+        put(values, "logic_high", logicHigh);
+        put(values, "logic_low", logicLow);
+        put(values, "pin_r_high", pinRHigh);
+        put(values, "pin_r_low", pinRLow);
+        put(values, "load", load);
+        put(values, "buffer.gain", bufferGain);
+        put(values, "buffer.out_min", outMin);
+        put(values, "buffer.out_max", outMax);
+        return new LadderOverrides(Optional.ofNullable(ladderFile), values, Optional.ofNullable(resistors),
+                LadderOptions::optionOf);
+    }
+
+    private static void put(Map<String, String> m, String key, String value) {
+        if (value != null) {
+            m.put(key, value);
+        }
+    }
+
+    /** The option that sets a ladder key: {@code base_r} is {@code --base-r}, {@code buffer.out_min} {@code --out-min}. */
+    private static String optionOf(String key) {
+        return key.equals("buffer.gain") ? "--buffer-gain"
+                : "--" + key.substring(key.indexOf('.') + 1).replace('_', '-');
+    }
+
     @Override
     public boolean given() {
-        return ladderFile != null || !overrides().isEmpty();
+        return description().given();
     }
 
-    /** True when the ladder file or options state the bit depth (bits, or a per-bit resistor list). */
     @Override
     public boolean statesBits() {
-        return resistors != null || ladderFile != null && LadderTable.read(ladderFile).statesBits();
+        return description().statesBits();
     }
 
-    /** The ladder described by the file and options, defaults filling the rest; bits 0 keeps the file's. */
     @Override
     public LadderSpec spec(int bitsOrZero) {
-        return spec(Optional.empty(), bitsOrZero);
+        return description().spec(bitsOrZero);
     }
 
-    /** The options on top of a project's {@code [ladder]} table, which {@code --ladder FILE} replaces. */
     @Override
     public LadderDescription over(LadderTable base) {
-        LadderOptions self = this;
-        return new LadderDescription() {
-            @Override
-            public boolean given() {
-                return true;
-            }
-
-            @Override
-            public boolean statesBits() {
-                return self.resistors != null || (self.ladderFile != null ? LadderTable.read(self.ladderFile)
-                        : base).statesBits();
-            }
-
-            @Override
-            public LadderSpec spec(int bitsOrZero) {
-                return self.spec(Optional.of(base), bitsOrZero);
-            }
-        };
-    }
-
-    /**
-     * The ladder described by a project's table (when given), replaced by {@code --ladder FILE} when given,
-     * with the command-line options on top.
-     *
-     * @throws InputError naming the option, or the file and line, at fault
-     */
-    private LadderSpec spec(Optional<LadderTable> projectTable, int bitsOrZero) {
-        Optional<LadderTable> table = ladderFile != null ? Optional.of(LadderTable.read(ladderFile)) : projectTable;
-        LadderSpec.Builder b = table.map(LadderTable::builder).orElseGet(LadderSpec::builder);
-        Map<String, String> cli = overrides();
-        applyOverrides(b);
-        if (bitsOrZero != 0) {
-            b.bits(bitsOrZero);
-        }
-        try {
-            return b.build();
-        } catch (LadderSpecError e) {
-            boolean bitsFromCli = bitsOrZero != 0;
-            if (e.key().equals("bits") && bitsFromCli) {
-                throw new InputError("--bits: " + e.detail(), e);
-            }
-            if (cli.containsKey(e.key())) {
-                throw new InputError(cli.get(e.key()) + ": " + e.detail(), e);
-            }
-            String hint = bitsFromCli && e.key().equals("resistors") ? " (bits from --bits)" : "";
-            if (table.isPresent()) {
-                throw new InputError(table.get().where(e.key()) + ": " + e.detail() + hint, e);
-            }
-            throw new InputError(e.getMessage() + hint, e);
-        }
-    }
-
-    /** Ladder-file key to option name, for the options given. */
-    private Map<String, String> overrides() {
-        Map<String, String> m = new LinkedHashMap<>();
-        put(m, topology, "topology", "--topology");
-        put(m, resistors, "resistors", "--resistors");
-        put(m, baseR, "base_r", "--base-r");
-        put(m, series, "series", "--series");
-        put(m, tolerance, "tolerance", "--tolerance");
-        put(m, logicHigh, "logic_high", "--logic-high");
-        put(m, logicLow, "logic_low", "--logic-low");
-        put(m, pinRHigh, "pin_r_high", "--pin-r-high");
-        put(m, pinRLow, "pin_r_low", "--pin-r-low");
-        put(m, load, "load", "--load");
-        put(m, bufferGain, "buffer.gain", "--buffer-gain");
-        put(m, outMin, "buffer.out_min", "--out-min");
-        put(m, outMax, "buffer.out_max", "--out-max");
-        return m;
-    }
-
-    private static void put(Map<String, String> m, Object value, String key, String option) {
-        if (value != null) {
-            m.put(key, option);
-        }
-    }
-
-    private void applyOverrides(LadderSpec.Builder b) {
-        if (topology != null) {
-            b.topology(parse("--topology", () -> Topology.parse(topology)));
-        }
-        if (resistors != null) {
-            List<Double> values = new ArrayList<>();
-            for (int i = 0; i < resistors.size(); i++) {
-                String text = resistors.get(i);
-                int bit = i;
-                values.add(parse("--resistors", () -> quantity("bit " + bit + ": ", text, "ohm")));
-            }
-            b.resistors(values);
-        }
-        if (baseR != null) {
-            b.baseROhms(parse("--base-r", () -> Units.parse(baseR, "ohm")));
-        }
-        if (series != null) {
-            b.series(parse("--series", () -> ESeries.parse(series)));
-        }
-        if (tolerance != null) {
-            b.tolerance(parse("--tolerance", () -> percent(tolerance)));
-        }
-        if (logicHigh != null) {
-            b.logicHighVolts(parse("--logic-high", () -> Units.parse(logicHigh, "V")));
-        }
-        if (logicLow != null) {
-            b.logicLowVolts(parse("--logic-low", () -> Units.parse(logicLow, "V")));
-        }
-        if (pinRHigh != null) {
-            b.pinROhmsHigh(parse("--pin-r-high", () -> Units.parse(pinRHigh, "ohm")));
-        }
-        if (pinRLow != null) {
-            b.pinROhmsLow(parse("--pin-r-low", () -> Units.parse(pinRLow, "ohm")));
-        }
-        if (load != null) {
-            b.loadOhms(parse("--load", () -> Units.parse(load, "ohm")));
-        }
-        if (bufferGain != null) {
-            b.bufferGain(parse("--buffer-gain", () -> Units.parse(bufferGain, "")));
-        }
-        if (outMin != null) {
-            b.outMinVolts(parse("--out-min", () -> Units.parse(outMin, "V")));
-        }
-        if (outMax != null) {
-            b.outMaxVolts(parse("--out-max", () -> Units.parse(outMax, "V")));
-        }
-    }
-
-    private static double quantity(String prefix, String text, String unit) {
-        try {
-            return Units.parse(text, unit);
-        } catch (InputError e) {
-            throw new InputError(prefix + e.getMessage(), e);
-        }
-    }
-
-    /** Parses a percentage that must carry its % sign: "5%" is 0.05. */
-    static double percent(String text) {
-        if (!text.trim().endsWith("%")) {
-            throw new InputError("write it as a percentage, e.g. 5% or 0.1%, got '" + text + "'");
-        }
-        return Units.parse(text, "%");
-    }
-
-    private interface Parse<T> {
-        T get();
-    }
-
-    private static <T> T parse(String option, Parse<T> parse) {
-        try {
-            return parse.get();
-        } catch (InputError e) {
-            throw new InputError(option + ": " + e.getMessage(), e);
-        }
+        return description().over(base);
     }
 }
