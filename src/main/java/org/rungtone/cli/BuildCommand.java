@@ -2,29 +2,28 @@ package org.rungtone.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
-import org.rungtone.internal.InputError;
-import org.rungtone.project.Project;
-import org.rungtone.project.ProjectBuild;
-import org.rungtone.project.ProjectFile;
-import org.rungtone.report.ProjectReport;
-import picocli.CommandLine;
 import java.util.concurrent.Callable;
 import org.rungtone.calibrate.OutputSpan;
 import org.rungtone.firmware.CNames;
+import org.rungtone.internal.InputError;
+import org.rungtone.project.Boards;
 import org.rungtone.project.Build;
 import org.rungtone.project.BuildPlan;
-import org.rungtone.project.Boards;
+import org.rungtone.project.Project;
+import org.rungtone.project.ProjectBuild;
+import org.rungtone.project.ProjectFile;
 import org.rungtone.quantize.Compensation;
 import org.rungtone.quantize.Dither;
 import org.rungtone.quantize.ErrorFilter;
 import org.rungtone.report.BuildReport;
 import org.rungtone.report.BuildSummary;
 import org.rungtone.report.Json;
+import org.rungtone.report.ProjectReport;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -65,7 +64,6 @@ public final class BuildCommand implements Callable<Integer> {
     Dither dither;
 
     @Option(names = "--shaping", paramLabel = "none|first|second", defaultValue = "none",
-            converter = Converters.Shaping.class,
             description = "Error-feedback noise shaping: pushes quantization noise towards high frequencies"
                     + " (default ${DEFAULT-VALUE}).")
     ErrorFilter shaping;
@@ -100,7 +98,7 @@ public final class BuildCommand implements Callable<Integer> {
     @Mixin
     LadderOptions ladder;
 
-    @Option(names = "--compensation", paramLabel = "on|off", defaultValue = "on", converter = Converters.OnOff.class,
+    @Option(names = "--compensation", paramLabel = "on|off", defaultValue = "on",
             description = "With a ladder or unit profile: quantize onto the board's real levels (on, default) or"
                     + " emit plain binary codes (off).")
     Compensation compensation;
@@ -108,7 +106,7 @@ public final class BuildCommand implements Callable<Integer> {
     @Mixin
     UnitOptions unit;
 
-    @Option(names = "--span", paramLabel = "full|nominal", defaultValue = "full", converter = Converters.Span.class,
+    @Option(names = "--span", paramLabel = "full|nominal", defaultValue = "full",
             description = "With compensation: map full scale onto everything the board reaches (full, default)"
                     + " or onto the ideal ladder's span, for the same amplitude in volts on every board.")
     OutputSpan span;

@@ -9,8 +9,8 @@ import org.rungtone.calibrate.CodeChoice;
 import org.rungtone.firmware.FirmwareRequest;
 import org.rungtone.firmware.PlaybackEngine;
 import org.rungtone.internal.AtomicFiles;
-import org.rungtone.internal.OutputFolder;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.OutputFolder;
 import org.rungtone.ladder.LadderSpec;
 import org.rungtone.project.CalibrationPlan;
 import org.rungtone.report.CalibrationFiles;
@@ -72,7 +72,8 @@ public final class CalibratePlanCommand implements Callable<Integer> {
     public Integer call() {
         codes.check();
         if (firmware.engine != null && firmware.engine != PlaybackEngine.SWEEP) {
-            throw new InputError("--engine " + firmware.engine.name().toLowerCase(java.util.Locale.ROOT) + ": a measurement plan always emits the sweep"
+            throw new InputError("--engine " + firmware.engine.name().toLowerCase(java.util.Locale.ROOT)
+                    + ": a measurement plan always emits the sweep"
                     + " program; leave --engine out");
         }
         if (firmware.loop != null || firmware.ddsFrequencyHz != null) {

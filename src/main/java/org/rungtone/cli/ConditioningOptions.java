@@ -1,6 +1,5 @@
 package org.rungtone.cli;
 
-import java.util.Locale;
 import java.util.OptionalDouble;
 import org.rungtone.condition.ResamplerKind;
 import org.rungtone.project.ConditioningSettings;
@@ -45,7 +44,6 @@ public final class ConditioningOptions {
     double fadeOut;
 
     @Option(names = "--resampler", paramLabel = "kaiser|tarsos", defaultValue = "kaiser",
-            converter = Converters.Resampler.class,
             description = "kaiser: polyphase filter with its stopband below the target's quantization noise"
                     + " (default); tarsos: TarsosDSP's resampler, about 70 dB stopband.")
     ResamplerKind resampler;

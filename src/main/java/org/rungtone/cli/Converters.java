@@ -9,9 +9,10 @@ import org.rungtone.firmware.SampleStorage;
 import org.rungtone.firmware.TimerKind;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.SettingError;
+import org.rungtone.internal.Units;
+import org.rungtone.project.SurveyLists;
 import org.rungtone.quantize.Compensation;
 import org.rungtone.quantize.ErrorFilter;
-import org.rungtone.internal.Units;
 import picocli.CommandLine.ITypeConverter;
 import picocli.CommandLine.TypeConversionException;
 
@@ -64,18 +65,6 @@ final class Converters {
         }
     }
 
-    /** A reconstruction filter: none, rc:HZ or lp2:HZ[:Q] (see {@link ReconstructionFilter#parse}). */
-    static final class Filter implements ITypeConverter<ReconstructionFilter> {
-        @Override
-        public ReconstructionFilter convert(String value) {
-            try {
-                return ReconstructionFilter.parse(value);
-            } catch (InputError e) {
-                throw new TypeConversionException(e.getMessage());
-            }
-        }
-    }
-
     /** A byte count with optional k/M suffix (binary multiples are not used: 32k is 32,000). */
     static final class Bytes implements ITypeConverter<Long> {
         @Override
@@ -96,7 +85,47 @@ final class Converters {
         }
     }
 
-    /** A choice read by its type's own parser; an unknown word is a usage error naming the choices. */
+    /**
+     * Registers the converters of the typed choices every command shares (resampler, shaping, span,
+     * compensation, timer, pin strategy, storage, engine, reconstruction filter): each is read by its type's own
+     * parser, and a word it does not know is a usage error naming the choices.
+     */
+    static void registerChoices(picocli.CommandLine cl) {
+        cl.registerConverter(ResamplerKind.class, v -> choice(v, ResamplerKind::parse));
+        cl.registerConverter(ErrorFilter.class, v -> choice(v, ErrorFilter::parse));
+        cl.registerConverter(OutputSpan.class, v -> choice(v, OutputSpan::parse));
+        cl.registerConverter(Compensation.class, v -> choice(v, Compensation::parse));
+        cl.registerConverter(TimerKind.class, v -> choice(v, TimerKind::parse));
+        cl.registerConverter(PinStrategy.class, v -> choice(v, PinStrategy::parse));
+        cl.registerConverter(SampleStorage.class, v -> choice(v, SampleStorage::parse));
+        cl.registerConverter(PlaybackEngine.class, v -> choice(v, PlaybackEngine::parse));
+        cl.registerConverter(ReconstructionFilter.class, v -> choice(v, ReconstructionFilter::parse));
+    }
+
+    /** A survey's bit depths: "1..12", "4,6,8". */
+    static final class BitDepths implements ITypeConverter<SurveyLists.BitList> {
+        @Override
+        public SurveyLists.BitList convert(String value) {
+            try {
+                return SurveyLists.BitList.parse(value);
+            } catch (IllegalArgumentException e) {
+                throw new TypeConversionException(e.getMessage());
+            }
+        }
+    }
+
+    /** A survey's rates: "8k,11.025k,16kHz". */
+    static final class Rates implements ITypeConverter<SurveyLists.RateList> {
+        @Override
+        public SurveyLists.RateList convert(String value) {
+            try {
+                return SurveyLists.RateList.parse(value);
+            } catch (IllegalArgumentException e) {
+                throw new TypeConversionException(e.getMessage());
+            }
+        }
+    }
+
     private static <T> T choice(String value, java.util.function.Function<String, T> parse) {
         try {
             return parse.apply(value);
@@ -104,70 +133,6 @@ final class Converters {
             throw new TypeConversionException(e.detail(OptionNames::of));
         } catch (InputError e) {
             throw new TypeConversionException(e.getMessage());
-        }
-    }
-
-    /** Resampler design: kaiser, tarsos. */
-    static final class Resampler implements ITypeConverter<ResamplerKind> {
-        @Override
-        public ResamplerKind convert(String value) {
-            return choice(value, ResamplerKind::parse);
-        }
-    }
-
-    /** Noise shaping: none, first, second. */
-    static final class Shaping implements ITypeConverter<ErrorFilter> {
-        @Override
-        public ErrorFilter convert(String value) {
-            return choice(value, ErrorFilter::parse);
-        }
-    }
-
-    /** Output span: full, nominal. */
-    static final class Span implements ITypeConverter<OutputSpan> {
-        @Override
-        public OutputSpan convert(String value) {
-            return choice(value, OutputSpan::parse);
-        }
-    }
-
-    /** Compensation: on, off. */
-    static final class OnOff implements ITypeConverter<Compensation> {
-        @Override
-        public Compensation convert(String value) {
-            return choice(value, Compensation::parse);
-        }
-    }
-
-    /** Timer: timer0..2, systick, general16, general32. */
-    static final class Timer implements ITypeConverter<TimerKind> {
-        @Override
-        public TimerKind convert(String value) {
-            return choice(value, TimerKind::parse);
-        }
-    }
-
-    /** Pin strategy: auto, shift, table, scatter. */
-    static final class Strategy implements ITypeConverter<PinStrategy> {
-        @Override
-        public PinStrategy convert(String value) {
-            return choice(value, PinStrategy::parse);
-        }
-    }
-
-    /** Sample storage: unpacked, packed. */
-    static final class Storage implements ITypeConverter<SampleStorage> {
-        @Override
-        public SampleStorage convert(String value) {
-            return choice(value, SampleStorage::parse);
-        }
-    }
-
-    /** Player engine: clip, loop, dds, sweep. */
-    static final class Engine implements ITypeConverter<PlaybackEngine> {
-        @Override
-        public PlaybackEngine convert(String value) {
-            return choice(value, PlaybackEngine::parse);
         }
     }
 }

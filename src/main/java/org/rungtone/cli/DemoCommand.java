@@ -1,13 +1,11 @@
 package org.rungtone.cli;
 
-import java.io.IOException;
-import java.io.InputStream;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.internal.OutputFolder;
-import org.rungtone.internal.InputError;
+import org.rungtone.project.DemoScenario;
 import org.rungtone.project.Project;
 import org.rungtone.project.ProjectBuild;
 import org.rungtone.project.ProjectFile;
@@ -28,10 +26,6 @@ import picocli.CommandLine.Spec;
         footer = {"  rungtone demo --out /tmp/demo",
             "  rungtone build /tmp/demo/scenario/greenhouse.toml   (after editing the copy)"})
 public final class DemoCommand implements Callable<Integer> {
-    static final String SCENARIO = "greenhouse";
-    static final String[] FILES = {"greenhouse.toml", "door-chime.wav", "frost-alarm.rung",
-        "greenhouse-1.unit.toml"};
-
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
@@ -43,7 +37,7 @@ public final class DemoCommand implements Callable<Integer> {
     Path out;
 
     @Override
-    public Integer call() throws IOException {
+    public Integer call() {
         Path scenario = out.resolve("scenario");
         ProjectBuild.Result r;
         try (OutputFolder folder = OutputFolder.open(out, "demo")) {
@@ -63,27 +57,9 @@ public final class DemoCommand implements Callable<Integer> {
     }
 
     /** Writes the scenario into the (staged) demo folder and builds it there. */
-    private static ProjectBuild.Result run(Path scenario) throws IOException {
-        for (String f : FILES) {
-            byte[] bytes = resource("examples/" + SCENARIO + "/" + f);
-            if (f.endsWith(".toml")) {
-                // the copy builds into the demo folder, not next to the bundled original
-                bytes = new String(bytes, java.nio.charset.StandardCharsets.UTF_8)
-                        .replaceFirst("(?m)^out\\s*=.*$", "out  = \"..\"")
-                        .getBytes(java.nio.charset.StandardCharsets.UTF_8);
-            }
-            AtomicFiles.writeBytes(scenario.resolve(f), bytes);
-        }
-        Project project = ProjectFile.load(scenario.resolve("greenhouse.toml"));
+    private static ProjectBuild.Result run(Path scenario) {
+        DemoScenario.files().forEach((name, bytes) -> AtomicFiles.writeBytes(scenario.resolve(name), bytes));
+        Project project = ProjectFile.load(scenario.resolve(DemoScenario.PROJECT_FILE));
         return new ProjectBuild(Version.get()).run(project, ProjectBuild.Overrides.none());
-    }
-
-    static byte[] resource(String name) throws IOException {
-        try (InputStream in = DemoCommand.class.getClassLoader().getResourceAsStream(name)) {
-            if (in == null) {
-                throw new InputError("the demo scenario file " + name + " is missing from this build of Rungtone");
-            }
-            return in.readAllBytes();
-        }
     }
 }

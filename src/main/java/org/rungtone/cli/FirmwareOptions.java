@@ -3,13 +3,13 @@ package org.rungtone.cli;
 import java.nio.file.Path;
 import java.util.Optional;
 import org.rungtone.firmware.DdsSpec;
-import org.rungtone.internal.InputError;
 import org.rungtone.firmware.FirmwareRequest;
 import org.rungtone.firmware.PinStrategy;
 import org.rungtone.firmware.PlaybackEngine;
 import org.rungtone.firmware.SampleStorage;
 import org.rungtone.firmware.Templates;
 import org.rungtone.firmware.TimerKind;
+import org.rungtone.internal.InputError;
 import org.rungtone.project.LoopSpan;
 import picocli.CommandLine.Option;
 
@@ -33,7 +33,7 @@ public final class FirmwareOptions {
             description = "CPU or timer clock, e.g. 16MHz; the timer reload is computed from it.")
     Double cpuClockHz;
 
-    @Option(names = "--timer", paramLabel = "<timer>", converter = Converters.Timer.class,
+    @Option(names = "--timer", paramLabel = "<timer>",
             description = "timer0, timer1, timer2 (avr); systick, general16, general32 (cortexm: a general-purpose"
                     + " timer with a 16- or 32-bit counter).")
     TimerKind timer;
@@ -46,15 +46,15 @@ public final class FirmwareOptions {
             + " 16 or 32.")
     Integer portWidth;
 
-    @Option(names = "--pin-strategy", paramLabel = "auto|shift|table|scatter", converter = Converters.Strategy.class,
+    @Option(names = "--pin-strategy", paramLabel = "auto|shift|table|scatter",
             description = "How codes become port values (default auto: shift when the pins allow it).")
     PinStrategy pinStrategy;
 
-    @Option(names = "--storage", paramLabel = "unpacked|packed", converter = Converters.Storage.class,
+    @Option(names = "--storage", paramLabel = "unpacked|packed",
             description = "Samples one per byte/word, or bit-packed (default unpacked).")
     SampleStorage storage;
 
-    @Option(names = "--engine", paramLabel = "clip|loop|dds|sweep", converter = Converters.Engine.class,
+    @Option(names = "--engine", paramLabel = "clip|loop|dds|sweep",
             description = "Player engine: one-shot clip, looped clip, DDS wavetable oscillator (default clip).")
     PlaybackEngine engine;
 

@@ -99,7 +99,7 @@ public final class LadderOptions implements LadderDescription {
         }
     }
 
-    /** The option that sets a ladder key: {@code base_r} is {@code --base-r}, {@code buffer.out_min} {@code --out-min}. */
+    /** The option that sets a ladder key: {@code base_r} is {@code --base-r}, {@code buffer.out_min} --out-min. */
     private static String optionOf(String key) {
         return key.equals("buffer.gain") ? "--buffer-gain"
                 : "--" + key.substring(key.indexOf('.') + 1).replace('_', '-');

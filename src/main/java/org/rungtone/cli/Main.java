@@ -104,6 +104,7 @@ public final class Main implements Runnable {
         cl.setExitCodeExceptionMapper(t -> t instanceof CommandLine.ParameterException ? EXIT_USAGE
                 : t instanceof InputError ? EXIT_INPUT : EXIT_INTERNAL);
         cl.setCaseInsensitiveEnumValuesAllowed(true);
+        Converters.registerChoices(cl);
         return cl;
     }
 

@@ -6,7 +6,6 @@ import picocli.CommandLine.Option;
 /** The reconstruction filter after the DAC and the preview WAV's rate (the same --filter syntax as survey). */
 public final class PreviewOptions {
     @Option(names = "--filter", paramLabel = "<filter>", defaultValue = "none",
-            converter = Converters.Filter.class,
             description = "Reconstruction filter after the ladder, for the preview and the in-band figures:"
                     + " none, rc:HZ (first-order RC) or lp2:HZ[:Q] (second-order low-pass, Q 0.707 by default),"
                     + " e.g. lp2:6k (default ${DEFAULT-VALUE}).")

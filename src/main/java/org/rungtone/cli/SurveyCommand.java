@@ -7,13 +7,12 @@ import java.util.OptionalLong;
 import java.util.concurrent.Callable;
 import org.rungtone.analysis.ReconstructionFilter;
 import org.rungtone.analysis.SurveyTarget;
-import org.rungtone.cli.SurveyLists.BitList;
-import org.rungtone.cli.SurveyLists.RateList;
 import org.rungtone.firmware.CNames;
 import org.rungtone.internal.Setting;
 import org.rungtone.internal.SettingError;
 import org.rungtone.project.Boards;
 import org.rungtone.project.BuildPlan;
+import org.rungtone.project.SurveyLists;
 import org.rungtone.project.SurveyRequest;
 import org.rungtone.project.SurveyRun;
 import org.rungtone.quantize.Dither;
@@ -51,15 +50,16 @@ public final class SurveyCommand implements Callable<Integer> {
             + " the highest surveyed rate).")
     Path source;
 
-    @Option(names = "--bits-list", paramLabel = "<list>", defaultValue = "1..12", converter = BitList.Parser.class,
+    @Option(names = "--bits-list", paramLabel = "<list>", defaultValue = "1..12",
+            converter = Converters.BitDepths.class,
             description = "Bit depths: ranges and single depths, comma separated, e.g. 4..10 or 4,6,8"
                     + " (default ${DEFAULT-VALUE}).")
-    BitList bitList;
+    SurveyLists.BitList bitList;
 
     @Option(names = "--rates", paramLabel = "<list>", defaultValue = "8k,11.025k,16k,22.05k",
-            converter = RateList.Parser.class,
+            converter = Converters.Rates.class,
             description = "Sample rates, a comma list (default ${DEFAULT-VALUE}).")
-    RateList rateList;
+    SurveyLists.RateList rateList;
 
     @Option(names = "--dither", paramLabel = "none|rpdf|tpdf", defaultValue = "tpdf",
             description = "Dither before quantizing (default ${DEFAULT-VALUE}).")
@@ -67,7 +67,7 @@ public final class SurveyCommand implements Callable<Integer> {
 
     @Option(names = "--shaping", paramLabel = "none|first|second", defaultValue = "none",
             description = "Error-feedback noise shaping (default ${DEFAULT-VALUE}).")
-    String shaping;
+    ErrorFilter shaping;
 
     @Option(names = "--seed", paramLabel = "<n>", defaultValue = "1",
             description = "Seed for dither; every cell uses it (default ${DEFAULT-VALUE}).")
@@ -104,7 +104,7 @@ public final class SurveyCommand implements Callable<Integer> {
     @Option(names = "--previews", description = "Write a 16-bit preview WAV per cell into OUT/previews/.")
     boolean previews;
 
-    @Option(names = "--filter", paramLabel = "<filter>", defaultValue = "none", converter = Converters.Filter.class,
+    @Option(names = "--filter", paramLabel = "<filter>", defaultValue = "none",
             description = "Reconstruction filter after the ladder, for previews and the in-band cutoff: none,"
                     + " rc:<hz> (first-order RC) or lp2:<hz>[:<q>] (second order, Q 0.707 unless given).")
     ReconstructionFilter filter;
@@ -118,11 +118,13 @@ public final class SurveyCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        SurveyRequest.Cells cells = new SurveyRequest.Cells(bitList.expand(), rateList.checked(), dither,
-                ErrorFilter.parse(shaping), seed);
-        Path folder = out != null ? out : Path.of("rungtone-out", "survey-" + CNames.symbol(BuildCommand.stem(source)));
+        SurveyRequest.Cells cells = new SurveyRequest.Cells(bitList.expand(), rateList.checked(), dither, shaping,
+                seed);
+        Path folder = out != null ? out
+                : Path.of("rungtone-out", "survey-" + CNames.symbol(BuildCommand.stem(source)));
         SurveyRequest request = new SurveyRequest(source, channel, cells, conditioning.settings(),
-                Boards.perDepth(unit.path(), ladder, BuildPlan.DEFAULT_FULL_SCALE_VOLTS), new SurveyRequest.Choice(flashBudget == null ? OptionalLong.empty()
+                Boards.perDepth(unit.path(), ladder, BuildPlan.DEFAULT_FULL_SCALE_VOLTS),
+                new SurveyRequest.Choice(flashBudget == null ? OptionalLong.empty()
                         : OptionalLong.of(flashBudget), target(), packed), filter,
                 new SurveyRequest.Output(folder, previews, Version.get()));
         ProgressLine line = ProgressLine.forTerminal(spec.commandLine().getErr(), common);

@@ -28,8 +28,9 @@ import java.util.stream.Stream;
  * previous run wrote and this one does not are gone after the swap; files the user put there are kept.
  *
  * <p>The staging folder is also the lock that keeps two Rungtone commands from writing the folder at once:
- * the second stops with an {@link InputError}; one left by a run that was killed is removed. A swap cut short between its two renames is finished by the next open. A folder
- * opened inside one already open is part of it: its commit and close do nothing.
+ * the second stops with an {@link InputError}; one left by a run that was killed is removed. A swap cut short
+ * between its two renames is finished by the next open. A folder opened inside one already open is part of it:
+ * its commit and close do nothing.
  */
 public final class OutputFolder implements AutoCloseable {
     /** The role of a build's outputs. */

@@ -107,7 +107,7 @@ public final class MonteCarlo {
                     : new IllegalStateException("Monte Carlo run failed", cause);
         }
         double nominalSinad = probe.sinadDb(ladder.levels().levels());
-        return new MonteCarloResult(bits, seed, spread, spec.tolerance(), worstDnl, worstInl, worstInlBestFit,
-                sinad, monotonic, nominalSinad);
+        return new MonteCarloResult(bits, seed, spread, spec.tolerance(),
+                new MonteCarloResult.PerBoard(worstDnl, worstInl, worstInlBestFit, sinad, monotonic), nominalSinad);
     }
 }

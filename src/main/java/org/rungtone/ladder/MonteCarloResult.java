@@ -17,18 +17,29 @@ public final class MonteCarloResult {
     private final boolean[] monotonic;
     private final double nominalSinadDb;
 
-    MonteCarloResult(int bits, long seed, Spread spread, double tolerance, double[] worstDnl,
-            double[] worstInl, double[] worstInlBestFit, double[] sinadDb, boolean[] monotonic,
-            double nominalSinadDb) {
+    /**
+     * Each board's figures, one array element a board (handed over without a copy).
+     *
+     * @param worstDnl largest |DNL| in LSB
+     * @param worstInl largest |INL| (endpoint) in LSB
+     * @param worstInlBestFit largest |INL| (best fit) in LSB
+     * @param sinadDb SINAD of the probe sine
+     * @param monotonic whether the board is monotonic
+     */
+    record PerBoard(double[] worstDnl, double[] worstInl, double[] worstInlBestFit, double[] sinadDb,
+            boolean[] monotonic) {
+    }
+
+    MonteCarloResult(int bits, long seed, Spread spread, double tolerance, PerBoard boards, double nominalSinadDb) {
         this.bits = bits;
         this.seed = seed;
         this.spread = spread;
         this.tolerance = tolerance;
-        this.worstDnl = worstDnl;
-        this.worstInl = worstInl;
-        this.worstInlBestFit = worstInlBestFit;
-        this.sinadDb = sinadDb;
-        this.monotonic = monotonic;
+        this.worstDnl = boards.worstDnl();
+        this.worstInl = boards.worstInl();
+        this.worstInlBestFit = boards.worstInlBestFit();
+        this.sinadDb = boards.sinadDb();
+        this.monotonic = boards.monotonic();
         this.nominalSinadDb = nominalSinadDb;
     }
 

@@ -62,7 +62,8 @@ public record Project(Path file, String name, Optional<Path> outDir, Optional<Lo
      */
     public record Target(Optional<String> family, OptionalDouble cpuClockHz, Optional<TimerKind> timer,
             Optional<String> pins, Optional<Long> portWidth, Optional<PinStrategy> pinStrategy,
-            Optional<SampleStorage> storage, Optional<PlaybackEngine> engine, OptionalDouble rateTolerancePpm, OptionalDouble flashBudgetBytes,
+            Optional<SampleStorage> storage, Optional<PlaybackEngine> engine, OptionalDouble rateTolerancePpm,
+            OptionalDouble flashBudgetBytes,
             Optional<String> flashAttr, OptionalDouble ddsFrequencyHz, Optional<Long> ddsPhaseBits,
             Map<String, Integer> lines) {
     }

@@ -13,16 +13,15 @@ import java.util.OptionalLong;
 import java.util.function.UnaryOperator;
 import org.rungtone.analysis.ReconstructionFilter;
 import org.rungtone.calibrate.OutputSpan;
+import org.rungtone.condition.ResamplerKind;
 import org.rungtone.firmware.CNames;
 import org.rungtone.firmware.DdsSpec;
 import org.rungtone.firmware.EmitResult;
 import org.rungtone.firmware.FirmwareEmitter;
 import org.rungtone.firmware.FirmwareRequest;
 import org.rungtone.firmware.FlashBudget;
-import org.rungtone.firmware.PinStrategy;
 import org.rungtone.firmware.PlaybackEngine;
 import org.rungtone.firmware.SampleStorage;
-import org.rungtone.firmware.TimerKind;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.OutputFolder;
@@ -32,7 +31,6 @@ import org.rungtone.internal.Units;
 import org.rungtone.ladder.LadderDescription;
 import org.rungtone.ladder.LadderSpec;
 import org.rungtone.ladder.LevelTable;
-import org.rungtone.condition.ResamplerKind;
 import org.rungtone.quantize.Compensation;
 import org.rungtone.quantize.Dither;
 import org.rungtone.quantize.ErrorFilter;
@@ -40,7 +38,6 @@ import org.rungtone.report.BuildSummary;
 import org.rungtone.report.HtmlReport;
 import org.rungtone.report.Json;
 import org.rungtone.report.ProjectReport;
-import org.tomlj.TomlTable;
 
 /**
  * Builds every sound of a {@link Project} into one coherent set of outputs: one header exposing all sounds,

@@ -1,10 +1,10 @@
 package org.rungtone.project;
 
 import java.nio.file.Path;
-import org.rungtone.internal.OutputFolder;
 import java.util.List;
 import java.util.Locale;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.OutputFolder;
 import org.rungtone.internal.Units;
 import org.rungtone.script.RungScript;
 import org.rungtone.source.SampleSource;

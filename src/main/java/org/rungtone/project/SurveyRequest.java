@@ -1,18 +1,13 @@
 package org.rungtone.project;
 
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Objects;
 import java.util.Optional;
-import java.util.OptionalDouble;
 import java.util.OptionalLong;
 import java.util.function.IntFunction;
 import org.rungtone.analysis.ReconstructionFilter;
 import org.rungtone.analysis.SurveyTarget;
-import org.rungtone.condition.Conditioning;
-import org.rungtone.condition.Resampler;
 import org.rungtone.internal.Setting;
 import org.rungtone.ladder.LevelTable;
 import org.rungtone.quantize.Dither;

@@ -30,7 +30,18 @@ public record WavFormat(int formatTag, Encoding encoding, int channels, int samp
         /** IEEE 754 single precision. */
         FLOAT32,
         /** IEEE 754 double precision. */
-        FLOAT64
+        FLOAT64;
+
+        /** The encoding of a format tag (1 PCM, 3 IEEE float) and sample width, or null when there is none. */
+        static Encoding of(int tag, int bits) {
+            if (tag == 1) {
+                return bits == 8 ? PCM_U8 : bits == 16 ? PCM_S16 : bits == 24 ? PCM_S24 : bits == 32 ? PCM_S32 : null;
+            }
+            if (tag == 3) {
+                return bits == 32 ? FLOAT32 : bits == 64 ? FLOAT64 : null;
+            }
+            return null;
+        }
     }
 
     /** Duration in seconds. */

@@ -263,8 +263,8 @@ class BadInputCatalogueTest {
                 + " (project.out)", d -> project(d, "[project]\nname = \"bench\"\nout = \"notes.txt\"\n" + sound,
                         "notes.txt")));
         c.add(bad("project: samples over the flash budget", "p.toml:6: target.flash_budget: the samples need"
-                + " 1,600 bytes, 1,590 bytes over the 10-byte flash budget (target.flash_budget)", d -> project(d, head + "\n[target]\nflash_budget = 10\n"
-                        + sound)));
+                + " 1,600 bytes, 1,590 bytes over the 10-byte flash budget (target.flash_budget)",
+                d -> project(d, head + "\n[target]\nflash_budget = 10\n" + sound)));
         c.add(bad("project: 0 bits", "p.toml:6: quantize.bits: must be 1..16, got 0",
                 d -> project(d, head + "\n[quantize]\nbits = 0\n" + sound)));
         c.add(bad("project: --bits 0 on the command line", "--bits: bit depth must be 1..16, got 0",

@@ -147,14 +147,15 @@ class LadderCommandTest {
                 .getTable("ladder");
         LadderOptions opts = new LadderOptions();
         opts.tolerance = "0.1%";
-        LadderSpec fromProject = opts.over(org.rungtone.ladder.LadderTable.of(project, Path.of("project.toml"))).spec(0);
+        org.rungtone.ladder.LadderTable table = org.rungtone.ladder.LadderTable.of(project, Path.of("project.toml"));
+        LadderSpec fromProject = opts.over(table).spec(0);
         assertEquals(Topology.R2R, fromProject.topology());
         assertEquals(10, fromProject.bits());
         assertEquals(0.001, fromProject.tolerance(), 1e-15);
         Path file = dir.resolve("chime.toml");
         Files.writeString(file, "[ladder]\nbits = 4\nlogic_high = \"3.3V\"\n");
         opts.ladderFile = file;
-        LadderSpec fromFile = opts.over(org.rungtone.ladder.LadderTable.of(project, Path.of("project.toml"))).spec(6);
+        LadderSpec fromFile = opts.over(table).spec(6);
         assertEquals(Topology.WEIGHTED, fromFile.topology());
         assertEquals(6, fromFile.bits());
         assertEquals(3.3, fromFile.logicHighVolts());

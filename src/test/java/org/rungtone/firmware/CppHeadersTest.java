@@ -7,10 +7,10 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
-import org.rungtone.testing.CToolchain;
 import org.junit.jupiter.api.io.TempDir;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.quantize.Codes;
+import org.rungtone.testing.CToolchain;
 
 /**
  * Every emitted header can be included from C++: each family's headers over the {@link TemplateMatrix}

@@ -12,12 +12,12 @@ import java.util.OptionalDouble;
 import java.util.OptionalLong;
 import org.junit.jupiter.api.Test;
 import org.rungtone.analysis.ReconstructionFilter;
+import org.rungtone.condition.ResamplerKind;
 import org.rungtone.condition.TarsosResampler;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.Setting;
 import org.rungtone.internal.SettingError;
 import org.rungtone.ladder.LevelTable;
-import org.rungtone.condition.ResamplerKind;
 import org.rungtone.quantize.Dither;
 import org.rungtone.quantize.ErrorFilter;
 
@@ -27,7 +27,8 @@ class SurveyRequestTest {
 
     private static ConditioningSettings conditions(OptionalDouble gain, double fadeIn, String resampler) {
         return new ConditioningSettings(OptionalDouble.empty(), false, OptionalDouble.of(-50), gain,
-                gain.isPresent() ? OptionalDouble.empty() : OptionalDouble.of(-3), fadeIn, 0.05, ResamplerKind.parse(resampler));
+                gain.isPresent() ? OptionalDouble.empty() : OptionalDouble.of(-3), fadeIn, 0.05,
+                ResamplerKind.parse(resampler));
     }
 
     private static SurveyRequest withChannel(int channel) {

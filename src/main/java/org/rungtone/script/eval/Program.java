@@ -4,8 +4,8 @@ import java.util.Map;
 import java.util.OptionalDouble;
 import org.rungtone.internal.Units;
 import org.rungtone.script.ast.Expr;
-import org.rungtone.script.ast.ScriptProblem;
 import org.rungtone.script.ast.Script;
+import org.rungtone.script.ast.ScriptProblem;
 import org.rungtone.script.ast.Stmt;
 
 /**

@@ -1,23 +1,27 @@
-package org.rungtone.cli;
+package org.rungtone.project;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
 import java.util.List;
 import org.junit.jupiter.api.Test;
-import org.rungtone.cli.SurveyLists.BitList;
-import org.rungtone.cli.SurveyLists.RateList;
 import org.rungtone.internal.Setting;
 import org.rungtone.internal.SettingError;
-import picocli.CommandLine.TypeConversionException;
+import org.rungtone.project.SurveyLists.BitList;
+import org.rungtone.project.SurveyLists.RateList;
 
 class SurveyListsTest {
+    /** The option of a survey setting, as the command line names it. */
+    private static String option(Setting s) {
+        return "--" + s.key().replace("survey.", "").replace('_', '-');
+    }
+
     private static List<Integer> bits(String text) {
-        return new BitList.Parser().convert(text).expand();
+        return BitList.parse(text).expand();
     }
 
     private static List<Double> rates(String text) {
-        return new RateList.Parser().convert(text).checked();
+        return RateList.parse(text).checked();
     }
 
     @Test
@@ -28,23 +32,24 @@ class SurveyListsTest {
     }
 
     @Test
-    void malformedBitListsAreUsageErrors() {
-        assertEquals("'4..x' is not a bit depth or a range like 4..10 (e.g. --bits-list 1..12 or 4,6,8)",
-                assertThrows(TypeConversionException.class, () -> bits("4..x")).getMessage());
+    void malformedBitListsAreRefusedAsSuch() {
+        assertEquals("'4..x' is not a bit depth or a range like 4..10 (e.g. 1..12 or 4,6,8)",
+                assertThrows(IllegalArgumentException.class, () -> bits("4..x")).getMessage());
         assertEquals("the range '8..4' runs backwards; write 4..8",
-                assertThrows(TypeConversionException.class, () -> bits("8..4")).getMessage());
+                assertThrows(IllegalArgumentException.class, () -> bits("8..4")).getMessage());
         assertEquals("'2..3..4' is not a bit depth or a range like 4..10",
-                assertThrows(TypeConversionException.class, () -> bits("2..3..4")).getMessage());
+                assertThrows(IllegalArgumentException.class, () -> bits("2..3..4")).getMessage());
     }
 
     @Test
     void bitListErrorsNameTheSetting() {
         SettingError range = assertThrows(SettingError.class, () -> bits("0,4"));
         assertEquals(Setting.SURVEY_BITS, range.setting());
-        assertEquals("--bits-list 0,4: bit depth must be 1..16: 0", range.render(OptionNames::of));
+        assertEquals("--bits-list 0,4: bit depth must be 1..16: 0", range.render(SurveyListsTest::option));
         assertEquals("survey.bits_list 0,4: bit depth must be 1..16: 0", range.getMessage());
         SettingError twice = assertThrows(SettingError.class, () -> bits("4..6,6"));
-        assertEquals("--bits-list 4..6,6: 6 appears twice; give each depth once", twice.render(OptionNames::of));
+        assertEquals("--bits-list 4..6,6: 6 appears twice; give each depth once",
+                twice.render(SurveyListsTest::option));
     }
 
     @Test
@@ -56,9 +61,10 @@ class SurveyListsTest {
     void rateListErrorsNameTheSetting() {
         SettingError range = assertThrows(SettingError.class, () -> rates("500k"));
         assertEquals(Setting.SURVEY_RATES, range.setting());
-        assertEquals("--rates 500k: a sample rate must be 1 Hz..384 kHz: 500kHz", range.render(OptionNames::of));
+        assertEquals("--rates 500k: a sample rate must be 1 Hz..384 kHz: 500kHz",
+                range.render(SurveyListsTest::option));
         SettingError twice = assertThrows(SettingError.class, () -> rates("8k,8000"));
-        assertEquals("--rates 8k,8000: 8kHz appears twice; give each rate once", twice.render(OptionNames::of));
-        assertThrows(TypeConversionException.class, () -> rates("8k,5V"));
+        assertEquals("--rates 8k,8000: 8kHz appears twice; give each rate once", twice.render(SurveyListsTest::option));
+        assertThrows(IllegalArgumentException.class, () -> rates("8k,5V"));
     }
 }
