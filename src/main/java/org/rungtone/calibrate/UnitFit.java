@@ -5,6 +5,7 @@ import java.time.LocalDate;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import org.rungtone.internal.FileNames;
 import org.rungtone.internal.InputError;
 import org.rungtone.ladder.LadderSpec;
 
@@ -61,18 +62,11 @@ public final class UnitFit {
                 ladder.map(s -> s.buffer().outMinVolts()).orElse(Double.NaN),
                 ladder.map(s -> s.buffer().outMaxVolts()).orElse(Double.NaN));
         FitReport fit = BoardFit.fit(m, settings);
-        String board = r.board().map(String::trim).orElseGet(() -> stem(r.measurements()));
+        String board = r.board().map(String::trim).orElseGet(() -> FileNames.stem(r.measurements(), "board"));
         if (board.isEmpty()) {
             throw new InputError("--board: the name is empty");
         }
         UnitProfile profile = UnitProfile.of(fit, board, r.date(), ladder.map(LadderSpec::describe).orElse(""));
         return new Result(r, fit, profile);
-    }
-
-    /** The file name without its extension. */
-    static String stem(Path p) {
-        String f = p.getFileName() == null ? "board" : p.getFileName().toString();
-        int dot = f.lastIndexOf('.');
-        return dot > 0 ? f.substring(0, dot) : f;
     }
 }

@@ -1,6 +1,5 @@
 package org.rungtone.cli;
 
-import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.Optional;
@@ -9,6 +8,7 @@ import java.util.OptionalInt;
 import java.util.concurrent.Callable;
 import org.rungtone.calibrate.OutputSpan;
 import org.rungtone.firmware.CNames;
+import org.rungtone.internal.FileNames;
 import org.rungtone.internal.InputError;
 import org.rungtone.project.Boards;
 import org.rungtone.project.Build;
@@ -146,16 +146,10 @@ public final class BuildCommand implements Callable<Integer> {
         } finally {
             line.clear();
         }
-        PrintWriter out = spec.commandLine().getOut();
-        if (json) {
-            out.print(Json.toJson(BuildReport.json(summary)));
-        } else if (!common.quiet) {
-            out.print(BuildReport.text(summary));
-        }
+        common.print(spec, json, () -> Json.toJson(BuildReport.json(summary)), () -> BuildReport.text(summary));
         if (common.verbose) {
             spec.commandLine().getErr().println(BuildReport.timings(summary));
         }
-        out.flush();
         return 0;
     }
 
@@ -195,19 +189,13 @@ public final class BuildCommand implements Callable<Integer> {
         } finally {
             line.clear();
         }
-        PrintWriter w = spec.commandLine().getOut();
         ProjectReport.Input in = r.report();
-        if (json) {
-            w.print(Json.toJson(ProjectReport.json(in)));
-        } else if (!common.quiet) {
-            w.print(ProjectReport.text(in));
-        }
-        w.flush();
+        common.print(spec, json, () -> Json.toJson(ProjectReport.json(in)), () -> ProjectReport.text(in));
         return 0;
     }
 
     BuildPlan plan(Boards.Board board) {
-        String symbol = CNames.symbol(name != null ? name : stem(source));
+        String symbol = CNames.symbol(name != null ? name : FileNames.stem(source, "sound"));
         BuildPlan.Builder plan = BuildPlan.builder(source, symbol, out != null ? out : Path.of("rungtone-out", symbol))
                 .channel(channel).bits(bits != null ? bits : board.bits())
                 .rateHz(rateHz == null ? OptionalDouble.empty() : OptionalDouble.of(rateHz)).dither(dither)
@@ -219,11 +207,5 @@ public final class BuildCommand implements Callable<Integer> {
                 .preview(preview.filter(), preview.previewRateHz).previewSeconds(preview.previewSeconds());
         board.levels().ifPresent(levels -> plan.board(levels, compensation));
         return plan.build();
-    }
-
-    static String stem(Path p) {
-        String f = p.getFileName() == null ? "sound" : p.getFileName().toString();
-        int dot = f.lastIndexOf('.');
-        return dot > 0 ? f.substring(0, dot) : f;
     }
 }

@@ -1,6 +1,5 @@
 package org.rungtone.cli;
 
-import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.time.format.DateTimeParseException;
@@ -87,13 +86,7 @@ public final class CalibrateFitCommand implements Callable<Integer> {
             files = CalibrationFiles.writeProfile(r, out);
             folder.commit();
         }
-        PrintWriter o = spec.commandLine().getOut();
-        if (json) {
-            o.print(Json.toJson(UnitFitReport.json(r, files)));
-        } else if (!common.quiet) {
-            o.print(UnitFitReport.text(r, files));
-        }
-        o.flush();
+        common.print(spec, json, () -> Json.toJson(UnitFitReport.json(r, files)), () -> UnitFitReport.text(r, files));
         return 0;
     }
 

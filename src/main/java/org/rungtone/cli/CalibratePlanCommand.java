@@ -1,6 +1,5 @@
 package org.rungtone.cli;
 
-import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
@@ -90,13 +89,8 @@ public final class CalibratePlanCommand implements Callable<Integer> {
             files = CalibrationFiles.writePlan(plan, out);
             folder.commit();
         }
-        PrintWriter o = spec.commandLine().getOut();
-        if (json) {
-            o.print(Json.toJson(CalibrationReport.planJson(plan, files)));
-        } else if (!common.quiet) {
-            o.print(CalibrationReport.planText(plan, files));
-        }
-        o.flush();
+        common.print(spec, json, () -> Json.toJson(CalibrationReport.planJson(plan, files)),
+                () -> CalibrationReport.planText(plan, files));
         return 0;
     }
 

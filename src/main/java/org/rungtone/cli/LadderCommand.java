@@ -123,13 +123,8 @@ public final class LadderCommand implements Callable<Integer> {
             files = LadderFiles.write(out, study);
             folder.commit();
         }
-        PrintWriter o = spec.commandLine().getOut();
-        if (json) {
-            o.print(LadderReport.json(study, files));
-        } else if (!common.quiet) {
-            o.print(LadderReport.text(study, allLevels, files));
-        }
-        o.flush();
+        common.print(spec, json, () -> LadderReport.json(study, files),
+                () -> LadderReport.text(study, allLevels, files));
         return 0;
     }
 

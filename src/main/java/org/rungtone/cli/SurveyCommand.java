@@ -1,6 +1,5 @@
 package org.rungtone.cli;
 
-import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Optional;
 import java.util.OptionalLong;
@@ -8,6 +7,7 @@ import java.util.concurrent.Callable;
 import org.rungtone.analysis.ReconstructionFilter;
 import org.rungtone.analysis.SurveyTarget;
 import org.rungtone.firmware.CNames;
+import org.rungtone.internal.FileNames;
 import org.rungtone.internal.Setting;
 import org.rungtone.internal.SettingError;
 import org.rungtone.project.Boards;
@@ -121,7 +121,7 @@ public final class SurveyCommand implements Callable<Integer> {
         SurveyRequest.Cells cells = new SurveyRequest.Cells(bitList.expand(), rateList.checked(), dither, shaping,
                 seed);
         Path folder = out != null ? out
-                : Path.of("rungtone-out", "survey-" + CNames.symbol(BuildCommand.stem(source)));
+                : Path.of("rungtone-out", "survey-" + CNames.symbol(FileNames.stem(source, "sound")));
         SurveyRequest request = new SurveyRequest(source, channel, cells, conditioning.settings(),
                 Boards.perDepth(unit.path(), ladder, BuildPlan.DEFAULT_FULL_SCALE_VOLTS),
                 new SurveyRequest.Choice(flashBudget == null ? OptionalLong.empty()
@@ -134,13 +134,7 @@ public final class SurveyCommand implements Callable<Integer> {
         } finally {
             line.clear();
         }
-        PrintWriter stdout = spec.commandLine().getOut();
-        if (json) {
-            stdout.print(result.json());
-        } else if (!common.quiet) {
-            stdout.print(result.text());
-        }
-        stdout.flush();
+        common.print(spec, json, () -> result.json(), () -> result.text());
         if (common.verbose) {
             spec.commandLine().getErr().println(SurveyReport.timings(result.stageMillis()));
             spec.commandLine().getErr().flush();

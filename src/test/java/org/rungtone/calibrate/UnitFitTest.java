@@ -62,8 +62,8 @@ class UnitFitTest {
 
     @Test
     void stemDropsOnlyTheLastExtension() {
-        assertEquals("board.v2", UnitFit.stem(Path.of("cal", "board.v2.csv")));
-        assertEquals(".csv", UnitFit.stem(Path.of(".csv")));
-        assertEquals("readings", UnitFit.stem(Path.of("readings")));
+        assertEquals("board.v2", org.rungtone.internal.FileNames.stem(Path.of("cal", "board.v2.csv"), "board"));
+        assertEquals(".csv", org.rungtone.internal.FileNames.stem(Path.of(".csv"), "board"));
+        assertEquals("readings", org.rungtone.internal.FileNames.stem(Path.of("readings"), "board"));
     }
 }
