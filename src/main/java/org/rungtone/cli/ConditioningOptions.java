@@ -3,6 +3,7 @@ package org.rungtone.cli;
 import java.util.OptionalDouble;
 import org.rungtone.condition.ResamplerKind;
 import org.rungtone.project.ConditioningSettings;
+import org.rungtone.project.Defaults;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Option;
 
@@ -12,7 +13,6 @@ import picocli.CommandLine.Option;
  */
 public final class ConditioningOptions {
     /** Peak level when neither --gain nor --normalize is given, in dBFS. */
-    static final double DEFAULT_NORMALIZE_DBFS = -1.0;
 
     @ArgGroup(exclusive = true)
     Level level;
@@ -64,7 +64,7 @@ public final class ConditioningOptions {
             return OptionalDouble.empty();
         }
         return OptionalDouble.of(level != null && level.normalizeDbfs != null ? level.normalizeDbfs
-                : DEFAULT_NORMALIZE_DBFS);
+                : Defaults.NORMALIZE_DBFS);
     }
 
     /** The --trim threshold, if given. */

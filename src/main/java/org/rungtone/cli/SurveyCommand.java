@@ -12,6 +12,7 @@ import org.rungtone.internal.Setting;
 import org.rungtone.internal.SettingError;
 import org.rungtone.project.Boards;
 import org.rungtone.project.BuildPlan;
+import org.rungtone.project.Defaults;
 import org.rungtone.project.SurveyLists;
 import org.rungtone.project.SurveyRequest;
 import org.rungtone.project.SurveyRun;
@@ -123,7 +124,7 @@ public final class SurveyCommand implements Callable<Integer> {
         Path folder = out != null ? out
                 : Path.of("rungtone-out", "survey-" + CNames.symbol(FileNames.stem(source, "sound")));
         SurveyRequest request = new SurveyRequest(source, channel, cells, conditioning.settings(),
-                Boards.perDepth(unit.path(), ladder, BuildPlan.DEFAULT_FULL_SCALE_VOLTS),
+                Boards.perDepth(unit.path(), ladder, Defaults.FULL_SCALE_VOLTS),
                 new SurveyRequest.Choice(flashBudget == null ? OptionalLong.empty()
                         : OptionalLong.of(flashBudget), target(), packed), filter,
                 new SurveyRequest.Output(folder, previews, Version.get()));

@@ -15,7 +15,7 @@ import org.rungtone.quantize.ErrorFilter;
 
 /**
  * Everything one build of one sound needs, validated once, up front, in five parts. Immutable; made by
- * {@link #builder}, which holds every default in one place.
+ * {@link #builder}, which starts from {@link Defaults}.
  *
  * @param symbol the C symbol prefix (already sanitized)
  * @param outDir where the outputs go
@@ -27,15 +27,6 @@ import org.rungtone.quantize.ErrorFilter;
  */
 public record BuildPlan(String symbol, Path outDir, SourceSettings source, ConditioningSettings conditioning,
         QuantizeSettings quantize, PreviewSettings preview, FirmwareSettings firmware) {
-
-    /** Longest preview by default: a minute is plenty to listen to; longer sounds are measured whole. */
-    public static final double DEFAULT_PREVIEW_SECONDS = 60;
-
-    /** Default sample rate when neither the user nor a script names one. */
-    public static final double DEFAULT_RATE_HZ = 16_000;
-
-    /** Reference voltage of the ideal ladder when none is given. */
-    public static final double DEFAULT_FULL_SCALE_VOLTS = 5.0;
 
     /** Checks that every part is there. */
     public BuildPlan {
@@ -73,15 +64,15 @@ public record BuildPlan(String symbol, Path outDir, SourceSettings source, Condi
         private double fadeOutSeconds;
         private ResamplerKind resampler = ResamplerKind.KAISER;
         private int bits = LadderSpec.DEFAULT_BITS;
-        private Dither dither = Dither.TPDF;
-        private ErrorFilter shaping = ErrorFilter.NONE;
-        private long seed = 1;
+        private Dither dither = Defaults.DITHER;
+        private ErrorFilter shaping = Defaults.SHAPING;
+        private long seed = Defaults.SEED;
         private Optional<LevelTable> board = Optional.empty();
-        private Compensation compensation = Compensation.ON;
-        private ReconstructionFilter filter = ReconstructionFilter.none();
-        private double previewRateHz = 44_100;
-        private double previewSeconds = DEFAULT_PREVIEW_SECONDS;
-        private double fullScaleVolts = DEFAULT_FULL_SCALE_VOLTS;
+        private Compensation compensation = Defaults.COMPENSATION;
+        private ReconstructionFilter filter = Defaults.filter();
+        private double previewRateHz = Defaults.PREVIEW_RATE_HZ;
+        private double previewSeconds = Defaults.PREVIEW_SECONDS;
+        private double fullScaleVolts = Defaults.FULL_SCALE_VOLTS;
         private Optional<FirmwareRequest> player = Optional.empty();
         private Optional<LoopSpan> loop = Optional.empty();
         private long flashBudgetBytes;

@@ -219,13 +219,13 @@ public final class ProjectBuild {
         int bits = fixedBits != 0 ? fixedBits : board.map(LevelTable::bits).orElse(LadderSpec.DEFAULT_BITS);
         settings.put("bits", bits + (fixedBits == 0 && board.isPresent() ? "  (board)"
                 : origin(o.bits().isPresent(), q.bits().isPresent())));
-        Dither dither = o.dither().or(q::dither).orElse(Dither.TPDF);
+        Dither dither = o.dither().or(q::dither).orElse(Defaults.DITHER);
         settings.put("dither", dither.label() + origin(o.dither().isPresent(), q.dither().isPresent()));
-        ErrorFilter shaping = o.shaping().or(q::shaping).orElse(ErrorFilter.NONE);
+        ErrorFilter shaping = o.shaping().or(q::shaping).orElse(Defaults.SHAPING);
         settings.put("shaping", shaping.name() + origin(o.shaping().isPresent(), q.shaping().isPresent()));
-        long seed = o.seed().or(project::seed).orElse(1L);
+        long seed = o.seed().or(project::seed).orElse(Defaults.SEED);
         settings.put("seed", seed + origin(o.seed().isPresent(), project.seed().isPresent()));
-        Compensation compensation = o.compensation().or(project::compensation).orElse(Compensation.ON);
+        Compensation compensation = o.compensation().or(project::compensation).orElse(Defaults.COMPENSATION);
         settings.put("levels", board.map(LevelTable::origin).orElse("ideal ladder"));
         if (board.isPresent() && span != OutputSpan.FULL) {
             settings.put("span", span.key());
@@ -250,11 +250,11 @@ public final class ProjectBuild {
                 .dither(shared.dither()).shaping(shared.shaping()).seed(shared.seed())
                 .removeDc(!s.keepDc().orElse(false)).trimDbfs(s.trimDbfs()).gainDb(s.gainDb())
                 .normalizeDbfs(s.gainDb().isPresent() ? OptionalDouble.empty()
-                        : OptionalDouble.of(s.normalizeDbfs().orElse(-1)))
+                        : OptionalDouble.of(s.normalizeDbfs().orElse(Defaults.NORMALIZE_DBFS)))
                 .fades(s.fadeInSeconds().orElse(0), s.fadeOutSeconds().orElse(0))
                 .resampler(s.resampler().orElse(ResamplerKind.KAISER))
                 .flashQualifier(project.target().flashAttr().orElse(""))
-                .preview(pv.filter().orElse(ReconstructionFilter.none()), pv.rateHz().orElse(44_100))
+                .preview(pv.filter().orElse(Defaults.filter()), pv.rateHz().orElse(Defaults.PREVIEW_RATE_HZ))
                 .loop(s.loop());
         shared.board().ifPresent(levels -> plan.board(levels, shared.compensation()));
         return plan.build();
@@ -330,7 +330,7 @@ public final class ProjectBuild {
         String firstName = null;
         for (Project.Sound s : p.sounds()) {
             double r = s.rateHz().isPresent() ? s.rateHz().getAsDouble()
-                    : projectRate.orElse(BuildPlan.DEFAULT_RATE_HZ);
+                    : projectRate.orElse(Defaults.RATE_HZ);
             if (first == null) {
                 first = r;
                 firstName = s.name();

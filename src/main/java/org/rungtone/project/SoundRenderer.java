@@ -222,7 +222,7 @@ public final class SoundRenderer {
         try (Sources.Opened opened = Sources.open(plan.source().file(), plan.source().channel(),
                 cs.rateHz().orElse(Double.NaN), plan.quantize().seed())) {
             watch.lap("open");
-            double rate = cs.rateHz().orElse(Double.isNaN(opened.preferredRateHz()) ? BuildPlan.DEFAULT_RATE_HZ
+            double rate = cs.rateHz().orElse(Double.isNaN(opened.preferredRateHz()) ? Defaults.RATE_HZ
                     : opened.preferredRateHz());
             Conditioner.Conditioned conditioned;
             if (opened.wavetable()) {
