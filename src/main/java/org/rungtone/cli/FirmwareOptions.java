@@ -2,6 +2,7 @@ package org.rungtone.cli;
 
 import java.nio.file.Path;
 import java.util.Optional;
+import java.util.OptionalLong;
 import org.rungtone.firmware.DdsSpec;
 import org.rungtone.firmware.FirmwareRequest;
 import org.rungtone.firmware.PinStrategy;
@@ -89,9 +90,9 @@ public final class FirmwareOptions {
         return Optional.ofNullable(loop).map(LoopSpan::parse);
     }
 
-    /** The flash budget in bytes, 0 for none. */
-    long flashBudgetBytes() {
-        return flashBudget == null ? 0 : flashBudget;
+    /** The flash budget in bytes, when given. */
+    OptionalLong flashBudgetBytes() {
+        return flashBudget == null ? OptionalLong.empty() : OptionalLong.of(flashBudget);
     }
 
     /** Applies only the options given on the command line to {@code b} (project files: the options win). */

@@ -11,7 +11,6 @@ import org.rungtone.internal.FileNames;
 import org.rungtone.internal.Setting;
 import org.rungtone.internal.SettingError;
 import org.rungtone.project.Boards;
-import org.rungtone.project.BuildPlan;
 import org.rungtone.project.Defaults;
 import org.rungtone.project.SurveyLists;
 import org.rungtone.project.SurveyRequest;

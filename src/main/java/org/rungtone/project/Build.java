@@ -110,10 +110,8 @@ public final class Build {
         BuildSummary summary = summary(r, firmwareLines, flash, files, warnings, laps);
         AtomicFiles.writeString(txt, BuildReport.text(summary));
         Json.write(json, BuildReport.json(summary));
-        long budget = plan.firmware().flashBudgetBytes();
         HtmlReport.write(html, new HtmlReport.Page(plan.symbol(), toolVersion, List.of(), List.of(summary),
-                List.of(), flash, budget > 0 ? OptionalLong.of(budget) : OptionalLong.empty(), List.of(),
-                Optional.empty()));
+                List.of(), flash, plan.firmware().flashBudgetBytes(), List.of(), Optional.empty()));
         return summary;
     }
 
@@ -128,10 +126,10 @@ public final class Build {
     /** Flash bytes of a rendered sound's bare sample array, checked against the budget. */
     private static long checkedArrayBytes(BuildPlan plan, SoundRenderer.Rendered r) {
         long flash = arrayBytes(r);
-        long budget = plan.firmware().flashBudgetBytes();
-        if (budget > 0) {
-            FlashBudget.check(flash, budget, FlashBudget.alternatives(r.emitted().length(), r.rateHz(), plan.bits(),
-                    SampleStorage.UNPACKED, 0));
+        OptionalLong budget = plan.firmware().flashBudgetBytes();
+        if (budget.isPresent()) {
+            FlashBudget.check(flash, budget.getAsLong(), FlashBudget.alternatives(r.emitted().length(), r.rateHz(),
+                    plan.bits(), SampleStorage.UNPACKED, 0));
         }
         return flash;
     }

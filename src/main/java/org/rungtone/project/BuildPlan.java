@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import java.util.OptionalLong;
 import org.rungtone.analysis.ReconstructionFilter;
 import org.rungtone.condition.ResamplerKind;
 import org.rungtone.firmware.FirmwareRequest;
@@ -75,7 +76,7 @@ public record BuildPlan(String symbol, Path outDir, SourceSettings source, Condi
         private double fullScaleVolts = Defaults.FULL_SCALE_VOLTS;
         private Optional<FirmwareRequest> player = Optional.empty();
         private Optional<LoopSpan> loop = Optional.empty();
-        private long flashBudgetBytes;
+        private OptionalLong flashBudgetBytes = OptionalLong.empty();
         private String flashQualifier = "";
 
         private Builder(Path source, String symbol, Path outDir) {
@@ -195,8 +196,8 @@ public record BuildPlan(String symbol, Path outDir, SourceSettings source, Condi
             return this;
         }
 
-        /** Flash budget in bytes, 0 (the default) for none. */
-        public Builder flashBudgetBytes(long value) {
+        /** Flash budget in bytes (default: no limit). */
+        public Builder flashBudgetBytes(OptionalLong value) {
             flashBudgetBytes = value;
             return this;
         }

@@ -1,6 +1,7 @@
 package org.rungtone.project;
 
 import java.util.Optional;
+import java.util.OptionalLong;
 import org.rungtone.firmware.FirmwareRequest;
 import org.rungtone.internal.Setting;
 
@@ -9,13 +10,13 @@ import org.rungtone.internal.Setting;
  *
  * @param player the player to emit (everything but the sounds), or empty for the sample array alone
  * @param loop loop points of a looped sound
- * @param flashBudgetBytes the most flash the samples may take, 0 for no limit
+ * @param flashBudgetBytes the most flash the samples may take, when limited
  * @param flashQualifier attribute that keeps a bare sample array in flash
  */
-public record FirmwareSettings(Optional<FirmwareRequest> player, Optional<LoopSpan> loop, long flashBudgetBytes,
+public record FirmwareSettings(Optional<FirmwareRequest> player, Optional<LoopSpan> loop, OptionalLong flashBudgetBytes,
         String flashQualifier) {
     /** Validates the budget. */
     public FirmwareSettings {
-        Setting.FLASH_BUDGET.check(flashBudgetBytes >= 0, "must be positive: %d", flashBudgetBytes);
+        flashBudgetBytes.ifPresent(b -> Setting.FLASH_BUDGET.check(b > 0, "must be positive: %d", b));
     }
 }

@@ -11,7 +11,6 @@ import java.util.OptionalDouble;
 import java.util.OptionalInt;
 import java.util.OptionalLong;
 import java.util.function.UnaryOperator;
-import org.rungtone.analysis.ReconstructionFilter;
 import org.rungtone.calibrate.OutputSpan;
 import org.rungtone.condition.ResamplerKind;
 import org.rungtone.firmware.CNames;

@@ -20,7 +20,8 @@ class OptionDefaultsTest {
     @Test
     void buildAndSurveyShowTheLibrarysDefaults() {
         for (String command : new String[] {"build", "survey"}) {
-            assertEquals(Defaults.DITHER, Dither.valueOf(defaultOf(command, "--dither").toUpperCase(java.util.Locale.ROOT)), command);
+            String dither = defaultOf(command, "--dither").toUpperCase(java.util.Locale.ROOT);
+            assertEquals(Defaults.DITHER, Dither.valueOf(dither), command);
             assertEquals(Defaults.SHAPING, ErrorFilter.parse(defaultOf(command, "--shaping")), command);
             assertEquals(Defaults.SEED, Long.parseLong(defaultOf(command, "--seed")), command);
         }
