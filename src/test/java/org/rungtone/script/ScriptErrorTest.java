@@ -139,7 +139,11 @@ class ScriptErrorTest {
                 Arguments.of("wavetable 64\nout 1 / (phase - 0.5)", "t.rung:2:7: '/' produced infinity at sample 32 "
                         + "of the cycle; expected a finite value, check the range of its inputs"),
                 Arguments.of("duration 1e308s\nout 1", "t.rung:1:1: the clip is more than 100000000 samples long at "
-                        + "16000 Hz; expected a shorter duration or a lower rate"));
+                        + "16000 Hz; expected a shorter duration or a lower rate"),
+                // a bare gain where mix expects a signal would be a DC offset (a real example's mistake)
+                Arguments.of("duration 1s\nout mix(sine(A4), 0.7, sine(E5), 0.3)", "t.rung:2:19: mix takes signals,"
+                        + " and this input is a plain number that would be added as a DC offset; give an input's"
+                        + " gain as a pair: mix((a, 0.7), (b, 0.3))"));
     }
 
     @ParameterizedTest

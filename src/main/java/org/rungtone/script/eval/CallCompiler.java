@@ -130,6 +130,11 @@ final class CallCompiler {
                     ? arith(pair.pos(), "mix", Arith.Op.MUL, compiler.compile(pair.first(), f),
                             compiler.compile(pair.second(), f))
                     : compiler.compile(e, f);
+            if (!(e instanceof Expr.Pair) && term.isConstant()) {
+                // a bare number here would be added as a constant offset, never a gain of its neighbour
+                throw new ScriptProblem(e.pos(), "mix takes signals, and this input is a plain number that would"
+                        + " be added as a DC offset; give an input's gain as a pair: mix((a, 0.7), (b, 0.3))");
+            }
             acc = acc == null ? term : arith(p, "mix", Arith.Op.ADD, acc, term);
         }
         return acc;
