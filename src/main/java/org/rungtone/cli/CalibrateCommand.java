@@ -79,9 +79,8 @@ public final class CalibrateCommand implements Runnable {
                 description = "Readings per code (default ${DEFAULT-VALUE}).")
         int repeat;
 
-        @Option(names = "--out", paramLabel = "DIR", defaultValue = "rungtone-out/calibration",
-                description = "Output folder (default ${DEFAULT-VALUE}).")
-        Path out;
+        @Mixin
+        CalibrationFolder output;
 
         @Override
         public Integer call() {
@@ -91,13 +90,13 @@ public final class CalibrateCommand implements Runnable {
                         + resolution);
             }
             SimulatedBoard.Meter meter = new SimulatedBoard.Meter(noise, resolution, repeat);
-            AtomicFiles.checkFolderUsable(out);
+            AtomicFiles.checkFolderUsable(output.out);
             LadderSpec ladder = codes.spec();
             BoardSimulation.Result r = BoardSimulation.run(new BoardSimulation.Request(ladder, codes.choice(),
                     meter, seed));
             List<Path> files;
-            try (OutputFolder folder = OutputFolder.open(out, "simulate")) {
-                files = CalibrationFiles.writeSimulation(r, out);
+            try (OutputFolder folder = OutputFolder.open(output.out, "simulate")) {
+                files = CalibrationFiles.writeSimulation(r, output.out);
                 folder.commit();
             }
             PrintWriter o = spec.commandLine().getOut();

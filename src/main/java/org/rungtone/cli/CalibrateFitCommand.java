@@ -64,9 +64,8 @@ public final class CalibrateFitCommand implements Callable<Integer> {
             description = "The meter's step, e.g. 1mV (default: from the readings' last digits).")
     Double resolution;
 
-    @Option(names = "--out", paramLabel = "DIR", defaultValue = "rungtone-out/calibration",
-            description = "Output folder (default ${DEFAULT-VALUE}).")
-    Path out;
+    @Mixin
+    CalibrationFolder output;
 
     @Option(names = "--json", description = "Print JSON instead of text.")
     boolean json;
@@ -77,13 +76,13 @@ public final class CalibrateFitCommand implements Callable<Integer> {
         if (resolution != null && !(resolution > 0 && resolution < 10)) {
             throw new InputError("--resolution must be a positive voltage below 10 V, e.g. 1mV: " + resolution);
         }
-        AtomicFiles.checkFolderUsable(out);
+        AtomicFiles.checkFolderUsable(output.out);
         Optional<LadderSpec> ladderSpec = ladder.given() ? Optional.of(ladder.spec(bits)) : Optional.empty();
         UnitFit.Result r = UnitFit.run(new UnitFit.Request(measurements, bits, ladderSpec, Optional.ofNullable(board),
                 day, resolution == null ? OptionalDouble.empty() : OptionalDouble.of(resolution)));
         List<Path> files;
-        try (OutputFolder folder = OutputFolder.open(out, "fit")) {
-            files = CalibrationFiles.writeProfile(r, out);
+        try (OutputFolder folder = OutputFolder.open(output.out, "fit")) {
+            files = CalibrationFiles.writeProfile(r, output.out);
             folder.commit();
         }
         common.print(spec, json, () -> Json.toJson(UnitFitReport.json(r, files)), () -> UnitFitReport.text(r, files));

@@ -60,9 +60,8 @@ public final class CalibratePlanCommand implements Callable<Integer> {
             description = "C symbol prefix of the sweep program (default ${DEFAULT-VALUE}).")
     String name;
 
-    @Option(names = "--out", paramLabel = "DIR", defaultValue = "rungtone-out/calibration",
-            description = "Output folder (default ${DEFAULT-VALUE}).")
-    Path out;
+    @Mixin
+    CalibrationFolder output;
 
     @Option(names = "--json", description = "Print JSON instead of text.")
     boolean json;
@@ -78,15 +77,15 @@ public final class CalibratePlanCommand implements Callable<Integer> {
         if (firmware.loop != null || firmware.ddsFrequencyHz != null) {
             throw new InputError("--loop and --dds-frequency do not apply to the sweep program; leave them out");
         }
-        AtomicFiles.checkFolderUsable(out);
+        AtomicFiles.checkFolderUsable(output.out);
         LadderSpec ladderSpec = codes.spec();
         CodeChoice choice = codes.choice();
         CalibrationReport.Plan plan;
         List<Path> files;
-        try (OutputFolder folder = OutputFolder.open(out, "plan")) {
+        try (OutputFolder folder = OutputFolder.open(output.out, "plan")) {
             plan = CalibrationPlan.run(new CalibrationPlan.Request(ladderSpec, choice, sweepTarget(), name,
-                    Version.get(), holdSeconds, Optional.ofNullable(button), out));
-            files = CalibrationFiles.writePlan(plan, out);
+                    Version.get(), holdSeconds, Optional.ofNullable(button), output.out));
+            files = CalibrationFiles.writePlan(plan, output.out);
             folder.commit();
         }
         common.print(spec, json, () -> Json.toJson(CalibrationReport.planJson(plan, files)),

@@ -97,8 +97,13 @@ public final class LadderCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        double limit = pinLimit == null ? Double.POSITIVE_INFINITY : positive("--pin-limit", pinLimit, "A");
-        Spread spread = gaussianSigma == null ? Spread.uniform() : gaussian(gaussianSigma);
+        double limit = pinLimit == null ? Double.POSITIVE_INFINITY
+                : parsed("--pin-limit", () -> Units.parse(pinLimit, "A"));
+        if (pinLimit != null && !(limit > 0 && limit < Double.POSITIVE_INFINITY)) {
+            throw new InputError("--pin-limit: must be a positive value, got " + pinLimit);
+        }
+        Spread spread = gaussianSigma == null ? Spread.uniform()
+                : parsed("--gaussian-sigma", () -> Spread.parseGaussian(gaussianSigma));
         if (boards != null && (boards < 1 || boards > LadderStudy.MAX_BOARDS)) {
             throw new InputError("--monte-carlo: need 1.." + LadderStudy.MAX_BOARDS + " boards, got " + boards);
         }
@@ -128,24 +133,12 @@ public final class LadderCommand implements Callable<Integer> {
         return 0;
     }
 
-    private static Spread gaussian(String sigmaPercent) {
+    /** The value {@code parse} reads, its error prefixed with the option that gave the text. */
+    private static <T> T parsed(String option, java.util.function.Supplier<T> parse) {
         try {
-            return Spread.parseGaussian(sigmaPercent);
-        } catch (InputError e) {
-            throw new InputError("--gaussian-sigma: " + e.getMessage(), e);
-        }
-    }
-
-    private static double positive(String option, String text, String unit) {
-        double v;
-        try {
-            v = Units.parse(text, unit);
+            return parse.get();
         } catch (InputError e) {
             throw new InputError(option + ": " + e.getMessage(), e);
         }
-        if (!(v > 0) || Double.isInfinite(v)) {
-            throw new InputError(option + ": must be a positive value, got " + text);
-        }
-        return v;
     }
 }
