@@ -51,8 +51,8 @@ public final class AnalysisPlots {
         marks.add(new double[] {tone.fundamentalHz(), tone.amplitudeDbfs()});
         for (ToneReport.Harmonic h : tone.harmonics()) {
             double level = tone.amplitudeDbfs() + h.levelDbc();
-            // a harmonic lost in the arithmetic's own floor (e.g. folded onto another one) gets no marker
-            if (level > FLOOR_DB + 20) {
+            // a harmonic lost in the noise or in the arithmetic's own floor gets no marker
+            if (h.standsOut() && level > FLOOR_DB + 20) {
                 marks.add(new double[] {h.frequencyHz(), level});
             }
         }
@@ -63,9 +63,9 @@ public final class AnalysisPlots {
             hy[i] = marks.get(i)[1];
         }
         series.add(new Plots.Series("fundamental and harmonics 2..10", hx, hy, Plots.Style.MARKERS));
-        String title = String.format(Locale.ROOT,
-                "Output spectrum: SINAD %.1f dB, THD %.1f dB, SFDR %.1f dB, ENOB %.2f bits",
-                tone.sinadDb(), tone.thdDb(), tone.sfdrDb(), tone.enobBits());
+        String title = String.format(Locale.ROOT, "Output spectrum: SINAD %.1f dB, THD %s, SFDR %s, %s %.2f bits",
+                tone.sinadDb(), FigureText.thd(tone), FigureText.sfdr(tone), FigureText.ENOB_FULL_SCALE,
+                tone.enobFullScaleBits());
         return new Plots.Chart(title, "frequency (Hz)", "level (dBFS, tone-calibrated)", false, series);
     }
 

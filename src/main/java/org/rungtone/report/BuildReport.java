@@ -51,10 +51,11 @@ public final class BuildReport {
                 g >= 0 ? "wins" : "loses", Math.abs(g))));
         if (s.tone().isPresent()) {
             ToneReport tr = s.tone().get();
-            b.append(String.format(Locale.ROOT, "  single tone at %s: SINAD %.1f dB, SNR %.1f dB, THD %.1f dB,"
-                    + " SFDR %.1f dB, ENOB %.2f bits (IEEE 1241 sine fit and spectrum)%n",
-                    Units.format(tr.fundamentalHz(), "Hz"), tr.sinadDb(), tr.snrDb(), tr.thdDb(), tr.sfdrDb(),
-                    tr.enobBits()));
+            b.append(String.format(Locale.ROOT, "  single tone at %s: SINAD %.1f dB, SNR %.1f dB, THD %s,"
+                    + " SFDR %s, %s %.2f bits, %s %.2f bits (IEEE 1241 sine fit and spectrum)%n",
+                    Units.format(tr.fundamentalHz(), "Hz"), tr.sinadDb(), tr.snrDb(), FigureText.thdExplained(tr),
+                    FigureText.sfdrExplained(tr), FigureText.ENOB_FULL_SCALE, tr.enobFullScaleBits(),
+                    FigureText.ENOB_SIGNAL, tr.enobSignalBits()));
         }
         BuildSummary.PreviewInfo p = s.preview();
         String filter = p.filter().equals("none") ? "no reconstruction filter" : p.filter();
@@ -135,8 +136,11 @@ public final class BuildReport {
             tm.put("sinad_db", t.sinadDb());
             tm.put("snr_db", t.snrDb());
             tm.put("thd_db", t.thdDb());
+            tm.put("thd_below_noise", t.thdBelowNoise());
             tm.put("sfdr_db", t.sfdrDb());
-            tm.put("enob_bits", t.enobBits());
+            tm.put("sfdr_limited_by_noise", t.sfdrLimitedByNoise());
+            tm.put("enob_full_scale_bits", t.enobFullScaleBits());
+            tm.put("enob_signal_bits", t.enobSignalBits());
             m.put("tone", tm);
         });
         Map<String, Object> pm = new LinkedHashMap<>();

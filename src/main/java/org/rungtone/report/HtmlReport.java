@@ -281,16 +281,17 @@ public final class HtmlReport {
                     new Setting("amplitude", f1(t.amplitudeDbfs()) + " dBFS"),
                     new Setting("SINAD (sine fit)", f1(t.sinadDb()) + " dB"),
                     new Setting("SNR", f1(t.snrDb()) + " dB"),
-                    new Setting("THD", f1(t.thdDb()) + " dB"),
-                    new Setting("SFDR", f1(t.sfdrDb()) + " dB"),
-                    new Setting("ENOB", f2(t.enobBits()) + " bits"),
+                    new Setting("THD", FigureText.thdExplained(t)),
+                    new Setting("SFDR", FigureText.sfdrExplained(t)),
+                    new Setting(FigureText.ENOB_FULL_SCALE, f2(t.enobFullScaleBits()) + " bits"),
+                    new Setting(FigureText.ENOB_SIGNAL, f2(t.enobSignalBits()) + " bits"),
                     new Setting("noise floor", f1(t.noiseFloorDbfs()) + " dBFS"))));
             List<Map<String, Object>> harmonics = new ArrayList<>();
             for (ToneReport.Harmonic h : t.harmonics()) {
                 Map<String, Object> hm = new LinkedHashMap<>();
                 hm.put("order", Integer.toString(h.order()));
                 hm.put("frequency", Units.format(h.frequencyHz(), "Hz"));
-                hm.put("level", f1(h.levelDbc()));
+                hm.put("level", FigureText.harmonic(h));
                 harmonics.add(hm);
             }
             m.put("harmonics", harmonics);

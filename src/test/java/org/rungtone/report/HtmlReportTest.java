@@ -49,8 +49,8 @@ class HtmlReportTest {
         List<QualityReport> chimeQuality = List.of(
                 quality("ideal", 6, 0.0), quality("modelled", 6, 4.2), quality("compensated", 6, 1.3));
         ToneReport tone = new ToneReport(16_000, 4096, 1046.5, -0.9, 0.001, 37.6, 5.95, 37.5, 38.2, -44.7,
-                46.3, -38.9, List.of(new ToneReport.Harmonic(2, 2093.0, -52.1),
-                        new ToneReport.Harmonic(3, 3150.0, -47.0)));
+                false, 46.3, false, -38.9, List.of(new ToneReport.Harmonic(2, 2093.0, -52.1, true),
+                        new ToneReport.Harmonic(3, 3150.0, -47.0, true)));
         chime = new BuildSummary("0.1.0", Path.of("sounds/door-chime.wav"), "PCM 16-bit, 2 ch, 44100 Hz, 1.50 s",
                 "door_chime", 6, 16_000, 24_000, 1.5, "tpdf", "none", 1, "mixdown, resample 44.1k -> 16k",
                 "kaiser, 5 dB", "r2r 6-bit, 5% parts, measured profile", 12, chimeQuality, "compensated",
