@@ -51,8 +51,8 @@ public final class AnalysisPlots {
         marks.add(new double[] {tone.fundamentalHz(), tone.amplitudeDbfs()});
         for (ToneReport.Harmonic h : tone.harmonics()) {
             double level = tone.amplitudeDbfs() + h.levelDbc();
-            // a harmonic lost in the noise or in the arithmetic's own floor gets no marker
-            if (h.standsOut() && level > FLOOR_DB + 20) {
+            // a harmonic lost in the arithmetic's own floor (e.g. folded onto another one) gets no marker
+            if (level > FLOOR_DB + 20) {
                 marks.add(new double[] {h.frequencyHz(), level});
             }
         }

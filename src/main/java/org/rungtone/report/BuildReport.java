@@ -34,16 +34,24 @@ public final class BuildReport {
         t.row("C files hold", s.emittedCase());
         t.row("clipped samples", s.clippedSamples() + (s.samples() > 0 ? String.format(Locale.ROOT,
                 "  (%.3f %%)", 100.0 * s.clippedSamples() / s.samples()) : ""));
+        s.emitted().codeUse().ifPresent(u -> {
+            t.row("end codes", FigureText.endCodes(u, "  "));
+            if (u.shaped()) {
+                t.row("shaping headroom", FigureText.headroom(u));
+            }
+        });
         t.row("flash", String.format(Locale.ROOT, "%,d bytes of samples", s.flashBytes()));
         b.append(t.render("  "));
 
-        b.append("\nQuality (output against the conditioned source, gain and offset aligned):\n");
+        b.append("\nQuality, quantization only (the codes' levels against the conditioned source at the target"
+                + " rate, gain and offset aligned):\n");
         QualityReport first = s.quality().get(0);
         TextTable q = new TextTable("case", "SINAD dB",
-                "SNR dB <" + Units.format(first.inBandCutoffHz(), "Hz"), "A-wtd SNR dB", "ENOB bits");
+                "SNR dB <" + Units.format(first.inBandCutoffHz(), "Hz"), "A-wtd SNR dB",
+                FigureText.ENOB_FULL_SCALE, FigureText.ENOB_SIGNAL);
         for (QualityReport r : s.quality()) {
             q.row(r.label(), f1(r.sinadDb()), f1(r.inBandSnrDb()), f1(r.aWeightedSnrDb()),
-                    String.format(Locale.ROOT, "%.2f", r.enobBits()));
+                    FigureText.f2(r.enobFullScaleBits()), FigureText.f2(r.enobSignalBits()));
         }
         b.append(q.render("  "));
         s.shapingGainDb().ifPresent(g -> b.append(String.format(Locale.ROOT,
@@ -56,6 +64,17 @@ public final class BuildReport {
                     Units.format(tr.fundamentalHz(), "Hz"), tr.sinadDb(), tr.snrDb(), FigureText.thdExplained(tr),
                     FigureText.sfdrExplained(tr), FigureText.ENOB_FULL_SCALE, tr.enobFullScaleBits(),
                     FigureText.ENOB_SIGNAL, tr.enobSignalBits()));
+        }
+        s.emitted().listener().ifPresent(l -> {
+            b.append(String.format(Locale.ROOT, "%nWhat the listener gets (%s):%n", FigureText.listenerScope(l)));
+            TextTable lt = new TextTable("figure", "dB");
+            lt.row(FigureText.LISTENER_SNR, f1(l.snrDb()));
+            lt.row(FigureText.LISTENER_A_WEIGHTED, f1(l.aWeightedSnrDb()));
+            b.append(lt.render("  "));
+        });
+        b.append("\nDefinitions:\n");
+        for (String line : FigureText.definitions()) {
+            b.append("  ").append(line).append('\n');
         }
         BuildSummary.PreviewInfo p = s.preview();
         String filter = p.filter().equals("none") ? "no reconstruction filter" : p.filter();
@@ -101,9 +120,30 @@ public final class BuildReport {
         m.put("in_band_snr_db", r.inBandSnrDb());
         m.put("in_band_cutoff_hz", r.inBandCutoffHz());
         m.put("a_weighted_snr_db", r.aWeightedSnrDb());
-        m.put("enob_bits", r.enobBits());
+        m.put("enob_full_scale_bits", r.enobFullScaleBits());
+        m.put("enob_signal_bits", r.enobSignalBits());
         m.put("error_rms_dbfs", r.errorRmsDbfs());
         m.put("reference_rms_dbfs", r.referenceRmsDbfs());
+        r.codeUse().ifPresent(u -> {
+            Map<String, Object> um = new LinkedHashMap<>();
+            um.put("end_code_samples", u.endCodeSamples());
+            um.put("end_code_fraction", u.endCodeFraction());
+            um.put("overload_samples", u.overloadSamples());
+            um.put("headroom_gain_db", u.headroomGainDb());
+            um.put("feedback_excursion_lsb", u.feedbackExcursionLsb());
+            m.put("code_use", um);
+        });
+        r.listener().ifPresent(l -> {
+            Map<String, Object> lm = new LinkedHashMap<>();
+            lm.put("snr_db", l.snrDb());
+            lm.put("a_weighted_snr_db", l.aWeightedSnrDb());
+            lm.put("band_low_hz", l.bandLowHz());
+            lm.put("band_top_hz", l.bandTopHz());
+            lm.put("analysis_rate_hz", l.analysisRateHz());
+            lm.put("analysed_s", l.analysedSeconds());
+            lm.put("delay_s", l.delaySeconds());
+            m.put("listener", lm);
+        });
         return m;
     }
 

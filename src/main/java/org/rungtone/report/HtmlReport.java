@@ -193,6 +193,7 @@ public final class HtmlReport {
             m.put("sections", sections);
             m.put("warnings", page.warnings());
             m.put("hasWarnings", !page.warnings().isEmpty());
+            m.put("definitions", FigureText.definitions());
             return m;
         }
 
@@ -209,7 +210,8 @@ public final class HtmlReport {
             QualityReport emitted = s.emitted();
             m.put("emittedCase", s.emittedCase());
             m.put("emittedSinad", f1(emitted.sinadDb()));
-            m.put("emittedEnob", f2(emitted.enobBits()));
+            m.put("emittedEnob", f2(emitted.enobFullScaleBits()));
+            m.put("emittedListener", emitted.listener().map(l -> f1(l.snrDb())).orElse("-"));
             m.put("settings", rows(soundSettings(s)));
             m.put("cutoff", Units.format(s.quality().get(0).inBandCutoffHz(), "Hz"));
             List<Map<String, Object>> quality = new ArrayList<>();
@@ -221,7 +223,8 @@ public final class HtmlReport {
                 q.put("sinad", f1(r.sinadDb()));
                 q.put("inBandSnr", f1(r.inBandSnrDb()));
                 q.put("aWeightedSnr", f1(r.aWeightedSnrDb()));
-                q.put("enob", f2(r.enobBits()));
+                q.put("enob", f2(r.enobFullScaleBits()));
+                q.put("enobSignal", f2(r.enobSignalBits()));
                 quality.add(q);
             }
             m.put("quality", quality);
@@ -229,6 +232,11 @@ public final class HtmlReport {
             m.put("shaping", s.shapingGainDb().map(g -> String.format(Locale.ROOT,
                     "Noise shaping (%s) %s %.1f dB of in-band SNR against flat quantization.", s.shaping(),
                     g >= 0 ? "wins" : "loses", Math.abs(g))).orElse(""));
+            m.put("hasListener", emitted.listener().isPresent());
+            m.put("listener", emitted.listener().map(l -> rows(List.of(
+                    new Setting(FigureText.LISTENER_SNR, f1(l.snrDb()) + " dB"),
+                    new Setting(FigureText.LISTENER_A_WEIGHTED, f1(l.aWeightedSnrDb()) + " dB")))).orElse(List.of()));
+            m.put("listenerScope", emitted.listener().map(FigureText::listenerScope).orElse(""));
             m.put("hasTone", s.tone().isPresent());
             m.put("tone", s.tone().map(Context::tone).orElse(Map.of()));
             m.put("preview", rows(previewRows(s.preview())));
@@ -270,6 +278,12 @@ public final class HtmlReport {
             rows.add(new Setting("C files hold", s.emittedCase()));
             rows.add(new Setting("clipped samples", s.clippedSamples() + (s.samples() > 0 ? String.format(
                     Locale.ROOT, " (%.3f %%)", 100.0 * s.clippedSamples() / s.samples()) : "")));
+            s.emitted().codeUse().ifPresent(u -> {
+                rows.add(new Setting("end codes", FigureText.endCodes(u, " ")));
+                if (u.shaped()) {
+                    rows.add(new Setting("shaping headroom", FigureText.headroom(u)));
+                }
+            });
             rows.add(new Setting("flash", bytes(s.flashBytes()) + " of samples"));
             return rows;
         }
