@@ -13,9 +13,10 @@ import org.rungtone.quantize.Quantizer;
  * @param shaped whether the codes came from an error-feedback (noise-shaping) quantizer
  * @param feedbackExcursionLsb how far the feedback and dither can move the quantizer's input, in average
  *     steps ({@link Quantizer#feedbackExcursionVolts}; 0 without shaping)
+ * @param headroomKept the peak plus that excursion stays clear of overload (always true without shaping)
  */
 public record CodeUse(long samples, long endCodeSamples, long overloadSamples, double headroomGainDb,
-        boolean shaped, double feedbackExcursionLsb) {
+        boolean shaped, double feedbackExcursionLsb, boolean headroomKept) {
     /** Shaping overloads on more than this fraction of the samples are worth a warning. */
     public static final double OVERLOAD_WARNING_FRACTION = 0.001;
 
@@ -23,7 +24,7 @@ public record CodeUse(long samples, long endCodeSamples, long overloadSamples, d
     public static CodeUse of(Quantizer quantizer, Quantizer.Quantized result) {
         return new CodeUse(result.codes().length(), result.endCodeSamples(), result.overloadSamples(),
                 result.headroomGainDb(), quantizer.shaping().order() > 0,
-                quantizer.feedbackExcursionVolts() / quantizer.lsbVolts());
+                quantizer.feedbackExcursionVolts() / quantizer.lsbVolts(), result.headroomKept());
     }
 
     /** Fraction of the codes on the end levels (0 for no codes). */

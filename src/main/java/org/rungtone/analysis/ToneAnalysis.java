@@ -25,8 +25,9 @@ import org.rungtone.source.Signal;
  * {@value NoiseFloor#SPUR_MARGIN_DB} dB ({@link NoiseFloor}): a harmonic (its corrected power) or a lobe of
  * unowned bins (their power less the local noise); {@code SFDR = P1/largest spur}. When no harmonic stands
  * out, THD is reported as an upper limit, the harmonics' largest bins read as tones, and flagged as below
- * the noise; when no spur stands out, SFDR is a lower limit, the largest bin outside DC and the
- * fundamental read as a tone, and flagged as limited by the noise.
+ * the noise. When no spur stands out, or a bin of noise elsewhere reads as a larger tone than the largest
+ * spur (a spur that large could hide there, e.g. in the high-frequency noise of noise shaping), SFDR is a
+ * lower limit, the fundamental over that bin read as a tone, and flagged as limited by the noise.
  *
  * <p>ENOB: {@code (SINAD − 1.76)/6.02} with SINAD from the fit is the ENOB of this signal at its own level
  * (re signal); IEEE Std 1241-2010 defines ENOB for a full-scale sine, so a tone A dB below full scale
@@ -191,35 +192,45 @@ public final class ToneAnalysis {
 
     /**
      * The largest spur that stands out of the noise: a harmonic (its noise-corrected power) or a lobe of
-     * unowned bins around a bin above the margin (its bins less the local noise). With none, the largest bin
-     * outside DC and the fundamental read as a tone: SFDR is then at least that far down.
+     * unowned bins around a bin above the margin (its bins less the local noise). SFDR is measured against
+     * it when it is at least the largest bin elsewhere (outside DC, the fundamental and the spurs) read as a
+     * tone; otherwise a spur as large as that bin could hide in the noise, and SFDR is at least that far down.
      */
     private static Spur largestSpur(Spectrum s, NoiseFloor floor, int[] owner, Distortion d, double fund) {
         int h = s.mainLobeHalfWidthBins();
-        double best = d.largestHarmonic();
-        double loudest = 0;
-        for (int b = 0; b < owner.length; b++) {
-            if (owner[b] == DC || owner[b] == FUNDAMENTAL) {
-                continue;
+        boolean[] spur = new boolean[owner.length];
+        for (ToneReport.Harmonic harmonic : d.harmonics()) {
+            for (int b = 0; b < owner.length && harmonic.standsOut(); b++) {
+                spur[b] |= owner[b] == harmonic.order();
             }
+        }
+        double best = d.largestHarmonic();
+        for (int b = 0; b < owner.length; b++) {
             double p = s.power(b);
-            loudest = Math.max(loudest, p);
-            if (owner[b] == FREE && p * s.enbwBins() > best && floor.standsOut(p, b)) {
+            if (owner[b] == FREE && floor.standsOut(p, b)) {
                 double lobe = 0;
                 int taken = 0;
                 for (int k = Math.max(0, b - h); k <= Math.min(owner.length - 1, b + h); k++) {
                     if (owner[k] == FREE) {
                         lobe += s.power(k);
                         taken++;
+                        spur[k] = true;
                     }
                 }
                 best = Math.max(best, lobe - floor.densityAt(b) * taken);
             }
         }
-        if (best > 0) {
+        double loudest = 0;
+        for (int b = 0; b < owner.length; b++) {
+            if (owner[b] != DC && owner[b] != FUNDAMENTAL && !spur[b]) {
+                loudest = Math.max(loudest, s.power(b));
+            }
+        }
+        double hidden = loudest * s.enbwBins();
+        if (best > 0 && best >= hidden) {
             return new Spur(best, false);
         }
-        return new Spur(Math.max(loudest * s.enbwBins(), fund * Double.MIN_NORMAL), true);
+        return new Spur(Math.max(Math.max(hidden, best), fund * Double.MIN_NORMAL), true);
     }
 
     private static double db(double ratio) {

@@ -21,7 +21,8 @@ import java.util.List;
  * @param thdBelowNoise no harmonic stands out of the noise: {@code thdDb} is the most they can hold unseen
  * @param sfdrDb fundamental over the largest spur that stands out of the noise; a lower limit when
  *     {@code sfdrLimitedByNoise}
- * @param sfdrLimitedByNoise no spur stands out: {@code sfdrDb} is the fundamental over the largest noise peak
+ * @param sfdrLimitedByNoise no spur stands out above the noise's largest peak: {@code sfdrDb} is the
+ *     fundamental over that peak read as a tone
  * @param noiseFloorDbfs total noise power (harmonics and DC excluded) in dBFS
  * @param harmonics the harmonics, order 2 upward
  */

@@ -194,6 +194,7 @@ public final class Quantizer {
         }
         long[] counts = new long[COUNTS];
         double gain = 1;
+        boolean kept = true;
         if (shaping.order() == 0) {
             long[][] perBlock = new long[blocks][];
             java.util.stream.IntStream.range(0, blocks).parallel().forEach(b -> perBlock[b] = quantizeFlat(x,
@@ -204,11 +205,13 @@ public final class Quantizer {
                 }
             }
         } else {
-            gain = headroom == Headroom.SHAPING ? headroomGain(x) : 1;
+            double needed = headroomGain(x);
+            kept = needed > 0 && (needed == 1 || headroom == Headroom.SHAPING);
+            gain = headroom == Headroom.SHAPING && needed > 0 ? needed : 1;
             counts = quantizeShaped(x, gain, out, streams);
         }
         return new Quantized(Codes.wrap(table.bits(), signal.sampleRateHz(), out), counts[CLIPPED],
-                counts[END_CODE], counts[OVERLOAD], 20 * Math.log10(gain));
+                counts[END_CODE], counts[OVERLOAD], 20 * Math.log10(gain), kept);
     }
 
     /** Samples {@code from .. to − 1} without error feedback; returns the counts (clipped, end code, overload). */
@@ -326,7 +329,7 @@ public final class Quantizer {
 
     /**
      * The gain (at most 1) that keeps the signal's peaks, taken at most at full scale, the feedback's
-     * excursion away from the overload points; 1 when they already are, or when no gain could.
+     * excursion away from the overload points; 1 when they already are, 0 when no gain could.
      */
     private double headroomGain(double[] x) {
         double max = 0;
@@ -341,7 +344,7 @@ public final class Quantizer {
         double upRoom = upperOverloadVolts() - excursion - mid;
         double downRoom = mid - excursion - lowerOverloadVolts();
         if (!(upRoom > 0 && downRoom > 0)) {
-            return 1;
+            return 0;
         }
         double gain = 1;
         double up = Math.min(1, max) * half;
@@ -403,9 +406,11 @@ public final class Quantizer {
      * @param overloadSamples samples whose quantizer input lay past an end level by more than half the end
      *     step (the error there exceeds half a step)
      * @param headroomGainDb the gain applied to leave the headroom shaping needs (0 dB when none was)
+     * @param headroomKept the signal's peak plus the feedback's worst-case excursion stays clear of overload
+     *     (always true without shaping; false when no gain could make room, or none was kept)
      */
     public record Quantized(Codes codes, long clippedSamples, long endCodeSamples, long overloadSamples,
-            double headroomGainDb) {
+            double headroomGainDb, boolean headroomKept) {
 
         /** Fraction of the samples on the lowest or highest level (0 for no samples). */
         public double endCodeFraction() {

@@ -130,6 +130,7 @@ public final class BuildReport {
             um.put("end_code_fraction", u.endCodeFraction());
             um.put("overload_samples", u.overloadSamples());
             um.put("headroom_gain_db", u.headroomGainDb());
+            um.put("headroom_kept", u.headroomKept());
             um.put("feedback_excursion_lsb", u.feedbackExcursionLsb());
             m.put("code_use", um);
         });

@@ -29,10 +29,11 @@ final class FigureText {
                     + " ENOB (re signal) uses the sound's own SINAD, lower by its level below full scale",
             "listener SNR: the board's output through the hold and the filter against the source as supplied,"
                     + " 20 Hz to 20 kHz, one gain, delay and phase removed; noise, images and lost treble all count",
-            "THD: harmonics 2-10 less the noise in their bins (IEEE 1241); SFDR: against spurs 13 dB above the"
-                    + " local noise; '<' and '>=' mark limits that the noise sets",
-            "end codes: samples on the lowest or highest level; with noise shaping the signal keeps its peak"
-                    + " the feedback's worst-case excursion, sum|h|*(step/2 + dither peak) + dither peak, inside them");
+            "THD: harmonics 2-10 less the noise in their bins (IEEE 1241); SFDR: against the largest spur 13 dB"
+                    + " above the local noise and above the noise's peaks; '<' and '>=' mark limits the noise sets",
+            "end codes: samples on the lowest or highest level; with noise shaping the signal is scaled, when"
+                    + " needed, so its peak plus the feedback's worst-case excursion, sum|h|*(step/2 + dither peak)"
+                    + " + dither peak, stays within them");
 
     private FigureText() {
     }
@@ -42,7 +43,7 @@ final class FigureText {
         return (t.thdBelowNoise() ? "< " : "") + db(t.thdDb());
     }
 
-    /** SFDR as a value: "50.0 dB", or ">= 58.1 dB" when no spur stands out of the noise. */
+    /** SFDR as a value: "50.0 dB", or ">= 58.1 dB" when no spur rises above the noise's peaks. */
     static String sfdr(ToneReport t) {
         return (t.sfdrLimitedByNoise() ? ">= " : "") + db(t.sfdrDb());
     }
@@ -52,9 +53,9 @@ final class FigureText {
         return thd(t) + (t.thdBelowNoise() ? " (below the noise: no harmonic stands out)" : "");
     }
 
-    /** SFDR with what a limit means: "50.0 dB" or ">= 58.1 dB (limited by the noise: no spur stands out)". */
+    /** SFDR with what a limit means: "50.0 dB" or ">= 58.1 dB (limited by the noise: ...)". */
     static String sfdrExplained(ToneReport t) {
-        return sfdr(t) + (t.sfdrLimitedByNoise() ? " (limited by the noise: no spur stands out)" : "");
+        return sfdr(t) + (t.sfdrLimitedByNoise() ? " (limited by the noise: no spur rises above its peaks)" : "");
     }
 
     /** A harmonic's level in dBc: "-47.0", or "< -80.2" when it does not stand out of the noise. */
@@ -76,12 +77,17 @@ final class FigureText {
 
     /** The headroom noise shaping left: how much the signal was scaled, and why. */
     static String headroom(CodeUse u) {
+        String excursion = String.format(Locale.ROOT, "the feedback's worst-case excursion (%.1f LSB)",
+                u.feedbackExcursionLsb());
         if (u.headroomGainDb() < 0) {
-            return String.format(Locale.ROOT, "signal scaled by %.2f dB so its peak plus the feedback's worst-case"
-                    + " excursion (%.1f LSB) stays within the end codes", u.headroomGainDb(), u.feedbackExcursionLsb());
+            return String.format(Locale.ROOT, "signal scaled by %.2f dB so its peak plus %s stays within the end"
+                    + " codes", u.headroomGainDb(), excursion);
         }
-        return String.format(Locale.ROOT, "none applied; the feedback can move the quantizer's input by up to"
-                + " %.1f LSB, and %d samples overloaded", u.feedbackExcursionLsb(), u.overloadSamples());
+        if (u.headroomKept()) {
+            return "none needed: the peak plus " + excursion + " stays within the end codes";
+        }
+        return String.format(Locale.ROOT, "none kept: the peak plus %s can pass the end codes; %d samples"
+                + " overloaded", excursion, u.overloadSamples());
     }
 
     /** Samples on the end codes and their share: "1234 (1.234 %)", with {@code gap} before the bracket. */

@@ -187,4 +187,22 @@ class ToneAnalysisTest {
         assertEquals(9, r.enobSignalBits(), 0.05);
         assertEquals(10, r.enobFullScaleBits(), 0.05);
     }
+
+    @Test
+    void aTinySpurInTheQuietBandOfShapedNoiseDoesNotSetSfdr() {
+        // Second-order shaping leaves almost no noise near DC and much near rate/2 (|1 − z^−1|², Gerzon and
+        // Craven 1989). A −110 dBc spur at 123 Hz stands out of the quiet noise there, but a spur a thousand
+        // times larger could hide in the loud noise higher up: SFDR is a lower limit set by that noise.
+        double rate = 16000;
+        int n = 1 << 16;
+        double[] x = new double[n];
+        for (int i = 0; i < n; i++) {
+            double t = i / rate;
+            x[i] = 0.8 * Math.sin(2 * Math.PI * 523.3 * t) + 0.8 * Math.pow(10, -110 / 20.0) * Math.sin(2 * Math.PI * 123.1 * t);
+        }
+        Signal q = TestSignals.quantized(Signal.wrap(x, rate), 8, Dither.TPDF, ErrorFilter.SECOND_ORDER, 2);
+        ToneReport r = ToneAnalysis.analyze(q);
+        assertTrue(r.sfdrLimitedByNoise());
+        assertTrue(r.sfdrDb() < 80, "SFDR " + r.sfdrDb());
+    }
 }

@@ -2,6 +2,7 @@ package org.rungtone.quantize;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.zip.CRC32;
@@ -70,11 +71,23 @@ class QuantizerHeadroomTest {
         assertTrue(none.overloadFraction() > 0.001, "overload " + none.overloadFraction());
         assertTrue(none.endCodeFraction() > 0.05, "end codes " + none.endCodeFraction());
         assertEquals(0.0, none.headroomGainDb());
+        assertFalse(none.headroomKept());
         Quantizer.Quantized kept = quantizer(t, Dither.TPDF, ErrorFilter.SECOND_ORDER).apply(s);
         assertEquals(0, kept.overloadSamples());
         // 8-bit ideal table: the overload points lie half a step past the end levels, 128 q from the middle;
         // the feedback and dither need 5.5 q of it, so the peak goes to 122.5 q instead of 127.5 q.
         assertEquals(20 * Math.log10(122.5 / 127.5), kept.headroomGainDb(), 1e-9);
+        assertTrue(kept.headroomKept());
+    }
+
+    @Test
+    void tooFewLevelsForTheHeadroomLeaveTheSignalAlone() {
+        // 3 bits, second order, TPDF: the excursion is 5.5 steps, more than the 4 steps from the middle to
+        // an overload point, so no gain can make room; the signal is left as it is and said to be so.
+        LevelTable t = LevelTable.ideal(3, 1.0);
+        Quantizer.Quantized r = quantizer(t, Dither.TPDF, ErrorFilter.SECOND_ORDER).apply(sine(0.5, 437.3, 4096));
+        assertEquals(0.0, r.headroomGainDb());
+        assertFalse(r.headroomKept());
     }
 
     @Test
@@ -92,6 +105,7 @@ class QuantizerHeadroomTest {
                     ErrorFilter.fir(1.5, -0.6)}) {
                     Quantizer.Quantized r = quantizer(t, d, f).apply(square);
                     assertEquals(0, r.overloadSamples(), bits + " bits, " + d + ", " + f);
+                    assertTrue(r.headroomKept(), bits + " bits, " + d + ", " + f);
                     // first order without dither moves the input by at most half a step: no room needed
                     boolean needsRoom = !(d == Dither.NONE && f == ErrorFilter.FIRST_ORDER);
                     assertEquals(needsRoom, r.headroomGainDb() < 0, bits + " bits, " + d + ", " + f);
@@ -109,6 +123,8 @@ class QuantizerHeadroomTest {
         Quantizer.Quantized plain = new Quantizer(t, t.minVolts(), t.maxVolts(), Dither.TPDF,
                 ErrorFilter.SECOND_ORDER, 5, Quantizer.Headroom.NONE).apply(s);
         assertEquals(0.0, kept.headroomGainDb());
+        assertTrue(kept.headroomKept());
+        assertTrue(plain.headroomKept());
         assertArrayEquals(plain.codes().codes(), kept.codes().codes());
     }
 
