@@ -14,10 +14,10 @@ import org.rungtone.source.Signal;
  * figures of {@link AudioMetrics} cannot show: they compare with the source already resampled to the
  * target rate.
  *
- * <p>Method. The source is resampled once to the preview rate (band-limited to 20 kHz, or 0.4536 of a rate below 44.1 kHz),
- * at most its first {@value #MAX_SECONDS} s. For an output: its delay behind the source is the peak of
+ * <p>Method. The source is resampled once to the preview rate (band-limited to 20 kHz, or 0.4536 of a rate
+ * below 44.1 kHz), at most its first {@value #MAX_SECONDS} s. For an output: its delay behind the source is the peak of
  * their cross-correlation (interpolated to a small fraction of a sample), and the source is delayed by it
- * (a Kaiser-windowed sinc, which also band-limits it). Welch's auto and cross spectra ({@link CrossSpectrum})
+ * ({@link FractionalDelay}, exact in the band). Welch's auto and cross spectra ({@link CrossSpectrum})
  * then give per bin k the source's power {@code P_r}, the output's {@code P_o} and their cross spectrum
  * {@code S}. The output is compared with the source at one gain g for all frequencies but its own phase
  * in every bin, so that a filter's phase shift is not an error while its loss of treble is: the error in

@@ -26,14 +26,6 @@ public record SurveyRow(int bits, double rateHz, int samples, double sinadDb, do
         long flashBytesPacked, boolean fits, boolean reachesTarget, boolean chosen, double listenerSnrDb,
         double listenerAWeightedSnrDb) {
 
-    /** A row without listener figures (the survey ran without the source as supplied). */
-    public SurveyRow(int bits, double rateHz, int samples, double sinadDb, double inBandSnrDb,
-            double aWeightedSnrDb, double enobFullScaleBits, long clippedSamples, long flashBytesUnpacked,
-            long flashBytesPacked, boolean fits, boolean reachesTarget, boolean chosen) {
-        this(bits, rateHz, samples, sinadDb, inBandSnrDb, aWeightedSnrDb, enobFullScaleBits, clippedSamples,
-                flashBytesUnpacked, flashBytesPacked, fits, reachesTarget, chosen, Double.NaN, Double.NaN);
-    }
-
     /** Flash bytes unpacked: 1 byte per sample up to 8 bits, 2 above. */
     public static long unpackedBytes(int samples, int bits) {
         return (long) samples * (bits <= 8 ? 1 : 2);

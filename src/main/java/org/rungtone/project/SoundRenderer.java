@@ -140,6 +140,9 @@ public final class SoundRenderer {
         }
         // The preview is independent of the figures: render it on another core meanwhile.
         CompletableFuture<AnalogModel.Preview> previewJob = startPreview(plan, cases, model, rate, warnings);
+        // What the listener gets follows the preview on the same core.
+        CompletableFuture<Optional<ListenerReport>> listenerJob = previewJob.thenApply(p -> prepared.listener()
+                .filter(l -> l.measurable(p.signal().length())).map(l -> l.measure(p.signal())));
         // in-band figures stop where the analog output's passband does (rate/2, or a lower filter cutoff),
         // and at 20 kHz: the one definition the survey uses too
         double cutoff = model.inBandTopHz(rate);
@@ -155,11 +158,11 @@ public final class SoundRenderer {
         AnalogModel.Preview preview = Jobs.join(previewJob);
         watch.lap("preview");
         List<QualityReport> quality = figures.quality();
-        if (prepared.listener().isPresent() && prepared.listener().get().measurable(preview.signal().length())) {
+        Optional<ListenerReport> heard = Jobs.join(listenerJob);
+        if (heard.isPresent()) {
             quality = new ArrayList<>(quality);
             int last = quality.size() - 1;
-            ListenerReport heard = prepared.listener().get().measure(preview.signal());
-            quality.set(last, quality.get(last).withListener(heard));
+            quality.set(last, quality.get(last).withListener(heard.get()));
             watch.lap("listener");
         }
         return new Rendered(plan, prepared.layout(), rate, conditioned, cases.emitted(), cases.played(),

@@ -19,10 +19,31 @@ public final class BuildReport {
         return Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf") : String.format(Locale.ROOT, "%.1f", v);
     }
 
-    /** The text report: settings, quality per ladder case, preview, files, then warnings at the end. */
+    /**
+     * The text report: settings, quality per ladder case (quantization only), what the listener gets, the
+     * definitions of the figures, preview, files, then warnings at the end.
+     */
     public static String text(BuildSummary s) {
         StringBuilder b = new StringBuilder();
         b.append("Rungtone ").append(s.toolVersion()).append(" build report: ").append(s.symbol()).append("\n\n");
+        b.append(settings(s).render("  "));
+        quality(b, s);
+        s.emitted().listener().ifPresent(l -> {
+            b.append(String.format(Locale.ROOT, "%nWhat the listener gets (%s):%n", FigureText.listenerScope(l)));
+            TextTable lt = new TextTable("figure", "dB");
+            lt.row(FigureText.LISTENER_SNR, f1(l.snrDb()));
+            lt.row(FigureText.LISTENER_A_WEIGHTED, f1(l.aWeightedSnrDb()));
+            b.append(lt.render("  "));
+        });
+        b.append("\nDefinitions:\n");
+        for (String line : FigureText.definitions()) {
+            b.append("  ").append(line).append('\n');
+        }
+        rest(b, s);
+        return b.toString();
+    }
+
+    private static TextTable settings(BuildSummary s) {
         TextTable t = new TextTable("setting", "value");
         t.row("source", s.source().getFileName() + "  (" + s.sourceLayout() + ")");
         t.row("conditioning", s.conditioning());
@@ -41,8 +62,10 @@ public final class BuildReport {
             }
         });
         t.row("flash", String.format(Locale.ROOT, "%,d bytes of samples", s.flashBytes()));
-        b.append(t.render("  "));
+        return t;
+    }
 
+    private static void quality(StringBuilder b, BuildSummary s) {
         b.append("\nQuality, quantization only (the codes' levels against the conditioned source at the target"
                 + " rate, gain and offset aligned):\n");
         QualityReport first = s.quality().get(0);
@@ -65,17 +88,10 @@ public final class BuildReport {
                     FigureText.sfdrExplained(tr), FigureText.ENOB_FULL_SCALE, tr.enobFullScaleBits(),
                     FigureText.ENOB_SIGNAL, tr.enobSignalBits()));
         }
-        s.emitted().listener().ifPresent(l -> {
-            b.append(String.format(Locale.ROOT, "%nWhat the listener gets (%s):%n", FigureText.listenerScope(l)));
-            TextTable lt = new TextTable("figure", "dB");
-            lt.row(FigureText.LISTENER_SNR, f1(l.snrDb()));
-            lt.row(FigureText.LISTENER_A_WEIGHTED, f1(l.aWeightedSnrDb()));
-            b.append(lt.render("  "));
-        });
-        b.append("\nDefinitions:\n");
-        for (String line : FigureText.definitions()) {
-            b.append("  ").append(line).append('\n');
-        }
+    }
+
+    /** Preview, firmware, files and warnings. */
+    private static void rest(StringBuilder b, BuildSummary s) {
         BuildSummary.PreviewInfo p = s.preview();
         String filter = p.filter().equals("none") ? "no reconstruction filter" : p.filter();
         b.append(String.format(Locale.ROOT, "%nPreview (preview.wav at %s): the board's levels, zero-order hold,"
@@ -102,7 +118,6 @@ public final class BuildReport {
                 b.append("  - ").append(w).append('\n');
             }
         }
-        return b.toString();
     }
 
     /** One line of stage timings, for --verbose: "stage timings: decode 120 ms, condition 80 ms, ...". */

@@ -195,10 +195,11 @@ class ToneAnalysisTest {
         // times larger could hide in the loud noise higher up: SFDR is a lower limit set by that noise.
         double rate = 16000;
         int n = 1 << 16;
+        double spur = 0.8 * Math.pow(10, -110 / 20.0);
         double[] x = new double[n];
         for (int i = 0; i < n; i++) {
             double t = i / rate;
-            x[i] = 0.8 * Math.sin(2 * Math.PI * 523.3 * t) + 0.8 * Math.pow(10, -110 / 20.0) * Math.sin(2 * Math.PI * 123.1 * t);
+            x[i] = 0.8 * Math.sin(2 * Math.PI * 523.3 * t) + spur * Math.sin(2 * Math.PI * 123.1 * t);
         }
         Signal q = TestSignals.quantized(Signal.wrap(x, rate), 8, Dither.TPDF, ErrorFilter.SECOND_ORDER, 2);
         ToneReport r = ToneAnalysis.analyze(q);
