@@ -72,6 +72,19 @@ public final class ListenerMetrics {
         public static Span all(int samples) {
             return new Span(0, samples, 0, 0);
         }
+
+        /**
+         * What conditioning kept of a source of {@code samples} samples at {@code rateHz}: the silence it
+         * trimmed at either end (in seconds, as {@code Conditioner.Conditioned} reports it) left out, and its
+         * fades; empty when nothing is left.
+         */
+        public static java.util.Optional<Span> kept(int samples, double rateHz, double trimmedStartSeconds,
+                double trimmedEndSeconds, double fadeInSeconds, double fadeOutSeconds) {
+            int first = (int) Math.round(trimmedStartSeconds * rateHz);
+            int kept = samples - first - (int) Math.round(trimmedEndSeconds * rateHz);
+            return kept < 2 ? java.util.Optional.empty()
+                    : java.util.Optional.of(new Span(first, kept, fadeInSeconds, fadeOutSeconds));
+        }
     }
 
     /**

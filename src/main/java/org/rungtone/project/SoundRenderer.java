@@ -289,14 +289,12 @@ public final class SoundRenderer {
      */
     private static Optional<ListenerMetrics> listener(org.rungtone.source.SampleSource source,
             Conditioner.Conditioned c, ConditioningSettings cs, AnalogModel model) {
-        double rate = source.sampleRateHz();
-        int first = (int) Math.round(c.trimmedStartSeconds() * rate);
-        int kept = source.length() - first - (int) Math.round(c.trimmedEndSeconds() * rate);
-        if (kept < 2 || c.signal().length() < 2) {
+        if (c.signal().length() < 2) {
             return Optional.empty();
         }
-        ListenerMetrics.Span span = new ListenerMetrics.Span(first, kept, cs.fadeInSeconds(), cs.fadeOutSeconds());
-        return Optional.of(ListenerMetrics.prepare(source, span, model));
+        return ListenerMetrics.Span.kept(source.length(), source.sampleRateHz(), c.trimmedStartSeconds(),
+                c.trimmedEndSeconds(), cs.fadeInSeconds(), cs.fadeOutSeconds())
+                .map(span -> ListenerMetrics.prepare(source, span, model));
     }
 
     private static Quantizer quantizer(LevelTable table, BuildPlan plan) {
