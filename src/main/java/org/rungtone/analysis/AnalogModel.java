@@ -39,7 +39,8 @@ public final class AnalogModel {
     /** Stopband attenuation of the preview resampler in dB. */
     public static final double RESAMPLER_ATTENUATION_DB = 100;
 
-    private static final double PASSBAND_TOP_HZ = 20000;
+    /** Top of the audio band: in-band figures and the preview stop here. */
+    public static final double AUDIO_BAND_TOP_HZ = 20000;
     private static final double[] HOLD_CORRECTION = {1.0 / 24, 11.0 / 12, 1.0 / 24};
     private static final int CORRECTION_TERMS = 6;
     /** Output samples per parallel chunk of the preview. */
@@ -97,6 +98,15 @@ public final class AnalogModel {
         return filter.kind() == ReconstructionFilter.Kind.NONE ? nyquist : Math.min(filter.cutoffHz(), nyquist);
     }
 
+    /**
+     * Top of the in-band figures at code rate fs, the one definition the build and the survey share: the top
+     * of the passband ({@link #passbandTopHz}), but never above the audio band's {@value #AUDIO_BAND_TOP_HZ}
+     * Hz, since nobody hears above it.
+     */
+    public double inBandTopHz(double codeRateHz) {
+        return Math.min(AUDIO_BAND_TOP_HZ, passbandTopHz(codeRateHz));
+    }
+
     /** The hold's droop at the top of the passband, in dB (negative). */
     public double zohDroopDb(double codeRateHz) {
         return zohResponseDb(passbandTopHz(codeRateHz), codeRateHz);
@@ -119,7 +129,7 @@ public final class AnalogModel {
         double high = table.maxVolts();
         Checks.checkArgument(high > low, "the level table spans no voltage: %s .. %s V", low, high);
         double fs = codes.sampleRateHz();
-        double pass = Math.min(PASSBAND_TOP_HZ, 0.4535 * previewRateHz);
+        double pass = Math.min(AUDIO_BAND_TOP_HZ, 0.4535 * previewRateHz);
         double stop = previewRateHz - pass;
         int factor = Math.max(8, (int) Math.floor(2 * stop / fs) + 1);
         double fine = factor * fs;

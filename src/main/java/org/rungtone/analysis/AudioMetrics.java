@@ -1,5 +1,6 @@
 package org.rungtone.analysis;
 
+import java.util.Optional;
 import org.rungtone.internal.Checks;
 import org.rungtone.ladder.LevelTable;
 import org.rungtone.quantize.Codes;
@@ -19,10 +20,15 @@ import org.rungtone.source.Signal;
  * SINAD = {@code P_r/P_e}; in-band SNR = {@code (P_r·φ_r)/(P_e·φ_e)}, where φ is the fraction of a signal's
  * power at or below the cutoff in its Welch spectrum (Hann window, 8192-sample segments, half overlap);
  * A-weighted SNR = {@code P_r/(P_e·α_e)}, α the A-weighted fraction of the error's power (IEC 61672-1; the
- * reference is left unweighted, as for A-weighted noise figures in AES17); ENOB = {@code (10·log10(½/P_e)
- * − 1.76)/6.02}, which measures the error against a full-scale sine and so equals N for an ideal N-bit
- * quantizer whatever the programme's level (the 1.76 and 6.02 of IEEE Std 1241-2010). Power fractions
- * rather than absolute spectral sums keep the in-band figure equal to SINAD when the cutoff is rate/2.
+ * reference is left unweighted, as for A-weighted noise figures in AES17); ENOB re full scale =
+ * {@code (10·log10(½/P_e) − 1.76)/6.02}, which measures the error against a full-scale sine as IEEE Std
+ * 1241-2010 defines ENOB, and so equals N for an ideal N-bit quantizer whatever the programme's level; ENOB
+ * re signal = {@code (SINAD − 1.76)/6.02} holds the same error against the programme itself, lower by the
+ * programme's distance below a full-scale sine in steps of 6.02 dB. Power fractions rather than absolute
+ * spectral sums keep the in-band figure equal to SINAD when the cutoff is rate/2.
+ *
+ * <p>These are quantization-only figures: both signals are at the target rate. What the rate itself loses is
+ * measured by {@link ListenerMetrics}.
  *
  * <p>Immutable and thread-safe: the reference's figures are computed once, in {@link #of}.
  */
@@ -206,7 +212,8 @@ public final class AudioMetrics {
         double errorDbfs = db(pe / 0.5);
         return new Measured(new QualityReport(label, reference.sampleRateHz(), length, inBandCutoffHz,
                 db(pr / 0.5), db(pr / pe), db(pr * referenceInBandFraction / inBandError), db(pr / weightedError),
-                (-errorDbfs - 1.76) / 6.02, errorDbfs, a.gain(), a.offset()), s);
+                (-errorDbfs - 1.76) / 6.02, errorDbfs, a.gain(), a.offset(), Optional.empty(),
+                Optional.empty()), s);
     }
 
     /** Partial sums of one block. */

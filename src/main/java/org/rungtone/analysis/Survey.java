@@ -20,7 +20,10 @@ import org.rungtone.source.Signal;
  * reference at each rate to a {@link SurveyResult}.
  *
  * <p>Each cell quantizes the reference at its rate onto the spec's table for its depth (dither, shaping and
- * seed from the spec) and measures the codes through the same table with {@link AudioMetrics}. Flash bytes
+ * seed from the spec) and measures the codes through the same table with {@link AudioMetrics} (the
+ * quantization-only figures). Given the source as supplied ({@link ListenerMetrics}), each cell's codes are
+ * also rendered through the analog model and measured against it (the listener figures of
+ * {@link SurveyRow}), which shows what each rate loses. Flash bytes
  * are {@code n·(N ≤ 8 ? 1 : 2)} unpacked and {@code ceil(n·N/8)} bit-packed for n samples. The chosen row
  * fits the budget, reaches the target and needs the fewest flash bytes (packed or unpacked, as the spec
  * says); ties go to fewer bits (fewer pins and resistors), then to the lower rate (less CPU). Without a
@@ -69,6 +72,24 @@ public final class Survey {
      * @throws org.rungtone.internal.InputError when a reference is constant
      */
     public static SurveyResult run(SurveySpec spec, DoubleFunction<Signal> referenceAtRate, Progress progress) {
+        return run(spec, referenceAtRate, null, progress);
+    }
+
+    /**
+     * Runs the survey with listener figures for every cell.
+     *
+     * @param spec what to survey
+     * @param referenceAtRate the conditioned reference at a rate (called once per rate, possibly from
+     *     worker threads at the same time)
+     * @param listener the source as supplied, prepared for the listener figures; null for none (the rows'
+     *     listener figures are then NaN)
+     * @param progress told after each cell
+     * @throws IllegalArgumentException when a reference comes back at another rate or a table has another
+     *     bit depth than asked for
+     * @throws org.rungtone.internal.InputError when a reference is constant
+     */
+    public static SurveyResult run(SurveySpec spec, DoubleFunction<Signal> referenceAtRate,
+            ListenerMetrics listener, Progress progress) {
         List<Integer> bitDepths = spec.bitDepths();
         List<Double> rates = spec.ratesHz();
         List<LevelTable> tables = new ArrayList<>();
@@ -101,7 +122,7 @@ public final class Survey {
                     AudioMetrics m = metrics.get(r);
                     LevelTable table = tables.get(b);
                     cellTasks.add(() -> {
-                        SurveyRow row = cell(spec, m, table);
+                        SurveyRow row = cell(spec, m, table, listener);
                         counter.done();
                         return row;
                     });
@@ -128,7 +149,8 @@ public final class Survey {
                 spec.seed()).apply(reference);
     }
 
-    private static SurveyRow cell(SurveySpec spec, AudioMetrics metrics, LevelTable table) {
+    private static SurveyRow cell(SurveySpec spec, AudioMetrics metrics, LevelTable table,
+            ListenerMetrics listener) {
         Signal ref = metrics.reference();
         Quantizer.Quantized quantized = quantize(spec, ref, table);
         QualityReport r = metrics.measure("survey", quantized.codes(), table);
@@ -138,9 +160,18 @@ public final class Survey {
         long packed = SurveyRow.packedBytes(n, bits);
         long counted = spec.packed() ? packed : unpacked;
         boolean fits = spec.flashBudgetBytes().isEmpty() || counted <= spec.flashBudgetBytes().getAsLong();
-        boolean reaches = spec.target().map(t -> t.isMet(r.sinadDb(), r.enobBits())).orElse(false);
+        boolean reaches = spec.target().map(t -> t.isMet(r.sinadDb(), r.enobFullScaleBits())).orElse(false);
+        double listenerSnr = Double.NaN;
+        double listenerWeighted = Double.NaN;
+        if (listener != null && listener.measurable((int) Math.floor(n * listener.model().previewRateHz()
+                / ref.sampleRateHz()))) {
+            ListenerReport heard = listener.measure(quantized.codes(), table);
+            listenerSnr = heard.snrDb();
+            listenerWeighted = heard.aWeightedSnrDb();
+        }
         return new SurveyRow(bits, ref.sampleRateHz(), n, r.sinadDb(), r.inBandSnrDb(), r.aWeightedSnrDb(),
-                r.enobBits(), quantized.clippedSamples(), unpacked, packed, fits, reaches, false);
+                r.enobFullScaleBits(), quantized.clippedSamples(), unpacked, packed, fits, reaches, false,
+                listenerSnr, listenerWeighted);
     }
 
     private static List<SurveyRow> choose(List<SurveyRow> rows, SurveySpec spec) {

@@ -6,10 +6,10 @@ package org.rungtone.analysis;
  * @param bits bit depth N
  * @param rateHz sample rate
  * @param samples number of samples of the clip at this rate
- * @param sinadDb full-band SINAD against the conditioned reference at this rate
- * @param inBandSnrDb SNR up to the survey's in-band cutoff for this rate
- * @param aWeightedSnrDb A-weighted SNR
- * @param enobBits effective bits ({@link AudioMetrics})
+ * @param sinadDb full-band SINAD against the conditioned reference at this rate (quantization only)
+ * @param inBandSnrDb SNR up to the survey's in-band cutoff for this rate (quantization only)
+ * @param aWeightedSnrDb A-weighted SNR (quantization only)
+ * @param enobFullScaleBits ENOB re full scale ({@link AudioMetrics}), the figure an ENOB target applies to
  * @param clippedSamples reference samples beyond full scale
  * @param flashBytesUnpacked samples × (1 byte up to 8 bits, else 2)
  * @param flashBytesPacked ceil(samples × N / 8)
@@ -17,10 +17,14 @@ package org.rungtone.analysis;
  *     budget was given
  * @param reachesTarget the target is met (false when no target was given)
  * @param chosen this is the smallest setting that fits and reaches the target
+ * @param listenerSnrDb listener SNR (20 kHz band) of the cell's reconstructed output against the source as
+ *     supplied ({@link ListenerMetrics}); NaN when the survey ran without the source
+ * @param listenerAWeightedSnrDb listener SNR (A-weighted); NaN when the survey ran without the source
  */
 public record SurveyRow(int bits, double rateHz, int samples, double sinadDb, double inBandSnrDb,
-        double aWeightedSnrDb, double enobBits, long clippedSamples, long flashBytesUnpacked,
-        long flashBytesPacked, boolean fits, boolean reachesTarget, boolean chosen) {
+        double aWeightedSnrDb, double enobFullScaleBits, long clippedSamples, long flashBytesUnpacked,
+        long flashBytesPacked, boolean fits, boolean reachesTarget, boolean chosen, double listenerSnrDb,
+        double listenerAWeightedSnrDb) {
 
     /** Flash bytes unpacked: 1 byte per sample up to 8 bits, 2 above. */
     public static long unpackedBytes(int samples, int bits) {
@@ -32,8 +36,29 @@ public record SurveyRow(int bits, double rateHz, int samples, double sinadDb, do
         return ((long) samples * bits + 7) / 8;
     }
 
+    /**
+     * ENOB re full scale under its former name.
+     *
+     * @deprecated the name does not say what the ENOB is held against; use {@link #enobFullScaleBits}
+     */
+    @Deprecated
+    public double enobBits() {
+        return enobFullScaleBits;
+    }
+
+    /** ENOB re signal: {@code (sinadDb − 1.76)/6.02}, the programme at its own level. */
+    public double enobSignalBits() {
+        return (sinadDb - 1.76) / 6.02;
+    }
+
+    /** True when the listener figures were measured. */
+    public boolean hasListenerFigures() {
+        return !Double.isNaN(listenerSnrDb);
+    }
+
     SurveyRow withChosen(boolean isChosen) {
-        return new SurveyRow(bits, rateHz, samples, sinadDb, inBandSnrDb, aWeightedSnrDb, enobBits,
-                clippedSamples, flashBytesUnpacked, flashBytesPacked, fits, reachesTarget, isChosen);
+        return new SurveyRow(bits, rateHz, samples, sinadDb, inBandSnrDb, aWeightedSnrDb, enobFullScaleBits,
+                clippedSamples, flashBytesUnpacked, flashBytesPacked, fits, reachesTarget, isChosen, listenerSnrDb,
+                listenerAWeightedSnrDb);
     }
 }

@@ -17,7 +17,8 @@ import org.rungtone.quantize.ErrorFilter;
  * (flash budget, packed or unpacked samples). Immutable; build with {@link #builder()}.
  *
  * <p>Defaults: bits 1..12; rates 8, 11.025, 16 and 22.05 kHz; TPDF dither; no shaping; seed 0; ideal
- * tables; in-band cutoff min(rate/2, 20 kHz); no budget; no target; unpacked bytes; one thread per core.
+ * tables; in-band cutoff {@link AnalogModel#inBandTopHz} without a filter, min(rate/2, 20 kHz); no budget;
+ * no target; unpacked bytes; one thread per core.
  */
 public final class SurveySpec {
     private final List<Integer> bitDepths;
@@ -144,7 +145,7 @@ public final class SurveySpec {
         private ErrorFilter shaping = ErrorFilter.NONE;
         private long seed;
         private IntFunction<LevelTable> tables = bits -> LevelTable.ideal(bits, 1.0);
-        private DoubleUnaryOperator inBandCutoffHz = rate -> Math.min(rate / 2, 20000);
+        private DoubleUnaryOperator inBandCutoffHz = rate -> Math.min(rate / 2, AnalogModel.AUDIO_BAND_TOP_HZ);
         private long flashBudgetBytes = -1;
         private SurveyTarget target;
         private boolean packed;

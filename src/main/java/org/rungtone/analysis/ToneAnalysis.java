@@ -16,9 +16,22 @@ import org.rungtone.source.Signal;
  * to the tone's power). The noise density is the mean of the bins nobody owns, and stands in for the noise
  * hidden under the DC and fundamental lobes: the fundamental's power has that share subtracted, and the
  * total noise is density·M/2. A harmonic whose lobe touches DC or the fundamental cannot be separated and
- * is left out. Then {@code SNR = P1/N}, {@code THD = ΣPh/P1}, {@code SINAD_fft = P1/(everything else
- * except DC)} and {@code SFDR = P1/max(largest harmonic, largest unowned bin read as a tone)}. ENOB is
- * {@code (SINAD − 1.76)/6.02} from the fit.
+ * is left out. Then {@code SNR = P1/N}, {@code SINAD_fft = P1/(everything else except DC)}.
+ *
+ * <p>THD and SFDR with noise (dither, noise shaping): the noise in a harmonic's bins is not distortion.
+ * As IEEE Std 1241-2010 does for spectral THD, each harmonic's power is its bins less the local noise in them
+ * (the mean of the unowned bins within 32 main-lobe half-widths, times the number of bins), floored at zero;
+ * {@code THD = ΣPh/P1}. A spur counts for SFDR only when one of its bins stands out of the local noise by
+ * {@value NoiseFloor#SPUR_MARGIN_DB} dB ({@link NoiseFloor}): a harmonic (its corrected power) or a lobe of
+ * unowned bins (their power less the local noise); {@code SFDR = P1/largest spur}. When no harmonic stands
+ * out, THD is reported as an upper limit, the harmonics' largest bins read as tones, and flagged as below
+ * the noise. When no spur stands out, or a bin of noise elsewhere reads as a larger tone than the largest
+ * spur (a spur that large could hide there, e.g. in the high-frequency noise of noise shaping), SFDR is a
+ * lower limit, the fundamental over that bin read as a tone, and flagged as limited by the noise.
+ *
+ * <p>ENOB: {@code (SINAD − 1.76)/6.02} with SINAD from the fit is the ENOB of this signal at its own level
+ * (re signal); IEEE Std 1241-2010 defines ENOB for a full-scale sine, so a tone A dB below full scale
+ * gives {@code (SINAD + A − 1.76)/6.02} re full scale (see {@link ToneReport}).
  *
  * <p>At most the first {@link #MAX_SAMPLES} samples are analysed.
  */
@@ -28,6 +41,8 @@ public final class ToneAnalysis {
     /** Highest harmonic counted in THD. */
     public static final int HIGHEST_HARMONIC = 10;
 
+    /** The local noise is averaged over this many main-lobe half-widths either side. */
+    private static final int LOCAL_NOISE_LOBES = 32;
     private static final int FREE = -1;
     private static final int DC = 0;
     private static final int FUNDAMENTAL = 1;
@@ -83,7 +98,7 @@ public final class ToneAnalysis {
         double f0 = fit.frequencyHz();
         int fundBins = claim(owner, center(s, f0), h, FUNDAMENTAL);
         int dcBins = claim(owner, 0, h, DC);
-        List<double[]> found = new ArrayList<>();
+        List<Component> found = new ArrayList<>();
         for (int k = 2; k <= HIGHEST_HARMONIC; k++) {
             double f = foldedHz(f0, k, s.sampleRateHz());
             int c = center(s, f);
@@ -91,43 +106,131 @@ public final class ToneAnalysis {
                 continue;
             }
             claim(owner, c, h, k);
-            double p = 0;
-            for (int b = Math.max(0, c - h); b <= Math.min(bins - 1, c + h); b++) {
-                if (owner[b] == k) {
-                    p += s.power(b);
-                }
-            }
-            found.add(new double[] {k, f, p});
+            found.add(component(s, owner, k, f, c, h));
         }
+        boolean[] isFree = new boolean[bins];
         double free = 0;
         int freeCount = 0;
         double fundRaw = 0;
-        double maxFree = 0;
         for (int b = 0; b < bins; b++) {
-            if (owner[b] == FREE) {
+            isFree[b] = owner[b] == FREE;
+            if (isFree[b]) {
                 free += s.power(b);
                 freeCount++;
-                maxFree = Math.max(maxFree, s.power(b));
             } else if (owner[b] == FUNDAMENTAL) {
                 fundRaw += s.power(b);
             }
         }
         double density = freeCount > 0 ? free / freeCount : 0;
+        NoiseFloor floor = new NoiseFloor(s, isFree, LOCAL_NOISE_LOBES * h);
         double fund = Math.max(fundRaw - density * fundBins, Double.MIN_NORMAL);
-        double harmonicSum = 0;
-        double maxHarmonic = 0;
-        List<ToneReport.Harmonic> harmonics = new ArrayList<>();
-        for (double[] hk : found) {
-            harmonicSum += hk[2];
-            maxHarmonic = Math.max(maxHarmonic, hk[2]);
-            harmonics.add(new ToneReport.Harmonic((int) hk[0], hk[1], db(hk[2] / fund)));
-        }
+        Distortion d = distortion(s, floor, found, fund);
         double noise = density * (s.fftLength() / 2.0);
-        double noiseAndDistortion = free + harmonicSum + density * (fundBins + dcBins - 0.5);
-        double maxSpur = Math.max(maxHarmonic, maxFree * s.enbwBins());
+        double noiseAndDistortion = free + d.rawHarmonicSum() + density * (fundBins + dcBins - 0.5);
+        Spur spur = largestSpur(s, floor, owner, d, fund);
         return new ToneReport(s.sampleRateHz(), n, f0, db(fit.amplitude() * fit.amplitude()), fit.offset(),
                 fit.sinadDb(), fit.enobBits(), db(fund / noiseAndDistortion), db(fund / noise),
-                db(harmonicSum / fund), db(fund / maxSpur), db(noise), harmonics);
+                db(d.thdPower() / fund), d.belowNoise(), db(fund / spur.power()), spur.limitedByNoise(),
+                db(noise), d.harmonics());
+    }
+
+    /** Harmonic {@code k}'s bins: their raw power, number and largest bin. */
+    private record Component(int order, double frequencyHz, int center, double power, int bins, double peak) {
+    }
+
+    private static Component component(Spectrum s, int[] owner, int k, double f, int c, int h) {
+        double p = 0;
+        int taken = 0;
+        double peak = 0;
+        for (int b = Math.max(0, c - h); b <= Math.min(owner.length - 1, c + h); b++) {
+            if (owner[b] == k) {
+                p += s.power(b);
+                taken++;
+                peak = Math.max(peak, s.power(b));
+            }
+        }
+        return new Component(k, f, c, p, taken, peak);
+    }
+
+    /**
+     * THD's numerator and the harmonics after IEEE Std 1241-2010: each harmonic's bins less the local noise
+     * in them, floored at zero. When no harmonic stands out of the noise, the numerator is instead the most
+     * the harmonics can hold unseen: the sum of each one's largest bin read as a tone.
+     */
+    private record Distortion(double thdPower, boolean belowNoise, double rawHarmonicSum, double largestHarmonic,
+            List<ToneReport.Harmonic> harmonics) {
+    }
+
+    private static Distortion distortion(Spectrum s, NoiseFloor floor, List<Component> found, double fund) {
+        double corrected = 0;
+        double unseen = 0;
+        double raw = 0;
+        double largest = 0;
+        boolean any = false;
+        List<ToneReport.Harmonic> harmonics = new ArrayList<>();
+        for (Component c : found) {
+            double excess = c.power() - floor.densityAt(c.center()) * c.bins();
+            double p = Math.max(0, excess);
+            boolean out = floor.standsOut(c.peak(), c.center());
+            double bound = c.peak() * s.enbwBins();
+            corrected += excess;
+            unseen += bound;
+            raw += c.power();
+            if (out) {
+                any = true;
+                largest = Math.max(largest, p);
+            }
+            harmonics.add(new ToneReport.Harmonic(c.order(), c.frequencyHz(), db((out ? p : bound) / fund), out));
+        }
+        return new Distortion(any ? Math.max(0, corrected) : unseen, !any && !found.isEmpty(), raw, largest,
+                harmonics);
+    }
+
+    /** The spur SFDR is measured against, and whether the noise rather than a spur set it. */
+    private record Spur(double power, boolean limitedByNoise) {
+    }
+
+    /**
+     * The largest spur that stands out of the noise: a harmonic (its noise-corrected power) or a lobe of
+     * unowned bins around a bin above the margin (its bins less the local noise). SFDR is measured against
+     * it when it is at least the largest bin elsewhere (outside DC, the fundamental and the spurs) read as a
+     * tone; otherwise a spur as large as that bin could hide in the noise, and SFDR is at least that far down.
+     */
+    private static Spur largestSpur(Spectrum s, NoiseFloor floor, int[] owner, Distortion d, double fund) {
+        int h = s.mainLobeHalfWidthBins();
+        boolean[] spur = new boolean[owner.length];
+        for (ToneReport.Harmonic harmonic : d.harmonics()) {
+            for (int b = 0; b < owner.length && harmonic.standsOut(); b++) {
+                spur[b] |= owner[b] == harmonic.order();
+            }
+        }
+        double best = d.largestHarmonic();
+        for (int b = 0; b < owner.length; b++) {
+            double p = s.power(b);
+            if (owner[b] == FREE && floor.standsOut(p, b)) {
+                double lobe = 0;
+                int taken = 0;
+                for (int k = Math.max(0, b - h); k <= Math.min(owner.length - 1, b + h); k++) {
+                    if (owner[k] == FREE) {
+                        lobe += s.power(k);
+                        taken++;
+                        spur[k] = true;
+                    }
+                }
+                best = Math.max(best, lobe - floor.densityAt(b) * taken);
+            }
+        }
+        double loudest = 0;
+        for (int b = 0; b < owner.length; b++) {
+            if (owner[b] != DC && owner[b] != FUNDAMENTAL && !spur[b]) {
+                loudest = Math.max(loudest, s.power(b));
+            }
+        }
+        double hidden = loudest * s.enbwBins();
+        if (best > 0 && best >= hidden) {
+            return new Spur(best, false);
+        }
+        return new Spur(Math.max(Math.max(hidden, best), fund * Double.MIN_NORMAL), true);
     }
 
     private static double db(double ratio) {

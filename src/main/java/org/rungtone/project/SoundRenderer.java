@@ -10,6 +10,9 @@ import java.util.concurrent.CompletableFuture;
 import java.util.function.Consumer;
 import org.rungtone.analysis.AnalogModel;
 import org.rungtone.analysis.AudioMetrics;
+import org.rungtone.analysis.CodeUse;
+import org.rungtone.analysis.ListenerMetrics;
+import org.rungtone.analysis.ListenerReport;
 import org.rungtone.analysis.QualityReport;
 import org.rungtone.analysis.SineFit;
 import org.rungtone.analysis.Spectrum;
@@ -35,6 +38,11 @@ import org.rungtone.source.Signal;
  * measured unit profile) two more: "board, plain codes" plays the ideal codes on the board's real levels,
  * and "board, compensated" quantizes onto those real levels. The emitted codes are the compensated ones when
  * compensation is on, else the plain ones; the preview is of the emitted codes on the board.
+ *
+ * <p>Figures: every case gets the quantization-only figures (its codes on its levels against the
+ * conditioned source at the target rate) and how its codes use the range; the emitted case also gets what
+ * the listener hears ({@link ListenerMetrics}): the preview against the source as supplied, read again
+ * from the file (at most its first minute) with the conditioning's trim and fades.
  */
 public final class SoundRenderer {
     /** A reference whose 4-parameter sine fit leaves less than this residual (dB) counts as a single tone. */
@@ -86,9 +94,15 @@ public final class SoundRenderer {
             List<String> warnings, Map<String, Double> stageMillis) {
     }
 
-    /** The codes of every ladder case. */
+    /** The codes of every ladder case and how they use the range. */
     private record Cases(Quantizer.Quantized ideal, LevelTable idealTable, Codes emitted, LevelTable played,
-            long clipped, Optional<Codes> compensated, double[] range) {
+            long clipped, Optional<Codes> compensated, double[] range, CodeUse idealUse,
+            Optional<CodeUse> compensatedUse) {
+
+        /** How the emitted codes use the range. */
+        CodeUse emittedUse() {
+            return compensatedUse.orElse(idealUse);
+        }
     }
 
     /** The figures of every ladder case, emitted case last. */
@@ -102,7 +116,8 @@ public final class SoundRenderer {
      */
     public Rendered render(BuildPlan plan) {
         Stopwatch watch = new Stopwatch(progress);
-        Prepared prepared = prepare(plan, watch);
+        AnalogModel model = new AnalogModel(plan.preview().filter(), plan.preview().rateHz());
+        Prepared prepared = prepare(plan, model, watch);
         double rate = prepared.rateHz();
         Conditioner.Conditioned conditioned = prepared.conditioned();
         Signal reference = conditioned.signal();
@@ -117,11 +132,20 @@ public final class SoundRenderer {
         if (cases.clipped() > 0) {
             warnings.add(cases.clipped() + " samples were beyond full scale and clipped");
         }
-        AnalogModel model = new AnalogModel(plan.preview().filter(), plan.preview().rateHz());
+        CodeUse use = cases.emittedUse();
+        if (use.shapingOverloads()) {
+            warnings.add(String.format(Locale.ROOT, "noise shaping overloaded the quantizer on %.2f %% of the"
+                    + " samples (its input went past the end levels), which adds distortion; lower the level",
+                    100 * use.overloadFraction()));
+        }
         // The preview is independent of the figures: render it on another core meanwhile.
         CompletableFuture<AnalogModel.Preview> previewJob = startPreview(plan, cases, model, rate, warnings);
-        // in-band figures stop where the analog output's passband does: rate/2, or a lower filter cutoff
-        double cutoff = model.passbandTopHz(rate);
+        // What the listener gets follows the preview on the same core.
+        CompletableFuture<Optional<ListenerReport>> listenerJob = previewJob.thenApply(p -> prepared.listener()
+                .filter(l -> l.measurable(p.signal().length())).map(l -> l.measure(p.signal())));
+        // in-band figures stop where the analog output's passband does (rate/2, or a lower filter cutoff),
+        // and at 20 kHz: the one definition the survey uses too
+        double cutoff = model.inBandTopHz(rate);
         Figures figures = measure(plan, reference, cases, cutoff);
         Optional<ToneReport> tone = Optional.empty();
         Optional<Spectrum> toneSpectrum = Optional.empty();
@@ -133,8 +157,16 @@ public final class SoundRenderer {
         watch.lap("analyze");
         AnalogModel.Preview preview = Jobs.join(previewJob);
         watch.lap("preview");
+        List<QualityReport> quality = figures.quality();
+        Optional<ListenerReport> heard = Jobs.join(listenerJob);
+        if (heard.isPresent()) {
+            quality = new ArrayList<>(quality);
+            int last = quality.size() - 1;
+            quality.set(last, quality.get(last).withListener(heard.get()));
+            watch.lap("listener");
+        }
         return new Rendered(plan, prepared.layout(), rate, conditioned, cases.emitted(), cases.played(),
-                figures.quality(), figures.shapingGainDb(), tone, preview, figures.errorSpectrum(), toneSpectrum,
+                quality, figures.shapingGainDb(), tone, preview, figures.errorSpectrum(), toneSpectrum,
                 cutoff, cases.clipped(), settings(plan, prepared.layout(), conditioned, cases.played(), rate,
                         cases.range()), warnings, watch.laps());
     }
@@ -143,20 +175,23 @@ public final class SoundRenderer {
     private Cases quantize(BuildPlan plan, Signal reference) {
         QuantizeSettings q = plan.quantize();
         LevelTable ideal = LevelTable.ideal(plan.bits(), plan.preview().fullScaleVolts());
-        Quantizer.Quantized idealQ = quantizer(ideal, plan).apply(reference);
+        Quantizer idealQuantizer = quantizer(ideal, plan);
+        Quantizer.Quantized idealQ = idealQuantizer.apply(reference);
+        CodeUse idealUse = CodeUse.of(idealQuantizer, idealQ);
         if (q.board().isEmpty()) {
             return new Cases(idealQ, ideal, idealQ.codes(), ideal, idealQ.clippedSamples(), Optional.empty(),
-                    new double[] {ideal.minVolts(), ideal.maxVolts()});
+                    new double[] {ideal.minVolts(), ideal.maxVolts()}, idealUse, Optional.empty());
         }
         LevelTable board = q.board().get();
         if (!q.compensate()) {
             return new Cases(idealQ, ideal, idealQ.codes(), board, idealQ.clippedSamples(), Optional.empty(),
-                    new double[] {board.minVolts(), board.maxVolts()});
+                    new double[] {board.minVolts(), board.maxVolts()}, idealUse, Optional.empty());
         }
         double[] range = span.volts(board, ideal);
-        Quantizer.Quantized c = new Quantizer(board, range[0], range[1], q.dither(), q.shaping(), q.seed())
-                .apply(reference);
-        return new Cases(idealQ, ideal, c.codes(), board, c.clippedSamples(), Optional.of(c.codes()), range);
+        Quantizer compensating = new Quantizer(board, range[0], range[1], q.dither(), q.shaping(), q.seed());
+        Quantizer.Quantized c = compensating.apply(reference);
+        return new Cases(idealQ, ideal, c.codes(), board, c.clippedSamples(), Optional.of(c.codes()), range,
+                idealUse, Optional.of(CodeUse.of(compensating, c)));
     }
 
     /** Starts rendering the preview of the emitted codes (its first seconds) on another core. */
@@ -181,19 +216,20 @@ public final class SoundRenderer {
         Codes idealCodes = cases.ideal().codes();
         LevelTable played = cases.played();
         Spectrum errorSpectrum;
+        CodeUse idealUse = cases.idealUse();
         if (plan.quantize().board().isEmpty()) {
             AudioMetrics.Measured m = metrics.measureWithSpectrum("ideal ladder", idealCodes, cases.idealTable());
-            quality.add(m.report());
+            quality.add(m.report().withCodeUse(idealUse));
             errorSpectrum = m.errorSpectrum();
         } else {
-            quality.add(metrics.measure("ideal ladder", idealCodes, cases.idealTable()));
+            quality.add(metrics.measure("ideal ladder", idealCodes, cases.idealTable()).withCodeUse(idealUse));
             AudioMetrics.Measured plain = metrics.measureWithSpectrum("board, plain codes", idealCodes, played);
-            quality.add(plain.report());
+            quality.add(plain.report().withCodeUse(idealUse));
             errorSpectrum = plain.errorSpectrum();
             if (cases.compensated().isPresent()) {
                 AudioMetrics.Measured comp = metrics.measureWithSpectrum("board, compensated",
                         cases.compensated().get(), played);
-                quality.add(comp.report());
+                quality.add(comp.report().withCodeUse(cases.compensatedUse().orElseThrow()));
                 errorSpectrum = comp.errorSpectrum();
             }
         }
@@ -208,16 +244,19 @@ public final class SoundRenderer {
         return new Figures(quality, errorSpectrum, shapingGain);
     }
 
-    /** The source's description, the conditioned reference and the target rate. */
+    /**
+     * The source's description, the conditioned reference, the target rate and the source as supplied for
+     * the listener figures (none for a wavetable, which has no rate of its own).
+     */
     private record Prepared(String layout, List<String> warnings, Conditioner.Conditioned conditioned,
-            double rateHz) {
+            double rateHz, Optional<ListenerMetrics> listener) {
     }
 
     /**
      * Opens and conditions the source. A WAV source is decoded block by block as the resampler reads it, so
      * a long clip is never held at its own rate.
      */
-    private static Prepared prepare(BuildPlan plan, Stopwatch watch) {
+    private static Prepared prepare(BuildPlan plan, AnalogModel model, Stopwatch watch) {
         ConditioningSettings cs = plan.conditioning();
         try (Sources.Opened opened = Sources.open(plan.source().file(), plan.source().channel(),
                 cs.rateHz().orElse(Double.NaN), plan.quantize().seed())) {
@@ -225,6 +264,7 @@ public final class SoundRenderer {
             double rate = cs.rateHz().orElse(Double.isNaN(opened.preferredRateHz()) ? Defaults.RATE_HZ
                     : opened.preferredRateHz());
             Conditioner.Conditioned conditioned;
+            Optional<ListenerMetrics> listener = Optional.empty();
             if (opened.wavetable()) {
                 // One cycle: its samples are the table as it is, played at any rate by the DDS engine. Only DC
                 // removal and level apply; the codes are labelled with the playback rate.
@@ -236,10 +276,25 @@ public final class SoundRenderer {
                 conditioned = new Conditioner(KaiserResampler.forBits(plan.bits())).apply(table, c);
             } else {
                 conditioned = new Conditioner(cs.resampler().create(plan.bits())).apply(opened.samples(), cs.at(rate));
+                listener = listener(opened.samples(), conditioned, cs, model);
             }
             watch.lap("condition");
-            return new Prepared(opened.layout(), opened.warnings(), conditioned, rate);
+            return new Prepared(opened.layout(), opened.warnings(), conditioned, rate, listener);
         }
+    }
+
+    /**
+     * The source as supplied, over the stretch conditioning kept (trim) and with its fades, prepared for the
+     * listener figures; none when nothing is left to compare.
+     */
+    private static Optional<ListenerMetrics> listener(org.rungtone.source.SampleSource source,
+            Conditioner.Conditioned c, ConditioningSettings cs, AnalogModel model) {
+        if (c.signal().length() < 2) {
+            return Optional.empty();
+        }
+        return ListenerMetrics.Span.kept(source.length(), source.sampleRateHz(), c.trimmedStartSeconds(),
+                c.trimmedEndSeconds(), cs.fadeInSeconds(), cs.fadeOutSeconds())
+                .map(span -> ListenerMetrics.prepare(source, span, model));
     }
 
     private static Quantizer quantizer(LevelTable table, BuildPlan plan) {

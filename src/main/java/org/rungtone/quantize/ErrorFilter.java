@@ -11,6 +11,13 @@ import org.rungtone.internal.Checks;
  * <p>First order, {@code h = {1}}, gives {@code NTF = 1 − z^−1} with {@code |NTF| = 2·sin(ω/2)}: error pushed
  * to high frequencies, total error power doubled (Gerzon, Craven, "Optimal Noise Shaping and Dither of
  * Digital Signals", AES preprint 2822, 1989). Second order, {@code h = {2, −1}}, gives {@code (1 − z^−1)²}.
+ *
+ * <p>Headroom: the feedback moves the value sent to the quantizer away from the signal by
+ * {@code |Σ h[k]·e[n−1−k]| ≤ Σ|h[k]|·max|e|} ({@link #absoluteTapSum}). Without dither and while the
+ * quantizer is not overloaded {@code |e| ≤ q/2}, so the excursion is at most {@code Σ|h[k]|·q/2}: q/2 for
+ * first order, 3q/2 for second order (the error-feedback loop of Gerzon and Craven, 1989, bounded term by
+ * term). Dither inside the loop widens the error bound by the dither's peak (½ LSB RPDF, 1 LSB TPDF).
+ * {@link Quantizer} leaves that room by default so a loud signal does not overload the loop.
  */
 public final class ErrorFilter {
     /** No shaping: plain quantization. */
@@ -76,6 +83,18 @@ public final class ErrorFilter {
 
     double tap(int k) {
         return taps[k];
+    }
+
+    /**
+     * {@code Σ|h[k]|}: the largest factor by which the fed-back errors can add up, so the feedback moves the
+     * quantizer's input by at most this times the largest error (0 without shaping, 1 first order, 3 second).
+     */
+    public double absoluteTapSum() {
+        double sum = 0;
+        for (double t : taps) {
+            sum += Math.abs(t);
+        }
+        return sum;
     }
 
     /** |NTF(e^jω)| at normalised angular frequency ω (radians per sample). */

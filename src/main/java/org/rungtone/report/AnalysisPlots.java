@@ -63,9 +63,9 @@ public final class AnalysisPlots {
             hy[i] = marks.get(i)[1];
         }
         series.add(new Plots.Series("fundamental and harmonics 2..10", hx, hy, Plots.Style.MARKERS));
-        String title = String.format(Locale.ROOT,
-                "Output spectrum: SINAD %.1f dB, THD %.1f dB, SFDR %.1f dB, ENOB %.2f bits",
-                tone.sinadDb(), tone.thdDb(), tone.sfdrDb(), tone.enobBits());
+        String title = String.format(Locale.ROOT, "Output spectrum: SINAD %.1f dB, THD %s, SFDR %s, %s %.2f bits",
+                tone.sinadDb(), FigureText.thd(tone), FigureText.sfdr(tone), FigureText.ENOB_FULL_SCALE,
+                tone.enobFullScaleBits());
         return new Plots.Chart(title, "frequency (Hz)", "level (dBFS, tone-calibrated)", false, series);
     }
 

@@ -19,10 +19,31 @@ public final class BuildReport {
         return Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf") : String.format(Locale.ROOT, "%.1f", v);
     }
 
-    /** The text report: settings, quality per ladder case, preview, files, then warnings at the end. */
+    /**
+     * The text report: settings, quality per ladder case (quantization only), what the listener gets, the
+     * definitions of the figures, preview, files, then warnings at the end.
+     */
     public static String text(BuildSummary s) {
         StringBuilder b = new StringBuilder();
         b.append("Rungtone ").append(s.toolVersion()).append(" build report: ").append(s.symbol()).append("\n\n");
+        b.append(settings(s).render("  "));
+        quality(b, s);
+        s.emitted().listener().ifPresent(l -> {
+            b.append(String.format(Locale.ROOT, "%nWhat the listener gets (%s):%n", FigureText.listenerScope(l)));
+            TextTable lt = new TextTable("figure", "dB");
+            lt.row(FigureText.LISTENER_SNR, f1(l.snrDb()));
+            lt.row(FigureText.LISTENER_A_WEIGHTED, f1(l.aWeightedSnrDb()));
+            b.append(lt.render("  "));
+        });
+        b.append("\nDefinitions:\n");
+        for (String line : FigureText.definitions()) {
+            b.append("  ").append(line).append('\n');
+        }
+        rest(b, s);
+        return b.toString();
+    }
+
+    private static TextTable settings(BuildSummary s) {
         TextTable t = new TextTable("setting", "value");
         t.row("source", s.source().getFileName() + "  (" + s.sourceLayout() + ")");
         t.row("conditioning", s.conditioning());
@@ -34,16 +55,26 @@ public final class BuildReport {
         t.row("C files hold", s.emittedCase());
         t.row("clipped samples", s.clippedSamples() + (s.samples() > 0 ? String.format(Locale.ROOT,
                 "  (%.3f %%)", 100.0 * s.clippedSamples() / s.samples()) : ""));
+        s.emitted().codeUse().ifPresent(u -> {
+            t.row("end codes", FigureText.endCodes(u, "  "));
+            if (u.shaped()) {
+                t.row("shaping headroom", FigureText.headroom(u));
+            }
+        });
         t.row("flash", String.format(Locale.ROOT, "%,d bytes of samples", s.flashBytes()));
-        b.append(t.render("  "));
+        return t;
+    }
 
-        b.append("\nQuality (output against the conditioned source, gain and offset aligned):\n");
+    private static void quality(StringBuilder b, BuildSummary s) {
+        b.append("\nQuality, quantization only (the codes' levels against the conditioned source at the target"
+                + " rate, gain and offset aligned):\n");
         QualityReport first = s.quality().get(0);
         TextTable q = new TextTable("case", "SINAD dB",
-                "SNR dB <" + Units.format(first.inBandCutoffHz(), "Hz"), "A-wtd SNR dB", "ENOB bits");
+                "SNR dB <" + Units.format(first.inBandCutoffHz(), "Hz"), "A-wtd SNR dB",
+                FigureText.ENOB_FULL_SCALE, FigureText.ENOB_SIGNAL);
         for (QualityReport r : s.quality()) {
             q.row(r.label(), f1(r.sinadDb()), f1(r.inBandSnrDb()), f1(r.aWeightedSnrDb()),
-                    String.format(Locale.ROOT, "%.2f", r.enobBits()));
+                    FigureText.f2(r.enobFullScaleBits()), FigureText.f2(r.enobSignalBits()));
         }
         b.append(q.render("  "));
         s.shapingGainDb().ifPresent(g -> b.append(String.format(Locale.ROOT,
@@ -51,11 +82,16 @@ public final class BuildReport {
                 g >= 0 ? "wins" : "loses", Math.abs(g))));
         if (s.tone().isPresent()) {
             ToneReport tr = s.tone().get();
-            b.append(String.format(Locale.ROOT, "  single tone at %s: SINAD %.1f dB, SNR %.1f dB, THD %.1f dB,"
-                    + " SFDR %.1f dB, ENOB %.2f bits (IEEE 1241 sine fit and spectrum)%n",
-                    Units.format(tr.fundamentalHz(), "Hz"), tr.sinadDb(), tr.snrDb(), tr.thdDb(), tr.sfdrDb(),
-                    tr.enobBits()));
+            b.append(String.format(Locale.ROOT, "  single tone at %s: SINAD %.1f dB, SNR %.1f dB, THD %s,"
+                    + " SFDR %s, %s %.2f bits, %s %.2f bits (IEEE 1241 sine fit and spectrum)%n",
+                    Units.format(tr.fundamentalHz(), "Hz"), tr.sinadDb(), tr.snrDb(), FigureText.thdExplained(tr),
+                    FigureText.sfdrExplained(tr), FigureText.ENOB_FULL_SCALE, tr.enobFullScaleBits(),
+                    FigureText.ENOB_SIGNAL, tr.enobSignalBits()));
         }
+    }
+
+    /** Preview, firmware, files and warnings. */
+    private static void rest(StringBuilder b, BuildSummary s) {
         BuildSummary.PreviewInfo p = s.preview();
         String filter = p.filter().equals("none") ? "no reconstruction filter" : p.filter();
         b.append(String.format(Locale.ROOT, "%nPreview (preview.wav at %s): the board's levels, zero-order hold,"
@@ -82,7 +118,6 @@ public final class BuildReport {
                 b.append("  - ").append(w).append('\n');
             }
         }
-        return b.toString();
     }
 
     /** One line of stage timings, for --verbose: "stage timings: decode 120 ms, condition 80 ms, ...". */
@@ -100,9 +135,31 @@ public final class BuildReport {
         m.put("in_band_snr_db", r.inBandSnrDb());
         m.put("in_band_cutoff_hz", r.inBandCutoffHz());
         m.put("a_weighted_snr_db", r.aWeightedSnrDb());
-        m.put("enob_bits", r.enobBits());
+        m.put("enob_full_scale_bits", r.enobFullScaleBits());
+        m.put("enob_signal_bits", r.enobSignalBits());
         m.put("error_rms_dbfs", r.errorRmsDbfs());
         m.put("reference_rms_dbfs", r.referenceRmsDbfs());
+        r.codeUse().ifPresent(u -> {
+            Map<String, Object> um = new LinkedHashMap<>();
+            um.put("end_code_samples", u.endCodeSamples());
+            um.put("end_code_fraction", u.endCodeFraction());
+            um.put("overload_samples", u.overloadSamples());
+            um.put("headroom_gain_db", u.headroomGainDb());
+            um.put("headroom_kept", u.headroomKept());
+            um.put("feedback_excursion_lsb", u.feedbackExcursionLsb());
+            m.put("code_use", um);
+        });
+        r.listener().ifPresent(l -> {
+            Map<String, Object> lm = new LinkedHashMap<>();
+            lm.put("snr_db", l.snrDb());
+            lm.put("a_weighted_snr_db", l.aWeightedSnrDb());
+            lm.put("band_low_hz", l.bandLowHz());
+            lm.put("band_top_hz", l.bandTopHz());
+            lm.put("analysis_rate_hz", l.analysisRateHz());
+            lm.put("analysed_s", l.analysedSeconds());
+            lm.put("delay_s", l.delaySeconds());
+            m.put("listener", lm);
+        });
         return m;
     }
 
@@ -135,8 +192,11 @@ public final class BuildReport {
             tm.put("sinad_db", t.sinadDb());
             tm.put("snr_db", t.snrDb());
             tm.put("thd_db", t.thdDb());
+            tm.put("thd_below_noise", t.thdBelowNoise());
             tm.put("sfdr_db", t.sfdrDb());
-            tm.put("enob_bits", t.enobBits());
+            tm.put("sfdr_limited_by_noise", t.sfdrLimitedByNoise());
+            tm.put("enob_full_scale_bits", t.enobFullScaleBits());
+            tm.put("enob_signal_bits", t.enobSignalBits());
             m.put("tone", tm);
         });
         Map<String, Object> pm = new LinkedHashMap<>();

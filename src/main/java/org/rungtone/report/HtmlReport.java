@@ -18,7 +18,6 @@ import java.util.Optional;
 import java.util.OptionalLong;
 import java.util.Set;
 import org.rungtone.analysis.QualityReport;
-import org.rungtone.analysis.ToneReport;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.internal.Checks;
 import org.rungtone.internal.InputError;
@@ -170,7 +169,7 @@ public final class HtmlReport {
             m.put("version", page.toolVersion());
             m.put("hasByline", page.byline().isPresent());
             m.put("byline", page.byline().orElse(""));
-            m.put("settings", rows(page.settings()));
+            m.put("settings", SoundTables.rows(page.settings()));
             m.put("hasSettings", !page.settings().isEmpty());
             List<Map<String, Object>> sounds = new ArrayList<>();
             for (BuildSummary s : page.sounds()) {
@@ -193,6 +192,7 @@ public final class HtmlReport {
             m.put("sections", sections);
             m.put("warnings", page.warnings());
             m.put("hasWarnings", !page.warnings().isEmpty());
+            m.put("definitions", FigureText.definitions());
             return m;
         }
 
@@ -209,29 +209,21 @@ public final class HtmlReport {
             QualityReport emitted = s.emitted();
             m.put("emittedCase", s.emittedCase());
             m.put("emittedSinad", f1(emitted.sinadDb()));
-            m.put("emittedEnob", f2(emitted.enobBits()));
-            m.put("settings", rows(soundSettings(s)));
+            m.put("emittedEnob", f2(emitted.enobFullScaleBits()));
+            m.put("emittedListener", emitted.listener().map(l -> f1(l.snrDb())).orElse("-"));
+            m.put("settings", SoundTables.rows(SoundTables.settings(s)));
             m.put("cutoff", Units.format(s.quality().get(0).inBandCutoffHz(), "Hz"));
-            List<Map<String, Object>> quality = new ArrayList<>();
-            for (int i = 0; i < s.quality().size(); i++) {
-                QualityReport r = s.quality().get(i);
-                Map<String, Object> q = new LinkedHashMap<>();
-                q.put("label", r.label());
-                q.put("emitted", i == s.quality().size() - 1);
-                q.put("sinad", f1(r.sinadDb()));
-                q.put("inBandSnr", f1(r.inBandSnrDb()));
-                q.put("aWeightedSnr", f1(r.aWeightedSnrDb()));
-                q.put("enob", f2(r.enobBits()));
-                quality.add(q);
-            }
-            m.put("quality", quality);
+            m.put("quality", SoundTables.quality(s.quality()));
             m.put("hasShaping", s.shapingGainDb().isPresent());
             m.put("shaping", s.shapingGainDb().map(g -> String.format(Locale.ROOT,
                     "Noise shaping (%s) %s %.1f dB of in-band SNR against flat quantization.", s.shaping(),
                     g >= 0 ? "wins" : "loses", Math.abs(g))).orElse(""));
+            m.put("hasListener", emitted.listener().isPresent());
+            m.put("listener", SoundTables.rows(SoundTables.listener(emitted)));
+            m.put("listenerScope", emitted.listener().map(FigureText::listenerScope).orElse(""));
             m.put("hasTone", s.tone().isPresent());
-            m.put("tone", s.tone().map(Context::tone).orElse(Map.of()));
-            m.put("preview", rows(previewRows(s.preview())));
+            m.put("tone", s.tone().map(SoundTables::tone).orElse(Map.of()));
+            m.put("preview", SoundTables.rows(SoundTables.preview(s.preview())));
             m.put("hasFirmware", !s.firmware().isEmpty());
             m.put("firmware", String.join("\n", s.firmware()));
             List<Figure> plots = new ArrayList<>();
@@ -255,57 +247,6 @@ public final class HtmlReport {
             m.put("warningCount", Integer.toString(warnings.size()));
             m.put("warningPhrase", warnings.size() == 1 ? "1 warning" : warnings.size() + " warnings");
             return m;
-        }
-
-        private static List<Setting> soundSettings(BuildSummary s) {
-            List<Setting> rows = new ArrayList<>();
-            rows.add(new Setting("source", s.source().getFileName() + " (" + s.sourceLayout() + ")"));
-            rows.add(new Setting("conditioning", s.conditioning()));
-            rows.add(new Setting("resampler", s.resampler()));
-            rows.add(new Setting("target", s.bits() + " bits at " + Units.format(s.rateHz(), "Hz") + ", "
-                    + s.samples() + " samples, " + String.format(Locale.ROOT, "%.3f s", s.durationSeconds())));
-            rows.add(new Setting("dither / shaping", s.dither() + " / " + s.shaping() + " (seed " + s.seed()
-                    + ")"));
-            rows.add(new Setting("levels played", s.ladder()));
-            rows.add(new Setting("C files hold", s.emittedCase()));
-            rows.add(new Setting("clipped samples", s.clippedSamples() + (s.samples() > 0 ? String.format(
-                    Locale.ROOT, " (%.3f %%)", 100.0 * s.clippedSamples() / s.samples()) : "")));
-            rows.add(new Setting("flash", bytes(s.flashBytes()) + " of samples"));
-            return rows;
-        }
-
-        private static Map<String, Object> tone(ToneReport t) {
-            Map<String, Object> m = new LinkedHashMap<>();
-            m.put("rows", rows(List.of(
-                    new Setting("fundamental", Units.format(t.fundamentalHz(), "Hz")),
-                    new Setting("amplitude", f1(t.amplitudeDbfs()) + " dBFS"),
-                    new Setting("SINAD (sine fit)", f1(t.sinadDb()) + " dB"),
-                    new Setting("SNR", f1(t.snrDb()) + " dB"),
-                    new Setting("THD", f1(t.thdDb()) + " dB"),
-                    new Setting("SFDR", f1(t.sfdrDb()) + " dB"),
-                    new Setting("ENOB", f2(t.enobBits()) + " bits"),
-                    new Setting("noise floor", f1(t.noiseFloorDbfs()) + " dBFS"))));
-            List<Map<String, Object>> harmonics = new ArrayList<>();
-            for (ToneReport.Harmonic h : t.harmonics()) {
-                Map<String, Object> hm = new LinkedHashMap<>();
-                hm.put("order", Integer.toString(h.order()));
-                hm.put("frequency", Units.format(h.frequencyHz(), "Hz"));
-                hm.put("level", f1(h.levelDbc()));
-                harmonics.add(hm);
-            }
-            m.put("harmonics", harmonics);
-            m.put("hasHarmonics", !harmonics.isEmpty());
-            return m;
-        }
-
-        private static List<Setting> previewRows(BuildSummary.PreviewInfo p) {
-            return List.of(
-                    new Setting("reconstruction filter", p.filter().equals("none") ? "none (the hold alone)"
-                            : p.filter()),
-                    new Setting("preview WAV rate", Units.format(p.rateHz(), "Hz")),
-                    new Setting("zero-order-hold droop", String.format(Locale.ROOT, "%.2f dB at %s",
-                            p.zohDroopDb(), Units.format(p.passbandTopHz(), "Hz"))),
-                    new Setting("peak", String.format(Locale.ROOT, "%.3f of full scale", p.peak())));
         }
 
         /** The summary's warnings plus the preview's ringing, as the text report lists them. */
@@ -371,16 +312,6 @@ public final class HtmlReport {
             return unique;
         }
 
-        private static List<Map<String, Object>> rows(List<Setting> settings) {
-            List<Map<String, Object>> rows = new ArrayList<>();
-            for (Setting s : settings) {
-                Map<String, Object> m = new LinkedHashMap<>();
-                m.put("key", s.key());
-                m.put("value", s.value());
-                rows.add(m);
-            }
-            return rows;
-        }
     }
 
     private static boolean isPng(Path f) {

@@ -44,26 +44,32 @@ public final class ProjectReport {
         TextTable s = new TextTable("setting", "value");
         in.settings().forEach(s::row);
         b.append(s.render("  "));
-        b.append("\nSounds:\n");
+        b.append("\nSounds (quantization-only figures of the case the C files hold, and what the listener gets):\n");
         TextTable t = new TextTable("sound", "source", "rate", "samples", "seconds", "case", "SINAD dB",
-                "A-wtd SNR dB", "ENOB");
+                "A-wtd SNR dB", FigureText.ENOB_FULL_SCALE, FigureText.LISTENER_SNR + " dB");
         for (BuildSummary x : in.sounds()) {
             QualityReport q = x.emitted();
             t.row(x.symbol(), x.source().getFileName(), String.format(Locale.ROOT, "%.0f", x.rateHz()),
                     x.samples(), String.format(Locale.ROOT, "%.3f", x.durationSeconds()), q.label(),
-                    f1(q.sinadDb()), f1(q.aWeightedSnrDb()), String.format(Locale.ROOT, "%.2f", q.enobBits()));
+                    f1(q.sinadDb()), f1(q.aWeightedSnrDb()), FigureText.f2(q.enobFullScaleBits()),
+                    q.listener().map(l -> f1(l.snrDb())).orElse("-"));
         }
         b.append(t.render("  "));
         for (BuildSummary x : in.sounds()) {
             if (x.quality().size() > 1) {
                 b.append("\n").append(x.symbol()).append(" on the board:\n");
-                TextTable q = new TextTable("case", "SINAD dB", "in-band SNR dB", "A-wtd SNR dB", "ENOB bits");
+                TextTable q = new TextTable("case", "SINAD dB", "in-band SNR dB", "A-wtd SNR dB",
+                        FigureText.ENOB_FULL_SCALE, FigureText.ENOB_SIGNAL);
                 for (QualityReport r : x.quality()) {
                     q.row(r.label(), f1(r.sinadDb()), f1(r.inBandSnrDb()), f1(r.aWeightedSnrDb()),
-                            String.format(Locale.ROOT, "%.2f", r.enobBits()));
+                            FigureText.f2(r.enobFullScaleBits()), FigureText.f2(r.enobSignalBits()));
                 }
                 b.append(q.render("  "));
             }
+        }
+        b.append("\nDefinitions:\n");
+        for (String line : FigureText.definitions()) {
+            b.append("  ").append(line).append('\n');
         }
         b.append(String.format(Locale.ROOT, "%nFlash: %,d bytes for all sounds%s%n", in.flashBytes(),
                 in.flashBudgetBytes() > 0 ? String.format(Locale.ROOT, " of a %,d-byte budget (%.0f %%)",

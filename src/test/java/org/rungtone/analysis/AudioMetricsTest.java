@@ -28,8 +28,23 @@ class AudioMetricsTest {
         Signal ref = TestSignals.sine(TestSignals.textbookFullScale(bits), 997, 0.2, 48000, 1 << 16);
         QualityReport r = AudioMetrics.measure("ideal", ref, TestSignals.quantizedFullScaleSine(bits), 24000);
         assertEquals(TestSignals.bennettDb(bits), r.sinadDb(), 0.2);
-        assertEquals(bits + Math.log(1 - Math.pow(2, -bits)) / Math.log(2), r.enobBits(), 0.05);
+        assertEquals(bits + Math.log(1 - Math.pow(2, -bits)) / Math.log(2), r.enobFullScaleBits(), 0.05);
         assertEquals(r.sinadDb(), r.inBandSnrDb(), 1e-9);
+    }
+
+    @Test
+    void enobReSignalFallsByTheLevelBelowFullScale() {
+        // The same ideal 10-bit quantizer on a sine 12.04 dB below the textbook full scale: the error stays
+        // q²/12 (Bennett 1948), so ENOB re full scale (IEEE Std 1241-2010) stays N + log2(1 − 2^−N) while
+        // ENOB re signal, (SINAD − 1.76)/6.02, falls by 12.04/6.02 = 2 bits.
+        int bits = 10;
+        Signal ref = TestSignals.sine(TestSignals.textbookFullScale(bits) / 4, 997, 0.2, 48000, 1 << 16);
+        Signal out = TestSignals.quantized(ref, bits, Dither.NONE, ErrorFilter.NONE, 1);
+        QualityReport r = AudioMetrics.measure("quarter", ref, out, 24000);
+        double fullScale = bits + Math.log(1 - Math.pow(2, -bits)) / Math.log(2);
+        assertEquals(fullScale, r.enobFullScaleBits(), 0.05);
+        assertEquals(bits - 2, r.enobSignalBits(), 0.05);
+        assertEquals((r.sinadDb() - 1.76) / 6.02, r.enobSignalBits(), 1e-12);
     }
 
     @Test

@@ -95,4 +95,42 @@ class SurveyTest {
                 () -> Survey.run(small().build(), rate -> TestSignals.sine(0.5, 300, 0, 44100, 1000)));
         assertTrue(e.getMessage().startsWith("reference for 8000.0 Hz came at 44100.0 Hz"), e.getMessage());
     }
+
+    @Test
+    void listenerFiguresRiseWithTheRateForTreble() {
+        // A 1 kHz and a 5 kHz tone: at 8 kHz the 5 kHz tone is lost to the anti-alias filter, at 16 kHz
+        // it is kept, with images the hold lets through (sinc(f/fs), Oppenheim & Schafer). Every depth at
+        // a rate hears the same loss, so the listener figure rises with the rate for each depth while the
+        // quantization-only SINAD, against the reference at that rate, does not see it.
+        double sourceRate = 48_000;
+        int n = (int) sourceRate;
+        double[] x = new double[n];
+        for (int i = 0; i < n; i++) {
+            double t = i / sourceRate;
+            x[i] = 0.45 * Math.sin(2 * Math.PI * 1000.3 * t) + 0.3 * Math.sin(2 * Math.PI * 5000.9 * t);
+        }
+        Signal source = Signal.wrap(x, sourceRate);
+        org.rungtone.condition.Conditioner conditioner = new org.rungtone.condition.Conditioner(
+                org.rungtone.condition.KaiserResampler.forBits(12));
+        DoubleFunction<Signal> atRate = rate -> conditioner.apply(source, new org.rungtone.condition.Conditioning(
+                false, java.util.OptionalDouble.empty(), rate, java.util.OptionalDouble.empty(),
+                java.util.OptionalDouble.empty(), 0, 0)).signal();
+        ListenerMetrics listener = ListenerMetrics.prepare(org.rungtone.source.SampleSource.of(source),
+                ListenerMetrics.Span.all(n), new AnalogModel(ReconstructionFilter.none(), 48_000));
+        SurveySpec spec = small().bitDepths(List.of(8, 12)).build();
+        SurveyResult result = Survey.run(spec, atRate, listener, Survey.Progress.NONE);
+        for (int bits : List.of(8, 12)) {
+            SurveyRow low = result.rows().stream().filter(r -> r.bits() == bits && r.rateHz() == 8000)
+                    .findFirst().orElseThrow();
+            SurveyRow high = result.rows().stream().filter(r -> r.bits() == bits && r.rateHz() == 16000)
+                    .findFirst().orElseThrow();
+            assertTrue(low.hasListenerFigures() && high.hasListenerFigures());
+            assertTrue(high.listenerSnrDb() > low.listenerSnrDb() + 3, low + " / " + high);
+            assertTrue(high.listenerAWeightedSnrDb() > low.listenerAWeightedSnrDb() + 3, low + " / " + high);
+            assertTrue(low.listenerSnrDb() < low.sinadDb() - 10, low.toString());
+        }
+        SurveyRow plain = Survey.run(spec, atRate).rows().get(0);
+        assertFalse(plain.hasListenerFigures());
+        assertTrue(Double.isNaN(plain.listenerAWeightedSnrDb()));
+    }
 }

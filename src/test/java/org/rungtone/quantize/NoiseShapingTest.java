@@ -60,7 +60,8 @@ class NoiseShapingTest {
         // Overload: a full-scale square drives the dithered second-order loop past both rails. The clamp of
         // the fed-back error to ±4 LSB bounds |output − input| by (|2| + |−1|)·4 + 1 (dither) + ½ = 13.5 LSB
         // (derived from the loop equation, no outside source), and a quiet passage afterwards must come out
-        // as cleanly as when quantized on its own: no runaway, no limit cycle left over.
+        // as cleanly as when quantized on its own: no runaway, no limit cycle left over. No headroom is kept,
+        // so that the loop really overloads.
         int bits = 8;
         LevelTable table = LevelTable.ideal(bits, 1.0);
         int squareLength = 1 << 14;
@@ -72,7 +73,7 @@ class NoiseShapingTest {
         double[] quiet = sine(0.3, 523, quietLength).unsafeSamples();
         System.arraycopy(quiet, 0, x, squareLength, quietLength);
         Quantizer q = new Quantizer(table, table.minVolts(), table.maxVolts(), Dither.TPDF,
-                ErrorFilter.SECOND_ORDER, 8);
+                ErrorFilter.SECOND_ORDER, 8, Quantizer.Headroom.NONE);
         Signal all = Signal.wrap(x, RATE);
         double[] e = error(q, all);
         double lsb = 2.0 / (table.size() - 1);

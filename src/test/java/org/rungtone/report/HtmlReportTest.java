@@ -49,8 +49,8 @@ class HtmlReportTest {
         List<QualityReport> chimeQuality = List.of(
                 quality("ideal", 6, 0.0), quality("modelled", 6, 4.2), quality("compensated", 6, 1.3));
         ToneReport tone = new ToneReport(16_000, 4096, 1046.5, -0.9, 0.001, 37.6, 5.95, 37.5, 38.2, -44.7,
-                46.3, -38.9, List.of(new ToneReport.Harmonic(2, 2093.0, -52.1),
-                        new ToneReport.Harmonic(3, 3150.0, -47.0)));
+                false, 46.3, false, -38.9, List.of(new ToneReport.Harmonic(2, 2093.0, -52.1, true),
+                        new ToneReport.Harmonic(3, 3150.0, -47.0, true)));
         chime = new BuildSummary("0.1.0", Path.of("sounds/door-chime.wav"), "PCM 16-bit, 2 ch, 44100 Hz, 1.50 s",
                 "door_chime", 6, 16_000, 24_000, 1.5, "tpdf", "none", 1, "mixdown, resample 44.1k -> 16k",
                 "kaiser, 5 dB", "r2r 6-bit, 5% parts, measured profile", 12, chimeQuality, "compensated",
@@ -74,13 +74,14 @@ class HtmlReportTest {
     }
 
     /**
-     * Figures of an ideal N-bit quantizer on a full-scale sine, SINAD = 6.02·N + 1.76 dB (W. R. Bennett,
-     * BSTJ 27, 1948), worsened by {@code extraDb}; ENOB from IEEE Std 1241: (SINAD − 1.76)/6.02.
+     * Figures of an ideal N-bit quantizer, SINAD = 6.02·N + 1.76 dB (W. R. Bennett, BSTJ 27, 1948), worsened
+     * by {@code extraDb}, for a programme 3.01 dB below a full-scale sine: ENOB re signal (SINAD − 1.76)/6.02,
+     * ENOB re full scale half a bit more (IEEE Std 1241: 3.01 dB / 6.02 dB per bit).
      */
     private static QualityReport quality(String label, int bits, double extraDb) {
         double sinad = 6.02 * bits + 1.76 - extraDb;
         return new QualityReport(label, 16_000, 24_000, 7_000, -3.01, sinad, sinad + 0.8, sinad + 2.1,
-                (sinad - 1.76) / 6.02, -sinad, 1.0, 0.0);
+                (sinad - 1.76) / 6.02 + 0.5, -sinad, 1.0, 0.0, Optional.empty(), Optional.empty());
     }
 
     private static Path plot(Path file, String name) {
@@ -159,18 +160,20 @@ class HtmlReportTest {
                 QualityReport q = s.quality().get(i);
                 List<String> cells = rows.get(i).select("td").eachText();
                 assertEquals(List.of(q.label(), f1(q.sinadDb()), f1(q.inBandSnrDb()), f1(q.aWeightedSnrDb()),
-                        f2(q.enobBits())), cells);
+                        f2(q.enobFullScaleBits()), f2(q.enobSignalBits())), cells);
             }
             assertTrue(rows.last().hasClass("emitted"));
         }
         // 6-bit ideal: 6.02·6 + 1.76 = 37.88 dB (Bennett, BSTJ 1948), ENOB exactly 6 (IEEE Std 1241)
         Elements overview = doc.select("section#overview tbody tr");
         assertEquals(List.of("door_chime", "door-chime.wav", "6", "16kHz", "1.500 s", "24,000 bytes",
-                "compensated", "36.6", "5.78", "1"), overview.get(0).select("td").eachText());
+                "compensated", "36.6", "6.28", "-", "1"), overview.get(0).select("td").eachText());
         assertEquals("37.9", doc.select("section#sound-freezer-alarm table.figures td").get(1).text());
         String tone = doc.select("section#sound-door-chime").text();
         assertTrue(tone.contains("SFDR 46.3 dB"), tone);
-        assertTrue(tone.contains("ENOB 5.95 bits"), tone);
+        // ENOB re signal from the fit's 37.6 dB; re full scale adds the tone's 0.9 dB below full scale
+        assertTrue(tone.contains("ENOB (re signal) 5.95 bits"), tone);
+        assertTrue(tone.contains("ENOB (re full scale) 6.10 bits"), tone);
         assertTrue(tone.contains("3 3.15kHz -47.0"), tone);
         assertTrue(tone.contains("zero-order-hold droop -1.32 dB at 6.4kHz"), tone);
         assertTrue(doc.select("section#sound-door-chime pre").text()

@@ -29,7 +29,8 @@ class SurveyReportTest {
             boolean chosen) {
         int n = (int) rate;
         return new SurveyRow(bits, rate, n, sinad, sinad + 0.5, sinad - 0.3, (sinad - 1.76) / 6.02, 0,
-                SurveyRow.unpackedBytes(n, bits), SurveyRow.packedBytes(n, bits), fits, reaches, chosen);
+                SurveyRow.unpackedBytes(n, bits), SurveyRow.packedBytes(n, bits), fits, reaches, chosen, Double.NaN,
+                Double.NaN);
     }
 
     private static SurveyReport.Context context(boolean previews) {
