@@ -36,16 +36,6 @@ public record SurveyRow(int bits, double rateHz, int samples, double sinadDb, do
         return ((long) samples * bits + 7) / 8;
     }
 
-    /**
-     * ENOB re full scale under its former name.
-     *
-     * @deprecated the name does not say what the ENOB is held against; use {@link #enobFullScaleBits}
-     */
-    @Deprecated
-    public double enobBits() {
-        return enobFullScaleBits;
-    }
-
     /** ENOB re signal: {@code (sinadDb − 1.76)/6.02}, the programme at its own level. */
     public double enobSignalBits() {
         return (sinadDb - 1.76) / 6.02;

@@ -163,7 +163,7 @@ public final class SurveyRun {
         SurveyRequest.Choice choice = request.choice();
         SurveySpec.Builder b = SurveySpec.builder().bitDepths(cells.bitDepths()).ratesHz(cells.ratesHz())
                 .dither(cells.dither()).shaping(cells.shaping()).seed(cells.seed()).tables(tables::get)
-                .inBandCutoffHz(rate -> Math.min(20_000, model.passbandTopHz(rate))).packed(choice.packed());
+                .inBandCutoffHz(model::inBandTopHz).packed(choice.packed());
         choice.flashBudgetBytes().ifPresent(b::flashBudgetBytes);
         choice.target().ifPresent(b::target);
         return b.build();

@@ -97,7 +97,7 @@ public final class SurveyReport {
      */
     public static String table(SurveyResult result) {
         List<String> header = new ArrayList<>(List.of("bits", "rate", "SINAD dB", "in-band SNR dB",
-                "A-wtd SNR dB", "ENOB", "flash bytes", "packed bytes", "fits"));
+                "A-wtd SNR dB", "ENOB re FS", "flash bytes", "packed bytes", "fits"));
         boolean hasTarget = result.target() != null;
         boolean hasChoice = result.chosen().isPresent();
         if (hasTarget) {
@@ -110,7 +110,7 @@ public final class SurveyReport {
         for (SurveyRow r : result.rows()) {
             List<String> cells = new ArrayList<>(List.of(String.valueOf(r.bits()), khz(r.rateHz()),
                     fixed(r.sinadDb(), 1), fixed(r.inBandSnrDb(), 1), fixed(r.aWeightedSnrDb(), 1),
-                    fixed(r.enobBits(), 2), String.format(Locale.ROOT, "%,d", r.flashBytesUnpacked()),
+                    fixed(r.enobFullScaleBits(), 2), String.format(Locale.ROOT, "%,d", r.flashBytesUnpacked()),
                     String.format(Locale.ROOT, "%,d", r.flashBytesPacked()), yesNo(r.fits())));
             if (hasTarget) {
                 cells.add(yesNo(r.reachesTarget()));
@@ -132,12 +132,12 @@ public final class SurveyReport {
         Optional<SurveyRow> chosen = result.chosen();
         if (chosen.isPresent()) {
             SurveyRow c = chosen.get();
-            return String.format(Locale.ROOT, "Recommended: %d bits at %s (SINAD %s dB, ENOB %s bits, %s).",
-                    c.bits(), khz(c.rateHz()), fixed(c.sinadDb(), 1), fixed(c.enobBits(), 2),
+            return String.format(Locale.ROOT, "Recommended: %d bits at %s (SINAD %s dB, ENOB re full scale %s bits, %s).",
+                    c.bits(), khz(c.rateHz()), fixed(c.sinadDb(), 1), fixed(c.enobFullScaleBits(), 2),
                     bytes(result.packed() ? c.flashBytesPacked() : c.flashBytesUnpacked(), result.packed()));
         }
         if (target == null) {
-            return "No target given, so nothing is recommended; add --target-sinad or --target-enob.";
+            return "No target given, so nothing is recommended; give a SINAD or ENOB target.";
         }
         Comparator<SurveyRow> byBytes = Comparator.comparingLong(r -> counted(r, result.packed()));
         Optional<SurveyRow> reaching = result.rows().stream().filter(SurveyRow::reachesTarget).min(byBytes);
@@ -149,11 +149,11 @@ public final class SurveyReport {
                     bytes(counted(r, result.packed()), result.packed()));
         }
         SurveyRow best = result.rows().stream().max(Comparator.comparingDouble(r ->
-                target.kind() == SurveyTarget.Kind.SINAD_DB ? r.sinadDb() : r.enobBits())).orElseThrow();
+                target.kind() == SurveyTarget.Kind.SINAD_DB ? r.sinadDb() : r.enobFullScaleBits())).orElseThrow();
         return String.format(Locale.ROOT, "No surveyed setting reaches %s%s; the best is %d bits at %s with"
-                + " SINAD %s dB, ENOB %s bits.", target.describe(),
+                + " SINAD %s dB, ENOB re full scale %s bits.", target.describe(),
                 result.flashBudgetBytes() == null ? "" : ", within the budget or beyond it", best.bits(),
-                khz(best.rateHz()), fixed(best.sinadDb(), 1), fixed(best.enobBits(), 2));
+                khz(best.rateHz()), fixed(best.sinadDb(), 1), fixed(best.enobFullScaleBits(), 2));
     }
 
     /**
@@ -184,7 +184,7 @@ public final class SurveyReport {
         if (result.target() != null) {
             Map<String, Object> target = new LinkedHashMap<>();
             target.put("figure", result.target().kind() == SurveyTarget.Kind.SINAD_DB ? "sinad_db"
-                    : "enob_bits");
+                    : "enob_full_scale_bits");
             target.put("value", result.target().value());
             m.put("target", target);
         }
@@ -208,7 +208,7 @@ public final class SurveyReport {
         m.put("sinad_db", r.sinadDb());
         m.put("in_band_snr_db", r.inBandSnrDb());
         m.put("a_weighted_snr_db", r.aWeightedSnrDb());
-        m.put("enob_bits", r.enobBits());
+        m.put("enob_full_scale_bits", r.enobFullScaleBits());
         m.put("clipped_samples", r.clippedSamples());
         m.put("flash_bytes_unpacked", r.flashBytesUnpacked());
         m.put("flash_bytes_packed", r.flashBytesPacked());

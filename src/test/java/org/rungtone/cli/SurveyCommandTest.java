@@ -146,10 +146,11 @@ class SurveyCommandTest {
         }
         assertEquals(32_000, o.get("flash_budget_bytes").getAsLong());
         assertTrue(o.get("packed").getAsBoolean());
-        assertEquals("enob_bits", o.getAsJsonObject("target").get("figure").getAsString());
+        assertEquals("enob_full_scale_bits", o.getAsJsonObject("target").get("figure").getAsString());
         JsonObject row = o.getAsJsonArray("rows").get(0).getAsJsonObject();
         assertEquals(List.of("bits", "rate_hz", "samples", "sinad_db", "in_band_snr_db", "a_weighted_snr_db",
-                "enob_bits", "clipped_samples", "flash_bytes_unpacked", "flash_bytes_packed", "fits", "reaches_target",
+                "enob_full_scale_bits", "clipped_samples", "flash_bytes_unpacked",
+                "flash_bytes_packed", "fits", "reaches_target",
                 "chosen"), new ArrayList<>(row.keySet()));
     }
 

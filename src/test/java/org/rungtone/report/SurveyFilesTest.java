@@ -24,7 +24,8 @@ class SurveyFilesTest {
     private static SurveyRow row(int bits, double rate, double sinad) {
         int n = (int) rate;
         return new SurveyRow(bits, rate, n, sinad, sinad, sinad, (sinad - 1.76) / 6.02, 0,
-                SurveyRow.unpackedBytes(n, bits), SurveyRow.packedBytes(n, bits), true, sinad >= 40, false);
+                SurveyRow.unpackedBytes(n, bits), SurveyRow.packedBytes(n, bits), true, sinad >= 40, false, Double.NaN,
+                Double.NaN);
     }
 
     @Test

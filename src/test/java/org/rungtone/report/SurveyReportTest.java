@@ -18,7 +18,7 @@ import org.rungtone.analysis.SurveyTarget;
 
 class SurveyReportTest {
     private static final List<String> ROW_FIELDS = List.of("bits", "rate_hz", "samples", "sinad_db",
-            "in_band_snr_db", "a_weighted_snr_db", "enob_bits", "clipped_samples", "flash_bytes_unpacked",
+            "in_band_snr_db", "a_weighted_snr_db", "enob_full_scale_bits", "clipped_samples", "flash_bytes_unpacked",
             "flash_bytes_packed", "fits", "reaches_target", "chosen");
 
     /**
@@ -73,13 +73,13 @@ class SurveyReportTest {
         String table = SurveyReport.table(r);
         assertFalse(table.contains("meets target"), table);
         assertTrue(table.lines().findFirst().orElseThrow().endsWith("fits"), table);
-        assertEquals("No target given, so nothing is recommended; add --target-sinad or --target-enob.",
+        assertEquals("No target given, so nothing is recommended; give a SINAD or ENOB target.",
                 SurveyReport.recommendation(r));
     }
 
     @Test
     void recommendationNamesTheChosenSetting() {
-        assertEquals("Recommended: 8 bits at 8 kHz (SINAD 49.9 dB, ENOB 8.00 bits, 8,000 bytes unpacked).",
+        assertEquals("Recommended: 8 bits at 8 kHz (SINAD 49.9 dB, ENOB re full scale 8.00 bits, 8,000 bytes unpacked).",
                 SurveyReport.recommendation(withChoice()));
     }
 
@@ -99,7 +99,7 @@ class SurveyReportTest {
                 row(6, 8000, 37.9, true, false, false));
         SurveyResult r = new SurveyResult(rows, SurveyTarget.enobBits(9), null, false);
         assertEquals("No surveyed setting reaches ENOB >= 9.000 bits; the best is 6 bits at 8 kHz with SINAD"
-                + " 37.9 dB, ENOB 6.00 bits.", SurveyReport.recommendation(r));
+                + " 37.9 dB, ENOB re full scale 6.00 bits.", SurveyReport.recommendation(r));
     }
 
     @Test
