@@ -132,7 +132,8 @@ public final class SurveyReport {
         Optional<SurveyRow> chosen = result.chosen();
         if (chosen.isPresent()) {
             SurveyRow c = chosen.get();
-            return String.format(Locale.ROOT, "Recommended: %d bits at %s (SINAD %s dB, ENOB re full scale %s bits, %s).",
+            return String.format(Locale.ROOT, "Recommended: %d bits at %s (SINAD %s dB, ENOB re full scale %s bits,"
+                    + " %s).",
                     c.bits(), khz(c.rateHz()), fixed(c.sinadDb(), 1), fixed(c.enobFullScaleBits(), 2),
                     bytes(result.packed() ? c.flashBytesPacked() : c.flashBytesUnpacked(), result.packed()));
         }

@@ -79,7 +79,8 @@ class SurveyReportTest {
 
     @Test
     void recommendationNamesTheChosenSetting() {
-        assertEquals("Recommended: 8 bits at 8 kHz (SINAD 49.9 dB, ENOB re full scale 8.00 bits, 8,000 bytes unpacked).",
+        assertEquals("Recommended: 8 bits at 8 kHz (SINAD 49.9 dB, ENOB re full scale 8.00 bits, 8,000 bytes"
+                + " unpacked).",
                 SurveyReport.recommendation(withChoice()));
     }
 
