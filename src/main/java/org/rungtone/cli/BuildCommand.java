@@ -126,9 +126,7 @@ public final class BuildCommand implements Callable<Integer> {
     public Integer call() {
         // Checked here, where the option is known: 0 would otherwise mean "not given" to the board and project
         // code, and the plan's own check cannot say that the value came from --bits.
-        if (bits != null && (bits < 1 || bits > 16)) {
-            throw new InputError("--bits: bit depth must be 1..16, got " + bits);
-        }
+        LadderOptions.bitsOrZero(bits);
         if (source.getFileName() != null && source.getFileName().toString().toLowerCase(Locale.ROOT)
                 .endsWith(".toml")) {
             return buildProject();

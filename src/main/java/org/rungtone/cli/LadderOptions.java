@@ -79,6 +79,22 @@ public final class LadderOptions implements LadderDescription {
             description = "Highest output the buffer reaches (default: logic high).")
     String outMax;
 
+    /**
+     * A command's {@code --bits}, checked: 0 when not given (the ladder's or the profile's bit depth then
+     * applies). A given 0 is refused here, where the option is known, rather than taken as "not given".
+     *
+     * @throws InputError naming {@code --bits} when the value is outside 1..16
+     */
+    static int bitsOrZero(Integer bits) {
+        if (bits == null) {
+            return 0;
+        }
+        if (bits < 1 || bits > 16) {
+            throw new InputError("--bits: bit depth must be 1..16, got " + bits);
+        }
+        return bits;
+    }
+
     /** True when a ladder file or any ladder option was given. */
     @Override
     public boolean given() {

@@ -149,6 +149,18 @@ class BadInputCatalogueTest {
         c.add(bad("ladder: ladder file with a zero base resistor", "board.toml:3: ladder.base_r: must be a "
                 + "positive, finite resistance, got 0", d -> ladder(d, "--ladder", text(d, "board.toml",
                         "[ladder]\ntopology = \"r2r\"\nbase_r = \"0\"\n").toString())));
+        c.add(bad("ladder: r2r base resistor of 1e300 ohms", "--base-r: must be 0.1 ohm to 1e12 ohm, got 1e+300",
+                d -> ladder(d, "--topology", "r2r", "--base-r", "1e300")));
+        c.add(bad("ladder: load of 1e-300 ohms", "--load: must be 0.1 ohm to 1e12 ohm, or inf for none, got 1e-300",
+                d -> ladder(d, "--load", "1e-300")));
+        c.add(bad("ladder: 0 bits", "--bits: bit depth must be 1..16, got 0", d -> ladder(d, "--bits", "0")));
+        c.add(bad("calibrate plan: 0 bits", "--bits: bit depth must be 1..16, got 0",
+                d -> List.of("calibrate", "plan", "--bits", "0", "--out", d.resolve("out").toString())));
+        c.add(bad("calibrate simulate: 0 bits", "--bits: bit depth must be 1..16, got 0",
+                d -> List.of("calibrate", "simulate", "--bits", "0", "--out", d.resolve("out").toString())));
+        c.add(bad("calibrate fit: 0 bits", "--bits: bit depth must be 1..16, got 0",
+                d -> List.of("calibrate", "fit", text(d, "readings.csv", "code,volts\n0,0\n1,1\n").toString(),
+                        "--bits", "0", "--out", d.resolve("out").toString())));
         c.add(bad("ladder: ladder file that is not text", "is not UTF-8 text",
                 d -> ladder(d, "--ladder", write(d, "board.toml", new byte[] {(byte) 0xFF, (byte) 0xFE, 0, 1})
                         .toString())));
