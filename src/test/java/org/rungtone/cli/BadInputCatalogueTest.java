@@ -161,6 +161,18 @@ class BadInputCatalogueTest {
         c.add(bad("calibrate fit: 0 bits", "--bits: bit depth must be 1..16, got 0",
                 d -> List.of("calibrate", "fit", text(d, "readings.csv", "code,volts\n0,0\n1,1\n").toString(),
                         "--bits", "0", "--out", d.resolve("out").toString())));
+        c.add(bad("calibrate fit: every reading the same", "flat.csv: the readings give no usable profile: every"
+                + " code has the same level, 2.5V", d -> List.of("calibrate", "fit", text(d, "flat.csv",
+                        "code,binary,measured\n0,00,2.5\n1,01,2.5\n2,10,2.5\n3,11,2.5\n").toString(), "--out",
+                        d.resolve("out").toString())));
+        c.add(bad("build: flat unit profile", "flat.unit.toml:9: levels.volts: every code has the same level, 2.5V",
+                d -> build(d, wavFile(d), "--unit", profile(d, "flat.unit.toml", "2.5, 2.5, 2.5, 2.5").toString())));
+        c.add(bad("ladder: negated unit profile", "swapped.unit.toml:9: levels.volts: code 3 is 3.75V below code 0"
+                + " (0V), but the levels must rise", d -> ladder(d, "--unit", profile(d, "swapped.unit.toml",
+                        "0, -1.25, -2.5, -3.75").toString())));
+        c.add(bad("ladder: unit profile beyond any voltage", "huge.unit.toml:9: levels.volts: the level of code 1,"
+                + " -1.00e+308 V, is not a plausible board level", d -> ladder(d, "--unit", profile(d,
+                        "huge.unit.toml", "0, -1e308, 1e308, 3").toString())));
         c.add(bad("ladder: ladder file that is not text", "is not UTF-8 text",
                 d -> ladder(d, "--ladder", write(d, "board.toml", new byte[] {(byte) 0xFF, (byte) 0xFE, 0, 1})
                         .toString())));
@@ -394,6 +406,12 @@ class BadInputCatalogueTest {
 
     private static Path text(Path d, String name, String text) throws IOException {
         return Files.writeString(d.resolve(name), text);
+    }
+
+    /** A hand-made 2-bit unit profile whose four levels stand on line 9. */
+    private static Path profile(Path d, String name, String levels) throws IOException {
+        return text(d, name, "[unit]\nboard = \"b\"\ndate = \"2026-05-01\"\nbits = 2\n\n[levels]\nvolts = [\n"
+                + "    # codes 0..3\n    " + levels + ",\n]\n");
     }
 
     private static Path script(Path d, String name, String text) throws IOException {
