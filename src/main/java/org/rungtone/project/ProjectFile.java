@@ -200,7 +200,7 @@ public final class ProjectFile {
         Project.Sound s = new Project.Sound(index, f.line("name"), name, base.resolve(source),
                 f.quantity("rate", "Hz"), loop, f.integer("channel", 0, 8), f.decibels("gain"),
                 f.decibels("normalize"), f.decibels("trim"), f.quantity("fade_in", "s"), f.quantity("fade_out", "s"),
-                f.bool("keep_dc"), f.choice("resampler", "kaiser", "tarsos").map(ResamplerKind::parse));
+                f.bool("keep_dc"), f.choice("resampler", "kaiser", "tarsos").map(ResamplerKind::parse), lines(f));
         f.rejectUnknown();
         if (s.gainDb().isPresent() && s.normalizeDbfs().isPresent()) {
             throw f.error("gain", "conflicts with normalize (line " + f.line("normalize") + "); keep one");

@@ -291,6 +291,17 @@ class BadInputCatalogueTest {
                         + sound)));
         c.add(bad("project: 0 bits", "p.toml:6: quantize.bits: must be 1..16, got 0",
                 d -> project(d, head + "\n[quantize]\nbits = 0\n" + sound)));
+        c.add(bad("project: [quantize] rate = nan", "p.toml:6: quantize.rate: must be 1 Hz..384 kHz: NaN",
+                d -> project(d, head + "\n[quantize]\nrate = nan\n" + sound)));
+        c.add(bad("project: [quantize] rate = \"-16k\"", "p.toml:6: quantize.rate: must be 1 Hz..384 kHz: -16000.0",
+                d -> project(d, head + "\n[quantize]\nrate = \"-16k\"\n" + sound)));
+        c.add(bad("project: a sound's rate = inf", "p.toml:8: sound[1].rate: must be 1 Hz..384 kHz: Infinity",
+                d -> project(d, head + sound + "rate = inf\n")));
+        c.add(bad("project: a sound's fade-in longer than the sound", "p.toml:8: sound[1].fade_in: 10s is longer"
+                + " than the sound (100ms); make it at most 100ms", d -> project(d, head + sound
+                        + "fade_in = \"10s\"\n")));
+        c.add(bad("project: a sound's gain = nan", "p.toml:8: sound[1].gain: must be within ±120 dB: NaN",
+                d -> project(d, head + sound + "gain = nan\n")));
         c.add(bad("project: --bits 0 on the command line", "--bits: bit depth must be 1..16, got 0",
                 d -> {
                     List<String> a = new ArrayList<>(project(d, head + sound));
@@ -301,6 +312,21 @@ class BadInputCatalogueTest {
 
     private static void optionCases(List<Case> c) {
         c.add(bad("build: --rate 0", "--rate must be 1 Hz..384 kHz", d -> build(d, wavFile(d), "--rate", "0")));
+        c.add(bad("build: --fade-in longer than the sound", "--fade-in 10s is longer than the sound (1.6s); make it"
+                + " at most 1.6s", d -> build(d, longTone(d), "--fade-in", "10s")));
+        c.add(bad("build: --fade-out longer than the sound", "--fade-out 10s is longer than the sound (1.6s)",
+                d -> build(d, longTone(d), "--fade-out", "10s")));
+        c.add(bad("build: fades that together overlap", "--fade-in 1s and --fade-out 1s together are longer than the"
+                + " sound (1.6s) and would overlap", d -> build(d, longTone(d), "--fade-in", "1s", "--fade-out",
+                        "1s")));
+        c.add(bad("survey: --fade-in longer than the sound", "--fade-in 10s is longer than the sound (1.6s)",
+                d -> survey(d, longTone(d), "--fade-in", "10s")));
+        c.add(bad("build: --gain of 200 dB", "--gain must be within ±120 dB: 200.0",
+                d -> build(d, wavFile(d), "--gain", "200")));
+        c.add(bad("build: loop start past the sound's end", "--loop start 5s is at or past the sound's end (1.6s,"
+                + " 25600 samples); the loop must start inside the sound", d -> build(d, longTone(d), "--target",
+                        "avr", "--cpu-clock", "16MHz", "--bits", "6", "--pins", "PD2-PD7", "--engine", "loop",
+                        "--loop", "5s:end")));
         c.add(bad("survey: bit depth 0 in --bits-list", "--bits-list 0..20: bit depth must be 1..16: 0",
                 d -> survey(d, wavFile(d), "--bits-list", "0..20")));
         c.add(bad("survey: two quality targets", "give one target, --target-sinad or --target-enob, not both",
@@ -421,6 +447,11 @@ class BadInputCatalogueTest {
     /** A short valid tone, tone.wav: 0.1 s at 16 kHz, 1,600 samples. */
     private static Path wavFile(Path d) throws IOException {
         return write(d, "tone.wav", tone());
+    }
+
+    /** A 1.6 s tone at 16 kHz, chirp.wav: 25,600 samples. */
+    private static Path longTone(Path d) throws IOException {
+        return write(d, "chirp.wav", WavFixtures.sine16(16_000, 1.6, 440, 0.5));
     }
 
     private static byte[] tone() {
