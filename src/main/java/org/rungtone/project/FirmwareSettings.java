@@ -2,6 +2,7 @@ package org.rungtone.project;
 
 import java.util.Optional;
 import org.rungtone.firmware.FirmwareRequest;
+import org.rungtone.firmware.FlashAttribute;
 import org.rungtone.internal.Setting;
 
 /**
@@ -14,8 +15,13 @@ import org.rungtone.internal.Setting;
  */
 public record FirmwareSettings(Optional<FirmwareRequest> player, Optional<LoopSpan> loop, long flashBudgetBytes,
         String flashQualifier) {
-    /** Validates the budget. */
+    /**
+     * Validates the budget and the attribute ({@link FlashAttribute}), which is kept trimmed.
+     *
+     * @throws org.rungtone.internal.SettingError naming the setting at fault
+     */
     public FirmwareSettings {
         Setting.FLASH_BUDGET.check(flashBudgetBytes >= 0, "must be positive: %d", flashBudgetBytes);
+        flashQualifier = FlashAttribute.check(flashQualifier);
     }
 }

@@ -16,6 +16,7 @@ import java.util.Locale;
 import org.rungtone.calibrate.OutputSpan;
 import org.rungtone.condition.ResamplerKind;
 import org.rungtone.firmware.CNames;
+import org.rungtone.firmware.FlashAttribute;
 import org.rungtone.firmware.PinStrategy;
 import org.rungtone.firmware.PlaybackEngine;
 import org.rungtone.firmware.SampleStorage;
@@ -140,7 +141,7 @@ public final class ProjectFile {
                 f.choice("pin_strategy", "auto", "shift", "table", "scatter").map(PinStrategy::parse),
                 f.choice("storage", "unpacked", "packed").map(SampleStorage::parse),
                 f.choice("engine", "clip", "loop", "dds").map(PlaybackEngine::parse),
-                f.quantity("rate_tolerance", ""), bytes(f, "flash_budget"), f.string("flash_attr"),
+                f.quantity("rate_tolerance", ""), bytes(f, "flash_budget"), f.parsed("flash_attr", FlashAttribute::check),
                 f.quantity("dds_frequency", "Hz"), f.integer("dds_phase_bits", 8, 32), lines(f));
         f.rejectUnknown();
         if (r.flashAttr().isPresent() && (r.family().isPresent() || r.pins().isPresent())) {

@@ -209,6 +209,16 @@ class BadInputCatalogueTest {
                         "packed")));
         c.add(bad("build: DDS option without the dds engine", "--dds-frequency and --dds-phase-bits set up the"
                 + " dds engine; add --engine dds", d -> build(d, wavFile(d), "--dds-frequency", "440")));
+        c.add(bad("build: --flash-attr that ends the declaration", "--flash-attr 'PROGMEM; int evil = 1; /*' is not"
+                + " a C attribute: ';' at column 8 is not allowed", d -> build(d, wavFile(d), "--flash-attr",
+                        "PROGMEM; int evil = 1; /*")));
+        c.add(bad("build: --flash-attr with a line break", "--flash-attr 'PROGMEM\\n#define x' is not a C"
+                + " attribute: '\\n' at column 8", d -> build(d, wavFile(d), "--flash-attr", "PROGMEM\n#define x")));
+        c.add(bad("build: --flash-attr with an unclosed group", "the '(' at column 15 is never closed",
+                d -> build(d, wavFile(d), "--flash-attr", "__attribute__((section(\".x\")")));
+        c.add(bad("project: flash_attr with a brace", "p.toml:6: target.flash_attr: '} x' is not a C attribute",
+                d -> project(d, "[project]\nname = \"bench\"\nout = \"out\"\n\n[target]\nflash_attr = \"} x\"\n"
+                        + "\n[[sound]]\nname = \"tone\"\nsource = \"tone.wav\"\n")));
         c.add(bad("build: samples over the flash budget", "1,590 bytes over the 10-byte flash budget"
                 + " (--flash-budget); no smaller bit depth or rate fits either",
                 d -> build(d, wavFile(d), "--flash-budget", "10")));
