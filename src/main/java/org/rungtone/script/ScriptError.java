@@ -46,14 +46,24 @@ public final class ScriptError extends InputError {
     }
 
     /**
-     * Two lines: the source line, and a line with a caret under the column (tabs in the source are kept
-     * so the caret lines up in a terminal).
+     * Two lines: the source line, and a line with a caret under the column. Control characters in the line
+     * are shown escaped as in the message ({@link InputError#oneLine}), so that a terminal prints them rather
+     * than obeying them, and the caret moves along by the width of each escape; tabs are kept so the caret
+     * lines up in a terminal.
      */
     public List<String> excerpt() {
+        StringBuilder shown = new StringBuilder();
         StringBuilder caret = new StringBuilder();
-        for (int i = 0; i < column - 1; i++) {
-            caret.append(i < sourceLine.length() && sourceLine.charAt(i) == '\t' ? '\t' : ' ');
+        for (int i = 0; i < Math.max(sourceLine.length(), column - 1); i++) {
+            char c = i < sourceLine.length() ? sourceLine.charAt(i) : ' ';
+            String s = c == '\t' ? "\t" : InputError.oneLine(String.valueOf(c));
+            if (i < sourceLine.length()) {
+                shown.append(s);
+            }
+            if (i < column - 1) {
+                caret.append(c == '\t' ? "\t" : " ".repeat(s.length()));
+            }
         }
-        return List.of(sourceLine, caret.append('^').toString());
+        return List.of(shown.toString(), caret.append('^').toString());
     }
 }

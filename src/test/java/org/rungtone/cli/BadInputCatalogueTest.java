@@ -126,6 +126,8 @@ class BadInputCatalogueTest {
                 d -> build(d, script(d, "nan.rung", "duration 1s\nout log(t - 1)\n"))));
         c.add(bad("survey: script divides by zero", "'/' produced infinity at t = 0s",
                 d -> survey(d, script(d, "div.rung", "duration 1s\nout 1 / (t - t)\n"))));
+        c.add(bad("build: script error on a line with terminal escapes", "esc.rung:2:7: unexpected character"
+                + " '\\u001B'", d -> build(d, script(d, "esc.rung", "duration 1s\nout 1 \u001b[2J\u001b[31m\n"))));
         c.add(bad("build: script is not UTF-8", "is not UTF-8 text",
                 d -> build(d, write(d, "latin.rung", new byte[] {'o', 'u', 't', ' ', (byte) 0xB5, '\n'}))));
     }
@@ -371,6 +373,9 @@ class BadInputCatalogueTest {
             // a script error shows its line and a caret under the column (issue 3), nothing more
             assertEquals(3, lines.size(), () -> "script error with excerpt:\n" + r.err());
             assertTrue(lines.get(2).trim().endsWith("^"), r.err());
+            // the echoed script line is escaped like the message: a terminal shows it rather than obeying it
+            assertTrue(lines.get(1).chars().noneMatch(ch -> ch < 0x20 && ch != '\t' || ch >= 0x7f && ch <= 0x9f),
+                    r.err());
         } else if (c.exitCode() == 1) {
             assertEquals(1, lines.size(), () -> "more than one line:\n" + r.err());
         } else {

@@ -3,6 +3,7 @@ package org.rungtone.script;
 import static org.junit.jupiter.api.Assertions.assertDoesNotThrow;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import java.util.stream.Stream;
@@ -168,6 +169,18 @@ class ScriptErrorTest {
         assertEquals("tabs.rung:2:6: unknown name 'foo'; expected a built-in (t, n, fs, phase, pitch, dur, pi) or "
                 + "a name defined above with 'let'", e.getMessage());
         assertEquals(List.of("\tout\tfoo", "\t   \t^"), e.excerpt());
+    }
+
+    @Test
+    void excerptEscapesTerminalControlsAndTheCaretFollows() {
+        // ESC [ 2 J clears a terminal; echoed raw, the error line would be wiped off the screen
+        ScriptError e = assertThrows(ScriptError.class,
+                () -> RungScript.parse("duration 1s\nout 1 \u001b[2J + \u009b2J + foo\n", "esc.rung"));
+        assertEquals(List.of("out 1 \\u001B[2J + \\u009B2J + foo", "      ^"), e.excerpt());
+        ScriptError later = new ScriptError("esc.rung", 2, 13, "unknown name 'foo'", "out 1\u001b[2J + foo");
+        assertEquals(List.of("out 1\\u001B[2J + foo", " ".repeat(17) + "^"), later.excerpt());
+        assertTrue(later.excerpt().stream().allMatch(line -> line.chars().noneMatch(c -> c < 0x20 && c != '\t'
+                || c >= 0x7f && c <= 0x9f)));
     }
 
     @Test
