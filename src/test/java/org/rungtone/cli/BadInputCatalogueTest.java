@@ -128,6 +128,10 @@ class BadInputCatalogueTest {
                 d -> survey(d, script(d, "div.rung", "duration 1s\nout 1 / (t - t)\n"))));
         c.add(bad("build: script error on a line with terminal escapes", "esc.rung:2:7: unexpected character"
                 + " '\\u001B'", d -> build(d, script(d, "esc.rung", "duration 1s\nout 1 \u001b[2J\u001b[31m\n"))));
+        c.add(bad("build: script nested 100,000 parentheses deep", "deep.rung:2:", d -> build(d, script(d,
+                "deep.rung", "duration 1s\nout " + "(".repeat(100_000) + "t" + ")".repeat(100_000) + "\n"))));
+        c.add(bad("build: script whose named values chain 3,000 deep", "lets.rung:2874:19: the expression is nested"
+                + " more than 256 levels deep here", d -> build(d, script(d, "lets.rung", letChain(3000)))));
         c.add(bad("build: script is not UTF-8", "is not UTF-8 text",
                 d -> build(d, write(d, "latin.rung", new byte[] {'o', 'u', 't', ' ', (byte) 0xB5, '\n'}))));
     }
@@ -453,6 +457,15 @@ class BadInputCatalogueTest {
     private static Path profile(Path d, String name, String levels) throws IOException {
         return text(d, name, "[unit]\nboard = \"b\"\ndate = \"2026-05-01\"\nbits = 2\n\n[levels]\nvolts = [\n"
                 + "    # codes 0..3\n    " + levels + ",\n]\n");
+    }
+
+    /** A clip whose output is the last of {@code n} named values, each defined by the one before. */
+    private static String letChain(int n) {
+        StringBuilder b = new StringBuilder("duration 10ms\nlet a0 = t\n");
+        for (int i = 1; i < n; i++) {
+            b.append("let a").append(i).append(" = a").append(i - 1).append(" + 0.000001\n");
+        }
+        return b.append("out 0.001 * a").append(n - 1).append('\n').toString();
     }
 
     private static Path script(Path d, String name, String text) throws IOException {
