@@ -51,6 +51,29 @@ public final class BoardFit {
         }
     }
 
+    /** The switched-load fit, when the readings determine it and it is physical; else why not. */
+    private record SwitchedTry(RobustFit.Outcome outcome, String note) {
+    }
+
+    private static SwitchedTry trySwitchedLoad(int bits, int[] codes, double[] values, double floor) {
+        int n = codes.length;
+        int pb = 2 * bits + 1;
+        if (n < pb + 1) {
+            return new SwitchedTry(null, String.format(Locale.ROOT, "the switched-load model needs at least %d"
+                    + " measured codes (2N + 2), there are %d", pb + 1, n));
+        }
+        SwitchedLoadFit b = new SwitchedLoadFit(bits, codes, values);
+        RobustFit.Outcome ob = b.determined(RobustFit.rows(new boolean[n])) ? RobustFit.run(b, values, floor) : null;
+        if (ob == null) {
+            return new SwitchedTry(null, "the readings do not determine the switched-load model (each bit must also"
+                    + " be high together with others)");
+        }
+        if (!usable((SwitchedLoad) b.model(ob.theta()))) {
+            return new SwitchedTry(null, "the switched-load fit is not physical (its denominator reaches zero)");
+        }
+        return new SwitchedTry(ob, "");
+    }
+
     /**
      * Fits the readings.
      *
@@ -87,22 +110,9 @@ public final class BoardFit {
         double floor = Math.max(meter, 1e-9 * Math.max(maxAbs, 1e-3));
 
         RobustFit.Outcome oa = RobustFit.run(a, values, floor);
-        int pb = 2 * bits + 1;
-        RobustFit.Outcome ob = null;
-        String bNote;
-        if (n < pb + 1) {
-            bNote = String.format(Locale.ROOT, "the switched-load model needs at least %d measured codes"
-                    + " (2N + 2), there are %d", pb + 1, n);
-        } else {
-            SwitchedLoadFit b = new SwitchedLoadFit(bits, codes, values);
-            ob = b.determined(RobustFit.rows(new boolean[n])) ? RobustFit.run(b, values, floor) : null;
-            bNote = ob == null ? "the readings do not determine the switched-load model (each bit must also be"
-                    + " high together with others)" : "";
-            if (ob != null && !usable((SwitchedLoad) b.model(ob.theta()))) {
-                ob = null;
-                bNote = "the switched-load fit is not physical (its denominator reaches zero)";
-            }
-        }
+        SwitchedTry tried = trySwitchedLoad(bits, codes, values, floor);
+        RobustFit.Outcome ob = tried.outcome();
+        String bNote = tried.note();
         Choice choice = choose(a, values, ob, bNote, bits, floor);
         RobustFit.Outcome chosen = choice.useB ? ob : oa;
         BoardModel model = chosen.kind().model(chosen.theta());

@@ -52,7 +52,8 @@ public final class UnitFit {
     /**
      * Reads, fits and makes the profile.
      *
-     * @throws InputError when the readings cannot be read or fitted, or the board name is empty
+     * @throws InputError when the readings cannot be read or fitted, their profile would be flat or falling
+     *     ({@link UsableLevels}), or the board name is empty
      */
     public static Result run(Request r) {
         Optional<LadderSpec> ladder = r.ladder();
@@ -62,6 +63,9 @@ public final class UnitFit {
                 ladder.map(s -> s.buffer().outMinVolts()).orElse(Double.NaN),
                 ladder.map(s -> s.buffer().outMaxVolts()).orElse(Double.NaN));
         FitReport fit = BoardFit.fit(m, settings);
+        UsableLevels.problem(fit.levels().levels()).ifPresent(p -> {
+            throw new InputError(m.source() + ": the readings give no usable profile: " + p.detail());
+        });
         String board = r.board().map(String::trim).orElseGet(() -> FileNames.stem(r.measurements(), "board"));
         if (board.isEmpty()) {
             throw new InputError("--board: the name is empty");

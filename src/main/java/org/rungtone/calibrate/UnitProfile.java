@@ -45,16 +45,24 @@ public final class UnitProfile {
     private final LevelTable levels;
 
     /**
+     * How well a profile's model fits its readings.
+     *
+     * @param residualRmsVolts the chosen fit's residual, NaN if unknown
+     * @param meterStepVolts the meter's resolution, 0 if unknown
+     * @param outlierCodes codes whose readings the fit left out
+     */
+    public record Quality(double residualRmsVolts, double meterStepVolts, List<Integer> outlierCodes) {
+    }
+
+    /**
      * A profile from its parts.
      *
      * @param ladder the ladder description it was built as ("" if unknown)
-     * @param residualRmsVolts the chosen fit's residual, NaN if unknown
-     * @param meterStepVolts the meter's resolution, 0 if unknown
+     * @param fit how well the model fits the readings
      * @throws IllegalArgumentException when the board name is blank or the model's bits differ from the table's
      */
     public UnitProfile(String board, LocalDate date, String ladder, int readings, TableSource tableSource,
-            Optional<BoardModel> model, double residualRmsVolts, double meterStepVolts, List<Integer> outlierCodes,
-            LevelTable levels) {
+            Optional<BoardModel> model, Quality fit, LevelTable levels) {
         Checks.checkArgument(board != null && !board.isBlank(), "a profile needs a board name");
         Checks.checkArgument(model.map(BoardModel::bits).orElse(levels.bits()) == levels.bits(),
                 "model and table differ in bits");
@@ -64,9 +72,9 @@ public final class UnitProfile {
         this.readings = readings;
         this.tableSource = Objects.requireNonNull(tableSource, "tableSource");
         this.model = model;
-        this.residualRmsVolts = residualRmsVolts;
-        this.meterStepVolts = meterStepVolts;
-        this.outlierCodes = List.copyOf(outlierCodes);
+        this.residualRmsVolts = fit.residualRmsVolts();
+        this.meterStepVolts = fit.meterStepVolts();
+        this.outlierCodes = List.copyOf(fit.outlierCodes());
         this.levels = levels.withOrigin(origin(board, date));
     }
 
@@ -74,7 +82,7 @@ public final class UnitProfile {
     public static UnitProfile of(FitReport fit, String board, LocalDate date, String ladderDescription) {
         return new UnitProfile(board, date, ladderDescription, fit.readingCount(),
                 fit.tableMeasured() ? TableSource.MEASURED : TableSource.FITTED, Optional.of(fit.chosen()),
-                fit.chosenSummary().rmsVolts(), fit.resolutionVolts(), fit.outlierCodes(), fit.levels());
+                new Quality(fit.chosenSummary().rmsVolts(), fit.resolutionVolts(), fit.outlierCodes()), fit.levels());
     }
 
     private static String origin(String board, LocalDate date) {

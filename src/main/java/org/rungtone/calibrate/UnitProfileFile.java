@@ -124,11 +124,11 @@ final class UnitProfileFile {
                 e -> new InputError(at(file, e.position()) + ": not valid TOML: " + e.getMessage(), e));
         for (String key : root.keySet()) {
             if (!TABLES.contains(key)) {
-                throw new Reader(root, file).error(key, "unknown table or key; a unit profile has [unit], [model]"
+                throw new Reader(root, file, text).error(key, "unknown table or key; a unit profile has [unit], [model]"
                         + " and [levels]");
             }
         }
-        Reader r = new Reader(root, file);
+        Reader r = new Reader(root, file, text);
         if (!root.isTable("unit")) {
             throw new InputError(file + ": no [unit] table; is this a unit profile from 'rungtone calibrate fit'?");
         }
@@ -158,6 +158,9 @@ final class UnitProfileFile {
         }
         r.known("levels", List.of("volts"));
         double[] volts = r.numbers("levels.volts", 1 << bits, "one level per code, code 0 first");
+        UsableLevels.problem(volts).ifPresent(p -> {
+            throw r.entryError("levels.volts", p.code(), p.detail());
+        });
         Optional<BoardModel> model = Optional.empty();
         double residual = Double.NaN;
         double step = 0;
@@ -172,8 +175,8 @@ final class UnitProfileFile {
             step = r.number("model.meter_step_volts", 0);
             outliers = r.codes("model.outlier_codes", 1 << bits);
         }
-        return new UnitProfile(board, date, ladder, (int) Math.max(0, readings), source, model, residual, step,
-                outliers, LevelTable.of((int) bits, volts, "unit"));
+        return new UnitProfile(board, date, ladder, (int) Math.max(0, readings), source, model,
+                new UnitProfile.Quality(residual, step, outliers), LevelTable.of((int) bits, volts, "unit"));
     }
 
     private static BoardModel model(Reader r, int bits) {
@@ -202,10 +205,18 @@ final class UnitProfileFile {
     private static final class Reader {
         private final TomlParseResult root;
         private final Path file;
+        private final String text;
 
-        Reader(TomlParseResult root, Path file) {
+        Reader(TomlParseResult root, Path file, String text) {
             this.root = root;
             this.file = file;
+            this.text = text;
+        }
+
+        /** "FILE:LINE" of entry {@code index} of a list. */
+        private String atEntry(TomlArray a, int index) {
+            TomlPosition pos = a.inputPositionOf(index);
+            return pos == null ? file.toString() : file + ":" + TomlText.entryLine(text, pos);
         }
 
         InputError error(String key, String detail) {
@@ -214,6 +225,12 @@ final class UnitProfileFile {
                 pos = TomlText.positionOf(root, key.substring(0, key.indexOf('.')));
             }
             return new InputError(at(file, pos) + ": " + key + ": " + detail);
+        }
+
+        /** An error about entry {@code index} of the list at {@code key}, at that entry's line. */
+        InputError entryError(String key, int index, String detail) {
+            return root.get(key) instanceof TomlArray a ? new InputError(atEntry(a, index) + ": " + key + ": "
+                    + detail) : error(key, detail);
         }
 
         void known(String table, List<String> keys) {
@@ -286,7 +303,7 @@ final class UnitProfileFile {
             for (int i = 0; i < count; i++) {
                 Object e = a.get(i);
                 if (!(e instanceof Number) || !Double.isFinite(((Number) e).doubleValue())) {
-                    throw new InputError(at(file, a.inputPositionOf(i)) + ": " + key + ": entry " + i
+                    throw new InputError(atEntry(a, i) + ": " + key + ": entry " + i
                             + " is not a finite number");
                 }
                 out[i] = ((Number) e).doubleValue();
@@ -307,7 +324,7 @@ final class UnitProfileFile {
             for (int i = 0; i < a.size(); i++) {
                 Object e = a.get(i);
                 if (!(e instanceof Long) || (Long) e < 0 || (Long) e >= size) {
-                    throw new InputError(at(file, a.inputPositionOf(i)) + ": " + key + ": entry " + i
+                    throw new InputError(atEntry(a, i) + ": " + key + ": entry " + i
                             + " is not a code 0.." + (size - 1));
                 }
                 out.add((int) (long) (Long) e);

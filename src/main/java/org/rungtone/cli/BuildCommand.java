@@ -122,16 +122,12 @@ public final class BuildCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        // Checked here, where the option is known: 0 would otherwise mean "not given" to the board and project
-        // code, and the plan's own check cannot say that the value came from --bits.
-        if (bits != null && (bits < 1 || bits > 16)) {
-            throw new InputError("--bits: bit depth must be 1..16, got " + bits);
-        }
+        LadderOptions.bitsOrZero(bits);
         if (source.getFileName() != null && source.getFileName().toString().toLowerCase(Locale.ROOT)
                 .endsWith(".toml")) {
             return buildProject();
         }
-        Boards.Board board = unit.resolve(bits == null ? 0 : bits, ladder, false);
+        Boards.Board board = unit.resolve(bits, ladder, false);
         BuildPlan plan = plan(board);
         if (!common.quiet) {
             for (String w : board.warnings()) {

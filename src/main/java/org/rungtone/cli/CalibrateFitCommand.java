@@ -47,7 +47,7 @@ public final class CalibrateFitCommand implements Callable<Integer> {
 
     @Option(names = "--bits", paramLabel = "N",
             description = "Bit depth (default: the ladder's, else the width of the file's binary column).")
-    int bits;
+    Integer bits;
 
     @Mixin
     LadderOptions ladder;
@@ -76,9 +76,11 @@ public final class CalibrateFitCommand implements Callable<Integer> {
         if (resolution != null && !(resolution > 0 && resolution < 10)) {
             throw new InputError("--resolution must be a positive voltage below 10 V, e.g. 1mV: " + resolution);
         }
+        int bitsOrZero = LadderOptions.bitsOrZero(bits);
         AtomicFiles.checkFolderUsable(output.out);
-        Optional<LadderSpec> ladderSpec = ladder.given() ? Optional.of(ladder.spec(bits)) : Optional.empty();
-        UnitFit.Result r = UnitFit.run(new UnitFit.Request(measurements, bits, ladderSpec, Optional.ofNullable(board),
+        Optional<LadderSpec> ladderSpec = ladder.given() ? Optional.of(ladder.spec(bitsOrZero)) : Optional.empty();
+        UnitFit.Result r = UnitFit.run(new UnitFit.Request(measurements, bitsOrZero, ladderSpec,
+                Optional.ofNullable(board),
                 day, resolution == null ? OptionalDouble.empty() : OptionalDouble.of(resolution)));
         List<Path> files;
         try (OutputFolder folder = OutputFolder.open(output.out, "fit")) {

@@ -85,11 +85,7 @@ final class Converters {
         }
     }
 
-    /**
-     * Registers the converters of the typed choices every command shares (resampler, shaping, span,
-     * compensation, timer, pin strategy, storage, engine, reconstruction filter): each is read by its type's own
-     * parser, and a word it does not know is a usage error naming the choices.
-     */
+    /** Registers the typed choices' converters: each type's own parser; an unknown word is a usage error. */
     static void registerChoices(picocli.CommandLine cl) {
         cl.registerConverter(ResamplerKind.class, v -> choice(v, ResamplerKind::parse));
         cl.registerConverter(ErrorFilter.class, v -> choice(v, ErrorFilter::parse));

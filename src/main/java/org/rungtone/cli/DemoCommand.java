@@ -49,8 +49,8 @@ public final class DemoCommand implements Callable<Integer> {
             w.print(ProjectReport.text(r.report()));
             w.println();
             w.println("Demo done. Outputs are in " + r.outDir());
-            w.println("Open report.html there, listen to the preview.wav files (start with the volume low),");
-            w.println("and look at greenhouse.h for the player's API. The scenario is in " + scenario.toAbsolutePath());
+            w.println("Open report.html there, listen to the preview.wav files (start with the volume low),\nand look"
+                    + " at greenhouse.h for the player's API. The scenario is in " + scenario.toAbsolutePath());
         }
         w.flush();
         return 0;

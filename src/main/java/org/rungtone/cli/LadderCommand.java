@@ -59,7 +59,7 @@ public final class LadderCommand implements Callable<Integer> {
     UnitOptions unit;
 
     @Option(names = "--bits", paramLabel = "N", description = "Bit depth 1..16 (default: the ladder's, else 8).")
-    int bits;
+    Integer bits;
 
     @Option(names = "--pin-names", split = ",", paramLabel = "NAME",
             description = "Names of the pins driving bits 0.. for the wiring table, e.g. PB0,PB1 (default D0..).")

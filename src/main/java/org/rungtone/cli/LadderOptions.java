@@ -5,6 +5,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import org.rungtone.internal.InputError;
 import org.rungtone.ladder.LadderDescription;
 import org.rungtone.ladder.LadderOverrides;
 import org.rungtone.ladder.LadderSpec;
@@ -73,6 +74,17 @@ public final class LadderOptions implements LadderDescription {
     @Option(names = "--out-max", paramLabel = "<volts>",
             description = "Highest output the buffer reaches (default: logic high).")
     String outMax;
+
+    /** A command's {@code --bits} checked against 1..16 where the option is known; 0 when not given. */
+    static int bitsOrZero(Integer bits) {
+        if (bits == null) {
+            return 0;
+        }
+        if (bits < 1 || bits > 16) {
+            throw new InputError("--bits: bit depth must be 1..16, got " + bits);
+        }
+        return bits;
+    }
 
     /** The options as a ladder description: the file, with the options given on top. */
     private LadderOverrides description() {

@@ -10,7 +10,7 @@ import picocli.CommandLine.Option;
 /** The ladder and the choice of codes to measure, shared by 'calibrate plan' and 'calibrate simulate'. */
 public final class PlanOptions {
     @Option(names = "--bits", paramLabel = "N", description = "Bit depth 1..16 (default: the ladder's, else 8).")
-    int bits;
+    Integer bits;
 
     @Mixin
     LadderOptions ladder;
@@ -31,7 +31,7 @@ public final class PlanOptions {
 
     /** The described ladder. */
     LadderSpec spec() {
-        return ladder.spec(bits);
+        return ladder.spec(LadderOptions.bitsOrZero(bits));
     }
 
     /** The choice of codes to measure. */

@@ -28,15 +28,9 @@ public final class UnitOptions {
         return Optional.ofNullable(unitFile);
     }
 
-    /**
-     * The board from --unit, the ladder options and --bits (see {@link Boards#decide}).
-     *
-     * @param bitsOrZero the command's --bits, or 0 when not given
-     * @param ladder the command's ladder options
-     * @param alwaysSpec true to describe a ladder (defaults filled in) even when no ladder option was given
-     */
-    public Boards.Board resolve(int bitsOrZero, LadderOptions ladder, boolean alwaysSpec) {
-        return Boards.decide(path(), ladder, bitsOrZero == 0 ? OptionalInt.empty() : OptionalInt.of(bitsOrZero),
-                alwaysSpec);
+    /** The board from --unit, the ladder options and --bits when given ({@link Boards#decide}). */
+    public Boards.Board resolve(Integer bits, LadderOptions ladder, boolean alwaysSpec) {
+        int given = LadderOptions.bitsOrZero(bits);
+        return Boards.decide(path(), ladder, given == 0 ? OptionalInt.empty() : OptionalInt.of(given), alwaysSpec);
     }
 }

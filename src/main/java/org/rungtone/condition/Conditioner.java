@@ -3,6 +3,8 @@ package org.rungtone.condition;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.rungtone.internal.Setting;
+import org.rungtone.internal.Units;
 import org.rungtone.source.SampleSource;
 import org.rungtone.source.Signal;
 
@@ -77,6 +79,7 @@ public final class Conditioner {
                 trimmedEnd = (length - 1 - last) / rate;
             }
         }
+        checkFades(c, last + 1 - first, rate, trimmedStart + trimmedEnd > 0);
         String how = "none";
         Signal s;
         if (rate != c.targetRateHz()) {
@@ -104,17 +107,38 @@ public final class Conditioner {
         int n = y.length;
         int fadeIn = (int) Math.min(n, Math.round(c.fadeInSeconds() * s.sampleRateHz()));
         int fadeOut = (int) Math.min(n, Math.round(c.fadeOutSeconds() * s.sampleRateHz()));
-        if (fadeIn + fadeOut > n && n > 0) {
-            warnings.add(String.format(Locale.ROOT, "fades (%.0f ms + %.0f ms) are longer than the clip"
-                    + " (%.0f ms); they overlap", 1000 * c.fadeInSeconds(), 1000 * c.fadeOutSeconds(),
-                    1000.0 * n / s.sampleRateHz()));
-        }
         long over = levelAndCount(y, g, fadeIn, fadeOut);
         if (over > 0) {
             warnings.add(String.format(Locale.ROOT, "%d samples exceed full scale after conditioning and will"
                     + " clip; lower the gain or normalize instead", over));
         }
         return new Conditioned(s, gainDb, trimmedStart, trimmedEnd, how, warnings);
+    }
+
+    /**
+     * Refuses fades that do not fit in the sound ({@code samples} at {@code rateHz} once trimmed): each fade,
+     * and both together, must fit, so that the fades never overlap. Half a sample of slack keeps a fade over
+     * exactly the whole sound.
+     */
+    private static void checkFades(Conditioning c, int samples, double rateHz, boolean trimmed) {
+        double in = c.fadeInSeconds();
+        double out = c.fadeOutSeconds();
+        if (in == 0 && out == 0) {
+            return;
+        }
+        double seconds = samples / rateHz;
+        double slack = 0.5 / rateHz;
+        String length = Units.format(seconds, "s") + (trimmed ? " once trimmed" : "");
+        for (Setting fade : new Setting[] {Setting.FADE_IN, Setting.FADE_OUT}) {
+            double t = fade == Setting.FADE_IN ? in : out;
+            fade.check(t <= seconds + slack, "%s is longer than the sound (%s); make it at most %s",
+                    Units.format(t, "s"), length, Units.format(seconds, "s"));
+        }
+        if (in + out > seconds + slack) {
+            throw Setting.FADE_IN.problem("%s %s and %s %s together are longer than the sound (%s) and would"
+                    + " overlap; make them add up to at most %s", Setting.FADE_IN.ref(), Units.format(in, "s"),
+                    Setting.FADE_OUT.ref(), Units.format(out, "s"), length, Units.format(seconds, "s"));
+        }
     }
 
     // The passes over the result are small methods of their own: a fresh JVM compiles each hot loop apart,

@@ -30,9 +30,14 @@ public final class SampleArrayEmitter {
      */
     public record Request(String symbol, Codes codes, String flashQualifier, String toolVersion,
             List<String> settings) {
-        /** Copies the settings list. */
+        /**
+         * Copies the settings list and checks the attribute ({@link FlashAttribute}).
+         *
+         * @throws org.rungtone.internal.SettingError when the attribute is not one
+         */
         public Request {
             settings = List.copyOf(settings);
+            flashQualifier = FlashAttribute.check(flashQualifier);
         }
     }
 

@@ -20,10 +20,11 @@ public class InputError extends RuntimeException {
 
     /**
      * Keeps a message on one line when it quotes the user's text: line breaks and other control characters
-     * (a carriage return escaped into a TOML name, a tab in a script token) are written as backslash escapes
-     * such as {@code \n} and {@code \t}; the rest as a backslash, the letter u and four hex digits.
+     * (a carriage return escaped into a TOML name, a tab in a script token, the escape that starts a
+     * terminal's control sequence) are written as backslash escapes such as {@code \n} and {@code \t}; the
+     * rest, the C1 controls 0x80-0x9F included, as a backslash, the letter u and four hex digits.
      */
-    static String oneLine(String message) {
+    public static String oneLine(String message) {
         if (message == null) {
             return null;
         }
@@ -36,7 +37,7 @@ public class InputError extends RuntimeException {
                 b.append("\\r");
             } else if (c == '\t') {
                 b.append("\\t");
-            } else if (c < 0x20 || c == 0x7F || c == 0x85 || c == 0x2028 || c == 0x2029) {
+            } else if (c < 0x20 || (c >= 0x7F && c <= 0x9F) || c == 0x2028 || c == 0x2029) {
                 b.append(String.format(java.util.Locale.ROOT, "\\u%04X", (int) c));
             } else {
                 b.append(c);

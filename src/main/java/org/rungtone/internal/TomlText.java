@@ -44,6 +44,35 @@ public final class TomlText {
     }
 
     /**
+     * The line of an array entry whose tomlj position is {@code pos}. tomlj 1.1.1 places an entry just after
+     * the bracket or comma before it, which is the line above when entries stand one per line; this skips
+     * blanks, line breaks and comments from there to the entry itself.
+     */
+    public static int entryLine(String text, TomlPosition pos) {
+        int line = 1;
+        int i = 0;
+        while (line < pos.line() && i < text.length()) {
+            if (text.charAt(i++) == '\n') {
+                line++;
+            }
+        }
+        i += pos.column() - 1;
+        boolean comment = false;
+        for (; i < text.length(); i++) {
+            char c = text.charAt(i);
+            if (c == '\n') {
+                line++;
+                comment = false;
+            } else if (c == '#') {
+                comment = true;
+            } else if (!comment && c != ' ' && c != '\t' && c != '\r') {
+                break;
+            }
+        }
+        return line;
+    }
+
+    /**
      * The position of a dotted key such as {@code unit.board}. When a part is a quoted key that is not valid
      * dotted-key syntax ({@code "bad key"}), it is looked up as one name, under its table when the first part
      * names one; null when the key is not there.

@@ -29,7 +29,11 @@ final class NodalSolver {
         this.spec = spec;
         this.ohms = ohms;
         this.code = code;
-        this.solver = new LUDecomposition(conductance()).getSolver();
+        // G is strictly diagonally dominant (every node has its own pin's leg to a source), so it is
+        // nonsingular for any positive values. Commons Math's default singularity threshold (1e-11) is an
+        // absolute bound on the pivots, in siemens here, and would call a network of 100 GOhm parts singular;
+        // only a pivot that is zero or subnormal means a failed solve.
+        this.solver = new LUDecomposition(conductance(), Double.MIN_NORMAL).getSolver();
     }
 
     static int nodeCount(LadderSpec spec) {

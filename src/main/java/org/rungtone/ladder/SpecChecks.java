@@ -7,6 +7,21 @@ import org.rungtone.internal.Units;
 
 /** The validation rules and warnings of a {@link LadderSpec}, with their messages in one place. */
 final class SpecChecks {
+    /**
+     * The smallest resistance a ladder may hold, ohms. Far below any pin's own output resistance (tens of
+     * ohms), so a smaller part could not set a level anyway.
+     */
+    static final double MIN_OHMS = 0.1;
+    /**
+     * The largest resistance a ladder (and its load) may hold, ohms: about the leakage across a clean board's
+     * surface, so a larger part is no longer what sets the current. Between the two limits the conductances
+     * of the nodal matrix span at most 13 decades (10 S to 1 pS), well inside the 16 digits of a double, so
+     * the solve keeps several significant digits in the worst mix of values; far outside them a part's
+     * conductance vanishes against the others' and the matrix is numerically singular.
+     */
+    static final double MAX_OHMS = 1e12;
+    private static final String RANGE = "0.1 ohm to 1e12 ohm";
+
     private SpecChecks() {
     }
 
@@ -27,10 +42,13 @@ final class SpecChecks {
                 double r = rs.get(i);
                 require(Double.isFinite(r) && r > 0, "resistors",
                         "bit %d needs a positive, finite resistance, got %s", i, ohms(r));
+                require(inRange(r), "resistors", "bit %d needs a resistance of %s, got %s", i, RANGE, ohms(r));
             }
         }
         require(Double.isFinite(s.baseROhms()) && s.baseROhms() > 0, "base_r",
                 "must be a positive, finite resistance, got %s", ohms(s.baseROhms()));
+        require(inRange(s.baseROhms()), "base_r", "must be %s, got %s", RANGE, ohms(s.baseROhms()));
+        checkDerived(s);
         require(s.tolerance() >= 0 && s.tolerance() <= 0.5, "tolerance", "must be 0%% to 50%%, got %s",
                 percent(s.tolerance()));
         require(Double.isFinite(s.logicLowVolts()), "logic_low", "must be a finite voltage");
@@ -38,16 +56,38 @@ final class SpecChecks {
                 "must be above logic_low (%s), got %s", volts(s.logicLowVolts()), volts(s.logicHighVolts()));
         require(Double.isFinite(s.pinROhmsHigh()) && s.pinROhmsHigh() >= 0, "pin_r_high",
                 "must be 0 or a positive, finite resistance, got %s", ohms(s.pinROhmsHigh()));
+        require(s.pinROhmsHigh() <= MAX_OHMS, "pin_r_high", "must be 0 to 1e12 ohm, got %s",
+                ohms(s.pinROhmsHigh()));
         require(Double.isFinite(s.pinROhmsLow()) && s.pinROhmsLow() >= 0, "pin_r_low",
                 "must be 0 or a positive, finite resistance, got %s", ohms(s.pinROhmsLow()));
+        require(s.pinROhmsLow() <= MAX_OHMS, "pin_r_low", "must be 0 to 1e12 ohm, got %s", ohms(s.pinROhmsLow()));
         require(s.loadOhms() > 0 && !Double.isNaN(s.loadOhms()), "load",
                 "must be a positive resistance, or inf for none, got %s", ohms(s.loadOhms()));
+        require(Double.isInfinite(s.loadOhms()) || inRange(s.loadOhms()), "load", "must be %s, or inf for none,"
+                + " got %s", RANGE, ohms(s.loadOhms()));
         require(Double.isFinite(s.bufferGain()) && s.bufferGain() > 0, "buffer.gain",
                 "must be a positive number, got %s", Units.format(s.bufferGain(), ""));
         require(!Double.isNaN(s.outMinVolts()) && s.outMinVolts() < Double.POSITIVE_INFINITY, "buffer.out_min",
                 "must be a voltage, got %s", volts(s.outMinVolts()));
         require(s.outMaxVolts() > s.outMinVolts(), "buffer.out_max", "%s must be above out_min (%s)",
                 volts(s.outMaxVolts()), volts(s.outMinVolts()));
+    }
+
+    private static boolean inRange(double ohms) {
+        return ohms >= MIN_OHMS && ohms <= MAX_OHMS;
+    }
+
+    /** Checks that the values derived from base_r stay within the limits: bit 0's leg, or the 2R legs. */
+    private static void checkDerived(LadderSpec s) {
+        if (s.topology() == Topology.R2R) {
+            require(2 * s.baseROhms() <= MAX_OHMS, "base_r", "%s makes the 2R legs %s, above 1e12 ohm; use a"
+                    + " smaller base_r", ohms(s.baseROhms()), ohms(2 * s.baseROhms()));
+        } else if (s.resistors().isEmpty()) {
+            int shift = s.bits() - 1;
+            double lsb = s.baseROhms() * Math.pow(2, shift);
+            require(lsb <= MAX_OHMS, "base_r", "%s makes bit 0's resistor %s (base_r * 2^%d), above 1e12 ohm;"
+                    + " use a smaller base_r", ohms(s.baseROhms()), ohms(lsb), shift);
+        }
     }
 
     /** Checks that the buffer swing leaves at least two distinct output levels. */
@@ -121,8 +161,10 @@ final class SpecChecks {
         return t + "%";
     }
 
+    /** Ohms in engineering notation; beyond the prefixes (a refused value) as 1e+300. */
     static String ohms(double r) {
-        return Units.format(r, "");
+        boolean beyond = Double.isFinite(r) && r != 0 && (Math.abs(r) >= 1e12 || Math.abs(r) < 1e-9);
+        return beyond ? String.format(Locale.ROOT, "%.3g", r).replaceFirst("\\.?0+e", "e") : Units.format(r, "");
     }
 
     static String volts(double v) {

@@ -11,7 +11,7 @@ import org.rungtone.internal.Setting;
 /**
  * How one sound is conditioned before quantizing.
  *
- * @param rateHz target sample rate; empty means the script's declared rate, else {@link BuildPlan#DEFAULT_RATE_HZ}
+ * @param rateHz target sample rate; empty means the script's declared rate, else {@link Defaults#RATE_HZ}
  * @param removeDc subtract the mean before anything else
  * @param trimDbfs trim leading/trailing audio below this level
  * @param gainDb fixed gain
@@ -23,10 +23,19 @@ import org.rungtone.internal.Setting;
 public record ConditioningSettings(OptionalDouble rateHz, boolean removeDc, OptionalDouble trimDbfs,
         OptionalDouble gainDb, OptionalDouble normalizeDbfs, double fadeInSeconds, double fadeOutSeconds,
         ResamplerKind resampler) {
-    /** Validates the rate. */
+    /**
+     * Validates the rate and, through the conditioning they make, the level, trim and fade settings.
+     *
+     * @throws org.rungtone.internal.SettingError naming the setting at fault
+     */
     public ConditioningSettings {
         rateHz.ifPresent(r -> Setting.RATE.check(Double.isFinite(r) && r >= 1 && r <= 384_000,
                 "must be 1 Hz..384 kHz: %s", r));
+        if (gainDb.isEmpty() || normalizeDbfs.isEmpty()) {
+            // both together are refused where both are known, with the lines that set them
+            new Conditioning(removeDc, trimDbfs, rateHz.orElse(Defaults.RATE_HZ), gainDb, normalizeDbfs,
+                    fadeInSeconds, fadeOutSeconds);
+        }
     }
 
     /** The conditioning stage's settings at {@code targetRateHz}. */

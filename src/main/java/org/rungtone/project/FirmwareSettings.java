@@ -3,6 +3,7 @@ package org.rungtone.project;
 import java.util.Optional;
 import java.util.OptionalLong;
 import org.rungtone.firmware.FirmwareRequest;
+import org.rungtone.firmware.FlashAttribute;
 import org.rungtone.internal.Setting;
 
 /**
@@ -15,8 +16,13 @@ import org.rungtone.internal.Setting;
  */
 public record FirmwareSettings(Optional<FirmwareRequest> player, Optional<LoopSpan> loop, OptionalLong flashBudgetBytes,
         String flashQualifier) {
-    /** Validates the budget. */
+    /**
+     * Validates the budget and the attribute ({@link FlashAttribute}), which is kept trimmed.
+     *
+     * @throws org.rungtone.internal.SettingError naming the setting at fault
+     */
     public FirmwareSettings {
         flashBudgetBytes.ifPresent(b -> Setting.FLASH_BUDGET.check(b > 0, "must be positive: %d", b));
+        flashQualifier = FlashAttribute.check(flashQualifier);
     }
 }

@@ -44,10 +44,20 @@ public record LoopSpan(double start, double end, boolean seconds) {
         }
     }
 
-    /** Start and end in samples at {@code rateHz}, clamped to {@code length}. */
+    /**
+     * Start and end in samples at {@code rateHz} of a sound of {@code length} samples; "end" is its length.
+     *
+     * @throws org.rungtone.internal.SettingError when the start is not inside the sound, the end is past it,
+     *     or the two meet once rounded to samples
+     */
     public int[] samples(double rateHz, int length) {
         long s = seconds ? Math.round(start * rateHz) : (long) start;
         long e = Double.isInfinite(end) ? length : seconds ? Math.round(end * rateHz) : (long) end;
+        if (s >= length) {
+            throw Setting.LOOP.error("start %s is at or past the sound's end (%s, %d samples); the loop must"
+                    + " start inside the sound", seconds ? Units.format(start, "s") : Long.toString(s),
+                    Units.format(length / rateHz, "s"), length);
+        }
         if (e > length) {
             throw Setting.LOOP.error("end %s is past the sound's end (%d samples)",
                     seconds ? Units.format(end, "s") : Long.toString(e), length);

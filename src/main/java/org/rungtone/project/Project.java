@@ -11,6 +11,7 @@ import org.rungtone.firmware.PinStrategy;
 import org.rungtone.firmware.PlaybackEngine;
 import org.rungtone.firmware.SampleStorage;
 import org.rungtone.firmware.TimerKind;
+import org.rungtone.internal.InputError;
 import org.rungtone.ladder.LadderTable;
 import org.rungtone.quantize.Compensation;
 import org.rungtone.quantize.Dither;
@@ -108,11 +109,28 @@ public record Project(Path file, String name, Optional<Path> outDir, Optional<Lo
      * @param fadeOutSeconds fade-out
      * @param keepDc keep the mean
      * @param resampler kaiser or tarsos
+     * @param lines the line of each key of the table
      */
     public record Sound(int index, int line, String name, Path source, OptionalDouble rateHz,
             Optional<LoopSpan> loop, Optional<Long> channel, OptionalDouble gainDb, OptionalDouble normalizeDbfs,
             OptionalDouble trimDbfs, OptionalDouble fadeInSeconds, OptionalDouble fadeOutSeconds,
-            Optional<Boolean> keepDc, Optional<ResamplerKind> resampler) {
+            Optional<Boolean> keepDc, Optional<ResamplerKind> resampler, Map<String, Integer> lines) {
+        /** Copies the lines. */
+        public Sound {
+            lines = Map.copyOf(lines);
+        }
+
+        /**
+         * An error about one of this sound's settings, as the file names it: {@code FILE:LINE:
+         * sound[2].fade_in: detail}, at the key's line (the table's first line when the key is not written).
+         */
+        public InputError error(Path file, org.rungtone.internal.SettingError e) {
+            String key = e.setting().key().substring(e.setting().key().indexOf('.') + 1);
+            int at = lines.getOrDefault(key, line);
+            return new InputError(file + (at > 0 ? ":" + at : "") + ": sound[" + index + "]." + key + ": "
+                    + e.detail(s -> s.key().startsWith("sound.") ? s.key().substring("sound.".length()) : s.key()),
+                    e);
+        }
     }
 
     /**

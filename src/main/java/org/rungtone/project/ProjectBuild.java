@@ -181,12 +181,26 @@ public final class ProjectBuild {
         }
         java.util.concurrent.CompletableFuture<Void> plotsReady =
                 java.util.concurrent.CompletableFuture.runAsync(org.rungtone.report.Plots::warmUp);
-        List<SoundRenderer.Rendered> rendered = new ArrayList<>();
+        // every sound's settings are checked before the first sound is rendered
+        List<BuildPlan> plans = new ArrayList<>();
         for (Project.Sound s : project.sounds()) {
+            try {
+                plans.add(plan(project, s, o, shared));
+            } catch (SettingError e) {
+                throw located(project, s, o, e);
+            }
+        }
+        List<SoundRenderer.Rendered> rendered = new ArrayList<>();
+        for (int i = 0; i < plans.size(); i++) {
+            Project.Sound s = project.sounds().get(i);
             String label = String.format(Locale.ROOT, "sound %d/%d %s", s.index(), project.sounds().size(),
                     s.name());
-            rendered.add(new SoundRenderer(span, stage -> progress.accept(label + ": " + stage + " done"))
-                    .render(plan(project, s, o, shared)));
+            try {
+                rendered.add(new SoundRenderer(span, stage -> progress.accept(label + ": " + stage + " done"))
+                        .render(plans.get(i)));
+            } catch (SettingError e) {
+                throw located(project, s, o, e);
+            }
         }
         progress.accept("writing firmware, previews and reports");
         Emitted emitted = emit(project, player, shared, rendered);
@@ -237,6 +251,17 @@ public final class ProjectBuild {
         return new Shared(outDir, bits, dither, shaping, seed, compensation, board, rate, settings);
     }
 
+    /**
+     * An error about a setting found while building sound {@code s}, placed where the file sets it: a sound's
+     * own setting (or its own rate) at its line in that sound's table, as {@code sound[2].fade_in}; anything
+     * else as it is, for {@link #run} to place.
+     */
+    private static RuntimeException located(Project project, Project.Sound s, Overrides o, SettingError e) {
+        boolean own = e.setting().key().startsWith("sound.")
+                || e.setting() == Setting.RATE && s.rateHz().isPresent() && !o.gives(Setting.RATE);
+        return own ? s.error(project.file(), e) : e;
+    }
+
     /** The build plan of one sound. */
     private static BuildPlan plan(Project project, Project.Sound s, Overrides o, Shared shared) {
         OptionalDouble rate = o.rateHz().isPresent() ? o.rateHz() : s.rateHz().isPresent() ? s.rateHz()
@@ -269,7 +294,12 @@ public final class ProjectBuild {
                 fb.setting(e.getKey() + ": " + e.getValue());
             }
             for (int i = 0; i < rendered.size(); i++) {
-                fb.sound(Build.clip(project.sounds().get(i).name(), rendered.get(i)));
+                Project.Sound s = project.sounds().get(i);
+                try {
+                    fb.sound(Build.clip(s.name(), rendered.get(i)));
+                } catch (SettingError e) {
+                    throw located(project, s, Overrides.none(), e);
+                }
             }
             EmitResult er = FirmwareEmitter.emit(fb.build(), shared.outDir());
             return new Emitted(er.files(), er.report(), er.warnings(), er.flashBytes());

@@ -16,6 +16,7 @@ import java.util.Set;
 import org.rungtone.calibrate.OutputSpan;
 import org.rungtone.condition.ResamplerKind;
 import org.rungtone.firmware.CNames;
+import org.rungtone.firmware.FlashAttribute;
 import org.rungtone.firmware.PinStrategy;
 import org.rungtone.firmware.PlaybackEngine;
 import org.rungtone.firmware.SampleStorage;
@@ -140,7 +141,8 @@ public final class ProjectFile {
                 f.choice("pin_strategy", "auto", "shift", "table", "scatter").map(PinStrategy::parse),
                 f.choice("storage", "unpacked", "packed").map(SampleStorage::parse),
                 f.choice("engine", "clip", "loop", "dds").map(PlaybackEngine::parse),
-                f.quantity("rate_tolerance", ""), bytes(f, "flash_budget"), f.string("flash_attr"),
+                f.quantity("rate_tolerance", ""), bytes(f, "flash_budget"),
+                f.parsed("flash_attr", FlashAttribute::check),
                 f.quantity("dds_frequency", "Hz"), f.integer("dds_phase_bits", 8, 32), lines(f));
         f.rejectUnknown();
         if (r.flashAttr().isPresent() && (r.family().isPresent() || r.pins().isPresent())) {
@@ -200,7 +202,7 @@ public final class ProjectFile {
         Project.Sound s = new Project.Sound(index, f.line("name"), name, base.resolve(source),
                 f.quantity("rate", "Hz"), loop, f.integer("channel", 0, 8), f.decibels("gain"),
                 f.decibels("normalize"), f.decibels("trim"), f.quantity("fade_in", "s"), f.quantity("fade_out", "s"),
-                f.bool("keep_dc"), f.choice("resampler", "kaiser", "tarsos").map(ResamplerKind::parse));
+                f.bool("keep_dc"), f.choice("resampler", "kaiser", "tarsos").map(ResamplerKind::parse), lines(f));
         f.rejectUnknown();
         if (s.gainDb().isPresent() && s.normalizeDbfs().isPresent()) {
             throw f.error("gain", "conflicts with normalize (line " + f.line("normalize") + "); keep one");

@@ -61,7 +61,7 @@ public final class RungScript {
         SourceText text = new SourceText(source, fileName);
         RungParser parser = new RungParser(new StringReader(text.parserText()));
         try {
-            Script parsed = parser.Script();
+            Script parsed = read(parser, text);
             Script tree = new Script(parsed.statements(), text.end());
             Header header = Program.check(tree);
             double rate = header.rateHz().orElse(DEFAULT_RATE_HZ);
@@ -74,9 +74,22 @@ public final class RungScript {
             throw text.error(p.pos(), p.getMessage());
         } catch (TokenMgrError e) {
             throw text.error(new Pos(1, 1), "unreadable script text; expected plain UTF-8 text");
+        }
+    }
+
+    /**
+     * Runs the parser. Its grammar recurses once per parenthesis or prefix operator, so text nested some
+     * hundreds deep can exhaust the stack before the depth checks on the tree ever run; that is reported at
+     * the token the parser had reached.
+     */
+    private static Script read(RungParser parser, SourceText text) throws ParseException {
+        try {
+            return parser.Script();
         } catch (StackOverflowError e) {
-            throw text.error(new Pos(1, 1), "the script is nested too deeply; expected fewer expressions inside "
-                    + "one another");
+            Pos at = parser.token == null ? new Pos(1, 1) : new Pos(parser.token.beginLine,
+                    parser.token.beginColumn);
+            throw text.error(at, "the expression is nested too deeply here to be read; expected fewer"
+                    + " parentheses or operators inside one another");
         }
     }
 
@@ -153,9 +166,6 @@ public final class RungScript {
             return Signal.wrap(program.render(samples), rate);
         } catch (ScriptProblem p) {
             throw source.error(p.pos(), p.getMessage());
-        } catch (StackOverflowError e) {
-            throw source.error(new Pos(1, 1), "the script is nested too deeply; expected fewer expressions inside "
-                    + "one another");
         }
     }
 

@@ -11,6 +11,9 @@ import org.rungtone.internal.InputError;
 public final class ScriptError extends InputError {
     private static final long serialVersionUID = 1L;
 
+    /** The most characters of the source line an excerpt shows. */
+    static final int EXCERPT_WIDTH = 120;
+
     private final String fileName;
     private final int line;
     private final int column;
@@ -46,14 +49,34 @@ public final class ScriptError extends InputError {
     }
 
     /**
-     * Two lines: the source line, and a line with a caret under the column (tabs in the source are kept
-     * so the caret lines up in a terminal).
+     * Two lines: the source line, and a line with a caret under the column. Control characters in the line
+     * are shown escaped as in the message ({@link InputError#oneLine}), so that a terminal prints them rather
+     * than obeying them, and the caret moves along by the width of each escape; tabs are kept so the caret
+     * lines up in a terminal. A line longer than {@value #EXCERPT_WIDTH} characters is cut to that many
+     * around the column.
      */
     public List<String> excerpt() {
+        StringBuilder shown = new StringBuilder();
         StringBuilder caret = new StringBuilder();
-        for (int i = 0; i < column - 1; i++) {
-            caret.append(i < sourceLine.length() && sourceLine.charAt(i) == '\t' ? '\t' : ' ');
+        for (int i = 0; i < Math.max(sourceLine.length(), column - 1); i++) {
+            char c = i < sourceLine.length() ? sourceLine.charAt(i) : ' ';
+            String s = c == '\t' ? "\t" : InputError.oneLine(String.valueOf(c));
+            if (i < sourceLine.length()) {
+                shown.append(s);
+            }
+            if (i < column - 1) {
+                caret.append(c == '\t' ? "\t" : " ".repeat(s.length()));
+            }
         }
-        return List.of(sourceLine, caret.append('^').toString());
+        if (shown.length() <= EXCERPT_WIDTH) {
+            return List.of(shown.toString(), caret.append('^').toString());
+        }
+        // a long line (a generated script) is cut to a window around the column, marked with "..."
+        int at = caret.length();
+        int from = Math.max(0, Math.min(at - EXCERPT_WIDTH / 2, shown.length() - EXCERPT_WIDTH));
+        int to = Math.min(shown.length(), from + EXCERPT_WIDTH);
+        String lead = from > 0 ? "..." : "";
+        return List.of(lead + shown.substring(from, to) + (to < shown.length() ? "..." : ""),
+                " ".repeat(lead.length()) + caret.substring(Math.min(from, at)) + "^");
     }
 }

@@ -43,6 +43,22 @@ class UnitFitTest {
     }
 
     @Test
+    void refusesReadingsThatGiveAFlatOrFallingProfile() throws IOException {
+        Path flat = dir.resolve("flat.csv");
+        Files.writeString(flat, "code,binary,measured\n0,00,2.5\n1,01,2.5\n2,10,2.5\n3,11,2.5\n");
+        assertEquals(flat + ": the readings give no usable profile: every code has the same level, 2.5V, so there"
+                + " is nothing to quantize onto; check that the readings were taken at the ladder's output",
+                assertThrows(InputError.class, () -> UnitFit.run(request(flat, Optional.empty(), Optional.empty())))
+                        .getMessage());
+        Path swapped = dir.resolve("swapped.csv");
+        Files.writeString(swapped, "code,binary,measured\n0,00,0\n1,01,-1.25\n2,10,-2.5\n3,11,-3.75\n");
+        assertEquals(swapped + ": the readings give no usable profile: code 3 is 3.75V below code 0 (0V), but the"
+                + " levels must rise from code 0 to code 3; were the meter's leads swapped, or the pins listed with"
+                + " the top bit first?", assertThrows(InputError.class,
+                        () -> UnitFit.run(request(swapped, Optional.empty(), Optional.empty()))).getMessage());
+    }
+
+    @Test
     void rejectsABlankBoardName() throws IOException {
         Path file = readings("r.csv");
         InputError e = assertThrows(InputError.class,

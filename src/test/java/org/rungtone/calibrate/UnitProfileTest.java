@@ -72,7 +72,7 @@ class UnitProfileTest {
         String head = "[unit]\nboard = \"b\"\ndate = \"2026-05-01\"\nbits = 2\n";
         assertEquals("board.unit.toml:6: levels.volts: expected 4 numbers (one level per code, code 0 first),"
                 + " got 3", message(head + "[levels]\nvolts = [0, 1, 2]\n"));
-        assertEquals("board.unit.toml:8: levels.volts: entry 2 is not a finite number",
+        assertEquals("board.unit.toml:9: levels.volts: entry 2 is not a finite number",
                 message(head + "[levels]\nvolts = [\n 0,\n 1,\n \"2\",\n 3]\n"));
         assertEquals("board.unit.toml:4: unit.bits: must be 1..16, got 20",
                 message("[unit]\nboard = \"b\"\ndate = \"2026-05-01\"\nbits = 20\n"));
@@ -91,6 +91,20 @@ class UnitProfileTest {
         assertTrue(message("[unit\n").startsWith("board.unit.toml:1: not valid TOML: "));
         assertEquals("board.unit.toml:6: model.kind: must be \"superposition\" or \"switched-load\", got \"cubic\"",
                 message(head + "[model]\nkind = \"cubic\"\n[levels]\nvolts = [0, 1, 2, 3]\n"));
+    }
+
+    @Test
+    void refusesFlatFallingAndImplausibleLevelsAtTheirLine() {
+        String head = "[unit]\nboard = \"b\"\ndate = \"2026-05-01\"\nbits = 2\n[levels]\nvolts = [\n";
+        assertEquals("board.unit.toml:10: levels.volts: every code has the same level, 2.5V, so there is nothing"
+                + " to quantize onto; check that the readings were taken at the ladder's output",
+                message(head + " 2.5,\n 2.5,\n 2.5,\n 2.5]\n"));
+        // a profile of a board read with the leads swapped: negated levels
+        assertEquals("board.unit.toml:10: levels.volts: code 3 is 3.75V below code 0 (0V), but the levels must"
+                + " rise from code 0 to code 3; were the meter's leads swapped, or the pins listed with the top bit"
+                + " first?", message(head + " 0,\n -1.25,\n -2.5,\n -3.75]\n"));
+        assertEquals("board.unit.toml:8: levels.volts: the level of code 1, -1.00e+308 V, is not a plausible board"
+                + " level (a finite voltage within 1000 V)", message(head + " 0,\n -1e308,\n 1e308,\n 3]\n"));
     }
 
     private static String message(String text) {

@@ -126,6 +126,12 @@ class BadInputCatalogueTest {
                 d -> build(d, script(d, "nan.rung", "duration 1s\nout log(t - 1)\n"))));
         c.add(bad("survey: script divides by zero", "'/' produced infinity at t = 0s",
                 d -> survey(d, script(d, "div.rung", "duration 1s\nout 1 / (t - t)\n"))));
+        c.add(bad("build: script error on a line with terminal escapes", "esc.rung:2:7: unexpected character"
+                + " '\\u001B'", d -> build(d, script(d, "esc.rung", "duration 1s\nout 1 \u001b[2J\u001b[31m\n"))));
+        c.add(bad("build: script nested 100,000 parentheses deep", "deep.rung:2:", d -> build(d, script(d,
+                "deep.rung", "duration 1s\nout " + "(".repeat(100_000) + "t" + ")".repeat(100_000) + "\n"))));
+        c.add(bad("build: script whose named values chain 3,000 deep", "lets.rung:2874:19: the expression is nested"
+                + " more than 256 levels deep here", d -> build(d, script(d, "lets.rung", letChain(3000)))));
         c.add(bad("build: script is not UTF-8", "is not UTF-8 text",
                 d -> build(d, write(d, "latin.rung", new byte[] {'o', 'u', 't', ' ', (byte) 0xB5, '\n'}))));
     }
@@ -149,6 +155,30 @@ class BadInputCatalogueTest {
         c.add(bad("ladder: ladder file with a zero base resistor", "board.toml:3: ladder.base_r: must be a "
                 + "positive, finite resistance, got 0", d -> ladder(d, "--ladder", text(d, "board.toml",
                         "[ladder]\ntopology = \"r2r\"\nbase_r = \"0\"\n").toString())));
+        c.add(bad("ladder: r2r base resistor of 1e300 ohms", "--base-r: must be 0.1 ohm to 1e12 ohm, got 1e+300",
+                d -> ladder(d, "--topology", "r2r", "--base-r", "1e300")));
+        c.add(bad("ladder: load of 1e-300 ohms", "--load: must be 0.1 ohm to 1e12 ohm, or inf for none, got 1e-300",
+                d -> ladder(d, "--load", "1e-300")));
+        c.add(bad("ladder: 0 bits", "--bits: bit depth must be 1..16, got 0", d -> ladder(d, "--bits", "0")));
+        c.add(bad("calibrate plan: 0 bits", "--bits: bit depth must be 1..16, got 0",
+                d -> List.of("calibrate", "plan", "--bits", "0", "--out", d.resolve("out").toString())));
+        c.add(bad("calibrate simulate: 0 bits", "--bits: bit depth must be 1..16, got 0",
+                d -> List.of("calibrate", "simulate", "--bits", "0", "--out", d.resolve("out").toString())));
+        c.add(bad("calibrate fit: 0 bits", "--bits: bit depth must be 1..16, got 0",
+                d -> List.of("calibrate", "fit", text(d, "readings.csv", "code,volts\n0,0\n1,1\n").toString(),
+                        "--bits", "0", "--out", d.resolve("out").toString())));
+        c.add(bad("calibrate fit: every reading the same", "flat.csv: the readings give no usable profile: every"
+                + " code has the same level, 2.5V", d -> List.of("calibrate", "fit", text(d, "flat.csv",
+                        "code,binary,measured\n0,00,2.5\n1,01,2.5\n2,10,2.5\n3,11,2.5\n").toString(), "--out",
+                        d.resolve("out").toString())));
+        c.add(bad("build: flat unit profile", "flat.unit.toml:9: levels.volts: every code has the same level, 2.5V",
+                d -> build(d, wavFile(d), "--unit", profile(d, "flat.unit.toml", "2.5, 2.5, 2.5, 2.5").toString())));
+        c.add(bad("ladder: negated unit profile", "swapped.unit.toml:9: levels.volts: code 3 is 3.75V below code 0"
+                + " (0V), but the levels must rise", d -> ladder(d, "--unit", profile(d, "swapped.unit.toml",
+                        "0, -1.25, -2.5, -3.75").toString())));
+        c.add(bad("ladder: unit profile beyond any voltage", "huge.unit.toml:9: levels.volts: the level of code 1,"
+                + " -1.00e+308 V, is not a plausible board level", d -> ladder(d, "--unit", profile(d,
+                        "huge.unit.toml", "0, -1e308, 1e308, 3").toString())));
         c.add(bad("ladder: ladder file that is not text", "is not UTF-8 text",
                 d -> ladder(d, "--ladder", write(d, "board.toml", new byte[] {(byte) 0xFF, (byte) 0xFE, 0, 1})
                         .toString())));
@@ -185,6 +215,16 @@ class BadInputCatalogueTest {
                         "packed")));
         c.add(bad("build: DDS option without the dds engine", "--dds-frequency and --dds-phase-bits set up the"
                 + " dds engine; add --engine dds", d -> build(d, wavFile(d), "--dds-frequency", "440")));
+        c.add(bad("build: --flash-attr that ends the declaration", "--flash-attr 'PROGMEM; int evil = 1; /*' is not"
+                + " a C attribute: ';' at column 8 is not allowed", d -> build(d, wavFile(d), "--flash-attr",
+                        "PROGMEM; int evil = 1; /*")));
+        c.add(bad("build: --flash-attr with a line break", "--flash-attr 'PROGMEM\\n#define x' is not a C"
+                + " attribute: '\\n' at column 8", d -> build(d, wavFile(d), "--flash-attr", "PROGMEM\n#define x")));
+        c.add(bad("build: --flash-attr with an unclosed group", "the '(' at column 15 is never closed",
+                d -> build(d, wavFile(d), "--flash-attr", "__attribute__((section(\".x\")")));
+        c.add(bad("project: flash_attr with a brace", "p.toml:6: target.flash_attr: '} x' is not a C attribute",
+                d -> project(d, "[project]\nname = \"bench\"\nout = \"out\"\n\n[target]\nflash_attr = \"} x\"\n"
+                        + "\n[[sound]]\nname = \"tone\"\nsource = \"tone.wav\"\n")));
         c.add(bad("build: samples over the flash budget", "1,590 bytes over the 10-byte flash budget"
                 + " (--flash-budget); no smaller bit depth or rate fits either",
                 d -> build(d, wavFile(d), "--flash-budget", "10")));
@@ -267,6 +307,17 @@ class BadInputCatalogueTest {
                 d -> project(d, head + "\n[target]\nflash_budget = 10\n" + sound)));
         c.add(bad("project: 0 bits", "p.toml:6: quantize.bits: must be 1..16, got 0",
                 d -> project(d, head + "\n[quantize]\nbits = 0\n" + sound)));
+        c.add(bad("project: [quantize] rate = nan", "p.toml:6: quantize.rate: must be 1 Hz..384 kHz: NaN",
+                d -> project(d, head + "\n[quantize]\nrate = nan\n" + sound)));
+        c.add(bad("project: [quantize] rate = \"-16k\"", "p.toml:6: quantize.rate: must be 1 Hz..384 kHz: -16000.0",
+                d -> project(d, head + "\n[quantize]\nrate = \"-16k\"\n" + sound)));
+        c.add(bad("project: a sound's rate = inf", "p.toml:8: sound[1].rate: must be 1 Hz..384 kHz: Infinity",
+                d -> project(d, head + sound + "rate = inf\n")));
+        c.add(bad("project: a sound's fade-in longer than the sound", "p.toml:8: sound[1].fade_in: 10s is longer"
+                + " than the sound (100ms); make it at most 100ms", d -> project(d, head + sound
+                        + "fade_in = \"10s\"\n")));
+        c.add(bad("project: a sound's gain = nan", "p.toml:8: sound[1].gain: must be within ±120 dB: NaN",
+                d -> project(d, head + sound + "gain = nan\n")));
         c.add(bad("project: --bits 0 on the command line", "--bits: bit depth must be 1..16, got 0",
                 d -> {
                     List<String> a = new ArrayList<>(project(d, head + sound));
@@ -277,6 +328,21 @@ class BadInputCatalogueTest {
 
     private static void optionCases(List<Case> c) {
         c.add(bad("build: --rate 0", "--rate must be 1 Hz..384 kHz", d -> build(d, wavFile(d), "--rate", "0")));
+        c.add(bad("build: --fade-in longer than the sound", "--fade-in 10s is longer than the sound (1.6s); make it"
+                + " at most 1.6s", d -> build(d, longTone(d), "--fade-in", "10s")));
+        c.add(bad("build: --fade-out longer than the sound", "--fade-out 10s is longer than the sound (1.6s)",
+                d -> build(d, longTone(d), "--fade-out", "10s")));
+        c.add(bad("build: fades that together overlap", "--fade-in 1s and --fade-out 1s together are longer than the"
+                + " sound (1.6s) and would overlap", d -> build(d, longTone(d), "--fade-in", "1s", "--fade-out",
+                        "1s")));
+        c.add(bad("survey: --fade-in longer than the sound", "--fade-in 10s is longer than the sound (1.6s)",
+                d -> survey(d, longTone(d), "--fade-in", "10s")));
+        c.add(bad("build: --gain of 200 dB", "--gain must be within ±120 dB: 200.0",
+                d -> build(d, wavFile(d), "--gain", "200")));
+        c.add(bad("build: loop start past the sound's end", "--loop start 5s is at or past the sound's end (1.6s,"
+                + " 25600 samples); the loop must start inside the sound", d -> build(d, longTone(d), "--target",
+                        "avr", "--cpu-clock", "16MHz", "--bits", "6", "--pins", "PD2-PD7", "--engine", "loop",
+                        "--loop", "5s:end")));
         c.add(bad("survey: bit depth 0 in --bits-list", "--bits-list 0..20: bit depth must be 1..16: 0",
                 d -> survey(d, wavFile(d), "--bits-list", "0..20")));
         c.add(bad("survey: two quality targets", "give one target, --target-sinad or --target-enob, not both",
@@ -311,6 +377,9 @@ class BadInputCatalogueTest {
             // a script error shows its line and a caret under the column (issue 3), nothing more
             assertEquals(3, lines.size(), () -> "script error with excerpt:\n" + r.err());
             assertTrue(lines.get(2).trim().endsWith("^"), r.err());
+            // the echoed script line is escaped like the message: a terminal shows it rather than obeying it
+            assertTrue(lines.get(1).chars().noneMatch(ch -> ch < 0x20 && ch != '\t' || ch >= 0x7f && ch <= 0x9f),
+                    r.err());
         } else if (c.exitCode() == 1) {
             assertEquals(1, lines.size(), () -> "more than one line:\n" + r.err());
         } else {
@@ -384,6 +453,21 @@ class BadInputCatalogueTest {
         return Files.writeString(d.resolve(name), text);
     }
 
+    /** A hand-made 2-bit unit profile whose four levels stand on line 9. */
+    private static Path profile(Path d, String name, String levels) throws IOException {
+        return text(d, name, "[unit]\nboard = \"b\"\ndate = \"2026-05-01\"\nbits = 2\n\n[levels]\nvolts = [\n"
+                + "    # codes 0..3\n    " + levels + ",\n]\n");
+    }
+
+    /** A clip whose output is the last of {@code n} named values, each defined by the one before. */
+    private static String letChain(int n) {
+        StringBuilder b = new StringBuilder("duration 10ms\nlet a0 = t\n");
+        for (int i = 1; i < n; i++) {
+            b.append("let a").append(i).append(" = a").append(i - 1).append(" + 0.000001\n");
+        }
+        return b.append("out 0.001 * a").append(n - 1).append('\n').toString();
+    }
+
     private static Path script(Path d, String name, String text) throws IOException {
         return text(d, name, text);
     }
@@ -391,6 +475,11 @@ class BadInputCatalogueTest {
     /** A short valid tone, tone.wav: 0.1 s at 16 kHz, 1,600 samples. */
     private static Path wavFile(Path d) throws IOException {
         return write(d, "tone.wav", tone());
+    }
+
+    /** A 1.6 s tone at 16 kHz, chirp.wav: 25,600 samples. */
+    private static Path longTone(Path d) throws IOException {
+        return write(d, "chirp.wav", WavFixtures.sine16(16_000, 1.6, 440, 0.5));
     }
 
     private static byte[] tone() {

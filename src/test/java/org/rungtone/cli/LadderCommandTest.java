@@ -101,6 +101,10 @@ class LadderCommandTest {
     @Test
     void badInputGivesOneLineAndExitOne() throws IOException {
         assertBadInput("--bits: bit depth must be 1..16, got 17", "--bits", "17");
+        // 0 is refused, not taken for "not given" (which would model the default 8 bits)
+        assertBadInput("--bits: bit depth must be 1..16, got 0", "--bits", "0");
+        assertBadInput("--base-r: must be 0.1 ohm to 1e12 ohm, got 1e+300", "--topology", "r2r", "--base-r",
+                "1e300");
         assertBadInput("--resistors: bit 1 needs a positive, finite resistance, got -2k", "--resistors", "1k,-2k");
         assertBadInput("--resistors: expected 4 values for 4 bits, got 2", "--bits", "4", "--resistors", "1k,2k");
         assertBadInput("--base-r: must be a positive, finite resistance, got 0", "--base-r", "0");

@@ -63,6 +63,33 @@ class ConditionerTest {
     }
 
     @Test
+    void refusesFadesThatDoNotFitInTheSound() {
+        Signal tenth = Signal.wrap(new double[100], 1000);
+        assertEquals("sound.fade_in 200ms is longer than the sound (100ms); make it at most 100ms",
+                assertThrows(InputError.class, () -> CONDITIONER.apply(tenth,
+                        settings(false, NONE, 1000, NONE, NONE, 0.2, 0))).getMessage());
+        assertEquals("sound.fade_out 10s is longer than the sound (100ms); make it at most 100ms",
+                assertThrows(InputError.class, () -> CONDITIONER.apply(tenth,
+                        settings(false, NONE, 1000, NONE, NONE, 0, 10))).getMessage());
+        assertEquals("sound.fade_in 60ms and sound.fade_out 60ms together are longer than the sound (100ms) and"
+                + " would overlap; make them add up to at most 100ms", assertThrows(InputError.class,
+                        () -> CONDITIONER.apply(tenth, settings(false, NONE, 1000, NONE, NONE, 0.06, 0.06)))
+                        .getMessage());
+        // a fade over exactly the whole sound is fine
+        assertEquals(0, CONDITIONER.apply(tenth, settings(false, NONE, 1000, NONE, NONE, 0.04, 0.06)).signal()
+                .sample(99));
+    }
+
+    @Test
+    void fadesMustFitInWhatTrimmingLeaves() {
+        double[] x = new double[1000];
+        java.util.Arrays.fill(x, 400, 600, 0.5);
+        assertEquals("sound.fade_in 300ms is longer than the sound (200ms once trimmed); make it at most 200ms",
+                assertThrows(InputError.class, () -> CONDITIONER.apply(Signal.wrap(x, 1000),
+                        settings(false, OptionalDouble.of(-40), 1000, NONE, NONE, 0.3, 0))).getMessage());
+    }
+
+    @Test
     void gainIsInDecibels() {
         Signal out = CONDITIONER.apply(Signal.of(new double[] {0.1, -0.1}, 8000),
                 settings(false, NONE, 8000, OptionalDouble.of(20), NONE, 0, 0)).signal();
@@ -97,5 +124,11 @@ class ConditionerTest {
         assertEquals("give either sound.gain or sound.normalize, not both", e.getMessage());
         assertEquals("target rate must be 1 Hz..384 kHz: 500000.0 Hz", assertThrows(InputError.class,
                 () -> settings(false, NONE, 500_000, NONE, NONE, 0, 0)).getMessage());
+        assertEquals("sound.fade_out must be a finite time of 0 s or more: Infinity", assertThrows(InputError.class,
+                () -> settings(false, NONE, 8000, NONE, NONE, 0, Double.POSITIVE_INFINITY)).getMessage());
+        assertEquals("sound.fade_in must be a finite time of 0 s or more: -1s", assertThrows(InputError.class,
+                () -> settings(false, NONE, 8000, NONE, NONE, -1, 0)).getMessage());
+        assertEquals("sound.gain must be within ±120 dB: NaN", assertThrows(InputError.class,
+                () -> settings(false, NONE, 8000, OptionalDouble.of(Double.NaN), NONE, 0, 0)).getMessage());
     }
 }

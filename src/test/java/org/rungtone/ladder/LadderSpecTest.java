@@ -91,6 +91,27 @@ class LadderSpecTest {
     }
 
     @Test
+    void rejectsResistancesTheNodalSolverCannotResolve() {
+        assertEquals("ladder.base_r: must be 0.1 ohm to 1e12 ohm, got 1e+300",
+                buildError(LadderSpec.builder().topology(Topology.R2R).baseROhms(1e300)));
+        assertEquals("ladder.base_r: must be 0.1 ohm to 1e12 ohm, got 1e-300",
+                buildError(LadderSpec.builder().topology(Topology.R2R).baseROhms(1e-300)));
+        assertEquals("ladder.base_r: 600G makes the 2R legs 1.2e+12, above 1e12 ohm; use a smaller base_r",
+                buildError(LadderSpec.builder().topology(Topology.R2R).baseROhms(600e9)));
+        assertEquals("ladder.base_r: 10G makes bit 0's resistor 1.28e+12 (base_r * 2^7), above 1e12 ohm; use a"
+                + " smaller base_r", buildError(LadderSpec.builder().baseROhms(10e9)));
+        assertEquals("ladder.resistors: bit 1 needs a resistance of 0.1 ohm to 1e12 ohm, got 10m",
+                buildError(LadderSpec.builder().topology(Topology.CUSTOM).resistors(1e3, 0.01)));
+        assertEquals("ladder.pin_r_high: must be 0 to 1e12 ohm, got 1e+300",
+                buildError(LadderSpec.builder().pinROhmsHigh(1e300)));
+        assertEquals("ladder.load: must be 0.1 ohm to 1e12 ohm, or inf for none, got 1e-300",
+                buildError(LadderSpec.builder().loadOhms(1e-300)));
+        // the limits themselves are allowed
+        assertEquals(1e12, LadderSpec.builder().topology(Topology.CUSTOM).resistors(1e12, 0.1).loadOhms(0.1)
+                .build().parts().get(0).ohms());
+    }
+
+    @Test
     void rejectsABufferSwingWithNoUsableSpan() {
         assertEquals("ladder.buffer.out_min: 6V is at or above the highest buffered ladder level (5V);"
                 + " no usable span is left", buildError(LadderSpec.builder().outMinVolts(6).outMaxVolts(9)));

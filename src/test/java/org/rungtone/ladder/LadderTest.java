@@ -35,6 +35,28 @@ class LadderTest {
     }
 
     @Test
+    void r2rOfTheLargestAllowedPartsSolvesByNodalAnalysis() {
+        // 500 GOhm rungs, 1 TOhm legs: pivots near 1e-12 S, below Commons Math's default absolute threshold
+        // of 1e-11, which called such a network singular. Output resistance R for every code (Horowitz & Hill).
+        Ladder ladder = Ladder.nominal(idealR2r(6, 500e9));
+        for (int k = 0; k < 64; k++) {
+            assertEquals(500e9, ladder.outputOhms(k), 500e9 * 1e-9, "code " + k);
+            assertEquals(5.0 * k / 64, ladder.nodeVolts(k)[5], 1e-9, "code " + k);
+        }
+    }
+
+    @Test
+    void r2rWithAHeavyLoadStaysSolvable() {
+        // Conductances from 10 S (a 0.1 ohm load) to 1 pS (1 TOhm legs): the widest mix the limits allow.
+        LadderSpec spec = LadderSpec.builder().topology(Topology.R2R).bits(4).baseROhms(500e9).pinROhms(0)
+                .loadOhms(0.1).build();
+        Ladder ladder = Ladder.nominal(spec);
+        // Millman at the output: the ladder's Thevenin source (R = 500 GOhm, Vref·k/16) into 0.1 ohm.
+        assertEquals(0.1 * 500e9 / (0.1 + 500e9), ladder.outputOhms(15), 1e-12);
+        assertEquals(5.0 * 15 / 16 * 0.1 / (0.1 + 500e9), ladder.nodeVolts(15)[3], 1e-20);
+    }
+
+    @Test
     void summingNodeFollowsMillmanWithPinResistancesAndLoad() {
         double[] r = {100e3, 47e3, 24e3, 12e3};
         LadderSpec spec = LadderSpec.builder().topology(Topology.CUSTOM).resistors(r).pinROhmsHigh(40)

@@ -141,6 +141,28 @@ class ProjectBuildTest {
     }
 
     @Test
+    void aSoundsOwnSettingErrorNamesItsLineInThatSoundsTable() throws IOException {
+        Files.write(dir.resolve("tone.wav"), org.rungtone.testing.WavFixtures.sine16(16_000, 1.6, 440, 0.5));
+        String head = "[project]\nname = \"bench\"\nout = \"out\"\n\n[quantize]\nrate = \"8k\"\n\n[[sound]]\n"
+                + "name = \"first\"\nsource = \"tone.wav\"\n\n[[sound]]\nname = \"second\"\nsource = \"tone.wav\"\n";
+        // the second sound's own rate, not the shared [quantize] rate, and not reported as --rate
+        Path toml = Files.writeString(dir.resolve("p.toml"), head + "rate = nan\n");
+        assertEquals("rungtone: error: " + toml + ":15: sound[2].rate: must be 1 Hz..384 kHz: NaN\n",
+                Cli.run("build", toml.toString()).err());
+        // found only once the sound's length is known, still placed at its line
+        Files.writeString(toml, head + "fade_out = \"1s\"\nfade_in = \"1s\"\n");
+        assertEquals("rungtone: error: " + toml + ":16: sound[2].fade_in: 1s and fade_out 1s together are longer"
+                + " than the sound (1.6s) and would overlap; make them add up to at most 1.6s\n",
+                Cli.run("build", toml.toString()).err());
+        String player = "[target]\nfamily = \"avr\"\ncpu_clock = \"16MHz\"\npins = \"PD2-PD7\"\n\n";
+        Files.writeString(toml, head.replace("[quantize]\n", player + "[quantize]\nbits = 6\n")
+                + "loop = \"5s:end\"\n");
+        assertEquals("rungtone: error: " + toml + ":21: sound[2].loop: start 5s is at or past the sound's end (1.6s,"
+                + " 12800 samples); the loop must start inside the sound\n", Cli.run("build", toml.toString()).err());
+        assertFalse(Files.exists(dir.resolve("out")));
+    }
+
+    @Test
     void singleSoundOptionsAreRefusedForProjects() throws IOException {
         Path g = copyExample("greenhouse");
         Cli.Run r = Cli.run("build", g.resolve("greenhouse.toml").toString(), "--trim", "-50");

@@ -69,6 +69,10 @@ class ProjectFileTest {
                 Arguments.of("bad filter", HEAD + "[preview]\nfilter = \"lp3:5k\"\n" + SOUND,
                         "board.toml:4: preview.filter: 'lp3:5k' is not a filter; write none, rc:3.4k or"
                                 + " lp2:3.4k[:0.707]"),
+                Arguments.of("attr that is code", HEAD + "[target]\nflash_attr = \"PROGMEM; int x\"\n" + SOUND,
+                        "board.toml:4: target.flash_attr: 'PROGMEM; int x' is not a C attribute: ';' at column 8"
+                                + " is not allowed; write identifiers and __attribute__((...)), e.g. PROGMEM or"
+                                + " __attribute__((section(\".rodata\")))"),
                 Arguments.of("attr with player", HEAD + "[target]\npins = \"PB0-PB5\"\nflash_attr = \"PROGMEM\"\n"
                         + SOUND, "board.toml:5: target.flash_attr: applies only to bare sample arrays; a player's"
                         + " family places its tables in flash itself (remove flash_attr or family/pins)"));

@@ -3,6 +3,7 @@ package org.rungtone.script;
 import static org.junit.jupiter.api.Assertions.assertDoesNotThrow;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import java.util.stream.Stream;
@@ -175,6 +176,18 @@ class ScriptErrorTest {
     }
 
     @Test
+    void excerptEscapesTerminalControlsAndTheCaretFollows() {
+        // ESC [ 2 J clears a terminal; echoed raw, the error line would be wiped off the screen
+        ScriptError e = assertThrows(ScriptError.class,
+                () -> RungScript.parse("duration 1s\nout 1 \u001b[2J + \u009b2J + foo\n", "esc.rung"));
+        assertEquals(List.of("out 1 \\u001B[2J + \\u009B2J + foo", "      ^"), e.excerpt());
+        ScriptError later = new ScriptError("esc.rung", 2, 13, "unknown name 'foo'", "out 1\u001b[2J + foo");
+        assertEquals(List.of("out 1\\u001B[2J + foo", " ".repeat(17) + "^"), later.excerpt());
+        assertTrue(later.excerpt().stream().allMatch(line -> line.chars().noneMatch(c -> c < 0x20 && c != '\t'
+                || c >= 0x7f && c <= 0x9f)));
+    }
+
+    @Test
     void endOfFileErrorPointsJustAfterTheLastToken() {
         ScriptError e = assertThrows(ScriptError.class,
                 () -> RungScript.parse("duration 1s\nout 2 *   # more to come\n\n", "eof.rung"));
@@ -191,10 +204,47 @@ class ScriptErrorTest {
     }
 
     @Test
-    void deeplyNestedScriptGivesAScriptError() {
+    void deeplyNestedScriptIsReportedWhereTheParserGaveUp() {
         String source = "duration 1s\nout " + "(".repeat(100_000) + "1" + ")".repeat(100_000);
         ScriptError e = assertThrows(ScriptError.class, () -> RungScript.parse(source, "deep.rung"));
-        assertEquals("deep.rung:1:1: the script is nested too deeply; expected fewer expressions inside one "
-                + "another", e.getMessage());
+        // on line 2, among the parentheses; the exact column depends on the stack's size
+        assertTrue(e.getMessage().matches("deep\\.rung:2:\\d+: the expression is nested too deeply here to be"
+                + " read; expected fewer parentheses or operators inside one another"), e.getMessage());
+        assertTrue(e.column() > 4 && e.column() <= 4 + 100_000, e.getMessage());
+        assertEquals(ScriptError.EXCERPT_WIDTH + 6, e.excerpt().get(0).length(), "cut to a window, marked twice");
+        assertEquals("^", e.excerpt().get(1).substring(e.excerpt().get(1).length() - 1));
+    }
+
+    @Test
+    void aLongChainOfOperatorsIsReportedInsideIt() {
+        String sum = String.join(" + ", java.util.Collections.nCopies(300, "t"));
+        ScriptError e = assertThrows(ScriptError.class,
+                () -> RungScript.parse("duration 1s\nout 0.001 * (" + sum + ")\n", "sum.rung"));
+        // the chain is left-deep, the last + on top: the product is level 1, the j-th + from the end level
+        // j + 1, so the 256th + from the end (the 44th of 299) is the first too deep; 4 characters per term
+        int plus = 299 - 256 + 1;
+        int column = "out 0.001 * (".length() + 3 + 4 * (plus - 1);
+        assertEquals("sum.rung:2:" + column + ": the expression is nested more than 256 levels deep here (each"
+                + " operation inside another counts, and so does each named value where it is used); expected a"
+                + " flatter script: split long chains into named parts with let", e.getMessage());
+        // 256 levels are fine
+        String ok = String.join(" + ", java.util.Collections.nCopies(250, "t"));
+        assertEquals(RungScript.Kind.CLIP, RungScript.parse("duration 1s\nout 0.001 * (" + ok + ")\n", "ok.rung")
+                .kind());
+    }
+
+    @Test
+    void aLongChainOfNamedValuesIsReportedAtTheLineWhereItGetsTooDeep() {
+        StringBuilder b = new StringBuilder("duration 10ms\nlet a0 = t\n");
+        for (int i = 1; i < 3000; i++) {
+            b.append("let a").append(i).append(" = a").append(i - 1).append(" + 0.000001\n");
+        }
+        String source = b.append("out 0.001 * a2999\n").toString();
+        ScriptError e = assertThrows(ScriptError.class, () -> RungScript.parse(source, "lets.rung"));
+        // the product of out is level 1; each let adds two, its name where it is used and its '+': the '+' of
+        // a(2999 - m) is level 3 + 2m, so the first too deep (level 257) is that of a2872, on line 2874
+        assertEquals("lets.rung:2874:19: the expression is nested more than 256 levels deep here", e.getMessage()
+                .substring(0, e.getMessage().indexOf(" (")));
+        assertEquals(List.of("let a2872 = a2871 + 0.000001", " ".repeat(18) + "^"), e.excerpt());
     }
 }

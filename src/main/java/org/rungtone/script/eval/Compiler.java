@@ -22,6 +22,12 @@ import org.rungtone.script.ast.Stmt;
 final class Compiler {
     /** Upper bound on compiled nodes, against scripts whose named values expand without end. */
     static final int MAX_NODES = 10_000;
+    /**
+     * Deepest nesting of expressions, counted with named values expanded where they are used. Checking,
+     * compiling and rendering each recurse once per level; this keeps them all far from the end of a thread's
+     * stack (a chain of lets some 700 deep already reached it on a 1 MB stack).
+     */
+    static final int MAX_DEPTH = 256;
 
     private final Map<String, Stmt.Let> lets;
     final double rateHz;
@@ -31,6 +37,7 @@ final class Compiler {
     private final CallCompiler calls = new CallCompiler(this);
     private long noiseStreams;
     private int nodes;
+    private int depth;
 
     Compiler(Map<String, Stmt.Let> lets, double rateHz, long seed, boolean constantsOnly) {
         this.lets = lets;
@@ -53,7 +60,16 @@ final class Compiler {
      * carries the longest part length among its inputs, so {@code 0.5 * (tone for 1s)} still lasts 1 s.
      */
     Eval compile(Expr e, Frame f) {
-        Eval v = node(e, f);
+        if (depth >= MAX_DEPTH) {
+            throw tooDeep(e.pos());
+        }
+        depth++;
+        Eval v;
+        try {
+            v = node(e, f);
+        } finally {
+            depth--;
+        }
         if (Double.isNaN(v.lengthSeconds)) {
             for (Eval in : v.inputs()) {
                 if (!Double.isNaN(in.lengthSeconds)) {
@@ -63,6 +79,13 @@ final class Compiler {
             }
         }
         return v;
+    }
+
+    /** The problem of an expression at {@code pos} that lies more than {@link #MAX_DEPTH} levels deep. */
+    static ScriptProblem tooDeep(Pos pos) {
+        return new ScriptProblem(pos, "the expression is nested more than " + MAX_DEPTH + " levels deep here (each"
+                + " operation inside another counts, and so does each named value where it is used); expected a"
+                + " flatter script: split long chains into named parts with let");
     }
 
     private Eval node(Expr e, Frame f) {

@@ -14,12 +14,14 @@ import org.rungtone.script.ast.Suggestions;
 /**
  * Static checks that need no sample rate: the statement structure (one clip or wavetable declaration, at most
  * one rate, one {@code out} at the end), names defined before use and only once, known functions with the
- * right number of arguments, and pairs and rests only where a function accepts them.
+ * right number of arguments, pairs and rests only where a function accepts them, and expressions at most
+ * {@link Compiler#MAX_DEPTH} levels deep.
  */
 final class Resolver {
     private final Map<String, Stmt.Let> all = new LinkedHashMap<>();
     private final Map<String, Stmt.Let> defined = new LinkedHashMap<>();
     private String defining;
+    private int depth;
 
     private Resolver() {
     }
@@ -125,6 +127,18 @@ final class Resolver {
     }
 
     private void check(Expr e, Library.Role role) {
+        if (depth >= Compiler.MAX_DEPTH) {
+            throw Compiler.tooDeep(e.pos());
+        }
+        depth++;
+        try {
+            checkNode(e, role);
+        } finally {
+            depth--;
+        }
+    }
+
+    private void checkNode(Expr e, Library.Role role) {
         if (e instanceof Expr.Pair p) {
             pair(p, role);
         } else if (e instanceof Expr.Rest) {
