@@ -1,5 +1,6 @@
 package org.rungtone.firmware;
 
+import java.math.BigInteger;
 import org.rungtone.internal.Checks;
 
 /**
@@ -55,6 +56,25 @@ public final class Dds {
                 "frequency must be in 0 .. sample rate: %s", frequencyHz);
         Checks.checkArgument(phaseBits >= 1 && phaseBits <= 32, "phase bits must be 1..32: %d", phaseBits);
         return Math.round(frequencyHz * Math.pow(2, phaseBits) / sampleRateHz) & ((1L << phaseBits) - 1);
+    }
+
+    /**
+     * The tuning word M = round(f · 2^n / f_s) mod 2^n (MT-085) in exact integers, for f in millihertz and a
+     * tick rate of exactly {@code rateNumerator / rateDenominator} hertz; a tie rounds up. The emitted
+     * {@code NAME_set_frequency_millihz()} computes the same word, and so does the build for the initial
+     * one: M = floor((2 · f · den · 2^n + 1000 · num) / (2 · 1000 · num)) mod 2^n.
+     *
+     * @throws IllegalArgumentException when f is negative, the rate is not positive, or n is not 1..32
+     */
+    public static long tuningWord(long milliHz, long rateNumerator, long rateDenominator, int phaseBits) {
+        Checks.checkArgument(milliHz >= 0, "frequency must not be negative: %d mHz", milliHz);
+        Checks.checkArgument(rateNumerator > 0 && rateDenominator > 0, "rate must be positive: %d / %d",
+                rateNumerator, rateDenominator);
+        Checks.checkArgument(phaseBits >= 1 && phaseBits <= 32, "phase bits must be 1..32: %d", phaseBits);
+        BigInteger divisor = BigInteger.valueOf(rateNumerator).multiply(BigInteger.valueOf(1000));
+        BigInteger twice = BigInteger.valueOf(milliHz).multiply(BigInteger.valueOf(rateDenominator))
+                .shiftLeft(phaseBits + 1).add(divisor);
+        return twice.divide(divisor.shiftLeft(1)).longValue() & ((1L << phaseBits) - 1);
     }
 
     /** The frequency a tuning word gives: f_out = M · f_s / 2^n (MT-085). */

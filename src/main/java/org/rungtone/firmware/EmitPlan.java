@@ -32,6 +32,8 @@ final class EmitPlan {
     final double requestedRateHz;
     final Optional<TimerSetting> timer;
     final double tickRateHz;
+    /** The achieved tick rate as an exact fraction. */
+    final TickRate tickRate;
     final List<SoundClip> sounds;
     final List<String> soundSymbols;
     final int[] samples;
@@ -81,6 +83,7 @@ final class EmitPlan {
 
         timer = solveTimer(r);
         tickRateHz = timer.map(TimerSetting::achievedHz).orElse(requestedRateHz);
+        tickRate = timer.map(TickRate::of).orElseGet(() -> TickRate.ofHz(requestedRateHz));
 
         samples = concat();
         soundStarts = starts();
@@ -268,10 +271,18 @@ final class EmitPlan {
         return out;
     }
 
+    /**
+     * The start frequency's tuning word, from the exact tick rate and the frequency to the millihertz, as
+     * the emitted {@code NAME_set_frequency_millihz()} computes it, so the two agree.
+     */
     private long ddsTuning(DdsSpec dds) {
         Setting.DDS_FREQUENCY.check(dds.frequencyHz() < tickRateHz, "%s is not below the tick rate %s",
                 Fmt.hz(dds.frequencyHz()), Fmt.hz(tickRateHz));
-        return Dds.tuningWord(dds.frequencyHz(), tickRateHz, dds.phaseBits());
+        Setting.RATE.check(tickRate.fitsDdsArithmetic(), "%s is exactly %d/%d Hz, a fraction too fine for the"
+                + " dds engine's 64-bit arithmetic; choose a rate the timer makes in fewer clock cycles",
+                Fmt.hz(tickRateHz), tickRate.numerator(), tickRate.denominator());
+        return Dds.tuningWord(Math.round(dds.frequencyHz() * 1000), tickRate.numerator(), tickRate.denominator(),
+                dds.phaseBits());
     }
 
     private void checkSizes() {

@@ -175,7 +175,12 @@ public final class Templates {
         return loadPath(family + "/" + name);
     }
 
+    /** The template's text with {@code \n} line endings, whatever a checkout or an editor gave it. */
     private String loadPath(String relative) {
+        return readPath(relative).replace("\r\n", "\n");
+    }
+
+    private String readPath(String relative) {
         try {
             if (userDir.isPresent()) {
                 Path p = userDir.get().resolve(relative);

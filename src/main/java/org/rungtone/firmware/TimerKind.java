@@ -19,6 +19,10 @@ import org.rungtone.internal.Setting;
  * timer with a 16-bit prescaler register (PSC = prescaler − 1) and a 16- or 32-bit auto-reload register ARR,
  * as on STM32 TIMx. The option names say what is driven ({@code general16}: a general-purpose timer with a
  * 16-bit counter), not which vendor peripheral the template defaults to.
+ *
+ * <p>{@link #RP2040_ALARM} is different: the RP2040's TIMER counts microseconds from its own 1 MHz tick
+ * whatever the CPU clock, and the player moves alarm 0 on by the period at each interrupt, carrying the
+ * fraction of a microsecond over ({@link AlarmPeriod}); it has no prescaler and no reload.
  */
 public enum TimerKind {
     /** AVR 8-bit Timer/Counter0, CTC on OCR0A. */
@@ -32,7 +36,9 @@ public enum TimerKind {
     /** General-purpose timer, 16-bit counter, prescaler 1..65536 (TIM3 of an STM32F4 by default). */
     GENERAL16("general16", 16, null, "ARR"),
     /** General-purpose timer, 32-bit counter, prescaler 1..65536 (TIM2 of an STM32F4 by default). */
-    GENERAL32("general32", 32, null, "ARR");
+    GENERAL32("general32", 32, null, "ARR"),
+    /** RP2040 TIMER alarm 0 over the 1 MHz microsecond count, moved on by the period at every tick. */
+    RP2040_ALARM("alarm", 32, new int[] {1}, "ALARM0");
 
     private static final int GENERAL_MAX_PRESCALER = 65536;
 
@@ -68,6 +74,11 @@ public enum TimerKind {
         return reloadRegister;
     }
 
+    /** True for the microsecond alarm, whose period is not prescaler × (reload + 1) clock cycles. */
+    public boolean microsecondAlarm() {
+        return this == RP2040_ALARM;
+    }
+
     /** True for a free prescaler 1..65536 rather than a fixed set. */
     public boolean continuousPrescaler() {
         return prescalers == null;
@@ -85,6 +96,9 @@ public enum TimerKind {
 
     /** A short description: {@code timer1 (16-bit, prescalers 1/8/64/256/1024)}. */
     public String describe() {
+        if (microsecondAlarm()) {
+            return optionName + " (a 32-bit alarm on the 1 MHz microsecond count)";
+        }
         String p;
         if (prescalers == null) {
             p = "prescaler 1..65536";

@@ -12,7 +12,9 @@ import org.rungtone.internal.Units;
  * <p>For a clock f_clk, prescaler p and reload r the interrupt rate is f = f_clk / (p · (r + 1)). For each
  * available p the best period is one of the two integers around f_clk / (p · f_req), clamped to
  * [2, 2^bits]; the solver keeps the setting with the smallest |error|, and among equal errors the smallest
- * prescaler (finest later adjustment). Error in ppm = (f − f_req) / f_req · 10^6.
+ * prescaler (finest later adjustment). Error in ppm = (f − f_req) / f_req · 10^6. The microsecond alarm
+ * ({@link TimerKind#RP2040_ALARM}) has no such choice: its period is 10^6 / f_req µs, carried to the
+ * millihertz ({@link AlarmPeriod}).
  */
 public final class TimerSolver {
     /** Default tolerance for the achieved rate: 1000 ppm (0.1 %, a pitch shift of 1.7 cents). */
@@ -38,6 +40,9 @@ public final class TimerSolver {
                 Units.format(rateHz, ""));
         Setting.RATE_TOLERANCE.check(Double.isFinite(tolerancePpm) && tolerancePpm >= 0,
                 "must be zero or positive: %s", tolerancePpm);
+        if (kind.microsecondAlarm()) {
+            return alarm(rateHz, tolerancePpm);
+        }
         double fastest = clockHz / 2;
         double slowest = clockHz / ((double) kind.maxPrescaler() * (kind.maxReload() + 1));
         if (rateHz > fastest) {
@@ -69,6 +74,9 @@ public final class TimerSolver {
     public static TimerSetting closest(double clockHz, TimerKind kind, double rateHz) {
         Checks.checkArgument(clockHz > 0 && rateHz > 0, "clock and rate must be positive: %s, %s", clockHz,
                 rateHz);
+        if (kind.microsecondAlarm()) {
+            return alarm(rateHz, Double.POSITIVE_INFINITY);
+        }
         long maxPeriod = kind.maxReload() + 1;
         int[] ps = kind.prescalers().toArray();
         TimerSetting best = null;
@@ -87,6 +95,28 @@ public final class TimerSolver {
             }
         }
         return best;
+    }
+
+    /**
+     * The microsecond alarm's setting: the clock is its 1 MHz count, the reload its whole microseconds less
+     * one, the rate the average of its ticks (the requested rate to the millihertz).
+     */
+    private static TimerSetting alarm(double rateHz, double tolerancePpm) {
+        TimerKind kind = TimerKind.RP2040_ALARM;
+        double fastest = AlarmPeriod.COUNT_HZ / 2;
+        if (rateHz > fastest) {
+            throw Setting.RATE.error("%s is too fast for %s: the fastest is %s; lower %s", Fmt.hz(rateHz),
+                    kind.describe(), Fmt.hz(fastest), Setting.RATE.ref());
+        }
+        Setting.RATE.check(rateHz >= 0.001, "%s is too slow for %s: the slowest is 1 mHz", Fmt.hz(rateHz),
+                kind.describe());
+        AlarmPeriod a = AlarmPeriod.of(rateHz);
+        double ppm = (a.achievedHz() - rateHz) / rateHz * 1e6;
+        Setting.RATE.check(Math.abs(ppm) <= tolerancePpm, "%s cannot be made within %s ppm by %s: the closest"
+                + " is %s; use %s %s or raise %s", Fmt.hz(rateHz), Fmt.plain(tolerancePpm, 1), kind.describe(),
+                Fmt.hz(a.achievedHz()), Setting.RATE.ref(), Fmt.plain(a.achievedHz(), 3),
+                Setting.RATE_TOLERANCE.ref());
+        return new TimerSetting(kind, AlarmPeriod.COUNT_HZ, 1, a.wholeMicros() - 1, rateHz, a.achievedHz(), ppm);
     }
 
     private static long clamp(long period, long maxPeriod) {

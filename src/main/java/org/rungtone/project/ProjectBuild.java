@@ -46,6 +46,9 @@ import org.rungtone.report.ProjectReport;
  * each came from.
  */
 public final class ProjectBuild {
+    /** The setting naming the output folder: in the report, never in the C files (they must not depend on it). */
+    private static final String OUT_SETTING = "out";
+
     private final String toolVersion;
     private final OutputSpan span;
     private final java.util.function.Consumer<String> progress;
@@ -224,7 +227,7 @@ public final class ProjectBuild {
         Path outDir = o.outDir().or(project::outDir)
                 .orElse(project.file().toAbsolutePath().getParent().resolve("rungtone-out").resolve(project.name()))
                 .toAbsolutePath().normalize();
-        settings.put("out", outDir + origin(o.outDir().isPresent(), project.outDir().isPresent()));
+        settings.put(OUT_SETTING, outDir + origin(o.outDir().isPresent(), project.outDir().isPresent()));
         AtomicFiles.checkFolderUsable(outDir);
         Project.Quantize q = project.quantize();
         int fixedBits = o.bits().isPresent() ? o.bits().getAsInt() : q.bits().map(Long::intValue).orElse(0);
@@ -291,7 +294,9 @@ public final class ProjectBuild {
         if (player.isPresent()) {
             FirmwareRequest.Builder fb = player.get().toBuilder().name(prefix).toolVersion(toolVersion);
             for (Map.Entry<String, String> e : shared.settings().entrySet()) {
-                fb.setting(e.getKey() + ": " + e.getValue());
+                if (!e.getKey().equals(OUT_SETTING)) {
+                    fb.setting(e.getKey() + ": " + e.getValue());
+                }
             }
             for (int i = 0; i < rendered.size(); i++) {
                 Project.Sound s = project.sounds().get(i);

@@ -140,6 +140,20 @@ class FirmwareEmitterTest {
     }
 
     @Test
+    void templatesWithWindowsLineEndingsGiveTheSameC() throws IOException {
+        // a checkout or an editor that writes \r\n must not change the emitted bytes
+        Path t = dir.resolve("crlf");
+        try (var files = Files.walk(Path.of("templates"))) {
+            for (Path p : files.filter(Files::isRegularFile).toList()) {
+                AtomicFiles.writeString(t.resolve(Path.of("templates").relativize(p).toString()),
+                        Files.readString(p).replace("\n", "\r\n"));
+            }
+        }
+        assertEquals(FirmwareEmitter.render(avrProject().build()).files(),
+                FirmwareEmitter.render(avrProject().templates(Templates.fromFolder(t)).build()).files());
+    }
+
+    @Test
     void aMissingUserTemplateNamesTheTemplatesSetting() throws IOException {
         Path t = dir.resolve("templates");
         AtomicFiles.writeString(t.resolve("pic").resolve("player.c.mustache"), "{{> common/header}}\n");

@@ -102,7 +102,7 @@ class TimerSolverTest {
     void parsesTimerNames() {
         assertEquals(TimerKind.AVR_TIMER2, TimerKind.parse("Timer2"));
         assertEquals("target.timer 'tc3' is unknown; use one of timer0, timer1, timer2, systick, general16,"
-                + " general32",
+                + " general32, alarm",
                 assertThrows(InputError.class, () -> TimerKind.parse("tc3")).getMessage());
         // the former spellings get the new name
         assertEquals("target.timer 'TIM32' is now called general32 (a general-purpose timer with a 32-bit counter)",
