@@ -24,7 +24,7 @@ public enum TargetFamily {
      */
     RP2040("rp2040", List.of(32), 32, List.of(TimerKind.RP2040_ALARM), TimerKind.RP2040_ALARM);
 
-    /** The highest GPIO of an RP2040: GPIO0..GPIO29 (RP2040 datasheet, from memory). */
+    /** The highest GPIO of an RP2040: GPIO0..GPIO29 (RP2040 datasheet: SIO's GPIO registers have 30 bits). */
     private static final int RP2040_LAST_GPIO = 29;
 
     private final String folder;
