@@ -19,24 +19,24 @@ import picocli.CommandLine.Option;
  * flash budget. Without --target, --pins or --engine only the sample array is emitted.
  */
 public final class FirmwareOptions {
-    // a name, not an enum: a --templates folder may add a family of its own
-    @Option(names = "--target", paramLabel = "generic|avr|cortexm",
+    @Option(names = "--target", paramLabel = "generic|avr|cortexm|rp2040",
             description = "Emit a complete player for this target family (default: only the sample array,"
                     + " or 'generic' when --pins is given).")
     String target;
 
     @Option(names = "--pins", paramLabel = "<pins>",
             description = "One pin per code bit, bit 0 (LSB) first, as the part's datasheet names them: PB0-PB5,"
-                    + " PA3,PA7,PC0,PC1, P1.0-P1.7.")
+                    + " PA3,PA7,PC0,PC1, P1.0-P1.7, GPIO2-GPIO7.")
     String pins;
 
     @Option(names = "--cpu-clock", paramLabel = "<hz>", converter = Converters.Hertz.class,
-            description = "CPU or timer clock, e.g. 16MHz; the timer reload is computed from it.")
+            description = "CPU or timer clock, e.g. 16MHz; the timer reload is computed from it (rp2040: not"
+                    + " needed, its alarm counts microseconds).")
     Double cpuClockHz;
 
     @Option(names = "--timer", paramLabel = "<timer>",
             description = "timer0, timer1, timer2 (avr); systick, general16, general32 (cortexm: a general-purpose"
-                    + " timer with a 16- or 32-bit counter).")
+                    + " timer with a 16- or 32-bit counter); alarm (rp2040).")
     TimerKind timer;
 
     @Option(names = "--rate-tolerance", paramLabel = "<ppm>",

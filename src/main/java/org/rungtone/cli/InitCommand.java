@@ -31,7 +31,7 @@ public final class InitCommand implements Callable<Integer> {
             description = "The project file to write (default ${DEFAULT-VALUE}).")
     Path file;
 
-    @Option(names = "--target", paramLabel = "generic|avr|cortexm", defaultValue = "generic",
+    @Option(names = "--target", paramLabel = "generic|avr|cortexm|rp2040", defaultValue = "generic",
             description = "Target family (default ${DEFAULT-VALUE}).")
     String target;
 

@@ -70,11 +70,8 @@ final class EmitPlan {
                 "is required: list one pin per code bit, bit 0 first, e.g. PB0-PB%d", bits - 1)), width));
         Setting.PINS.check(map.portWidth() == width, "was parsed for %d-bit ports, but the target uses %d",
                 map.portWidth(), width);
-        if (family.letterPortsOnly()) {
-            for (Pin p : map.pins()) {
-                Setting.PINS.check(!p.numberedPort(), "%s: target %s names its ports by letter (PORTB, GPIOB);"
-                        + " write e.g. PB0 instead of %s", map.notation(), family.folder(), p.name());
-            }
+        for (Pin p : map.pins()) {
+            checkPinName(Setting.PINS, map.notation(), p);
         }
         map.requireBits(bits);
         pins = map;
@@ -216,12 +213,32 @@ final class EmitPlan {
         }
         Setting.BUTTON.check(one.bits() == 1, "'%s' must name one pin, e.g. PD2", text);
         Pin b = one.pin(0);
-        Setting.BUTTON.check(!family.letterPortsOnly() || !b.numberedPort(), "%s: target %s names its ports by"
-                + " letter; write e.g. PD2", text, family.folder());
+        checkPinName(Setting.BUTTON, text, b);
         int bit = map.pins().indexOf(b);
         Setting.BUTTON.check(bit < 0, "%s is also ladder bit %d in %s; choose a free pin", b.name(), bit,
                 Setting.PINS.ref());
         return Optional.of(b);
+    }
+
+    /**
+     * Checks that the family names its pins as {@code pin} is written: by port letter on avr and cortexm,
+     * GPIO0..GPIO29 on rp2040.
+     */
+    private void checkPinName(Setting setting, String text, Pin pin) {
+        boolean letter = !pin.numberedPort() && !pin.bankPin();
+        if (family.letterPortsOnly() && setting == Setting.BUTTON) {
+            setting.check(letter, "%s: target %s names its ports by letter; write e.g. PD2", text,
+                    family.folder());
+        } else if (family.letterPortsOnly()) {
+            setting.check(letter, "%s: target %s names its ports by letter (PORTB, GPIOB); write e.g. PB0"
+                    + " instead of %s", text, family.folder(), pin.name());
+        }
+        if (family.gpioBankOnly()) {
+            setting.check(pin.bankPin(), "%s: target %s names its pins GPIO0..GPIO%d; write e.g. GPIO2 instead"
+                    + " of %s", text, family.folder(), family.lastGpio(), pin.name());
+            setting.check(pin.pin() <= family.lastGpio(), "%s: %s is not a pin of target %s (GPIO0..GPIO%d)",
+                    text, pin.name(), family.folder(), family.lastGpio());
+        }
     }
 
     private Optional<TimerSetting> solveTimer(FirmwareRequest r) {
@@ -233,8 +250,8 @@ final class EmitPlan {
             }
             return Optional.empty();
         }
-        Setting.CPU_CLOCK.check(!Double.isNaN(r.cpuClockHz()), "is required for target %s (the clock that drives"
-                + " the timer, e.g. 16MHz)", family.folder());
+        Setting.CPU_CLOCK.check(!family.needsCpuClock() || !Double.isNaN(r.cpuClockHz()), "is required for"
+                + " target %s (the clock that drives the timer, e.g. 16MHz)", family.folder());
         TimerKind kind = r.timer().orElse(family.defaultTimer());
         if (!family.timers().contains(kind)) {
             List<String> names = new ArrayList<>();
@@ -242,7 +259,18 @@ final class EmitPlan {
             throw Setting.TIMER.error("%s is not available on target %s; use %s", kind.optionName(),
                     family.folder(), String.join(", ", names));
         }
-        return Optional.of(TimerSolver.solve(r.cpuClockHz(), kind, requestedRateHz, r.rateTolerancePpm()));
+        // the microsecond alarm counts its own 1 MHz whatever the CPU clock
+        double clock = kind.microsecondAlarm() ? AlarmPeriod.COUNT_HZ : r.cpuClockHz();
+        return Optional.of(TimerSolver.solve(clock, kind, requestedRateHz, r.rateTolerancePpm()));
+    }
+
+    /** CPU cycles between ticks; for the microsecond alarm only known from a given CPU clock, else max. */
+    private long cpuCyclesPerTick() {
+        TimerSetting t = timer.orElseThrow();
+        if (!t.kind().microsecondAlarm()) {
+            return t.cyclesPerTick();
+        }
+        return Double.isNaN(request.cpuClockHz()) ? Long.MAX_VALUE : Math.round(request.cpuClockHz() / tickRateHz);
     }
 
     private int[] concat() {
@@ -305,9 +333,8 @@ final class EmitPlan {
     }
 
     private void collectWarnings() {
-        if (timer.isPresent() && !family.timers().isEmpty()
-                && timer.get().cyclesPerTick() < MIN_CYCLES_PER_TICK) {
-            warnings.add("only " + timer.get().cyclesPerTick() + " CPU cycles per tick: the interrupt may not"
+        if (timer.isPresent() && !family.timers().isEmpty() && cpuCyclesPerTick() < MIN_CYCLES_PER_TICK) {
+            warnings.add("only " + cpuCyclesPerTick() + " CPU cycles per tick: the interrupt may not"
                     + " finish in time; lower the sample rate or raise the CPU clock");
         }
         if (timer.map(TimerSetting::kind).orElse(null) == TimerKind.AVR_TIMER0) {

@@ -62,6 +62,9 @@ final class EmitReport {
                 return "target: avr (8-bit AVR, ATmega328P register names)" + clock;
             case CORTEXM:
                 return "target: cortexm (32-bit Cortex-M, GPIO with BSRR, STM32F4 default addresses)" + clock;
+            case RP2040:
+                return "target: rp2040 (Cortex-M0+, SIO GPIO_OUT_XOR, TIMER alarm on the 1 MHz microsecond count:"
+                        + " the CPU clock does not set the tick)" + clock;
             default:
                 return p.folder.equals(TargetFamily.GENERIC.folder())
                         ? "target: generic C99, pins through the port hook " + p.symbol + "_port_write()" + clock
@@ -117,6 +120,10 @@ final class EmitReport {
                 break;
             case CORTEXM:
                 how = "one BSRR write per port sets and resets the ladder pins at once; other pins untouched";
+                break;
+            case RP2040:
+                how = "one GPIO_OUT_XOR write toggles the ladder pins that change, all at once; other pins"
+                        + " untouched";
                 break;
             default:
                 how = "one port-hook call per port with the ladder-pin mask";

@@ -110,6 +110,10 @@ final class PinListParser {
         } else if (Character.isDigit(c) && numberedPortAt(pos)) {
             port = numberedPort();
             numbered = true;
+        } else if (bankAt(pos)) {
+            pos += Pin.GPIO_BANK.length();
+            port = Pin.GPIO_BANK;
+            numbered = false;
         } else if (p && asciiLetter(peekAt(pos + 1))) {
             port = String.valueOf(Character.toUpperCase(peekAt(pos + 1)));
             pos += 2;
@@ -122,6 +126,12 @@ final class PinListParser {
             throw error("expected a pin such as PB3 or P1.3 at column " + column + ", found '" + c + "'");
         }
         return new Pin(port, pinNumber(port, numbered, column));
+    }
+
+    /** True at {@code GPIO} followed by a digit, in any case: a pin of the GPIO bank. */
+    private boolean bankAt(int at) {
+        return text.regionMatches(true, at, Pin.GPIO_BANK, 0, Pin.GPIO_BANK.length())
+                && Character.isDigit(peekAt(at + Pin.GPIO_BANK.length()));
     }
 
     private static boolean asciiLetter(char c) {
@@ -151,8 +161,7 @@ final class PinListParser {
         String digits = text.substring(start, pos);
         int n = digits.length() > 3 ? Integer.MAX_VALUE : Integer.parseInt(digits);
         if (n >= portWidth) {
-            throw error("pin P" + (numbered ? port + "." : port) + digits + " at column " + column
-                    + " is beyond the "
+            throw error("pin " + Pin.name(port, digits) + " at column " + column + " is beyond the "
                     + portWidth + "-bit port (pins 0-" + (portWidth - 1) + ")");
         }
         return n;

@@ -21,11 +21,13 @@ import org.rungtone.internal.Setting;
  *   <li>a pin, the way the part's datasheet names it: P, the port letter and the pin number, {@code PB3};
  *       ports named by number are written with a dot ({@code P1.3} or {@code 1.3}). The short form
  *       {@code B3} is refused with the datasheet form as a hint: {@code D2} reads to many as a board's
- *       silk-screen label, not as the part's pin;</li>
+ *       silk-screen label, not as the part's pin; a part with one bank of numbered GPIOs (the RP2040) writes
+ *       them {@code GPIO3};</li>
  *   <li>a range on one port: {@code PB0-PB5} (bits take PB0, PB1, ... PB5) or descending {@code PB5-PB0};
  *       the second port may be left out: {@code PB0-5}.</li>
  * </ul>
- * Examples: {@code PB0-PB5}, {@code PA3,PA7,PC0,PC1}, {@code PD2-PD7,PB0,PB1}, {@code P1.0-P1.7}.
+ * Examples: {@code PB0-PB5}, {@code PA3,PA7,PC0,PC1}, {@code PD2-PD7,PB0,PB1}, {@code P1.0-P1.7},
+ * {@code GPIO2-GPIO7}.
  *
  * <p>Immutable.
  */

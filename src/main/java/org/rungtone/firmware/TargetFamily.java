@@ -17,7 +17,15 @@ public enum TargetFamily {
             TimerKind.AVR_TIMER1),
     /** 32-bit Cortex-M-class parts: GPIO with a BSRR set/reset register, SysTick or a general-purpose timer. */
     CORTEXM("cortexm", List.of(16), 16, List.of(TimerKind.SYSTICK, TimerKind.GENERAL16, TimerKind.GENERAL32),
-            TimerKind.SYSTICK);
+            TimerKind.SYSTICK),
+    /**
+     * RP2040-class parts (Cortex-M0+): pins GPIO0..GPIO29 of one bank written through the single-cycle IO
+     * block's GPIO_OUT_XOR, the tick from TIMER alarm 0 on its 1 MHz microsecond count.
+     */
+    RP2040("rp2040", List.of(32), 32, List.of(TimerKind.RP2040_ALARM), TimerKind.RP2040_ALARM);
+
+    /** The highest GPIO of an RP2040: GPIO0..GPIO29 (RP2040 datasheet: SIO's GPIO registers have 30 bits). */
+    private static final int RP2040_LAST_GPIO = 29;
 
     private final String folder;
     private final List<Integer> portWidths;
@@ -61,7 +69,22 @@ public enum TargetFamily {
 
     /** True when port names must be letters (PORTB, GPIOB). */
     public boolean letterPortsOnly() {
-        return this != GENERIC;
+        return this == AVR || this == CORTEXM;
+    }
+
+    /** True when every pin must be one of the GPIO bank ({@code GPIO3}), as the RP2040 names them. */
+    public boolean gpioBankOnly() {
+        return this == RP2040;
+    }
+
+    /** The highest GPIO number of the bank ({@link #gpioBankOnly()}); 31 where the port width is the limit. */
+    public int lastGpio() {
+        return this == RP2040 ? RP2040_LAST_GPIO : 31;
+    }
+
+    /** True when the timer's rate depends on the CPU clock, which must then be given. */
+    public boolean needsCpuClock() {
+        return this == AVR || this == CORTEXM;
     }
 
     /** Flash bytes the family's part can address with its table reads; {@code Long.MAX_VALUE} if no limit. */
@@ -84,7 +107,7 @@ public enum TargetFamily {
         throw Setting.FAMILY.error("'%s' is unknown; known target families: %s", text, knownNames());
     }
 
-    /** The known families as the option spells them: {@code generic, avr, cortexm}. */
+    /** The known families as the option spells them: {@code generic, avr, cortexm, rp2040}. */
     public static String knownNames() {
         StringBuilder b = new StringBuilder();
         for (TargetFamily f : values()) {

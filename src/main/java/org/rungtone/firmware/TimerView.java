@@ -3,13 +3,13 @@ package org.rungtone.firmware;
 /**
  * Template values of the tick: its rate and, where one was solved, the timer setting that makes it.
  *
- * @param own true when the emitted code programs the timer itself (avr, cortexm)
+ * @param own true when the emitted code programs the timer itself (avr, cortexm, rp2040)
  * @param tickRateHz the requested tick rate in whole hertz
  * @param note what the programmed timer makes, e.g. {@code the timer makes 22038.567 Hz}, or null
  * @param text the timer setting in words, or null without a solved timer
  * @param reload the reload register's value, or null
  * @param prescaler the prescaler, or null
- * @param cyclesPerTick clock cycles between ticks, or null
+ * @param cyclesPerTick clock cycles between ticks (whole microseconds for rp2040's alarm), or null
  */
 record TimerView(boolean own, long tickRateHz, String note, String text, Long reload, Integer prescaler,
         Long cyclesPerTick) {
@@ -21,7 +21,8 @@ record TimerView(boolean own, long tickRateHz, String note, String text, Long re
             return new TimerView(own, rate, null, null, null, null, null);
         }
         TimerSetting t = p.timer.get();
-        return new TimerView(own, rate, own ? "the timer makes " + Fmt.plain(t.achievedHz(), 3) + " Hz" : null,
+        String makes = t.kind().microsecondAlarm() ? "the alarm averages " : "the timer makes ";
+        return new TimerView(own, rate, own ? makes + Fmt.plain(t.achievedHz(), 3) + " Hz" : null,
                 t.describe(), t.reload(), t.prescaler(), t.cyclesPerTick());
     }
 }

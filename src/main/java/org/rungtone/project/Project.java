@@ -46,7 +46,7 @@ public record Project(Path file, String name, Optional<Path> outDir, Optional<Lo
     /**
      * The [target] table.
      *
-     * @param family generic, avr or cortexm; empty: sample arrays only
+     * @param family generic, avr, cortexm or rp2040; empty: sample arrays only
      * @param cpuClockHz CPU clock
      * @param timer timer name
      * @param pins pin list

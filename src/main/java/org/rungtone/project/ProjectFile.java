@@ -135,7 +135,7 @@ public final class ProjectFile {
                     java.util.OptionalDouble.empty(), Optional.empty(), Map.of());
         }
         TomlFields f = t.get();
-        Project.Target r = new Project.Target(f.choice("family", "generic", "avr", "cortexm"),
+        Project.Target r = new Project.Target(f.choice("family", "generic", "avr", "cortexm", "rp2040"),
                 f.quantity("cpu_clock", "Hz"), f.parsed("timer", TimerKind::parse), f.string("pins"),
                 f.integer("port_width", 8, 32),
                 f.choice("pin_strategy", "auto", "shift", "table", "scatter").map(PinStrategy::parse),

@@ -16,7 +16,8 @@ public final class StarterProject {
     private static final Map<String, String[]> FAMILY = Map.of(
             "generic", new String[] {"PA0-PA%d", "", ""},
             "avr", new String[] {"PD%d-PD%d", "16MHz", "timer1"},
-            "cortexm", new String[] {"PB0-PB%d", "72MHz", "systick"});
+            "cortexm", new String[] {"PB0-PB%d", "72MHz", "systick"},
+            "rp2040", new String[] {"GPIO0-GPIO%d", "", ""});
 
     private StarterProject() {
     }
@@ -85,7 +86,7 @@ public final class StarterProject {
         b.append("# unit = \"board-1.toml\"      # measured unit profile from 'rungtone calibrate fit'\n");
         b.append("compensation = true          # quantize onto the board's real levels\n\n");
         b.append("[target]\n");
-        b.append("family    = \"").append(family).append("\"          # generic | avr | cortexm\n");
+        b.append("family    = \"").append(family).append("\"          # generic | avr | cortexm | rp2040\n");
         if (!f[1].isEmpty()) {
             b.append("cpu_clock = \"").append(f[1]).append("\"         # the timer reload is computed from it\n");
             b.append("timer     = \"").append(f[2]).append("\"\n");
@@ -104,7 +105,8 @@ public final class StarterProject {
         }
         b.append("series     = \"E24\"            # snap values to this preferred series\n");
         b.append("tolerance  = \"5%\"\n");
-        b.append("logic_high = \"").append(family.equals("cortexm") ? "3.3V" : "5V").append("\"\n");
+        boolean lowVoltage = family.equals("cortexm") || family.equals("rp2040");
+        b.append("logic_high = \"").append(lowVoltage ? "3.3V" : "5V").append("\"\n");
         b.append("pin_r_high = \"25\"             # pin output resistance, ohms (see the datasheet)\n");
         b.append("pin_r_low  = \"20\"\n\n");
         b.append("[quantize]\n");

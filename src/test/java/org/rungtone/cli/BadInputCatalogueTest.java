@@ -198,7 +198,7 @@ class BadInputCatalogueTest {
                 d -> build(d, wavFile(d), "--target", "avr", "--cpu-clock", "16MHz", "--bits", "6", "--pins",
                         "PB0-PB3")));
         c.add(bad("build: unknown target family", "--target 'pic' is unknown; known target families: generic, "
-                + "avr, cortexm", d -> build(d, wavFile(d), "--target", "pic")));
+                + "avr, cortexm, rp2040", d -> build(d, wavFile(d), "--target", "pic")));
         c.add(bad("build: rate the timer cannot reach", "--rate 16 kHz is too fast for timer1",
                 d -> build(d, wavFile(d), "--target", "avr", "--pins", "PB0-PB5", "--bits", "6", "--cpu-clock",
                         "1kHz", "--rate", "16k")));

@@ -106,7 +106,7 @@ class OutputFolderProcessIT {
             assertEquals(listed, there);
         }
         String report = Files.readString(out.resolve("report.txt"));
-        assertTrue(report.contains("at 8kHz") ^ report.contains("at 16kHz"), report);
+        assertTrue(report.contains("8 bits at 8kHz,") ^ report.contains("8 bits at 16kHz,"), report);
         assertFalse(Files.exists(dir.resolve(".out.rungtone-new")));
     }
 }

@@ -16,7 +16,8 @@ import org.rungtone.testing.CToolchain;
  * Every family's output for the {@link TemplateMatrix}: contiguous, scattered, multi-port and wide scattered
  * pin maps (plus forced strategies), packed and unpacked storage, and every engine, compiles warning-free with
  * {@code -std=c99 -Wall -Wextra -Werror -pedantic}: generic with the host gcc, avr with avr-gcc for the
- * ATmega328P, cortexm with arm-none-eabi-gcc for the Cortex-M3 (freestanding). Each family's combinations
+ * ATmega328P, cortexm with arm-none-eabi-gcc for the Cortex-M3 and rp2040 for the Cortex-M0+ (both
+ * freestanding). Each family's combinations
  * compile in one compiler run (distinct symbol prefixes); one player per family is also linked.
  */
 class CompileMatrixTest {
@@ -76,6 +77,33 @@ class CompileMatrixTest {
         CToolchain.compileClean(dir, CToolchain.cmd(base, List.of("-c")), sources);
         assertObjects(sources);
         // Link a DDS player without any C library: only libgcc (64-bit division) is needed.
+        AtomicFiles.writeString(dir.resolve("main.c"), """
+                #include "c002.h"
+                void entry(void);
+                void entry(void)
+                {
+                    c002_init();
+                    (void)c002_set_frequency_hz(1000u);
+                    (void)c002_set_frequency_millihz(440000u);
+                    c002_start();
+                    for (;;) {
+                    }
+                }
+                """);
+        CToolchain.compileClean(dir, CToolchain.cmd(base, List.of("-nostdlib", "-nostartfiles",
+                "-Wl,--entry=entry", "-o", "player.elf", "main.c", "c002.c", "c002_data.c", "-lgcc")));
+        assertTrue(Files.isRegularFile(dir.resolve("player.elf")));
+    }
+
+    @Test
+    void rp2040CompilesWithArmGccForTheCortexM0Plus() {
+        CToolchain.require("arm-none-eabi-gcc");
+        List<String> sources = renderAll(TargetFamily.RP2040);
+        List<String> base = CToolchain.cmd(List.of("arm-none-eabi-gcc", "-mcpu=cortex-m0plus", "-mthumb",
+                "-ffreestanding", "-Os"), CToolchain.STRICT);
+        CToolchain.compileClean(dir, CToolchain.cmd(base, List.of("-c")), sources);
+        assertObjects(sources);
+        // Link a DDS player (the interrupt handler isr_irq0 included) without any C library: libgcc only.
         AtomicFiles.writeString(dir.resolve("main.c"), """
                 #include "c002.h"
                 void entry(void);

@@ -14,7 +14,7 @@ import org.rungtone.testing.CToolchain;
 
 /**
  * Every emitted header can be included from C++: each family's headers over the {@link TemplateMatrix}
- * compile warning-free as C++ (host g++ for generic and cortexm, avr-g++ for avr), and a C++ program links
+ * compile warning-free as C++ (host g++ for generic, cortexm and rp2040, avr-g++ for avr), and a C++ program links
  * against players and a sample array compiled as C, which only works when the headers give the
  * declarations C linkage.
  */
@@ -39,9 +39,9 @@ class CppHeadersTest {
     }
 
     @Test
-    void genericAndCortexmHeadersCompileAsCpp() {
+    void genericCortexmAndRp2040HeadersCompileAsCpp() {
         CToolchain.require("g++");
-        for (TargetFamily family : List.of(TargetFamily.GENERIC, TargetFamily.CORTEXM)) {
+        for (TargetFamily family : List.of(TargetFamily.GENERIC, TargetFamily.CORTEXM, TargetFamily.RP2040)) {
             String cpp = includeAll(family);
             CToolchain.compileClean(dir, CToolchain.cmd(List.of("g++", "-c"), CToolchain.cmd(STRICT_CPP,
                     List.of(cpp))));

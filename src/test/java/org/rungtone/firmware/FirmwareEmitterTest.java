@@ -180,6 +180,41 @@ class FirmwareEmitterTest {
         assertFalse(Files.exists(out), "nothing may be written");
     }
 
+    private static FirmwareRequest.Builder rp2040Project() {
+        return FirmwareRequest.builder().family("rp2040").name("bell").toolVersion("0.1.0-test").pins("GPIO2-GPIO7")
+                .sound("ding", ramp(6, 16, 22050));
+    }
+
+    @Test
+    void rp2040NeedsNoCpuClockAndReportsItsAlarm() {
+        EmitResult r = FirmwareEmitter.render(rp2040Project().build()).result();
+        assertTrue(r.report().contains("target: rp2040 (Cortex-M0+, SIO GPIO_OUT_XOR, TIMER alarm on the 1 MHz"
+                + " microsecond count: the CPU clock does not set the tick)"), r.report().toString());
+        assertTrue(r.report().contains("tick rate: 22.05 kHz requested; alarm on the 1 MHz microsecond count:"
+                + " ALARM0 += 45 155/441 µs (45 or 46 µs apart) per tick, 22.05 kHz on average (+0.0 ppm)"),
+                r.report().toString());
+        assertTrue(r.report().contains("port update: port GPIO, one GPIO_OUT_XOR write toggles the ladder pins that"
+                + " change, all at once; other pins untouched"), r.report().toString());
+        assertEquals(List.of(), r.warnings());
+        // with a CPU clock the report names it, and the cycles per tick are checked against it
+        List<String> warnings = FirmwareEmitter.render(rp2040Project().cpuClockHz(4e6).build()).result()
+                .warnings();
+        assertEquals(List.of("only 181 CPU cycles per tick: the interrupt may not finish in time; lower the sample"
+                + " rate or raise the CPU clock"), warnings);
+    }
+
+    @Test
+    void rp2040RefusesPinsItDoesNotHave() {
+        assertRefused("target.pins PB0-PB5: target rp2040 names its pins GPIO0..GPIO29; write e.g. GPIO2 instead of"
+                + " PB0", b -> b.pins("PB0-PB5"), rp2040Project());
+        assertRefused("target.pins GPIO26-GPIO31: GPIO30 is not a pin of target rp2040 (GPIO0..GPIO29)",
+                b -> b.pins("GPIO26-GPIO31"), rp2040Project());
+        assertRefused("sweep.button PC5: target rp2040 names its pins GPIO0..GPIO29; write e.g. GPIO2 instead of"
+                + " PC5", b -> b.sweep(SweepSpec.onButton(6, new int[] {1, 2}, "PC5")), rp2040Project());
+        assertRefused("target.pins GPIO2-GPIO7: target avr names its ports by letter (PORTB, GPIOB); write e.g."
+                + " PB0 instead of GPIO2", b -> b.pins("GPIO2-GPIO7"), avrProject());
+    }
+
     @Test
     void refusesDuplicatePins() {
         assertRefused("target.pins 'PD2-PD6,PD4': pin PD4 at column 9 is already bit 2; each pin may appear once",
@@ -208,7 +243,7 @@ class FirmwareEmitterTest {
 
     @Test
     void refusesAnUnknownTarget() {
-        assertRefused("target.family 'pic' is unknown; known target families: generic, avr, cortexm",
+        assertRefused("target.family 'pic' is unknown; known target families: generic, avr, cortexm, rp2040",
                 b -> b.family("pic"), avrProject());
     }
 

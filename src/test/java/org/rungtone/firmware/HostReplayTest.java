@@ -6,6 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertNull;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Set;
+import java.util.stream.Collectors;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -20,8 +22,10 @@ import org.rungtone.quantize.Quantizer;
 import org.rungtone.source.Signal;
 
 /**
- * Runs the generic player on the host against a mock port: what reaches the pins must be exactly the
- * quantizer's codes (clip, loop), the Java DDS reference model (dds), or the sweep list at the right ticks.
+ * Runs the generic player on the host against a mock port, and the rp2040 player against its registers in
+ * memory: what reaches the pins must be exactly the quantizer's codes (clip, loop), the Java DDS reference
+ * model (dds), or the sweep list at the right ticks; the rp2040 alarm must move on by the period, carrying
+ * the fraction of a microsecond over.
  */
 class HostReplayTest {
     @TempDir
@@ -166,6 +170,83 @@ class HostReplayTest {
                 format(tickWrites(events)));
         long ticks = events.stream().filter(e -> e.kind() == 'T').count();
         assertEquals(600 + debounce, ticks, "the press after the last code ends the sweep");
+    }
+
+    static Stream<Arguments> rp2040PinMaps() {
+        List<Arguments> out = new ArrayList<>();
+        for (String pins : List.of("GPIO2-GPIO7", "GPIO29,GPIO0,GPIO15,GPIO16,GPIO3,GPIO2",
+                "GPIO0-GPIO5,GPIO27,GPIO25,GPIO23,GPIO21,GPIO19,GPIO17")) {
+            for (SampleStorage s : SampleStorage.values()) {
+                out.add(Arguments.of(pins, s));
+            }
+        }
+        return out.stream();
+    }
+
+    private static FirmwareRequest.Builder rp2040(String pins, SampleStorage storage) {
+        return FirmwareRequest.builder().family("rp2040").name("mock").toolVersion("test").pins(pins)
+                .storage(storage);
+    }
+
+    @ParameterizedTest(name = "rp2040 {0}, {1}")
+    @MethodSource("rp2040PinMaps")
+    void rp2040ClipReachesThePinsExactly(String pins, SampleStorage storage) {
+        int bits = PinMap.parse(pins, 32).bits();
+        Codes codes = chime(bits, 700);
+        List<Event> events = MockPortRun.run(rp2040(pins, storage).sound("chime", codes).build(), dir, false,
+                "0", "0", "0");
+        assertEquals(1 << (bits - 1), events.get(0).code(), "init parks the ladder at the mid code");
+        assertEquals(toList(codes.codes()), MockPortRun.tickCodes(events));
+        // 8 kHz is 125 whole microseconds: every tick moves the alarm on by exactly that
+        assertEquals(Set.of(125L), alarmSteps(events).stream().collect(Collectors.toSet()));
+    }
+
+    @Test
+    void rp2040AlarmCarriesTheFractionOfAMicrosecond() {
+        // 22.05 kHz: 10^6 / 22050 = 45 155/441 us; every 441 ticks take exactly 20,000 us (441 x 45 + 155)
+        Codes codes = Codes.of(6, 22_050, chime(6, 2 * 441 + 10).codes());
+        List<Long> steps = alarmSteps(MockPortRun.run(rp2040("GPIO2-GPIO7", SampleStorage.UNPACKED)
+                .sound("chime", codes).build(), dir, false, "0", "0", "0"));
+        assertEquals(Set.of(45L, 46L), steps.stream().collect(Collectors.toSet()));
+        assertEquals(20_000L, steps.subList(0, 441).stream().mapToLong(Long::longValue).sum());
+        assertEquals(20_000L, steps.subList(441, 882).stream().mapToLong(Long::longValue).sum());
+        assertEquals(155L, steps.subList(0, 441).stream().filter(d -> d == 46L).count());
+    }
+
+    @Test
+    void rp2040DdsMatchesTheReferenceModelAtTheAlarmsRate() {
+        int[] table = Dds.sineTable(8, 8);
+        FirmwareRequest r = rp2040("GPIO8-GPIO15", SampleStorage.PACKED).engine(PlaybackEngine.DDS)
+                .sound("sine", Codes.of(8, 22_050, table)).dds(new DdsSpec(32, 1000)).build();
+        List<Event> events = MockPortRun.run(r, dir, false, "441", "2000");
+        long m = events.stream().filter(e -> e.kind() == 'M').findFirst().orElseThrow().value();
+        // MT-085 at the rate the alarm averages, 22.05 kHz exactly
+        assertEquals(Dds.tuningWord(441, 22_050, 32), m);
+        assertEquals(toList(new Dds(32, table).run(m, 2000)), MockPortRun.tickCodes(events));
+    }
+
+    @Test
+    void rp2040SweepAdvancesOnDebouncedPressesOfItsButton() {
+        int[] codes = {5, 40, 17};
+        FirmwareRequest r = rp2040("GPIO2-GPIO7", SampleStorage.UNPACKED)
+                .sweep(SweepSpec.onButton(6, codes, "GPIO28")).build();
+        List<Event> events = MockPortRun.run(r, dir, false, "100", "160", "300", "305", "400", "460", "600",
+                "700");
+        int debounce = SweepSpec.DEBOUNCE_MILLIS;
+        assertEquals(List.of((100 + debounce - 1) + ":40", (400 + debounce - 1) + ":17"),
+                format(tickWrites(events)));
+        assertEquals(Set.of(1000L), alarmSteps(events).stream().collect(Collectors.toSet()), "1 kHz sweep ticks");
+    }
+
+    /** The microseconds the rp2040 alarm moved on at each tick. */
+    private static List<Long> alarmSteps(List<Event> events) {
+        List<Long> out = new ArrayList<>();
+        for (Event e : events) {
+            if (e.kind() == 'A') {
+                out.add(e.value());
+            }
+        }
+        return out;
     }
 
     private static List<int[]> tickWrites(List<Event> events) {

@@ -13,17 +13,20 @@ import org.rungtone.internal.AtomicFiles;
 import org.rungtone.testing.CToolchain;
 
 /**
- * Builds emitted generic C (symbol prefix {@code mock}) on the host with a harness whose port hook prints
- * every write, runs it, and replays the writes against port images in Java: every write must carry exactly
- * the ladder pins of its port as mask and no level outside it, ports must come in the fixed order, and
- * pins outside the map must keep their starting levels. The result is the list of events with the code
- * each one put on the ladder.
+ * Builds an emitted player (symbol prefix {@code mock}) on the host with a harness that prints every port
+ * write, runs it, and replays the writes against port images in Java: every write must carry exactly the
+ * ladder pins of its port as mask and no level outside it, ports must come in the fixed order, and pins
+ * outside the map must keep their starting levels. The result is the list of events with the code each one
+ * put on the ladder. The generic player's port hook prints its writes; the rp2040 player runs with its
+ * register blocks moved into the harness's memory, which prints each GPIO_OUT_XOR write and, per tick (the
+ * alarm's interrupt), the microseconds the alarm moved on.
  */
 final class MockPortRun {
     /** Starting level of every port: pins outside the map must keep it. */
     static final long START_PATTERN = 0xA5A5A5A5L;
 
-    private static final String HARNESS = """
+    /** The part of the harness before the family's glue: the button's presses, by tick. */
+    private static final String HEAD = """
             #include <stdio.h>
             #include <stdlib.h>
             #include <stdint.h>
@@ -34,6 +37,20 @@ final class MockPortRun {
             static long press_to[8];
             static int presses;
 
+            static int pressed_now(void)
+            {
+                int i;
+                for (i = 0; i < presses; i++) {
+                    if (tick_no >= press_from[i] && tick_no < press_to[i]) {
+                        return 1;
+                    }
+                }
+                return 0;
+            }
+            """;
+
+    /** Generic glue: the port hook prints every write, the button hook answers from the presses. */
+    private static final String GENERIC_GLUE = """
             void mock_port_write(uint8_t port, mock_port_t value, mock_port_t mask)
             {
                 printf("W %u %lx %lx\\n", (unsigned)port, (unsigned long)value, (unsigned long)mask);
@@ -42,15 +59,18 @@ final class MockPortRun {
             #ifdef MOCK_DEBOUNCE_TICKS
             uint8_t mock_button_pressed(void)
             {
-                int i;
-                for (i = 0; i < presses; i++) {
-                    if (tick_no >= press_from[i] && tick_no < press_to[i]) {
-                        return 1u;
-                    }
-                }
-                return 0u;
+                return (uint8_t)pressed_now();
             }
             #endif
+
+            static void setup(void)
+            {
+                (void)pressed_now;
+            }
+
+            static void flush(void)
+            {
+            }
 
             static void tick(void)
             {
@@ -58,16 +78,103 @@ final class MockPortRun {
                 mock_tick();
                 printf("T\\n");
             }
+            """;
 
+    /**
+     * RP2040 glue: the register blocks are arrays here (mock_rp2040.h points the player's base addresses at
+     * them). A write to GPIO_OUT_XOR is applied to GPIO_OUT and printed as the write of the ladder's port; a
+     * tick is the alarm's interrupt with the count at the alarm's time, followed by the microseconds to the
+     * next alarm ("A"). After init the pin functions, output enables and interrupt enables are checked ("X"
+     * on a fault).
+     */
+    private static final String RP2040_GLUE = """
+            uint32_t mock_sio[16];
+            uint32_t mock_io[64];
+            uint32_t mock_pads[32];
+            uint32_t mock_resets[0x3004 / 4];
+            uint32_t mock_timer[0x203C / 4];
+            uint32_t mock_ppb[0x288 / 4];
+            #define GPIO_IN mock_sio[0x04 / 4]
+            #define GPIO_OUT mock_sio[0x10 / 4]
+            #define GPIO_OUT_XOR mock_sio[0x1C / 4]
+            #define GPIO_OE_SET mock_sio[0x24 / 4]
+            #define ALARM0 mock_timer[0x10 / 4]
+            #define TIMERAWL mock_timer[0x28 / 4]
+            #define XOR_IDLE 0x80000000ul  /* never written: bit 31 is no GPIO */
+            void isr_irq0(void);
+
+            static void setup(void)
+            {
+                GPIO_OUT = 0xA5A5A5A5ul;
+                GPIO_OUT_XOR = XOR_IDLE;
+                GPIO_IN = 0xFFFFFFFFul;
+                mock_resets[0x8 / 4] = 0xFFFFFFFFul;  /* every block out of reset */
+                TIMERAWL = 1000ul;
+            }
+
+            static void flush(void)
+            {
+                uint32_t n;
+                if (GPIO_OUT_XOR != XOR_IDLE) {
+                    GPIO_OUT ^= GPIO_OUT_XOR;
+                    GPIO_OUT_XOR = XOR_IDLE;
+                    printf("W 0 %lx %lx\\n", (unsigned long)(GPIO_OUT & MOCK_PORT_GPIO_MASK),
+                            (unsigned long)MOCK_PORT_GPIO_MASK);
+                }
+                if (tick_no < 0) {
+                    for (n = 0u; n < 30u; n++) {
+                        if (((MOCK_PORT_GPIO_MASK >> n) & 1u) != 0u && mock_io[(8u * n + 4u) / 4u] != 5u) {
+                            printf("X GPIO%lu is not given to SIO\\n", (unsigned long)n);
+                        }
+                    }
+                    if ((GPIO_OE_SET & MOCK_PORT_GPIO_MASK) != MOCK_PORT_GPIO_MASK) {
+                        printf("X the ladder pins are not outputs\\n");
+                    }
+                    if ((mock_timer[0x2038 / 4] & 1u) == 0u || (mock_ppb[0x100 / 4] & 1u) == 0u) {
+                        printf("X the alarm's interrupt is not enabled\\n");
+                    }
+                }
+            }
+
+            static void tick(void)
+            {
+                const uint32_t at = ALARM0;
+                tick_no++;
+                GPIO_IN = pressed_now() ? 0ul : 0xFFFFFFFFul;  /* a pressed button reads low */
+                TIMERAWL = at;
+                isr_irq0();
+                flush();
+                printf("A %lu\\n", (unsigned long)(ALARM0 - at));
+                printf("T\\n");
+            }
+            """;
+
+    /** Points the RP2040 player's register blocks at the harness's arrays; no interrupts to mask on a PC. */
+    private static final String RP2040_CONFIG = """
+            #include <stdint.h>
+            extern uint32_t mock_sio[], mock_io[], mock_pads[], mock_resets[], mock_timer[], mock_ppb[];
+            #define MOCK_SIO_BASE ((uintptr_t)mock_sio)
+            #define MOCK_IO_BANK0_BASE ((uintptr_t)mock_io)
+            #define MOCK_PADS_BANK0_BASE ((uintptr_t)mock_pads)
+            #define MOCK_RESETS_BASE ((uintptr_t)mock_resets)
+            #define MOCK_TIMER_BASE ((uintptr_t)mock_timer)
+            #define MOCK_PPB_BASE ((uintptr_t)mock_ppb - 0xE000u)
+            #define MOCK_LOCK_STATE unsigned
+            #define MOCK_LOCK() 0u
+            #define MOCK_UNLOCK(saved) ((void)(saved))
+            """;
+
+    /** The harness's main: init, then the engine's calls (arguments per engine), each tick printed. */
+    private static final String MAIN = """
             int main(int argc, char **argv)
             {
                 long cap = 10000000L;
                 (void)argc;
+                (void)argv;
                 (void)cap;
-                (void)press_from;
-                (void)press_to;
-                (void)presses;
+                setup();
                 mock_init();
+                flush();
                 printf("I\\n");
             #if defined(MOCK_SOUND_COUNT)
                 {
@@ -114,6 +221,7 @@ final class MockPortRun {
                         presses++;
                     }
                     mock_start();
+                    flush();
                     printf("S\\n");
                     cap = 200000L;
                     while (!mock_is_done() && cap-- > 0) {
@@ -128,7 +236,10 @@ final class MockPortRun {
     private MockPortRun() {
     }
 
-    /** One marker of the run: I (after init), S (after sweep start), T (after a tick), M (tuning word). */
+    /**
+     * One marker of the run: I (after init), S (after sweep start), T (after a tick), M (tuning word), A (the
+     * microseconds the rp2040 alarm moved on in a tick).
+     */
     record Event(char kind, int tick, Integer code, long value) {
     }
 
@@ -136,10 +247,15 @@ final class MockPortRun {
     static List<Event> run(FirmwareRequest request, Path dir, boolean looping, String... args) {
         CToolchain.require("gcc");
         FirmwareEmitter.emit(request, dir);
-        AtomicFiles.writeString(dir.resolve("harness.c"), HARNESS);
+        boolean rp2040 = request.family().equals(TargetFamily.RP2040.folder());
+        AtomicFiles.writeString(dir.resolve("harness.c"), HEAD + (rp2040 ? RP2040_GLUE : GENERIC_GLUE) + MAIN);
         List<String> cc = new ArrayList<>(List.of("gcc"));
         cc.addAll(CToolchain.STRICT);
         cc.addAll(List.of("-O1", "-o", "replay", "harness.c", "mock.c", "mock_data.c"));
+        if (rp2040) {
+            AtomicFiles.writeString(dir.resolve("mock_rp2040.h"), RP2040_CONFIG);
+            cc.add("-DMOCK_CONFIG_HEADER=\"mock_rp2040.h\"");
+        }
         if (looping) {
             cc.add("-DLOOPING");
         }
@@ -151,7 +267,8 @@ final class MockPortRun {
     }
 
     private static PinMap pinMap(FirmwareRequest r) {
-        return r.pinMap().orElseGet(() -> PinMap.parse(r.pins().orElseThrow(), r.portWidth().orElse(8)));
+        return r.pinMap().orElseGet(() -> PinMap.parse(r.pins().orElseThrow(),
+                r.portWidth().orElse(TargetFamily.parse(r.family()).defaultPortWidth())));
     }
 
     private static List<Event> replay(String out, PinMap map) {
@@ -201,7 +318,8 @@ final class MockPortRun {
                     break;
                 }
                 case "M":
-                    events.add(new Event('M', -1, null, Long.parseLong(f[1])));
+                case "A":
+                    events.add(new Event(f[0].charAt(0), -1, null, Long.parseLong(f[1])));
                     break;
                 default:
                     fail("unexpected harness output: " + line);

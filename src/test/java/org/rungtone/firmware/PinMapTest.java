@@ -37,6 +37,18 @@ class PinMapTest {
         assertEquals(List.of("PP10", "PP11"), names(PinMap.parse("PP10,PP11", 16)));
     }
 
+    @Test
+    void readsTheGpioBankAsTheRp2040DatasheetNamesIt() {
+        PinMap m = PinMap.parse("GPIO2-GPIO7,gpio29,GPIO10-8", 32);
+        assertEquals(List.of("GPIO2", "GPIO3", "GPIO4", "GPIO5", "GPIO6", "GPIO7", "GPIO29", "GPIO10", "GPIO9",
+                "GPIO8"), names(m));
+        assertEquals(List.of(Pin.GPIO_BANK), m.ports());
+        assertEquals(0x200007FCL, m.mask(Pin.GPIO_BANK));
+        assertEquals("GPIO2-GPIO7,GPIO29,GPIO10-GPIO8", m.notation());
+        assertEquals("target.pins 'GPIO2-GPIO40': pin GPIO40 at column 7 is beyond the 32-bit port (pins 0-31)",
+                assertThrows(InputError.class, () -> PinMap.parse("GPIO2-GPIO40", 32)).getMessage());
+    }
+
     @ParameterizedTest
     @CsvSource(delimiter = '|', value = {
         "D2-D7|PD2-PD7",

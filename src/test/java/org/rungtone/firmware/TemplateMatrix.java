@@ -45,6 +45,12 @@ final class TemplateMatrix {
             out.add(new PinCase("PB2-PB5,PD6,PD7", 8, PinStrategy.AUTO));
             out.add(new PinCase("PD0-PD5,PB7,PB5,PB3,PB1,PC4,PC0", 8, PinStrategy.AUTO));
             out.add(new PinCase("PD0-PD7", 8, PinStrategy.AUTO));
+        } else if (family == TargetFamily.RP2040) {
+            // one bank, GPIO0..GPIO29
+            out.add(new PinCase("GPIO2-GPIO7", 32, PinStrategy.AUTO));
+            out.add(new PinCase("GPIO29,GPIO0,GPIO15,GPIO16,GPIO3,GPIO2", 32, PinStrategy.AUTO));
+            out.add(new PinCase("GPIO10-GPIO15,GPIO20,GPIO21", 32, PinStrategy.AUTO));
+            out.add(new PinCase("GPIO0-GPIO5,GPIO27,GPIO25,GPIO23,GPIO21,GPIO19,GPIO17", 32, PinStrategy.AUTO));
         } else {
             out.add(new PinCase("PB0-PB5", 8, PinStrategy.AUTO));
             out.add(new PinCase("PA3,PA7,PC0,PC1,PB2,PB1", 8, PinStrategy.AUTO));
@@ -64,6 +70,9 @@ final class TemplateMatrix {
     private static String buttonPin(TargetFamily family, PinCase pc) {
         if (family == TargetFamily.AVR) {
             return "PC5";
+        }
+        if (family == TargetFamily.RP2040) {
+            return "GPIO28";
         }
         return pc.pins().startsWith("P1.") ? "P3.0" : "PE5";
     }
@@ -88,7 +97,10 @@ final class TemplateMatrix {
                     if (family != TargetFamily.GENERIC || n % 2 == 1) {
                         b.timer(timers.get(n % timers.size()));
                     }
-                    out.add(new Case(name, engine, withEngine(b, engine, bits, buttonPin(family, pc)).build()));
+                    // rp2040's alarm carries a fraction of a microsecond at 22.05 kHz, not at 8 kHz (125 us)
+                    double ddsRate = family == TargetFamily.RP2040 ? 22_050 : 8000;
+                    out.add(new Case(name, engine, withEngine(b, engine, bits, buttonPin(family, pc), ddsRate)
+                            .build()));
                     n++;
                 }
             }
@@ -97,14 +109,14 @@ final class TemplateMatrix {
     }
 
     private static FirmwareRequest.Builder withEngine(FirmwareRequest.Builder b, String engine, int bits,
-            String button) {
+            String button, double ddsRate) {
         switch (engine) {
             case "clip":
                 return b.sound("door", HostReplayTest.chime(bits, 200)).sound("bell", HostReplayTest.chime(bits, 120));
             case "loop":
                 return b.engine(PlaybackEngine.LOOP).sound("warble", HostReplayTest.chime(bits, 300), 50, 250);
             case "dds":
-                return b.engine(PlaybackEngine.DDS).sound("sine", Codes.of(bits, 8000, Dds.sineTable(6, bits)))
+                return b.engine(PlaybackEngine.DDS).sound("sine", Codes.of(bits, ddsRate, Dds.sineTable(6, bits)))
                         .dds(DdsSpec.of(440));
             case "sweep":
                 return b.sweep(SweepSpec.holding(bits, new int[] {0, (1 << bits) - 1, 1}, 500));

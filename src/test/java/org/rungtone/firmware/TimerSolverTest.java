@@ -54,6 +54,33 @@ class TimerSolverTest {
     }
 
     @Test
+    void rp2040AlarmCarriesTheFractionOfAMicrosecond() {
+        // 10^6 / 22,050 = 20,000 / 441 = 45 + 155/441 us: the ticks average 22,050 Hz exactly
+        TimerSetting s = TimerSolver.solve(AlarmPeriod.COUNT_HZ, TimerKind.RP2040_ALARM, 22050, 0);
+        assertEquals(44, s.reload());
+        assertEquals(45, s.cyclesPerTick());
+        assertEquals(22050, s.achievedHz(), 0);
+        assertEquals(new AlarmPeriod(45, 155, 441, 22_050_000), AlarmPeriod.of(22050));
+        assertEquals("alarm on the 1 MHz microsecond count: ALARM0 += 45 155/441 µs (45 or 46 µs apart) per"
+                + " tick, 22.05 kHz on average (+0.0 ppm)", s.describe());
+        // 8 kHz is 125 us exactly; the CPU clock given does not matter
+        assertEquals(new AlarmPeriod(125, 0, 1, 8_000_000), AlarmPeriod.of(8000));
+        assertEquals(124, TimerSolver.solve(125e6, TimerKind.RP2040_ALARM, 8000, 0).reload());
+        // a rate with millihertz: 22,038.567 Hz is 10^9 / 22,038,567 us, to the millihertz exactly
+        AlarmPeriod odd = AlarmPeriod.of(22038.567);
+        assertEquals(45, odd.wholeMicros());
+        assertEquals(22_038_567, odd.rateMilliHz());
+        assertEquals(22038.567, odd.achievedHz(), 0);
+    }
+
+    @Test
+    void refusesARateTheAlarmCannotMake() {
+        assertEquals("quantize.rate 600 kHz is too fast for alarm (a 32-bit alarm on the 1 MHz microsecond count):"
+                + " the fastest is 500 kHz; lower quantize.rate", assertThrows(InputError.class,
+                        () -> TimerSolver.solve(1e6, TimerKind.RP2040_ALARM, 600e3, 1000)).getMessage());
+    }
+
+    @Test
     void refusesARateOutsideTheTimersRange() {
         // slowest: 16 MHz / (1024 * 256) = 61.035 Hz
         assertEquals("quantize.rate 10 Hz is too slow for timer0 (8-bit, prescalers 1/8/64/256/1024) at a 16 MHz"

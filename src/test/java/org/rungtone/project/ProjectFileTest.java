@@ -47,7 +47,7 @@ class ProjectFileTest {
                 Arguments.of("bad unit", HEAD + "[quantize]\nrate = \"16kV\"\n" + SOUND,
                         "board.toml:4: quantize.rate: '16kV' is not a frequency (e.g. 16kHz, 8000, 22.05k)"),
                 Arguments.of("bad choice", HEAD + "[target]\nfamily = \"pic\"\n" + SOUND,
-                        "board.toml:4: target.family: 'pic' is not one of generic, avr, cortexm"),
+                        "board.toml:4: target.family: 'pic' is not one of generic, avr, cortexm, rp2040"),
                 Arguments.of("unknown sound key", HEAD + SOUND + "rte = \"8k\"\n",
                         "board.toml:7: sound[1].rte: unknown key; did you mean 'rate'? (known: name, source, loop,"
                                 + " rate, channel, gain, normalize, trim, fade_in, fade_out, keep_dc, resampler)"),
