@@ -22,12 +22,16 @@ import java.util.List;
  * @param readAt the C expression for the code at pointer {@code at}
  * @param narrow true for packed codes of fewer than 8 bits
  * @param wide true for packed codes of 9 to 15 bits
+ * @param extent the length in the table's declaration ({@code NAME_SAMPLE_COUNT} or {@code NAME_SAMPLE_BYTES}),
+ *     or empty when the table is defined in assembler
+ * @param assembler true when the table is too big for an avr-gcc array and is defined in assembler
  * @param shiftUp true when the narrow reader finds its leftover bits by shifting its window up by 8 − N
  *     (N of 5 to 7), rather than by shifting its two bytes apart
  */
 record SampleView(boolean packed, long count, long bytes, Templates.Stream data, List<String> ranges,
         boolean secondByte, boolean thirdByte, String wordType, boolean stepwise, String element, int perCode,
-        String placeOf, String readAt, boolean narrow, boolean wide, boolean shiftUp) {
+        String placeOf, String readAt, boolean narrow, boolean wide, boolean shiftUp, String extent,
+        boolean assembler) {
     private static final int PER_LINE = 16;
 
     /** The values of the plan's samples. */
@@ -45,7 +49,9 @@ record SampleView(boolean packed, long count, long bytes, Templates.Stream data,
         }
         // Streamed to the file: a long sound's array is never one string.
         Templates.Stream data = Templates.stream(out -> {
-            if (packed) {
+            if (p.samplesInAssembler) {
+                AssemblerTable.write(p.symbol + "_samples", AssemblerTable.bytes(p.samples, p.bits, packed), out);
+            } else if (packed) {
                 CLiterals.writeArrayBody(SamplePacking.pack(p.samples, p.bits), PER_LINE, "    ", out);
             } else {
                 CLiterals.writeArrayBody(p.samples, CLiterals.hexDigits(p.bits), PER_LINE, "    ", out);
@@ -60,7 +66,8 @@ record SampleView(boolean packed, long count, long bytes, Templates.Stream data,
         return new SampleView(packed, p.samples.length, p.sampleBytes, data, List.copyOf(ranges), second, third,
                 third ? "uint32_t" : "uint16_t", stepwise, element, pairs ? 2 : 1,
                 "&" + table + "[" + (pairs ? "index * 2u" : "index") + "]", readAt, packed && p.bits < 8,
-                packed && p.bits > 8 && p.bits < 16, packed && p.bits >= 5 && p.bits < 8);
+                packed && p.bits > 8 && p.bits < 16, packed && p.bits >= 5 && p.bits < 8,
+                p.samplesInAssembler ? "" : p.macro + (packed ? "_SAMPLE_BYTES" : "_SAMPLE_COUNT"), p.samplesInAssembler);
     }
 
     private static int gcd(int a, int b) {
