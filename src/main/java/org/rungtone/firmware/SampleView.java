@@ -67,7 +67,8 @@ record SampleView(boolean packed, long count, long bytes, Templates.Stream data,
                 third ? "uint32_t" : "uint16_t", stepwise, element, pairs ? 2 : 1,
                 "&" + table + "[" + (pairs ? "index * 2u" : "index") + "]", readAt, packed && p.bits < 8,
                 packed && p.bits > 8 && p.bits < 16, packed && p.bits >= 5 && p.bits < 8,
-                p.samplesInAssembler ? "" : p.macro + (packed ? "_SAMPLE_BYTES" : "_SAMPLE_COUNT"), p.samplesInAssembler);
+                p.samplesInAssembler ? "" : p.macro + (packed ? "_SAMPLE_BYTES" : "_SAMPLE_COUNT"),
+                p.samplesInAssembler);
     }
 
     private static int gcd(int a, int b) {

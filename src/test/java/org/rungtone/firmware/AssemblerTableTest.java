@@ -30,8 +30,8 @@ class AssemblerTableTest {
         // 1000 bytes: 63 lines of 16, 32 lines per statement
         assertEquals(3, statements.length);
         for (int i = 1; i < statements.length; i++) {
-            assertTrue(statements[i].startsWith("    \"\\t.pushsection .progmem.data.s_samples,\\\"a\\\",@progbits\\n\""),
-                    statements[i]);
+            String push = "    \"\\t.pushsection .progmem.data.s_samples,\\\"a\\\",@progbits\\n\"";
+            assertTrue(statements[i].startsWith(push), statements[i]);
             assertTrue(statements[i].endsWith("    \"\\t.popsection\\n\");\n"), statements[i]);
             assertTrue(statements[i].length() < 4095, "statement " + i + ": " + statements[i].length());
         }

@@ -19,7 +19,6 @@ import java.util.concurrent.Executors;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.Test;
-import org.rungtone.testing.CToolchain;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
@@ -29,6 +28,7 @@ import org.rungtone.testing.AvrSimulator;
 import org.rungtone.testing.AvrTrace;
 import org.rungtone.testing.AvrTrace.Interrupt;
 import org.rungtone.testing.AvrTrace.Write;
+import org.rungtone.testing.CToolchain;
 
 /**
  * Runs emitted AVR players, built with avr-gcc for the ATmega328P at 16 MHz, in simavr and checks them at
