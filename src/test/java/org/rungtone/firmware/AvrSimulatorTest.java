@@ -2,7 +2,6 @@ package org.rungtone.firmware;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.junit.jupiter.api.Assertions.fail;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -41,10 +40,10 @@ import org.rungtone.testing.CToolchain;
  */
 class AvrSimulatorTest {
     /** Levels main() gives the pins outside the map before the player starts; they must never change. */
-    private static final int PORT_PATTERN = 0xA5;
-    private static final int DDR_PATTERN = 0x5A;
+    static final int PORT_PATTERN = 0xA5;
+    static final int DDR_PATTERN = 0x5A;
     /** ATmega328P ports and the pins they have: PC7 does not exist (datasheet, "Pin Configurations"). */
-    private static final Map<String, Integer> PORT_PINS = new LinkedHashMap<>(Map.of("B", 0xFF, "C", 0x7F,
+    static final Map<String, Integer> PORT_PINS = new LinkedHashMap<>(Map.of("B", 0xFF, "C", 0x7F,
             "D", 0xFF));
     /** The idle loop is one RJMP (2 cycles): the interrupt waits for it at most one cycle. */
     private static final int ENTRY_JITTER_CYCLES = 1;
@@ -144,7 +143,7 @@ class AvrSimulatorTest {
         PinMap map = PinMap.parse(b.pins(), 8);
         boolean loop = b.engine() == PlaybackEngine.LOOP;
         assertEquals(Math.round(16e6 / b.rateHz()), r.period(), "the timer period is the nearest to the rate");
-        Ticks t = Ticks.of(r.trace(), map);
+        AvrTicks t = AvrTicks.of(r.trace(), map);
         assertEquals(1 << (map.bits() - 1), t.initCode, "init parks the ladder mid-range");
         List<Integer> want = loop ? looped(r.played(), t.codes.size()) : toList(r.played());
         if (loop) {
@@ -367,98 +366,5 @@ class AvrSimulatorTest {
             out.add(v);
         }
         return out;
-    }
-
-    /**
-     * The trace cut into ticks and checked write by write: the code init parks the ladder at; the
-     * interrupts that wrote the ports (one write per ladder port, in the map's port order) and the code each
-     * left on the pins; the interrupts after the last of those.
-     */
-    private static final class Ticks {
-        int initCode;
-        final List<Integer> codes = new ArrayList<>();
-        final List<Interrupt> playing = new ArrayList<>();
-        final List<Interrupt> after = new ArrayList<>();
-        long window;
-
-        static Ticks of(AvrTrace trace, PinMap map) {
-            Ticks t = new Ticks();
-            long setupDone = trace.marker("GPIOR0", 1);
-            long initDone = trace.marker("GPIOR0", 2);
-            Map<String, Integer> image = new HashMap<>();
-            List<Write> pending = new ArrayList<>();
-            int w = 0;
-            List<Write> writes = trace.writes();
-            for (Interrupt i : trace.interrupts()) {
-                pending.clear();
-                for (; w < writes.size() && writes.get(w).cycle() < i.exitCycle(); w++) {
-                    Write x = writes.get(w);
-                    checkOtherPins(x, map, setupDone);
-                    image.put(x.register(), x.value());
-                    if (x.cycle() > initDone && !x.register().equals("GPIOR0")) {
-                        if (!i.contains(x)) {
-                            fail("port write outside the timer interrupt: " + x);
-                        }
-                        pending.add(x);
-                    }
-                    if (x.register().equals("GPIOR0") && x.value() == 2) {
-                        t.initCode = decode(image, map);
-                        checkOutputs(image, map);
-                    }
-                }
-                t.tick(i, pending, image, map);
-            }
-            return t;
-        }
-
-        private void tick(Interrupt i, List<Write> writes, Map<String, Integer> image, PinMap map) {
-            if (writes.isEmpty()) {
-                if (!playing.isEmpty()) {
-                    after.add(i);
-                }
-                return;
-            }
-            if (!after.isEmpty()) {
-                fail("the interrupt at cycle " + after.get(0).entryCycle() + " wrote no code, but later ones did");
-            }
-            List<String> order = writes.stream().map(Write::register).toList();
-            assertEquals(map.ports().stream().map(p -> "PORT" + p).toList(), order, "port writes at tick "
-                    + playing.size());
-            playing.add(i);
-            window = Math.max(window, writes.get(writes.size() - 1).cycle() - writes.get(0).cycle());
-            codes.add(decode(image, map));
-        }
-
-        /** Pins outside the map keep main()'s pattern; PINx (toggle) is never written. */
-        private static void checkOtherPins(Write x, PinMap map, long setupDone) {
-            String r = x.register();
-            if (x.cycle() < setupDone || r.equals("GPIOR0")) {
-                return;
-            }
-            if (r.startsWith("PIN")) {
-                fail("write to " + r + " toggles pins: " + x);
-            }
-            String port = r.substring(r.length() - 1);
-            int free = PORT_PINS.get(port) & ~(int) map.mask(port);
-            int pattern = (r.startsWith("DDR") ? DDR_PATTERN : PORT_PATTERN) & free;
-            assertEquals(pattern, x.value() & free, "pins outside the map changed by " + x);
-        }
-
-        /** After init, every ladder pin is an output. */
-        private static void checkOutputs(Map<String, Integer> image, PinMap map) {
-            for (String port : map.ports()) {
-                int mask = (int) map.mask(port);
-                assertEquals(mask, image.getOrDefault("DDR" + port, 0) & mask, "DDR" + port + " after init");
-            }
-        }
-
-        private static int decode(Map<String, Integer> image, PinMap map) {
-            int code = 0;
-            for (int bit = 0; bit < map.bits(); bit++) {
-                Pin p = map.pin(bit);
-                code |= ((image.getOrDefault("PORT" + p.port(), 0) >> p.pin()) & 1) << bit;
-            }
-            return code;
-        }
     }
 }
