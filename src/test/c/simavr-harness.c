@@ -4,7 +4,10 @@
  * its interrupts take. Built by the firmware tests with the host gcc against libsimavr:
  *
  *     gcc -std=gnu99 -O2 -I/usr/include/simavr simavr-harness.c -lsimavr -o simavr-harness
- *     simavr-harness PLAYER.elf CYCLES
+ *     simavr-harness PLAYER.elf CYCLES [MCU]
+ *
+ * MCU is the simulated part, atmega328p unless given; the others the tests use (atmega644p, 64 KiB of
+ * flash, for tables the 328P cannot hold) have ports B, C and D and GPIOR0 at the same addresses.
  *
  * Output on stdout, one record per line, as things happen (an isr line when the interrupt ends, after the
  * writes made inside it):
@@ -52,7 +55,7 @@
 #include "sim_io.h"
 #include "sim_interrupts.h"
 
-#define MCU_NAME "atmega328p"
+#define DEFAULT_MCU "atmega328p"
 #define CPU_HZ 16000000u
 /* ATmega328P datasheet: interrupt response time, four clock cycles minimum. */
 #define RESPONSE_CYCLES 4u
@@ -184,8 +187,9 @@ int main(int argc, char **argv)
     elf_firmware_t fw;
     unsigned long long limit;
     char *end;
-    if (argc != 3) {
-        fprintf(stderr, "usage: simavr-harness PROGRAM.elf CYCLES\n");
+    const char *mcu = argc == 4 ? argv[3] : DEFAULT_MCU;
+    if (argc != 3 && argc != 4) {
+        fprintf(stderr, "usage: simavr-harness PROGRAM.elf CYCLES [MCU]\n");
         return 2;
     }
     limit = strtoull(argv[2], &end, 10);
@@ -205,11 +209,15 @@ int main(int argc, char **argv)
         fprintf(stderr, "simavr-harness: cannot read %s\n", argv[1]);
         return 2;
     }
-    strcpy(fw.mmcu, MCU_NAME);
+    if (strlen(mcu) >= sizeof(fw.mmcu)) {
+        fprintf(stderr, "simavr-harness: MCU name too long: %s\n", mcu);
+        return 2;
+    }
+    strcpy(fw.mmcu, mcu);
     fw.frequency = CPU_HZ;
     avr = avr_make_mcu_by_name(fw.mmcu);
     if (avr == NULL) {
-        fprintf(stderr, "simavr-harness: simavr has no %s\n", MCU_NAME);
+        fprintf(stderr, "simavr-harness: simavr has no %s\n", mcu);
         return 2;
     }
     avr_init(avr);

@@ -11,6 +11,7 @@
  *   target: avr (8-bit AVR, ATmega328P register names), CPU clock 16 MHz
  *   engine: clip, one-shot playback of 1 sound
  *   tick rate: 22.05 kHz requested; timer1 at 16 MHz: prescaler 1, OCR1A = 725 (726 cycles per tick), 22.0386 kHz (-518.5 ppm)
+ *   cpu: at most 70 cycles per tick = 9.6 % of the CPU at 22.04 kHz (16 MHz clock); rates up to 57.1 kHz keep it under 25 %; measured in simulation (ATmega328P, avr-gcc -Os); the timer interrupt is off while nothing plays
  *   pins: PD2-PD7 on 8-bit ports: bit 0 (LSB) -> PD2, bit 1 -> PD3, bit 2 -> PD4, bit 3 -> PD5, bit 4 -> PD6, bit 5 (MSB) -> PD7
  *   pin strategy: shift and mask, one per port
  *   port update: port D, PORTx written directly where the ladder owns the whole port, else masked read-modify-write; other pins keep their levels
@@ -62,45 +63,59 @@ static inline uint8_t alarm_lock(void)
     return sreg;
 }
 
-/* Puts one code on the ladder: every port value is computed first (one mask and shift per port), then the
- * ports are written back to back in the fixed order D.
+/* Puts one code on the ladder (one mask and shift per port).
  * Ports the ladder shares with other functions get a masked read-modify-write, so their other pins keep
  * their levels. This runs inside the timer interrupt, where interrupts are off; if your main code also
  * writes one of these PORT registers with a read-modify-write (PORTB |= ...), wrap that in
  * ATOMIC_BLOCK(ATOMIC_RESTORESTATE) from <util/atomic.h>, or this interrupt may undo its change. */
 static void alarm_output(uint16_t code)
 {
-    const alarm_port_t v_d = (alarm_port_t)((code & 0x003Fu) << 2);
+    const uint8_t d_lo = (uint8_t)code;
+    const alarm_port_t v_d = (alarm_port_t)(uint8_t)((d_lo & 0x3Fu) << 2);
     PORTD = (uint8_t)((PORTD & (uint8_t)~ALARM_PORT_D_MASK) | v_d);
 }
 
-/* Code of sample i. */
-static uint16_t alarm_sample(alarm_index_t index)
+/* The compare-match interrupt runs only while a sound plays: alarm_play() clears a pending match and
+ * enables it, and the first interrupt after the sound ends disables it, so an idle player takes no CPU
+ * time. If your code also changes this TIMSK register, do it with interrupts off (ATOMIC_BLOCK). */
+#define ALARM_TICKS_ON() (TIFR1 = _BV(OCF1A), TIMSK1 = (uint8_t)(TIMSK1 | _BV(OCIE1A)))
+#define ALARM_TICKS_OFF() (TIMSK1 = (uint8_t)(TIMSK1 & (uint8_t)~_BV(OCIE1A)))
+
+/* Where code i is in the table. */
+static const uint8_t *alarm_place(alarm_index_t index)
 {
-    return (uint16_t)ALARM_READ_SAMPLE(&alarm_samples[index]);
+    return &alarm_samples[index];
 }
 
-/* Player state, shared with alarm_tick() in the interrupt. */
-static volatile alarm_index_t alarm_pos;        /* next sample to fetch */
-static volatile alarm_index_t alarm_end;        /* one past the last sample of the sound */
-static volatile uint16_t alarm_next;         /* code for the next tick, fetched ahead */
-static volatile uint8_t alarm_playing;
+/* The code at *p; *p moves on past it. */
+static uint8_t alarm_take(const uint8_t **p)
+{
+    uint8_t code;
+    /* LPM with post-increment: the read moves the pointer at no cost */
+    __asm__ ("lpm %0, Z+" : "=r" (code), "+z" (*p));
+    return code;
+}
+
+/* Player state, shared with alarm_tick() in the interrupt: the next code, and the place where playing
+ * stops (the end of the sound, or the next code once alarm_stop() has run). */
+static const uint8_t *volatile alarm_at;
+static const uint8_t *volatile alarm_stop_at;
 
 static void alarm_begin(uint8_t sound, uint8_t loop)
 {
-    alarm_index_t start;
+    const uint8_t *start;
+    const uint8_t *end;
     ALARM_LOCK_STATE saved;
     if (sound >= ALARM_SOUND_COUNT) {
         return;
     }
-    start = ALARM_READ_INDEX(&alarm_sound_start[sound]);
-    saved = ALARM_LOCK();
-    alarm_playing = 0u;
-    alarm_end = ALARM_READ_INDEX(&alarm_sound_end[sound]);
+    start = alarm_place(ALARM_READ_INDEX(&alarm_sound_start[sound]));
+    end = alarm_place(ALARM_READ_INDEX(&alarm_sound_end[sound]));
     (void)loop;
-    alarm_next = alarm_sample(start);
-    alarm_pos = (alarm_index_t)(start + 1u);
-    alarm_playing = 1u;
+    saved = ALARM_LOCK();
+    alarm_at = start;
+    alarm_stop_at = end;
+    ALARM_TICKS_ON();
     ALARM_UNLOCK(saved);
 }
 
@@ -111,29 +126,32 @@ void alarm_play(uint8_t sound)
 
 void alarm_stop(void)
 {
-    alarm_playing = 0u;
+    ALARM_LOCK_STATE saved = ALARM_LOCK();
+    alarm_stop_at = alarm_at;
+    ALARM_UNLOCK(saved);
 }
 
 uint8_t alarm_is_done(void)
 {
-    return (uint8_t)(alarm_playing == 0u);
+    ALARM_LOCK_STATE saved = ALARM_LOCK();
+    const uint8_t done = (uint8_t)(alarm_at == alarm_stop_at);
+    ALARM_UNLOCK(saved);
+    return done;
 }
 
 void alarm_tick(void)
 {
-    alarm_index_t pos;
-    if (alarm_playing == 0u) {
+    const uint8_t *p = alarm_at;
+    uint8_t code;
+    if (p == alarm_stop_at) {
+        ALARM_TICKS_OFF();
         return;
     }
-    /* Write first, so the pins change the same time after every interrupt; then fetch ahead. */
-    alarm_output(alarm_next);
-    pos = alarm_pos;
-    if (pos == alarm_end) {
-        alarm_playing = 0u;
-        return;
-    }
-    alarm_next = alarm_sample(pos);
-    alarm_pos = (alarm_index_t)(pos + 1u);
+    /* The same instructions run before the write in every tick, so the pins change the same time after
+     * every interrupt. */
+    code = alarm_take(&p);
+    alarm_at = p;  /* stored first: fewer registers stay in use */
+    alarm_output(code);
 }
 
 void alarm_init(void)
@@ -149,11 +167,12 @@ void alarm_init(void)
     TCNT1 = 0u;
     OCR1A = ALARM_TIMER_RELOAD;
     TIFR1 = _BV(OCF1A);
-    TIMSK1 = (uint8_t)(TIMSK1 | _BV(OCIE1A));
+    /* the compare-match interrupt stays off until alarm_play() */
     sei();
 }
 
-ISR(TIMER1_COMPA_vect)
+/* flatten: the tick's code is compiled into the interrupt, which then saves only the registers it uses. */
+ISR(TIMER1_COMPA_vect, __attribute__((flatten)))
 {
     alarm_tick();
 }

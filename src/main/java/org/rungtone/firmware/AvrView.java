@@ -24,8 +24,9 @@ record AvrView(long cpuClockHz, String cpuClockText, boolean timer0, boolean tim
      * @param sample {@code pgm_read_byte} or {@code pgm_read_word} for one sample
      * @param index {@code pgm_read_word} or {@code pgm_read_dword} for one sample index
      * @param stepCode {@code pgm_read_byte} or {@code pgm_read_word} for one sweep code
+     * @param take the LPM instructions that read one whole-element code and step the Z pointer past it
      */
-    record Reads(String sample, String index, String stepCode) {
+    record Reads(String sample, String index, String stepCode, String take) {
     }
 
     /** The values of an avr plan. */
@@ -34,7 +35,8 @@ record AvrView(long cpuClockHz, String cpuClockText, boolean timer0, boolean tim
         TimerKind k = t.kind();
         boolean wordSamples = p.storage != SampleStorage.PACKED && p.bits > 8;
         Reads reads = new Reads(wordSamples ? "pgm_read_word" : "pgm_read_byte",
-                p.wideIndex ? "pgm_read_dword" : "pgm_read_word", p.bits > 8 ? "pgm_read_word" : "pgm_read_byte");
+                p.wideIndex ? "pgm_read_dword" : "pgm_read_word", p.bits > 8 ? "pgm_read_word" : "pgm_read_byte",
+                p.bits > 8 ? "lpm %A0, Z+\\n\\tlpm %B0, Z+" : "lpm %0, Z+");
         return new AvrView(Math.round(p.request.cpuClockHz()), Fmt.hz(p.request.cpuClockHz()),
                 k == TimerKind.AVR_TIMER0, k == TimerKind.AVR_TIMER1, k == TimerKind.AVR_TIMER2,
                 clockSelect(k, t.prescaler()), "TIMER" + timerNumber(k) + "_COMPA_vect", reads);

@@ -41,6 +41,8 @@ final class EmitPlan {
     final SampleStorage storage;
     final boolean wideIndex;
     final long sampleBytes;
+    /** True when the sample table is too big for an avr-gcc array and is defined in assembler. */
+    final boolean samplesInAssembler;
     final long soundTableBytes;
     final long pinTableBytes;
     final long sweepBytes;
@@ -90,6 +92,7 @@ final class EmitPlan {
                 + " address (2^32 bits); shorten the sounds", total, bits);
         wideIndex = engine != PlaybackEngine.DDS && total > 65535;
         sampleBytes = storage.bytes(total, bits);
+        samplesInAssembler = family == TargetFamily.AVR && AssemblerTable.needed(sampleBytes);
         int arrays = engine == PlaybackEngine.LOOP ? 4 : 2;
         soundTableBytes = isClip() ? (long) sounds.size() * arrays * (wideIndex ? 4 : 2) : 0;
         pinTableBytes = strategy == PinStrategy.TABLE ? map.tableBytes() : 0;
@@ -323,6 +326,10 @@ final class EmitPlan {
                     + " sound", family.folder(), Fmt.bytes(total), Fmt.bytes(family.maxTableBytes()),
                     packed ? "" : Setting.STORAGE.ref() + " packed, ", Setting.RATE.ref(), Setting.BITS.ref());
         }
+        Checks.checkInput(family != TargetFamily.AVR || !AssemblerTable.needed(sweepBytes), "target %s: the"
+                + " sweep's %s codes take %s bytes, more than the %s bytes avr-gcc allows one array; sweep fewer"
+                + " codes", family.folder(), Fmt.bytes(sweepBytes / (bits <= 8 ? 1 : 2)), Fmt.bytes(sweepBytes),
+                Fmt.bytes(AssemblerTable.MAX_C_OBJECT_BYTES));
         long budget = request.flashBudgetBytes();
         if (budget > 0) {
             long fixed = soundTableBytes + pinTableBytes + sweepBytes;

@@ -3,13 +3,17 @@ package org.rungtone.firmware;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 
 /**
- * The report of an emission, one line per topic: target, engine, tick rate and timer, pins and strategy,
- * port update order and glitch, storage, flash, sounds, DDS tuning, sweep. The same lines head every
+ * The report of an emission, one line per topic: target, engine, tick rate and timer, CPU cost per tick, pins
+ * and strategy, port update order and glitch, storage, flash, sounds, DDS tuning, sweep. The same lines head every
  * emitted file as its parameters.
  */
 final class EmitReport {
+    /** Share of the CPU the report names the highest rate for, leaving the rest to the main program. */
+    static final double CPU_SHARE_LIMIT = 0.25;
+
     private EmitReport() {
     }
 
@@ -19,6 +23,7 @@ final class EmitReport {
         out.add(target(p));
         out.add(engine(p));
         out.add(tick(p));
+        cpu(p).ifPresent(out::add);
         out.add("pins: " + p.pins.notation() + " on " + p.pins.portWidth() + "-bit ports: "
                 + String.join(", ", p.pins.describeBits()));
         out.add(strategy(p));
@@ -40,19 +45,11 @@ final class EmitReport {
     }
 
     /**
-     * Estimated CPU cycles between the writes of two ports: AVR {@code in/andi/or/out} is 4 cycles, a plain
-     * {@code out} 1 (ATmega328P instruction timings); a Cortex-M3 store to BSRR with the value ready about 3
-     * (STR 2 cycles plus address set-up). Estimates; 0 when unknown (generic port hook).
+     * Estimated CPU cycles between the writes of two ports on a Cortex-M3: a store to BSRR with the value
+     * ready takes about 3 (STR 2 cycles plus address set-up). An estimate; 0 when unknown (generic port hook).
      */
-    static int portGapCycles(EmitPlan p, String port) {
-        switch (p.family) {
-            case AVR:
-                return p.pins.mask(port) == 0xFF ? 1 : 4;
-            case CORTEXM:
-                return 3;
-            default:
-                return 0;
-        }
+    static int portGapCycles(EmitPlan p) {
+        return p.family == TargetFamily.CORTEXM ? 3 : 0;
     }
 
     private static String target(EmitPlan p) {
@@ -94,6 +91,21 @@ final class EmitReport {
         return p.family.timers().isEmpty() ? s + " (for your timer; the generic code does not program it)" : s;
     }
 
+    /** The measured cost of a tick at the plan's rate, where the family has figures. */
+    private static Optional<String> cpu(EmitPlan p) {
+        Optional<TickCost> cost = TickCost.of(p);
+        if (cost.isEmpty() || Double.isNaN(p.request.cpuClockHz())) {
+            return Optional.empty();
+        }
+        TickCost c = cost.get();
+        double clock = p.request.cpuClockHz();
+        String line = String.format(Locale.ROOT, "cpu: at most %d cycles per tick = %.1f %% of the CPU at %s"
+                + " (%s clock); rates up to %s keep it under %.0f %%; measured in simulation (ATmega328P,"
+                + " avr-gcc -Os)", c.worstCycles(), 100 * c.cpuShare(clock, p.tickRateHz), Fmt.hz(p.tickRateHz, 4),
+                Fmt.hz(clock), Fmt.hz(c.maxRateHz(clock, CPU_SHARE_LIMIT), 3), 100 * CPU_SHARE_LIMIT);
+        return Optional.of(c.idleOff() ? line + "; the timer interrupt is off while nothing plays" : line);
+    }
+
     private static String strategy(EmitPlan p) {
         String forced = p.request.pinStrategy() == PinStrategy.AUTO ? "" : " (forced)";
         switch (p.strategy) {
@@ -131,25 +143,36 @@ final class EmitReport {
         if (ports.size() == 1) {
             return "port update: port " + ports.get(0) + ", " + how;
         }
+        return "port update: ports " + String.join(" then ", ports) + " in this fixed order, " + gaps(p)
+                + "; in between, the ladder shows a mix of the old and new code (a short glitch); " + how;
+    }
+
+    /** The time between the port writes of one update, in words. */
+    private static String gaps(EmitPlan p) {
+        Optional<TickCost> cost = TickCost.of(p);
+        if (cost.isPresent()) {
+            int w = cost.get().windowCycles();
+            return "the values computed first and written back to back: " + w + " cycle" + (w == 1 ? "" : "s")
+                    + nanos(p, w) + " from the first write to the last (measured in simulation)";
+        }
+        if (portGapCycles(p) == 0) {
+            return "the gap between writes depends on your port hook";
+        }
+        List<String> ports = p.pins.ports();
         StringBuilder gaps = new StringBuilder();
         for (int i = 1; i < ports.size(); i++) {
-            int cycles = portGapCycles(p, ports.get(i));
-            if (cycles == 0) {
-                gaps.setLength(0);
-                gaps.append("the gap between writes depends on your port hook");
-                break;
-            }
             if (gaps.length() > 0) {
                 gaps.append(", ");
             }
-            gaps.append(ports.get(i - 1)).append(" to ").append(ports.get(i)).append(" about ").append(cycles)
-                    .append(" cycles");
-            if (!Double.isNaN(p.request.cpuClockHz())) {
-                gaps.append(String.format(Locale.ROOT, " (%.0f ns)", cycles / p.request.cpuClockHz() * 1e9));
-            }
+            gaps.append(ports.get(i - 1)).append(" to ").append(ports.get(i)).append(" about ")
+                    .append(portGapCycles(p)).append(" cycles").append(nanos(p, portGapCycles(p)));
         }
-        return "port update: ports " + String.join(" then ", ports) + " in this fixed order, " + gaps
-                + "; in between, the ladder shows a mix of the old and new code (a short glitch); " + how;
+        return gaps.toString();
+    }
+
+    private static String nanos(EmitPlan p, int cycles) {
+        return Double.isNaN(p.request.cpuClockHz()) ? ""
+                : String.format(Locale.ROOT, " (%.0f ns)", cycles / p.request.cpuClockHz() * 1e9);
     }
 
     private static String storage(EmitPlan p) {

@@ -14,9 +14,10 @@ import java.util.Optional;
  * @param timer the solved timer, when the target programs one (or a hint for generic when a timer is named)
  * @param pinStrategy the strategy used for the pins
  * @param warnings problems that do not stop the build
+ * @param tickCost the measured worst-case cost of one tick and the glitch window, where the family has figures
  */
 public record EmitResult(List<Path> files, List<String> report, long flashBytes, Optional<TimerSetting> timer,
-        PinStrategy pinStrategy, List<String> warnings) {
+        PinStrategy pinStrategy, List<String> warnings, Optional<TickCost> tickCost) {
     /** Copies the lists. */
     public EmitResult {
         files = List.copyOf(files);

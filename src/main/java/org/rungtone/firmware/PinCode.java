@@ -52,6 +52,52 @@ final class PinCode {
         return b.append(");").toString();
     }
 
+    /**
+     * The statement for {@code port} of an 8-bit port for a core with 8-bit registers: like {@link #compute},
+     * but each shift group is split by the code byte its bits come from, and the terms work on those bytes
+     * held in {@code uint8_t} locals ({@code d_lo}, {@code d_hi}), which avr-gcc shifts one register at a time
+     * instead of as 16-bit values.
+     */
+    static String computeBytewise(PinMap map, PinStrategy strategy, String port, String symbol, String macro) {
+        if (strategy == PinStrategy.TABLE) {
+            return compute(map, strategy, port, symbol, macro);
+        }
+        String lower = lower(port);
+        String[] names = {lower + "_lo", lower + "_hi"};
+        boolean[] used = new boolean[2];
+        List<String> terms = new ArrayList<>();
+        for (Map.Entry<Integer, Long> g : map.shiftGroups(port).entrySet()) {
+            for (int b = 0; b < 2; b++) {
+                long m = g.getValue() >> (8 * b) & 0xFF;
+                if (m == 0) {
+                    continue;
+                }
+                used[b] = true;
+                int delta = g.getKey() + 8 * b;
+                String masked = "(" + names[b] + " & " + CLiterals.hex(m, 2) + "u)";
+                terms.add(delta > 0 ? "(uint8_t)(" + masked + " << " + delta + ")"
+                        : delta < 0 ? "(uint8_t)(" + masked + " >> " + -delta + ")" : masked);
+            }
+        }
+        StringBuilder b = new StringBuilder();
+        if (used[0]) {
+            b.append("    const uint8_t ").append(names[0]).append(" = (uint8_t)code;\n");
+        }
+        if (used[1]) {
+            b.append("    const uint8_t ").append(names[1]).append(" = (uint8_t)(code >> 8);\n");
+        }
+        String type = symbol + "_port_t";
+        b.append("    const ").append(type).append(" v_").append(lower).append(" = (").append(type).append(")");
+        if (terms.size() == 1) {
+            return b.append(terms.get(0)).append(";").toString();
+        }
+        b.append("(").append(terms.get(0));
+        for (int i = 1; i < terms.size(); i++) {
+            b.append(i % 2 == 0 ? "\n        | " : " | ").append(terms.get(i));
+        }
+        return b.append(");").toString();
+    }
+
     /** Number of mask-and-shift terms over all ports (the instruction cost of SHIFT and SCATTER). */
     static int termCount(PinMap map) {
         int n = 0;

@@ -28,6 +28,7 @@ record PortView(String name, String lower, int index, String maskHex, String pin
             }
         }
         return new PortView(port, PinCode.lower(port), index, CLiterals.hex(mask, width / 4), String.join(", ", names),
-                PinCode.compute(map, p.strategy, port, p.symbol, p.macro), mask == (1L << width) - 1);
+                p.family == TargetFamily.AVR ? PinCode.computeBytewise(map, p.strategy, port, p.symbol, p.macro)
+                        : PinCode.compute(map, p.strategy, port, p.symbol, p.macro), mask == (1L << width) - 1);
     }
 }

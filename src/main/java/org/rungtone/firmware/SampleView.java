@@ -14,9 +14,24 @@ import java.util.List;
  * @param secondByte true when a packed sample can reach into a second byte
  * @param thirdByte true when a packed sample can reach into a third byte
  * @param wordType the C type that holds the bytes one packed sample touches
+ * @param stepwise true when every code is whole table elements (unpacked, or packed 8 or 16 bits), so the
+ *     player steps a pointer through them
+ * @param element the C type of one table element ({@code uint8_t} or {@code uint16_t})
+ * @param perCode table elements per code (2 for 16-bit packed codes, else 1)
+ * @param placeOf the C expression for the place of code {@code index} in the table
+ * @param readAt the C expression for the code at pointer {@code at}
+ * @param narrow true for packed codes of fewer than 8 bits
+ * @param wide true for packed codes of 9 to 15 bits
+ * @param extent the length in the table's declaration ({@code NAME_SAMPLE_COUNT} or {@code NAME_SAMPLE_BYTES}),
+ *     or empty when the table is defined in assembler
+ * @param assembler true when the table is too big for an avr-gcc array and is defined in assembler
+ * @param shiftUp true when the narrow reader finds its leftover bits by shifting its window up by 8 − N
+ *     (N of 5 to 7), rather than by shifting its two bytes apart
  */
 record SampleView(boolean packed, long count, long bytes, Templates.Stream data, List<String> ranges,
-        boolean secondByte, boolean thirdByte, String wordType) {
+        boolean secondByte, boolean thirdByte, String wordType, boolean stepwise, String element, int perCode,
+        String placeOf, String readAt, boolean narrow, boolean wide, boolean shiftUp, String extent,
+        boolean assembler) {
     private static final int PER_LINE = 16;
 
     /** The values of the plan's samples. */
@@ -34,14 +49,26 @@ record SampleView(boolean packed, long count, long bytes, Templates.Stream data,
         }
         // Streamed to the file: a long sound's array is never one string.
         Templates.Stream data = Templates.stream(out -> {
-            if (packed) {
+            if (p.samplesInAssembler) {
+                AssemblerTable.write(p.symbol + "_samples", AssemblerTable.bytes(p.samples, p.bits, packed), out);
+            } else if (packed) {
                 CLiterals.writeArrayBody(SamplePacking.pack(p.samples, p.bits), PER_LINE, "    ", out);
             } else {
                 CLiterals.writeArrayBody(p.samples, CLiterals.hexDigits(p.bits), PER_LINE, "    ", out);
             }
         });
+        boolean stepwise = !packed || p.bits % 8 == 0;
+        boolean pairs = packed && p.bits == 16;
+        String element = packed || p.bits <= 8 ? "uint8_t" : "uint16_t";
+        String table = p.symbol + "_samples";
+        String readAt = pairs ? "(" + p.macro + "_READ_U8(at) | (" + p.macro + "_READ_U8(at + 1) << 8))"
+                : p.macro + (packed ? "_READ_U8(at)" : "_READ_SAMPLE(at)");
         return new SampleView(packed, p.samples.length, p.sampleBytes, data, List.copyOf(ranges), second, third,
-                third ? "uint32_t" : "uint16_t");
+                third ? "uint32_t" : "uint16_t", stepwise, element, pairs ? 2 : 1,
+                "&" + table + "[" + (pairs ? "index * 2u" : "index") + "]", readAt, packed && p.bits < 8,
+                packed && p.bits > 8 && p.bits < 16, packed && p.bits >= 5 && p.bits < 8,
+                p.samplesInAssembler ? "" : p.macro + (packed ? "_SAMPLE_BYTES" : "_SAMPLE_COUNT"),
+                p.samplesInAssembler);
     }
 
     private static int gcd(int a, int b) {

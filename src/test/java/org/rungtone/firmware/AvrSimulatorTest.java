@@ -2,7 +2,6 @@ package org.rungtone.firmware;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.junit.jupiter.api.Assertions.fail;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -33,16 +32,18 @@ import org.rungtone.testing.CToolchain;
 /**
  * Runs emitted AVR players, built with avr-gcc for the ATmega328P at 16 MHz, in simavr and checks them at
  * the pins: the code the port writes put on the ladder at every tick is the sample array, pins outside the
- * map keep their levels, the interrupt comes every timer period the build reports, and the pins change the
- * same number of cycles after every interrupt. Each build's interrupt length is measured and printed as a
- * table (cycles per tick, worst and mean while playing, after the sound ended).
+ * map keep their levels, the interrupt comes every timer period the build reports, the pins change the
+ * same number of cycles after every interrupt, and once the sound has ended the interrupt switches itself
+ * off. Each build's interrupt length and glitch window (first to last port write of a tick) are measured,
+ * checked against the figures the build report prints ({@link TickCost}) and printed as a table; the dds and
+ * sweep engines are measured too.
  */
 class AvrSimulatorTest {
     /** Levels main() gives the pins outside the map before the player starts; they must never change. */
-    private static final int PORT_PATTERN = 0xA5;
-    private static final int DDR_PATTERN = 0x5A;
+    static final int PORT_PATTERN = 0xA5;
+    static final int DDR_PATTERN = 0x5A;
     /** ATmega328P ports and the pins they have: PC7 does not exist (datasheet, "Pin Configurations"). */
-    private static final Map<String, Integer> PORT_PINS = new LinkedHashMap<>(Map.of("B", 0xFF, "C", 0x7F,
+    static final Map<String, Integer> PORT_PINS = new LinkedHashMap<>(Map.of("B", 0xFF, "C", 0x7F,
             "D", 0xFF));
     /** The idle loop is one RJMP (2 cycles): the interrupt waits for it at most one cycle. */
     private static final int ENTRY_JITTER_CYCLES = 1;
@@ -52,6 +53,9 @@ class AvrSimulatorTest {
     private static final int LOOP_END = 160;
     private static final int LOOP_TICKS = 400;
     private static final int TICKS_AFTER_END = 12;
+    private static final int COST_ONLY_TICKS = 300;
+    /** Twelve bits, one per pin, taking turns over ports D, B and C: four scatter terms per port. */
+    private static final String SCATTERED_12 = "PD2,PB0,PC0,PD3,PB1,PC1,PD4,PB2,PC2,PD5,PB3,PC3";
     private static final Map<String, String> TABLE = Collections.synchronizedMap(new LinkedHashMap<>());
     private static final Map<Build, CompletableFuture<Run>> RUNS = new HashMap<>();
     private static ExecutorService pool;
@@ -63,8 +67,12 @@ class AvrSimulatorTest {
     record Build(String pins, SampleStorage storage, PlaybackEngine engine, int rateHz, TimerKind timer) {
         @Override
         public String toString() {
-            return String.format(Locale.ROOT, "%-26s %-8s %-4s %5d Hz %s", pins, storage.optionName(),
+            return String.format(Locale.ROOT, "%-48s %-8s %-5s %5d Hz %s", pins, storage.optionName(),
                     engine.optionName(), rateHz, timer.optionName());
+        }
+
+        boolean isClip() {
+            return engine == PlaybackEngine.CLIP || engine == PlaybackEngine.LOOP;
         }
     }
 
@@ -97,6 +105,25 @@ class AvrSimulatorTest {
                 TimerKind.AVR_TIMER0));
         out.add(new Build("PD2-PD7,PB0-PB3", SampleStorage.UNPACKED, PlaybackEngine.LOOP, 16000,
                 TimerKind.AVR_TIMER2));
+        // The worst cases of the cost table: 5-bit packed, 11 bits on two ports, twelve scattered bits.
+        out.add(new Build("PB0-PB4", SampleStorage.PACKED, PlaybackEngine.LOOP, 8000, TimerKind.AVR_TIMER1));
+        out.add(new Build("PD2-PD7,PB0-PB4", SampleStorage.UNPACKED, PlaybackEngine.CLIP, 8000,
+                TimerKind.AVR_TIMER1));
+        out.add(new Build("PD2-PD7,PB0-PB4", SampleStorage.PACKED, PlaybackEngine.LOOP, 8000,
+                TimerKind.AVR_TIMER1));
+        out.add(new Build(SCATTERED_12, SampleStorage.PACKED, PlaybackEngine.CLIP, 8000, TimerKind.AVR_TIMER1));
+        return out.stream();
+    }
+
+    /** Builds of the dds and sweep engines, whose cost is measured (their codes are tested elsewhere). */
+    static Stream<Build> costOnlyBuilds() {
+        List<Build> out = new ArrayList<>();
+        for (String pins : List.of("PB0-PB4", "PD2-PD7,PB0-PB4", "PD2,PD7,PC0,PC1,PB2,PB1", SCATTERED_12)) {
+            for (SampleStorage storage : SampleStorage.values()) {
+                out.add(new Build(pins, storage, PlaybackEngine.DDS, 8000, TimerKind.AVR_TIMER1));
+            }
+            out.add(new Build(pins, SampleStorage.UNPACKED, PlaybackEngine.SWEEP, 1000, TimerKind.AVR_TIMER1));
+        }
         return out.stream();
     }
 
@@ -116,20 +143,58 @@ class AvrSimulatorTest {
         PinMap map = PinMap.parse(b.pins(), 8);
         boolean loop = b.engine() == PlaybackEngine.LOOP;
         assertEquals(Math.round(16e6 / b.rateHz()), r.period(), "the timer period is the nearest to the rate");
-        Ticks t = Ticks.of(r.trace(), map);
+        AvrTicks t = AvrTicks.of(r.trace(), map);
         assertEquals(1 << (map.bits() - 1), t.initCode, "init parks the ladder mid-range");
         List<Integer> want = loop ? looped(r.played(), t.codes.size()) : toList(r.played());
         if (loop) {
             assertTrue(t.codes.size() >= LOOP_TICKS, "looping for the whole run: " + t.codes.size() + " ticks");
         } else {
-            assertTrue(t.after.size() >= TICKS_AFTER_END - 2, "interrupts after the end: " + t.after.size());
+            // the interrupt after the last code finds the sound ended and switches itself off
+            assertEquals(1, t.after.size(), "interrupts after the end");
         }
         assertEquals(want, t.codes, "codes at the pins, tick by tick");
         // The first tick may wait for the end of play()'s critical section: periods count from the second.
         assertTickPeriod(t.playing.subList(1, t.playing.size()), r.period());
         assertEquals(1, t.playing.stream().map(i -> firstWriteOffset(r.trace(), i)).distinct().count(),
                 "the pins change the same number of cycles after every interrupt");
-        record(b, r, t);
+        record(b, r, t.playing, t.window, t.after.size());
+        assertWithinReport(r, t.playing, t.window);
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("costOnlyBuilds")
+    void ddsAndSweepStayWithinTheReportedCost(Build b) {
+        Run r = prepared(b);
+        PinMap map = PinMap.parse(b.pins(), 8);
+        long started = r.trace().marker("GPIOR0", 3);
+        List<Interrupt> ticks = r.trace().interrupts().stream().filter(i -> i.entryCycle() > started).toList();
+        assertTrue(ticks.size() >= COST_ONLY_TICKS - 4, "interrupts measured: " + ticks.size());
+        long window = 0;
+        for (Interrupt i : ticks) {
+            List<Write> w = r.trace().writes().stream().filter(i::contains)
+                    .filter(x -> x.register().startsWith("PORT")).toList();
+            if (!w.isEmpty()) {
+                assertEquals(map.ports().size(), w.size(), "one write per ladder port at " + i);
+                window = Math.max(window, w.get(w.size() - 1).cycle() - w.get(0).cycle());
+            }
+        }
+        record(b, r, ticks, window, 0);
+        assertWithinReport(r, ticks, window);
+    }
+
+    /**
+     * The measured worst tick and glitch window are at most what the build report prints: the figures of
+     * {@link TickCost} stay honest.
+     */
+    private static void assertWithinReport(Run r, List<Interrupt> ticks, long window) {
+        TickCost cost = r.result().tickCost().orElseThrow();
+        long worst = ticks.stream().mapToLong(Interrupt::cycles).max().orElseThrow();
+        assertTrue(worst <= cost.worstCycles(), "a tick took " + worst + " cycles; the report says at most "
+                + cost.worstCycles());
+        assertTrue(window <= cost.windowCycles(), "the ports were written within " + window + " cycles; the"
+                + " report says " + cost.windowCycles());
+        String line = "cpu: at most " + cost.worstCycles() + " cycles per tick";
+        assertTrue(r.result().report().stream().anyMatch(l -> l.startsWith(line)), r.result().report().toString());
     }
 
     /**
@@ -142,7 +207,7 @@ class AvrSimulatorTest {
         synchronized (RUNS) {
             if (pool == null) {
                 pool = Executors.newFixedThreadPool(2);
-                for (Build each : builds().toList()) {
+                for (Build each : Stream.concat(builds(), costOnlyBuilds()).toList()) {
                     Path dir = root.resolve("build" + RUNS.size());
                     RUNS.put(each, CompletableFuture.supplyAsync(() -> simulate(each, sim, dir), pool));
                 }
@@ -158,25 +223,41 @@ class AvrSimulatorTest {
         }
     }
 
-    /** Emits {@code b} with a main() that starts sound 1, compiles it and runs it in the simulator. */
+    /**
+     * Emits {@code b} with a main() that starts it (sound 1 of a clip, the oscillator, the sweep), compiles it
+     * and runs it in the simulator.
+     */
     private static Run simulate(Build b, AvrSimulator sim, Path dir) {
         PinMap map = PinMap.parse(b.pins(), 8);
+        int bits = map.bits();
         boolean loop = b.engine() == PlaybackEngine.LOOP;
-        int[] played = codes(map.bits(), loop ? LOOP_SAMPLES : CLIP_SAMPLES, 5);
+        int[] played = codes(bits, loop ? LOOP_SAMPLES : CLIP_SAMPLES, 5);
         FirmwareRequest.Builder request = FirmwareRequest.builder().family("avr").name("player").toolVersion("test")
-                .pins(b.pins()).storage(b.storage()).engine(b.engine()).timer(b.timer()).cpuClockHz(16e6)
-                .sound("other", Codes.of(map.bits(), b.rateHz(), codes(map.bits(), 50, 11)));
-        if (loop) {
-            request.sound("played", Codes.of(map.bits(), b.rateHz(), played), LOOP_START, LOOP_END);
-        } else {
-            request.sound("played", Codes.of(map.bits(), b.rateHz(), played));
+                .pins(b.pins()).storage(b.storage()).engine(b.engine()).timer(b.timer()).cpuClockHz(16e6);
+        String start = "player_start()";
+        long ticks = COST_ONLY_TICKS;
+        switch (b.engine()) {
+            case DDS:
+                request.sound("wave", Codes.of(bits, b.rateHz(), codes(bits, 256, 5))).dds(DdsSpec.of(440));
+                break;
+            case SWEEP:
+                request.sweep(SweepSpec.holding(bits, codes(bits, 64, 5), 1));
+                break;
+            default:
+                request.sound("other", Codes.of(bits, b.rateHz(), codes(bits, 50, 11)));
+                if (loop) {
+                    request.sound("played", Codes.of(bits, b.rateHz(), played), LOOP_START, LOOP_END);
+                } else {
+                    request.sound("played", Codes.of(bits, b.rateHz(), played));
+                }
+                start = (loop ? "player_loop" : "player_play") + "(1u)";
+                ticks = loop ? LOOP_TICKS : played.length + TICKS_AFTER_END;
         }
         EmitResult result = FirmwareEmitter.emit(request.build(), dir);
         long period = result.timer().orElseThrow().cyclesPerTick();
-        AtomicFiles.writeString(dir.resolve("main.c"), mainProgram(map, loop ? "player_loop" : "player_play"));
+        AtomicFiles.writeString(dir.resolve("main.c"), mainProgram(map, start));
         CToolchain.compileClean(dir, CToolchain.cmd(CToolchain.cmd(AvrSimulator.AVR_GCC, CToolchain.STRICT),
                 List.of("-o", "player.elf", "main.c", "player.c", "player_data.c")));
-        int ticks = loop ? LOOP_TICKS : played.length + TICKS_AFTER_END;
         return new Run(result, period, played, sim.run(dir.resolve("player.elf"), (ticks + 4) * period + 20_000));
     }
 
@@ -221,23 +302,24 @@ class AvrSimulatorTest {
             return;
         }
         StringBuilder s = new StringBuilder(String.format(Locale.ROOT, "%n[rungtone firmware tests] ATmega328P"
-                + " timer interrupt in simavr, cycles including the 4-cycle response%n%-26s %-8s %-4s %8s %-6s"
-                + " %-8s %6s %6s %7s %9s%n", "pins", "storage", "eng.", "rate", "timer", "strategy", "tick",
-                "worst", "mean", "after end"));
+                + " timer interrupt in simavr, cycles including the 4-cycle response; window: first to last port"
+                + " write of a tick; after end: interrupts once the sound ended%n%-48s %-8s %-5s %8s %-6s"
+                + " %-8s %6s %6s %7s %7s %6s %9s%n", "pins", "storage", "eng.", "rate", "timer", "strategy",
+                "tick", "worst", "mean", "report", "window", "after end"));
         TABLE.values().forEach(s::append);
         System.out.print(s);
     }
 
-    private static void record(Build b, Run r, Ticks t) {
-        long worst = t.playing.stream().mapToLong(Interrupt::cycles).max().orElseThrow();
-        double mean = t.playing.stream().mapToLong(Interrupt::cycles).average().orElseThrow();
-        String after = t.after.isEmpty() ? "-" : Long.toString(t.after.stream().mapToLong(Interrupt::cycles)
-                .max().orElseThrow());
-        TABLE.put(b.toString(), String.format(Locale.ROOT, "%s %-8s %6d %6d %7.1f %9s%n", b,
-                r.result().pinStrategy().name().toLowerCase(Locale.ROOT), r.period(), worst, mean, after));
+    private static void record(Build b, Run r, List<Interrupt> ticks, long window, int afterEnd) {
+        long worst = ticks.stream().mapToLong(Interrupt::cycles).max().orElseThrow();
+        double mean = ticks.stream().mapToLong(Interrupt::cycles).average().orElseThrow();
+        String report = r.result().tickCost().map(c -> Integer.toString(c.worstCycles())).orElse("-");
+        TABLE.put(b.toString(), String.format(Locale.ROOT, "%s %-8s %6d %6d %7.1f %7s %6d %9s%n", b,
+                r.result().pinStrategy().name().toLowerCase(Locale.ROOT), r.period(), worst, mean, report, window,
+                b.isClip() ? Integer.toString(afterEnd) : "-"));
     }
 
-    /** A program that sets the other pins to a pattern, starts the player on sound 1 and idles. */
+    /** A program that sets the other pins to a pattern, starts the player with {@code start} and idles. */
     private static String mainProgram(PinMap map, String start) {
         StringBuilder setup = new StringBuilder();
         PORT_PINS.forEach((port, pins) -> {
@@ -246,7 +328,7 @@ class AvrSimulatorTest {
                     PORT_PATTERN & free, port, DDR_PATTERN & free));
         });
         return "#include <avr/io.h>\n#include \"player.h\"\n\nint main(void)\n{\n" + setup
-                + "    GPIOR0 = 1u;\n    player_init();\n    GPIOR0 = 2u;\n    " + start + "(1u);\n"
+                + "    GPIOR0 = 1u;\n    player_init();\n    GPIOR0 = 2u;\n    " + start + ";\n"
                 + "    GPIOR0 = 3u;\n    for (;;) {\n    }\n}\n";
     }
 
@@ -284,96 +366,5 @@ class AvrSimulatorTest {
             out.add(v);
         }
         return out;
-    }
-
-    /**
-     * The trace cut into ticks and checked write by write: the code init parks the ladder at; the
-     * interrupts that wrote the ports (one write per ladder port, in the map's port order) and the code each
-     * left on the pins; the interrupts after the last of those.
-     */
-    private static final class Ticks {
-        int initCode;
-        final List<Integer> codes = new ArrayList<>();
-        final List<Interrupt> playing = new ArrayList<>();
-        final List<Interrupt> after = new ArrayList<>();
-
-        static Ticks of(AvrTrace trace, PinMap map) {
-            Ticks t = new Ticks();
-            long setupDone = trace.marker("GPIOR0", 1);
-            long initDone = trace.marker("GPIOR0", 2);
-            Map<String, Integer> image = new HashMap<>();
-            List<Write> pending = new ArrayList<>();
-            int w = 0;
-            List<Write> writes = trace.writes();
-            for (Interrupt i : trace.interrupts()) {
-                pending.clear();
-                for (; w < writes.size() && writes.get(w).cycle() < i.exitCycle(); w++) {
-                    Write x = writes.get(w);
-                    checkOtherPins(x, map, setupDone);
-                    image.put(x.register(), x.value());
-                    if (x.cycle() > initDone && !x.register().equals("GPIOR0")) {
-                        if (!i.contains(x)) {
-                            fail("port write outside the timer interrupt: " + x);
-                        }
-                        pending.add(x);
-                    }
-                    if (x.register().equals("GPIOR0") && x.value() == 2) {
-                        t.initCode = decode(image, map);
-                        checkOutputs(image, map);
-                    }
-                }
-                t.tick(i, pending, image, map);
-            }
-            return t;
-        }
-
-        private void tick(Interrupt i, List<Write> writes, Map<String, Integer> image, PinMap map) {
-            if (writes.isEmpty()) {
-                if (!playing.isEmpty()) {
-                    after.add(i);
-                }
-                return;
-            }
-            if (!after.isEmpty()) {
-                fail("the interrupt at cycle " + after.get(0).entryCycle() + " wrote no code, but later ones did");
-            }
-            List<String> order = writes.stream().map(Write::register).toList();
-            assertEquals(map.ports().stream().map(p -> "PORT" + p).toList(), order, "port writes at tick "
-                    + playing.size());
-            playing.add(i);
-            codes.add(decode(image, map));
-        }
-
-        /** Pins outside the map keep main()'s pattern; PINx (toggle) is never written. */
-        private static void checkOtherPins(Write x, PinMap map, long setupDone) {
-            String r = x.register();
-            if (x.cycle() < setupDone || r.equals("GPIOR0")) {
-                return;
-            }
-            if (r.startsWith("PIN")) {
-                fail("write to " + r + " toggles pins: " + x);
-            }
-            String port = r.substring(r.length() - 1);
-            int free = PORT_PINS.get(port) & ~(int) map.mask(port);
-            int pattern = (r.startsWith("DDR") ? DDR_PATTERN : PORT_PATTERN) & free;
-            assertEquals(pattern, x.value() & free, "pins outside the map changed by " + x);
-        }
-
-        /** After init, every ladder pin is an output. */
-        private static void checkOutputs(Map<String, Integer> image, PinMap map) {
-            for (String port : map.ports()) {
-                int mask = (int) map.mask(port);
-                assertEquals(mask, image.getOrDefault("DDR" + port, 0) & mask, "DDR" + port + " after init");
-            }
-        }
-
-        private static int decode(Map<String, Integer> image, PinMap map) {
-            int code = 0;
-            for (int bit = 0; bit < map.bits(); bit++) {
-                Pin p = map.pin(bit);
-                code |= ((image.getOrDefault("PORT" + p.port(), 0) >> p.pin()) & 1) << bit;
-            }
-            return code;
-        }
     }
 }

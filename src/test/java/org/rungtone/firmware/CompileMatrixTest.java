@@ -7,6 +7,8 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.rungtone.internal.AtomicFiles;
@@ -17,10 +19,13 @@ import org.rungtone.testing.CToolchain;
  * pin maps (plus forced strategies), packed and unpacked storage, and every engine, compiles warning-free with
  * {@code -std=c99 -Wall -Wextra -Werror -pedantic}: generic with the host gcc, avr with avr-gcc for the
  * ATmega328P, cortexm with arm-none-eabi-gcc for the Cortex-M3 and rp2040 for the Cortex-M0+ (both
- * freestanding). Each family's combinations
- * compile in one compiler run (distinct symbol prefixes); one player per family is also linked.
+ * freestanding). Each family's combinations compile in one compiler run (distinct symbol prefixes); one player
+ * per family is also linked. The Cortex-M objects are disassembled to check that nothing the tick runs divides.
  */
 class CompileMatrixTest {
+    /** A function's first line in objdump's listing: {@code 00000040 <c000_tick>:}. */
+    private static final Pattern FUNCTION = Pattern.compile("^[0-9a-f]+ <(\\w+)>:");
+
     @TempDir
     Path dir;
 
@@ -76,6 +81,7 @@ class CompileMatrixTest {
                 "-ffreestanding", "-Os"), CToolchain.STRICT);
         CToolchain.compileClean(dir, CToolchain.cmd(base, List.of("-c")), sources);
         assertObjects(sources);
+        assertNoDivisionOutsideTuning(sources);
         // Link a DDS player without any C library: only libgcc (64-bit division) is needed.
         AtomicFiles.writeString(dir.resolve("main.c"), """
                 #include "c002.h"
@@ -103,6 +109,7 @@ class CompileMatrixTest {
                 "-ffreestanding", "-Os"), CToolchain.STRICT);
         CToolchain.compileClean(dir, CToolchain.cmd(base, List.of("-c")), sources);
         assertObjects(sources);
+        assertNoDivisionOutsideTuning(sources);
         // Link a DDS player (the interrupt handler isr_irq0 included) without any C library: libgcc only.
         AtomicFiles.writeString(dir.resolve("main.c"), """
                 #include "c002.h"
@@ -120,6 +127,28 @@ class CompileMatrixTest {
         CToolchain.compileClean(dir, CToolchain.cmd(base, List.of("-nostdlib", "-nostartfiles",
                 "-Wl,--entry=entry", "-o", "player.elf", "main.c", "c002.c", "c002_data.c", "-lgcc")));
         assertTrue(Files.isRegularFile(dir.resolve("player.elf")));
+    }
+
+    /**
+     * No function of the players divides (UDIV/SDIV or a libgcc division) except the DDS frequency setters and
+     * the tuning-word helper only they call, which run outside the interrupt: the tick and everything it calls
+     * stays division-free.
+     */
+    private void assertNoDivisionOutsideTuning(List<String> sources) {
+        Pattern division = Pattern.compile("\\s(u|s)div\\s|__aeabi_\\w*div");
+        for (String s : sources) {
+            String listing = CToolchain.run(dir, List.of("arm-none-eabi-objdump", "-d", s.replace(".c", ".o")));
+            String function = "";
+            for (String line : listing.split("\n")) {
+                Matcher head = FUNCTION.matcher(line);
+                if (head.find()) {
+                    function = head.group(1);
+                } else if (division.matcher(line).find()) {
+                    boolean setter = function.contains("_set_frequency_") || function.endsWith("_tuning_for");
+                    assertTrue(setter, s + ": " + function + " divides: " + line);
+                }
+            }
+        }
     }
 
     private void assertObjects(List<String> sources) {

@@ -23,9 +23,10 @@ public final class AvrSimulator {
     public static final long CPU_HZ = 16_000_000L;
     /** Cycles of the interrupt response the harness adds to each interrupt (ATmega328P datasheet). */
     public static final long RESPONSE_CYCLES = 4;
+    /** The part simulated unless another is named. */
+    public static final String DEFAULT_MCU = "atmega328p";
     /** avr-gcc flags of the programs the harness runs. */
-    public static final List<String> AVR_GCC = List.of("avr-gcc", "-Os", "-mmcu=atmega328p",
-            "-DF_CPU=" + CPU_HZ + "UL");
+    public static final List<String> AVR_GCC = avrGcc(DEFAULT_MCU);
 
     private static final Path SOURCE = Path.of("src", "test", "c", "simavr-harness.c");
     private static final Path BUILD_DIR = Path.of("target", "simavr-harness");
@@ -87,17 +88,30 @@ public final class AvrSimulator {
         Assumptions.abort(reason);
     }
 
+    /** avr-gcc flags of a program for {@code mcu} (a part the harness can simulate, e.g. atmega644p). */
+    public static List<String> avrGcc(String mcu) {
+        return List.of("avr-gcc", "-Os", "-mmcu=" + mcu, "-DF_CPU=" + CPU_HZ + "UL");
+    }
+
     /**
-     * Runs {@code elf} for {@code cycles} CPU cycles from reset and returns what it did; fails the test when
-     * the harness reports a crash, a stop or a bad file.
+     * Runs {@code elf} for {@code cycles} CPU cycles from reset on the default part and returns what it did;
+     * fails the test when the harness reports a crash, a stop or a bad file.
      */
     public AvrTrace run(Path elf, long cycles) {
+        return run(elf, cycles, DEFAULT_MCU);
+    }
+
+    /**
+     * Runs {@code elf} for {@code cycles} CPU cycles from reset on {@code mcu}, which must have ports B, C and
+     * D and GPIOR0 where the ATmega328P has them (atmega644p does).
+     */
+    public AvrTrace run(Path elf, long cycles, String mcu) {
         try {
             Path dir = elf.toAbsolutePath().getParent();
             Path out = Files.createTempFile(dir, "sim", ".out");
             Path err = Files.createTempFile(dir, "sim", ".err");
             List<String> command = new ArrayList<>(List.of(executable.toString(), elf.toAbsolutePath().toString(),
-                    Long.toString(cycles)));
+                    Long.toString(cycles), mcu));
             Process p = new ProcessBuilder(command).directory(dir.toFile()).redirectOutput(out.toFile())
                     .redirectError(err.toFile()).start();
             if (!p.waitFor(60, TimeUnit.SECONDS)) {

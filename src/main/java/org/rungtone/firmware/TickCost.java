@@ -1,0 +1,71 @@
+package org.rungtone.firmware;
+
+import java.util.Optional;
+
+/**
+ * What one tick of an emitted player costs the CPU: the worst-case cycles of the timer interrupt, from the
+ * interrupt request to the end of its return, and the glitch window, the cycles from the first port write of
+ * a tick to the last. The figures come from a table measured in simulation (simavr, ATmega328P at 16 MHz,
+ * avr-gcc 5.4 with {@code -Os}), taken per storage, engine and number of ladder ports as the largest value
+ * over the pin maps, code widths and strategies measured, rounded up to a multiple of five; the simulator
+ * test fails when a build measures more than its figure. Only the avr family has figures: the generic player
+ * runs in the user's interrupt, and no Cortex-M simulator checks the cortexm one.
+ *
+ * @param worstCycles the longest tick, in CPU cycles, including the 4-cycle interrupt response
+ * @param windowCycles cycles from the first port write of a tick to the last (0 for one port)
+ * @param idleOff true when the timer interrupt is off while nothing plays (clip and loop engines)
+ */
+public record TickCost(int worstCycles, int windowCycles, boolean idleOff) {
+    /**
+     * Worst cycles per tick for one, two and three ladder ports. Rows: clip, loop, dds and sweep, each for
+     * unpacked and then packed samples (the sweep stores no samples: both rows are the same).
+     */
+    private static final int[][] AVR_CYCLES = {
+        {70, 95, 105}, {135, 165, 175},
+        {80, 110, 125}, {145, 175, 185},
+        {130, 155, 170}, {225, 265, 250},
+        {130, 160, 170}, {130, 160, 170},
+    };
+    /** Each port past the third (parts with more ports than the ATmega328P): extrapolated, not measured. */
+    private static final int AVR_CYCLES_PER_EXTRA_PORT = 25;
+    /** Each scatter term past one per port: the largest measured step was 16.2 cycles. */
+    private static final int AVR_CYCLES_PER_EXTRA_TERM = 17;
+
+    /** The cost of the plan's player, or empty when there is no measured figure (generic, cortexm). */
+    static Optional<TickCost> of(EmitPlan p) {
+        if (p.family != TargetFamily.AVR) {
+            return Optional.empty();
+        }
+        int ports = p.pins.ports().size();
+        int row = 2 * engineRow(p.engine) + (p.storage == SampleStorage.PACKED ? 1 : 0);
+        int cycles = AVR_CYCLES[row][Math.min(ports, 3) - 1] + AVR_CYCLES_PER_EXTRA_PORT * Math.max(0, ports - 3);
+        if (p.strategy == PinStrategy.SCATTER) {
+            cycles += AVR_CYCLES_PER_EXTRA_TERM * (PinCode.termCount(p.pins) - ports);
+        }
+        // the values are held in registers and written with one OUT each (1 cycle) back to back
+        return Optional.of(new TickCost(cycles, ports - 1, p.isClip()));
+    }
+
+    private static int engineRow(PlaybackEngine e) {
+        switch (e) {
+            case CLIP:
+                return 0;
+            case LOOP:
+                return 1;
+            case DDS:
+                return 2;
+            default:
+                return 3;
+        }
+    }
+
+    /** The share of the CPU the ticks take at {@code tickRateHz} with a {@code cpuClockHz} clock, 0..1. */
+    public double cpuShare(double cpuClockHz, double tickRateHz) {
+        return worstCycles * tickRateHz / cpuClockHz;
+    }
+
+    /** The highest tick rate at which the ticks take at most {@code share} (0..1) of a {@code cpuClockHz} CPU. */
+    public double maxRateHz(double cpuClockHz, double share) {
+        return share * cpuClockHz / worstCycles;
+    }
+}

@@ -1,0 +1,48 @@
+package org.rungtone.firmware;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.junit.jupiter.api.Test;
+import org.rungtone.quantize.Codes;
+
+class TickCostTest {
+    private static FirmwareRequest.Builder avr(String pins, int bits) {
+        return FirmwareRequest.builder().family("avr").name("t").toolVersion("test").pins(pins).cpuClockHz(16e6)
+                .sound("s", Codes.of(bits, 16000, new int[] {0, 1, 2, 3}));
+    }
+
+    private static TickCost cost(FirmwareRequest r) {
+        return TickCost.of(EmitPlan.of(r)).orElseThrow();
+    }
+
+    @Test
+    void avrFiguresGrowWithStoragePortsAndLooping() {
+        assertEquals(new TickCost(70, 0, true), cost(avr("PD2-PD7", 6).build()));
+        assertEquals(new TickCost(135, 0, true), cost(avr("PD2-PD7", 6).storage(SampleStorage.PACKED).build()));
+        assertEquals(new TickCost(95, 1, true), cost(avr("PD2-PD7,PB0-PB3", 10).build()));
+        assertEquals(new TickCost(125, 2, true), cost(avr("PD2,PD7,PC0,PC1,PB2,PB1", 6).engine(PlaybackEngine.LOOP)
+                .build()));
+    }
+
+    @Test
+    void scatterTermsPastOnePerPortAddToTheFigure() {
+        // 12 bits over D, B, C, four terms per port: 3 ports (105) + 9 extra terms x 17 = 258
+        TickCost c = cost(avr("PD2,PB0,PC0,PD3,PB1,PC1,PD4,PB2,PC2,PD5,PB3,PC3", 12).build());
+        assertEquals(105 + 9 * 17, c.worstCycles());
+    }
+
+    @Test
+    void onlyAvrHasFigures() {
+        assertTrue(TickCost.of(EmitPlan.of(FirmwareRequest.builder().name("t").pins("PB0-PB5")
+                .sound("s", Codes.of(6, 16000, new int[] {0, 1})).build())).isEmpty());
+    }
+
+    @Test
+    void shareAndHighestRateFollowFromTheCycles() {
+        TickCost c = new TickCost(80, 0, true);
+        // 80 cycles x 16,000 ticks/s of 16,000,000 cycles/s = 8 %; 25 % of 16 MHz / 80 = 50 kHz
+        assertEquals(0.08, c.cpuShare(16e6, 16000), 1e-12);
+        assertEquals(50000, c.maxRateHz(16e6, 0.25), 1e-9);
+    }
+}
