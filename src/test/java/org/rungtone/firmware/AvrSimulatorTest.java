@@ -112,6 +112,13 @@ class AvrSimulatorTest {
         out.add(new Build("PD2-PD7,PB0-PB4", SampleStorage.PACKED, PlaybackEngine.LOOP, 8000,
                 TimerKind.AVR_TIMER1));
         out.add(new Build(SCATTERED_12, SampleStorage.PACKED, PlaybackEngine.CLIP, 8000, TimerKind.AVR_TIMER1));
+        // The assembler tick's cases: shift over two and three ports, a table on one and on two ports.
+        for (String pins : List.of("PD4-PD7,PB0-PB3", "PD5-PD7,PB0-PB2,PC0-PC1", "PD2,PD7,PD3,PD6,PD4,PD5",
+                "PD2,PD7,PB2,PB1,PD3,PB0")) {
+            for (PlaybackEngine engine : List.of(PlaybackEngine.CLIP, PlaybackEngine.LOOP)) {
+                out.add(new Build(pins, SampleStorage.UNPACKED, engine, 16000, TimerKind.AVR_TIMER1));
+            }
+        }
         return out.stream();
     }
 
