@@ -19,22 +19,38 @@ import java.util.Optional;
  * tables are reached through asm operands, so link-time optimisation may rename the variables.
  */
 final class AvrFastTick {
-    private static final String[] VALUE_REGISTERS = {"r18", "r19", "r20", "r21", "r22", "r23"};
+    static final String[] VALUE_REGISTERS = {"r18", "r19", "r20", "r21", "r22", "r23"};
+    /** Ports of a pointer-walking player whose end-of-sound branch still reaches its target (BREQ: 63 words). */
+    private static final int MAX_BRANCHED_PORTS = 3;
 
     private AvrFastTick() {
     }
 
     /** True when the plan's interrupt is written in assembler (see the class comment for the cases). */
     static boolean applies(EmitPlan p) {
-        return p.family == TargetFamily.AVR && p.isClip() && p.bits <= 8 && p.storage == SampleStorage.UNPACKED
+        return p.family == TargetFamily.AVR && p.isClip() && p.timer.isPresent()
                 && (p.strategy == PinStrategy.SHIFT || p.strategy == PinStrategy.TABLE)
-                && p.pins.ports().size() <= VALUE_REGISTERS.length + 1 && p.timer.isPresent();
+                && (wholeBytes(p) && p.pins.ports().size() <= MAX_BRANCHED_PORTS
+                        || packed(p) && p.pins.ports().size() <= VALUE_REGISTERS.length);
+    }
+
+    /** Codes of one byte each (unpacked, or packed 8-bit codes, the same bytes): the player walks a pointer. */
+    private static boolean wholeBytes(EmitPlan p) {
+        return p.bits <= 8 && p.storage == SampleStorage.UNPACKED || p.bits == 8 && p.storage == SampleStorage.PACKED;
+    }
+
+    /** Packed codes of 1..7 bits and 16-bit indices: the player reads a bit stream (see fetch.c). */
+    static boolean packed(EmitPlan p) {
+        return p.bits < 8 && p.storage == SampleStorage.PACKED && !p.wideIndex;
     }
 
     /** The whole interrupt: {@code ISR(vector, ISR_NAKED) { __asm__ ... }}, or empty when it does not apply. */
     static Optional<String> isr(EmitPlan p) {
         if (!applies(p)) {
             return Optional.empty();
+        }
+        if (packed(p)) {
+            return Optional.of(render(p, AvrPackedTick.body(p), p.engine == PlaybackEngine.LOOP));
         }
         List<String> ports = p.pins.ports();
         List<String> saved = new ArrayList<>(List.of("r25", "r30", "r31"));
@@ -55,7 +71,7 @@ final class AvrFastTick {
             wrap(a);
         }
         a.op("sts %[at]+1, r31").op("sts %[at], r30");
-        output(a, p);
+        output(a, p, 0);
         a.label("8");
         for (int i = saved.size() - 1; i >= 0; i--) {
             a.op("pop " + saved.get(i));
@@ -87,8 +103,11 @@ final class AvrFastTick {
         a.op("nop").op("rjmp 2b");
     }
 
-    /** Every port's value into a register (the code is in r24), then the writes back to back. */
-    private static void output(Asm a, EmitPlan p) {
+    /**
+     * Every port's value into a register (the code is in r24; the first further port's value goes into
+     * {@code VALUE_REGISTERS[first]}), then the writes back to back. Uses r25, and Z for tables.
+     */
+    static void output(Asm a, EmitPlan p, int first) {
         List<String> ports = p.pins.ports();
         int last = ports.size() - 1;
         if (p.strategy == PinStrategy.TABLE) {
@@ -97,11 +116,11 @@ final class AvrFastTick {
                 String port = ports.get(i);
                 a.op("movw r30, r24").op("subi r30, lo8(-(%[pins_" + lower(port) + "]))")
                         .op("sbci r31, hi8(-(%[pins_" + lower(port) + "]))")
-                        .op("lpm " + valueRegister(i, last) + ", Z");
+                        .op("lpm " + valueRegister(i + first, last + first) + ", Z");
             }
         } else {
             for (int i = 0; i <= last; i++) {
-                shift(a, p, ports.get(i), valueRegister(i, last), i == last);
+                shift(a, p, ports.get(i), valueRegister(i + first, last + first), i == last);
             }
         }
         for (int i = 0; i <= last; i++) {
@@ -109,11 +128,11 @@ final class AvrFastTick {
             if (p.pins.mask(port) != 0xFF) {
                 a.op("in r25, %[port_" + lower(port) + "]")
                         .op("andi r25, " + String.format(Locale.ROOT, "0x%02x", ~p.pins.mask(port) & 0xFF))
-                        .op("or " + valueRegister(i, last) + ", r25");
+                        .op("or " + valueRegister(i + first, last + first) + ", r25");
             }
         }
         for (int i = 0; i <= last; i++) {
-            a.op("out %[port_" + lower(ports.get(i)) + "], " + valueRegister(i, last));
+            a.op("out %[port_" + lower(ports.get(i)) + "], " + valueRegister(i + first, last + first));
         }
     }
 
@@ -141,7 +160,7 @@ final class AvrFastTick {
     }
 
     /** The register of the i-th port's value: r24 (the code, no longer needed) for the last, else r18.. */
-    private static String valueRegister(int i, int last) {
+    static String valueRegister(int i, int last) {
         return i == last ? "r24" : VALUE_REGISTERS[i];
     }
 
@@ -151,14 +170,26 @@ final class AvrFastTick {
 
     /** The C text: a naked interrupt holding the instructions, with the symbols and registers as operands. */
     private static String render(EmitPlan p, Asm a, boolean loop) {
+        boolean bitStream = packed(p);
         char n = p.timer.orElseThrow().kind().optionName().charAt(5);
         String vector = "TIMER" + n + "_COMPA_vect";
         List<String> operands = new ArrayList<>();
-        operands.add("[at] \"i\" (&" + p.symbol + "_at)");
-        operands.add("[stop] \"i\" (&" + p.symbol + "_stop_at)");
-        if (loop) {
-            operands.add("[wrap_at] \"i\" (&" + p.symbol + "_wrap_at)");
-            operands.add("[wrap_to] \"i\" (&" + p.symbol + "_wrap_to)");
+        if (bitStream) {
+            for (String v : List.of("left", "next", "reader")) {
+                operands.add("[" + v + "] \"i\" (&" + p.symbol + "_" + v + ")");
+            }
+            if (loop) {
+                for (String v : List.of("looping", "loop_code", "loop_reader", "loop_length", "after_loop")) {
+                    operands.add("[" + v + "] \"i\" (&" + p.symbol + "_" + v + ")");
+                }
+            }
+        } else {
+            operands.add("[at] \"i\" (&" + p.symbol + "_at)");
+            operands.add("[stop] \"i\" (&" + p.symbol + "_stop_at)");
+            if (loop) {
+                operands.add("[wrap_at] \"i\" (&" + p.symbol + "_wrap_at)");
+                operands.add("[wrap_to] \"i\" (&" + p.symbol + "_wrap_to)");
+            }
         }
         for (String port : p.pins.ports()) {
             operands.add("[port_" + lower(port) + "] \"I\" (_SFR_IO_ADDR(PORT" + port + "))");
@@ -170,7 +201,9 @@ final class AvrFastTick {
         operands.add("[ocie] \"n\" (OCIE" + n + "A)");
         StringBuilder b = new StringBuilder();
         b.append("/* The tick in assembler (see ").append(p.symbol).append("_tick() for the same steps in C): it saves")
-                .append(" only the\n * registers it uses, SREG through r24. Worst case ")
+                .append(" only the\n * registers it uses, SREG through r24")
+                .append(bitStream ? " (r1:r0 hold the product that places a new byte above the bits left)" : "")
+                .append(". Worst case ")
                 .append(TickCost.of(p).map(c -> c.worstCycles() + " cycles").orElse("measured in simulation"))
                 .append(" including the interrupt response. */\n");
         b.append("ISR(").append(vector).append(", ISR_NAKED)\n{\n    __asm__ __volatile__ (\n");
@@ -180,7 +213,7 @@ final class AvrFastTick {
     }
 
     /** Instruction lines as C string literals. */
-    private static final class Asm {
+    static final class Asm {
         private final StringBuilder text = new StringBuilder();
 
         Asm op(String instruction) {

@@ -33,7 +33,12 @@ public record TickCost(int worstCycles, int windowCycles, boolean idleOff) {
      */
     private static final int[][] AVR_FAST_CYCLES = {
         {60, 70, 85}, {65, 80, 90},
-        {70, 80, 95}, {75, 90, 105},
+        {70, 85, 95}, {75, 90, 105},
+    };
+    /** The assembler interrupt over packed codes of 1..7 bits ({@link AvrPackedTick}); rows as above. */
+    private static final int[][] AVR_FAST_PACKED_CYCLES = {
+        {110, 120, 130}, {115, 125, 140},
+        {110, 120, 130}, {115, 130, 140},
     };
     /** Each port past the third (parts with more ports than the ATmega328P): extrapolated, not measured. */
     private static final int AVR_CYCLES_PER_EXTRA_PORT = 25;
@@ -48,7 +53,8 @@ public record TickCost(int worstCycles, int windowCycles, boolean idleOff) {
         int ports = p.pins.ports().size();
         if (AvrFastTick.applies(p)) {
             int fast = 2 * (p.engine == PlaybackEngine.LOOP ? 1 : 0) + (p.strategy == PinStrategy.TABLE ? 1 : 0);
-            return Optional.of(new TickCost(AVR_FAST_CYCLES[fast][Math.min(ports, 3) - 1]
+            int[][] rows = AvrFastTick.packed(p) ? AVR_FAST_PACKED_CYCLES : AVR_FAST_CYCLES;
+            return Optional.of(new TickCost(rows[fast][Math.min(ports, 3) - 1]
                     + AVR_CYCLES_PER_EXTRA_PORT * Math.max(0, ports - 3), ports - 1, true));
         }
         int row = 2 * engineRow(p.engine) + (p.storage == SampleStorage.PACKED ? 1 : 0);
