@@ -200,7 +200,7 @@ public final class BuildCommand implements Callable<Integer> {
                 .fades(conditioning.fadeIn, conditioning.fadeOut).resampler(conditioning.resampler())
                 .fullScaleVolts(fullScale).flashQualifier(flashAttr)
                 .player(firmware.request()).loop(firmware.loopSpan()).flashBudgetBytes(firmware.flashBudgetBytes())
-                .preview(preview.filter(), preview.previewRateHz).previewSeconds(preview.previewSeconds());
+                .preview(preview.filter, preview.previewRateHz).previewSeconds(preview.previewSeconds());
         board.levels().ifPresent(levels -> plan.board(levels, compensation));
         return plan.build();
     }

@@ -31,9 +31,4 @@ public final class PreviewOptions {
             throw new org.rungtone.internal.InputError("--preview-length: " + e.getMessage() + ", or all");
         }
     }
-
-    /** The reconstruction filter. */
-    ReconstructionFilter filter() {
-        return filter;
-    }
 }

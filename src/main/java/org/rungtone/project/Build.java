@@ -20,12 +20,11 @@ import org.rungtone.firmware.Templates;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.OutputFolder;
-import org.rungtone.report.AnalysisPlots;
 import org.rungtone.report.BuildReport;
 import org.rungtone.report.BuildSummary;
 import org.rungtone.report.HtmlReport;
 import org.rungtone.report.Json;
-import org.rungtone.report.Plots;
+import org.rungtone.report.PlotWarmUp;
 import org.rungtone.source.WavWriter;
 
 /**
@@ -68,8 +67,9 @@ public final class Build {
     }
 
     private BuildSummary write(BuildPlan plan) {
-        CompletableFuture<Void> plotsReady = CompletableFuture.runAsync(Plots::warmUp);
-        SoundRenderer.Rendered r = new SoundRenderer(span, progress).render(plan);
+        PlotWarmUp.start(); // on another core, before the plots need it
+        SoundPlots plots = new SoundPlots();
+        SoundRenderer.Rendered r = new SoundRenderer(span, progress, plots::draw).render(plan);
         Stopwatch watch = new Stopwatch(progress);
         List<Path> files = new ArrayList<>();
         List<String> firmwareLines = new ArrayList<>();
@@ -77,11 +77,9 @@ public final class Build {
         // Every check that can refuse the build runs before the first file is written.
         FirmwareEmitter.Rendered firmware = plan.firmware().player().isPresent() ? player(plan, r) : null;
         long flash = firmware != null ? firmware.result().flashBytes() : checkedArrayBytes(plan, r);
-        // The preview and plots are written on another core while the C files are.
-        CompletableFuture<List<Path>> assets = CompletableFuture.supplyAsync(() -> {
-            Jobs.join(plotsReady);
-            return writeAssets(r, plan.outDir());
-        });
+        // The preview and plots (drawn meanwhile) are written on another core while the C files are.
+        CompletableFuture<List<Path>> assets = CompletableFuture.supplyAsync(() -> writeAssets(r, plan.outDir(),
+                plots));
         try {
             if (firmware != null) {
                 EmitResult er = FirmwareEmitter.write(firmware, plan.outDir());
@@ -172,20 +170,16 @@ public final class Build {
 
     /** Writes preview.wav and the plots of a rendered sound into {@code dir}. */
     public static List<Path> writeAssets(SoundRenderer.Rendered r, Path dir) {
+        return writeAssets(r, dir, new SoundPlots());
+    }
+
+    /** Writes preview.wav and the plots, drawn by {@code plots} or now. */
+    static List<Path> writeAssets(SoundRenderer.Rendered r, Path dir, SoundPlots plots) {
         List<Path> files = new ArrayList<>();
         Path previewFile = dir.resolve("preview.wav");
         WavWriter.write(previewFile, r.preview().signal(), WavWriter.Format.PCM16);
         files.add(previewFile);
-        if (r.errorSpectrum() != null) {
-            Path errPlot = dir.resolve("error-spectrum.png");
-            AnalysisPlots.writeErrorSpectrum(errPlot, r.errorSpectrum(), r.inBandCutoffHz());
-            files.add(errPlot);
-        }
-        if (r.tone().isPresent() && r.toneSpectrum().isPresent()) {
-            Path specPlot = dir.resolve("spectrum.png");
-            AnalysisPlots.writeSpectrum(specPlot, r.toneSpectrum().get(), r.tone().get(), r.plan().bits());
-            files.add(specPlot);
-        }
+        files.addAll(plots.write(r, dir));
         return files;
     }
 

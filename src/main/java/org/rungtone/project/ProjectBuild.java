@@ -182,8 +182,7 @@ public final class ProjectBuild {
         if (player.isPresent()) {
             checkOneRate(project, o, shared.rateHz());
         }
-        java.util.concurrent.CompletableFuture<Void> plotsReady =
-                java.util.concurrent.CompletableFuture.runAsync(org.rungtone.report.Plots::warmUp);
+        org.rungtone.report.PlotWarmUp.start(); // on another core, before the plots need it
         // every sound's settings are checked before the first sound is rendered
         List<BuildPlan> plans = new ArrayList<>();
         for (Project.Sound s : project.sounds()) {
@@ -194,25 +193,28 @@ public final class ProjectBuild {
             }
         }
         List<SoundRenderer.Rendered> rendered = new ArrayList<>();
+        // each sound's plots are drawn on another core while the next sound renders
+        List<SoundPlots> plots = new ArrayList<>();
         for (int i = 0; i < plans.size(); i++) {
             Project.Sound s = project.sounds().get(i);
             String label = String.format(Locale.ROOT, "sound %d/%d %s", s.index(), project.sounds().size(),
                     s.name());
+            plots.add(new SoundPlots());
             try {
-                rendered.add(new SoundRenderer(span, stage -> progress.accept(label + ": " + stage + " done"))
-                        .render(plans.get(i)));
+                rendered.add(new SoundRenderer(span, stage -> progress.accept(label + ": " + stage + " done"),
+                        plots.get(i)::draw).render(plans.get(i)));
             } catch (SettingError e) {
                 throw located(project, s, o, e);
             }
         }
         progress.accept("writing firmware, previews and reports");
         Emitted emitted = emit(project, player, shared, rendered);
-        Jobs.join(plotsReady);
         Build build = new Build(toolVersion);
         List<Path> files = new ArrayList<>(emitted.files());
         List<BuildSummary> summaries = new ArrayList<>();
-        for (SoundRenderer.Rendered r : rendered) {
-            List<Path> assets = Build.writeAssets(r, r.plan().outDir());
+        for (int i = 0; i < rendered.size(); i++) {
+            SoundRenderer.Rendered r = rendered.get(i);
+            List<Path> assets = Build.writeAssets(r, r.plan().outDir(), plots.get(i));
             files.addAll(assets);
             SampleStorage storage = player.map(FirmwareRequest::storage).orElse(SampleStorage.UNPACKED);
             long soundBytes = storage.bytes(r.emitted().length(), r.plan().bits());

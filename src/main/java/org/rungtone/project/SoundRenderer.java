@@ -55,14 +55,21 @@ public final class SoundRenderer {
 
     private final OutputSpan span;
     private final Consumer<String> progress;
+    private final Consumer<SoundPlots.Data> analysed;
 
     /**
      * A renderer whose compensated quantization maps full scale onto {@code span} of the board's levels, and
      * that tells {@code progress} the name of every stage it finishes ("open", "condition", ...).
      */
     public SoundRenderer(OutputSpan span, Consumer<String> progress) {
+        this(span, progress, data -> { });
+    }
+
+    /** The same, handing {@code analysed} what the plots show as soon as it is known (the preview may be busy). */
+    SoundRenderer(OutputSpan span, Consumer<String> progress, Consumer<SoundPlots.Data> analysed) {
         this.span = span;
         this.progress = progress;
+        this.analysed = analysed;
     }
 
     /**
@@ -155,6 +162,7 @@ public final class SoundRenderer {
             tone = Optional.of(ToneAnalysis.analyze(out, toneSpectrum.get()));
         }
         watch.lap("analyze");
+        analysed.accept(new SoundPlots.Data(figures.errorSpectrum(), cutoff, tone, toneSpectrum, plan.bits()));
         AnalogModel.Preview preview = Jobs.join(previewJob);
         watch.lap("preview");
         List<QualityReport> quality = figures.quality();

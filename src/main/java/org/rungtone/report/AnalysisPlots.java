@@ -11,6 +11,7 @@ import org.rungtone.analysis.SurveyResult;
 import org.rungtone.analysis.SurveyRow;
 import org.rungtone.analysis.SurveyTarget;
 import org.rungtone.analysis.ToneReport;
+import org.rungtone.internal.AtomicFiles;
 import org.rungtone.internal.Checks;
 
 /**
@@ -129,12 +130,22 @@ public final class AnalysisPlots {
 
     /** Writes {@link #spectrumChart} as PNG. */
     public static void writeSpectrum(Path file, Spectrum spectrum, ToneReport tone, int bits) {
-        Plots.write(file, spectrumChart(spectrum, tone, bits));
+        AtomicFiles.writeBytes(file, spectrumPng(spectrum, tone, bits));
+    }
+
+    /** {@link #spectrumChart} as PNG bytes, to write later. */
+    public static byte[] spectrumPng(Spectrum spectrum, ToneReport tone, int bits) {
+        return Plots.png(spectrumChart(spectrum, tone, bits));
     }
 
     /** Writes {@link #errorSpectrumChart} as PNG, legend bottom right (shaped error rises to the right). */
     public static void writeErrorSpectrum(Path file, Spectrum errorSpectrum, double inBandCutoffHz) {
-        Plots.write(file, errorSpectrumChart(errorSpectrum, inBandCutoffHz), Plots.Legend.BOTTOM_RIGHT);
+        AtomicFiles.writeBytes(file, errorSpectrumPng(errorSpectrum, inBandCutoffHz));
+    }
+
+    /** {@link #errorSpectrumChart} as PNG bytes (as {@link #writeErrorSpectrum} draws it), to write later. */
+    public static byte[] errorSpectrumPng(Spectrum errorSpectrum, double inBandCutoffHz) {
+        return Plots.png(errorSpectrumChart(errorSpectrum, inBandCutoffHz), Plots.Legend.BOTTOM_RIGHT);
     }
 
     /** Writes {@link #surveyChart} as PNG, legend bottom right (SINAD rises with the bit depth). */
