@@ -26,9 +26,11 @@ import org.rungtone.source.Signal;
  * the loops within {@value #TIE_DB} dB of the cleanest seam, the longest (a longer loop keeps more of the
  * sound's own life; a rule of thumb of ours), then the earliest start.</li>
  * </ol>
- * No loop is found when the sound has no sustained part long enough, no steady pitch, or no seam at or below
- * {@value #ACCEPT_DB} dB (a rule of thumb of ours: a seam louder than that is heard as a thump or a warble on
- * every pass).
+ * The period reported is the loop's length over the whole number of periods it holds, counted with YIN's
+ * period over the loop alone (the sustained part may take in the end of a pitch glide, such as a motor
+ * spinning up). No loop is found when the sound has no sustained part long enough, no steady pitch, or no
+ * seam at or below {@value #ACCEPT_DB} dB (a rule of thumb of ours: a seam louder than that is heard as a
+ * thump or a warble on every pass).
  *
  * <p>Sizes: the crossfade is {@value #CROSSFADE_SECONDS} s and at least two periods; a loop is at least
  * {@value #MIN_LOOP_SECONDS} s and {@value #MIN_LOOP_PERIODS} periods long, and at most
@@ -103,8 +105,10 @@ public final class LoopFinder {
             return Optional.empty();
         }
         Candidate best = chosen.get();
+        // the period again over the loop alone: the sustained part may take in the last of a pitch glide
+        double inLoop = PitchPeriod.of(sound, best.start(), best.end()).orElse(p);
         int length = best.end() - best.start();
-        double periods = Math.max(1, Math.round(length / p));
+        double periods = Math.max(1, Math.round(length / inLoop));
         return Optional.of(new SeamlessLoop(best.start(), best.end(), length / periods, best.seamDb(), crossfade));
     }
 
