@@ -9,6 +9,7 @@ import org.rungtone.analysis.LoopFinder;
 import org.rungtone.analysis.SeamlessLoop;
 import org.rungtone.firmware.FirmwareEmitter;
 import org.rungtone.firmware.FirmwareRequest;
+import org.rungtone.firmware.PlaybackEngine;
 import org.rungtone.firmware.SampleStorage;
 import org.rungtone.firmware.SoundClip;
 import org.rungtone.internal.Setting;
@@ -92,6 +93,9 @@ final class AutoLoop {
         SampleStorage storage = SampleStorage.UNPACKED;
         if (plan.firmware().player().isPresent()) {
             FirmwareRequest request = plan.firmware().player().get();
+            if (request.engine() != PlaybackEngine.LOOP && request.engine() != PlaybackEngine.CLIP) {
+                return OptionalLong.empty(); // dds and sweep hold no clip to shorten
+            }
             storage = request.storage();
             Codes two = Codes.of(bits, rateHz, new int[2]);
             FirmwareRequest trial = request.toBuilder().name(plan.symbol()).toolVersion("trial").flashBudgetBytes(0)
