@@ -136,6 +136,9 @@ public final class Build {
 
     /** The firmware clip of a rendered sound, with its loop points. */
     public static SoundClip clip(String name, SoundRenderer.Rendered r) {
+        if (r.autoLoop().isPresent()) {
+            return new SoundClip(name, r.emitted(), r.autoLoop().get().start(), r.autoLoop().get().end());
+        }
         if (r.plan().firmware().loop().isPresent()) {
             int[] lp = r.plan().firmware().loop().get().samples(r.rateHz(), r.emitted().length());
             return new SoundClip(name, r.emitted(), lp[0], lp[1]);
@@ -167,7 +170,7 @@ public final class Build {
                         .label(), r.shapingGainDb(), r.tone(),
                 new BuildSummary.PreviewInfo(plan.preview().filter().describe(), plan.preview().rateHz(),
                         r.preview().passbandTopHz(), r.preview().zohDroopDb(), r.preview().peak()),
-                firmwareLines, flash, files, warnings, stageMillis);
+                firmwareLines, flash, files, warnings, stageMillis, r.autoLoop());
     }
 
     /** Writes preview.wav and the plots of a rendered sound into {@code dir}. */

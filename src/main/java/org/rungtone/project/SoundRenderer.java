@@ -14,6 +14,7 @@ import org.rungtone.analysis.CodeUse;
 import org.rungtone.analysis.ListenerMetrics;
 import org.rungtone.analysis.ListenerReport;
 import org.rungtone.analysis.QualityReport;
+import org.rungtone.analysis.SeamlessLoop;
 import org.rungtone.analysis.SineFit;
 import org.rungtone.analysis.Spectrum;
 import org.rungtone.analysis.ToneAnalysis;
@@ -86,12 +87,13 @@ public final class SoundRenderer {
      * @param settings "key: value" lines for the C header comment
      * @param warnings what the user should know
      * @param stageMillis timings so far
+     * @param autoLoop the loop found in the sound, when its loop is auto (the codes hold its crossfades)
      */
     public record Rendered(BuildPlan plan, String layout, double rateHz, Conditioner.Conditioned conditioned,
             Codes emitted, LevelTable played, List<QualityReport> quality, Optional<Double> shapingGainDb,
             Optional<ToneReport> tone, AnalogModel.Preview preview, Spectrum errorSpectrum,
             Optional<Spectrum> toneSpectrum, double inBandCutoffHz, long clippedSamples, List<String> settings,
-            List<String> warnings, Map<String, Double> stageMillis) {
+            List<String> warnings, Map<String, Double> stageMillis, Optional<SeamlessLoop> autoLoop) {
     }
 
     /** The codes of every ladder case and how they use the range. */
@@ -127,6 +129,9 @@ public final class SoundRenderer {
         }
         List<String> warnings = new ArrayList<>(prepared.warnings());
         warnings.addAll(conditioned.warnings());
+        Optional<AutoLoop.Placed> loop = AutoLoop.place(plan, reference);
+        loop.flatMap(AutoLoop.Placed::shortened).ifPresent(w -> warnings.add(w.text()));
+        reference = loop.map(AutoLoop.Placed::signal).orElse(reference);
         Cases cases = quantize(plan, reference);
         watch.lap("quantize");
         if (cases.clipped() > 0) {
@@ -138,11 +143,14 @@ public final class SoundRenderer {
                     + " samples (its input went past the end levels), which adds distortion; lower the level",
                     100 * use.overloadFraction()));
         }
-        // The preview is independent of the figures: render it on another core meanwhile.
-        CompletableFuture<AnalogModel.Preview> previewJob = startPreview(plan, cases, model, rate, warnings);
+        // The preview is independent of the figures: render it on another core meanwhile. With an automatic
+        // loop it plays the loop several times, so the listener figures render the stored codes on their own.
+        CompletableFuture<AnalogModel.Preview> previewJob = startPreview(plan, AutoLoop.previewed(cases.emitted(),
+                loop), cases.played(), model, rate, warnings);
         // What the listener gets follows the preview on the same core.
         CompletableFuture<Optional<ListenerReport>> listenerJob = previewJob.thenApply(p -> prepared.listener()
-                .filter(l -> l.measurable(p.signal().length())).map(l -> l.measure(p.signal())));
+                .filter(l -> l.measurable(p.signal().length())).map(l -> loop.isEmpty() ? l.measure(p.signal())
+                        : l.measure(cases.emitted(), cases.played())));
         // in-band figures stop where the analog output's passband does (rate/2, or a lower filter cutoff),
         // and at 20 kHz: the one definition the survey uses too
         double cutoff = model.inBandTopHz(rate);
@@ -168,7 +176,7 @@ public final class SoundRenderer {
         return new Rendered(plan, prepared.layout(), rate, conditioned, cases.emitted(), cases.played(),
                 quality, figures.shapingGainDb(), tone, preview, figures.errorSpectrum(), toneSpectrum,
                 cutoff, cases.clipped(), settings(plan, prepared.layout(), conditioned, cases.played(), rate,
-                        cases.range()), warnings, watch.laps());
+                        cases.range()), warnings, watch.laps(), loop.map(AutoLoop.Placed::loop));
     }
 
     /** Quantizes onto the ideal ladder and, with a board, onto its real levels when compensating. */
@@ -195,9 +203,8 @@ public final class SoundRenderer {
     }
 
     /** Starts rendering the preview of the emitted codes (its first seconds) on another core. */
-    private static CompletableFuture<AnalogModel.Preview> startPreview(BuildPlan plan, Cases cases,
-            AnalogModel model, double rate, List<String> warnings) {
-        Codes emitted = cases.emitted();
+    private static CompletableFuture<AnalogModel.Preview> startPreview(BuildPlan plan, Codes emitted,
+            LevelTable played, AnalogModel model, double rate, List<String> warnings) {
         int previewCodes = (int) Math.min(emitted.length(), Math.ceil(plan.preview().seconds() * rate));
         Codes previewInput = previewCodes == emitted.length() ? emitted : Codes.of(emitted.bits(), rate,
                 Arrays.copyOf(emitted.unsafeCodes(), previewCodes));
@@ -205,7 +212,6 @@ public final class SoundRenderer {
             warnings.add(String.format(Locale.ROOT, "preview.wav holds the first %.0f s of %.0f s; set"
                     + " the preview length to all for the whole sound", previewCodes / rate, emitted.length() / rate));
         }
-        LevelTable played = cases.played();
         return CompletableFuture.supplyAsync(() -> model.render(previewInput, played));
     }
 
@@ -265,6 +271,9 @@ public final class SoundRenderer {
                     : opened.preferredRateHz());
             Conditioner.Conditioned conditioned;
             Optional<ListenerMetrics> listener = Optional.empty();
+            if (opened.wavetable() && plan.firmware().loop().map(LoopSpan::auto).orElse(false)) {
+                throw AutoLoop.onWavetable(plan);
+            }
             if (opened.wavetable()) {
                 // One cycle: its samples are the table as it is, played at any rate by the DDS engine. Only DC
                 // removal and level apply; the codes are labelled with the playback rate.

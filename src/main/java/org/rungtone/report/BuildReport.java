@@ -62,6 +62,7 @@ public final class BuildReport {
             }
         });
         t.row("flash", String.format(Locale.ROOT, "%,d bytes of samples", s.flashBytes()));
+        s.autoLoop().ifPresent(l -> t.row("loop (found)", LoopFigures.line(l, s.rateHz())));
         return t;
     }
 
@@ -186,6 +187,7 @@ public final class BuildReport {
         m.put("snr_db", s.emitted().sinadDb());
         m.put("quality", s.quality().stream().map(BuildReport::quality).toList());
         s.shapingGainDb().ifPresent(g -> m.put("shaping_in_band_gain_db", g));
+        s.autoLoop().ifPresent(l -> m.put("auto_loop", LoopFigures.json(l, s.rateHz())));
         s.tone().ifPresent(t -> {
             Map<String, Object> tm = new LinkedHashMap<>();
             tm.put("fundamental_hz", t.fundamentalHz());

@@ -56,6 +56,10 @@ public final class ProjectReport {
         }
         b.append(t.render("  "));
         for (BuildSummary x : in.sounds()) {
+            x.autoLoop().ifPresent(l -> b.append("  ").append(x.symbol()).append(" loop (found): ")
+                    .append(LoopFigures.line(l, x.rateHz())).append('\n'));
+        }
+        for (BuildSummary x : in.sounds()) {
             if (x.quality().size() > 1) {
                 b.append("\n").append(x.symbol()).append(" on the board:\n");
                 TextTable q = new TextTable("case", "SINAD dB", "in-band SNR dB", "A-wtd SNR dB",

@@ -36,6 +36,7 @@ final class SoundTables {
             }
         });
         rows.add(new Setting("flash", String.format(Locale.ROOT, "%,d bytes", s.flashBytes()) + " of samples"));
+        s.autoLoop().ifPresent(l -> rows.add(new Setting("loop (found)", LoopFigures.line(l, s.rateHz()))));
         return rows;
     }
 
