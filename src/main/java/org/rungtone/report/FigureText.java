@@ -96,11 +96,13 @@ final class FigureText {
     }
 
     static String f1(double v) {
-        return Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf") : String.format(Locale.ROOT, "%.1f", v);
+        return Double.isNaN(v) ? "n/a" : Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf")
+                : String.format(Locale.ROOT, "%.1f", v);
     }
 
     static String f2(double v) {
-        return Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf") : String.format(Locale.ROOT, "%.2f", v);
+        return Double.isNaN(v) ? "n/a" : Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf")
+                : String.format(Locale.ROOT, "%.2f", v);
     }
 
     private static String db(double v) {

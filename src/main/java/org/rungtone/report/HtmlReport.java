@@ -368,10 +368,12 @@ public final class HtmlReport {
     }
 
     private static String f1(double v) {
-        return Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf") : String.format(Locale.ROOT, "%.1f", v);
+        return Double.isNaN(v) ? "n/a" : Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf")
+                : String.format(Locale.ROOT, "%.1f", v);
     }
 
     private static String f2(double v) {
-        return Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf") : String.format(Locale.ROOT, "%.2f", v);
+        return Double.isNaN(v) ? "n/a" : Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf")
+                : String.format(Locale.ROOT, "%.2f", v);
     }
 }

@@ -33,7 +33,8 @@ public final class ProjectReport {
     }
 
     private static String f1(double v) {
-        return Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf") : String.format(Locale.ROOT, "%.1f", v);
+        return Double.isNaN(v) ? "n/a" : Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf")
+                : String.format(Locale.ROOT, "%.1f", v);
     }
 
     /** The text report. */
