@@ -273,7 +273,7 @@ public final class ProjectBuild {
         Project.Preview pv = project.preview();
         BuildPlan.Builder plan = BuildPlan.builder(s.source(), symbol,
                         shared.outDir().resolve(CNames.symbol(s.name())))
-                .channel(s.channel().map(Long::intValue).orElse(0)).bits(shared.bits()).rateHz(rate)
+                .channel(s.channel().map(Long::intValue).orElse(0)).name(s.name()).bits(shared.bits()).rateHz(rate)
                 .dither(shared.dither()).shaping(shared.shaping()).seed(shared.seed())
                 .removeDc(!s.keepDc().orElse(false)).trimDbfs(s.trimDbfs()).gainDb(s.gainDb())
                 .normalizeDbfs(s.gainDb().isPresent() ? OptionalDouble.empty()

@@ -22,6 +22,7 @@ import org.rungtone.calibrate.OutputSpan;
 import org.rungtone.condition.Conditioner;
 import org.rungtone.condition.Conditioning;
 import org.rungtone.condition.KaiserResampler;
+import org.rungtone.firmware.CNames;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.Units;
 import org.rungtone.ladder.LevelTable;
@@ -122,6 +123,7 @@ public final class SoundRenderer {
             throw InputError.inFile(plan.source().file(), tooShort(plan, reference.length()));
         }
         List<String> warnings = new ArrayList<>(prepared.warnings());
+        CNames.rewritten(plan.source().name()).ifPresent(warnings::add);
         warnings.addAll(conditioned.warnings());
         Optional<AutoLoop.Placed> loop = AutoLoop.place(plan, reference);
         loop.flatMap(AutoLoop.Placed::shortened).ifPresent(w -> warnings.add(w.text()));
