@@ -64,7 +64,7 @@ public final class CNames {
 
     /**
      * What became of a name on its way to a symbol prefix, and why, in words; empty when the name is the
-     * symbol. E.g. {@code the name '9x' became the C symbol prefix 'snd_9x': a C identifier cannot start with a
+     * symbol but for case and separators ({@code Door-Chime} gives {@code door_chime} without a note). E.g. {@code the name '9x' became the C symbol prefix 'snd_9x': a C identifier cannot start with a
      * digit}.
      *
      * @throws InputError as {@link #symbol} does
@@ -72,7 +72,8 @@ public final class CNames {
     public static java.util.Optional<String> rewritten(String name) {
         String symbol = symbol(name);
         String raw = name == null ? "" : name.trim();
-        if (symbol.equals(raw)) {
+        // lower case and '-', '.' or spaces as '_' is what anyone expects (door-chime -> door_chime): no note
+        if (symbol.equals(raw.toLowerCase(Locale.ROOT).replaceAll("[-. ]+", "_"))) {
             return java.util.Optional.empty();
         }
         java.util.List<String> why = new java.util.ArrayList<>();

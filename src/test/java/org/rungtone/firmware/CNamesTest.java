@@ -28,6 +28,7 @@ class CNamesTest {
     @Test
     void saysWhatANameBecameAndWhy() {
         assertTrue(CNames.rewritten("door_chime").isEmpty(), "a name that is its symbol needs no note");
+        assertTrue(CNames.rewritten("Door-Chime.v2").isEmpty(), "case and separators need no note");
         assertEquals("the name '9x' became the C symbol prefix 'snd_9x': a C identifier cannot start with a digit,"
                 + " so 'snd_' goes first; to choose it yourself, give a name that already is one",
                 CNames.rewritten("9x").orElseThrow());
