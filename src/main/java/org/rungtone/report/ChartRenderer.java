@@ -30,10 +30,10 @@ final class ChartRenderer {
     static final int HEIGHT = 480;
     private static final Color[] PALETTE = {
         new Color(0x1f, 0x5f, 0x99), new Color(0x27, 0x8f, 0x4e), new Color(0x8e, 0x44, 0xad),
-        new Color(0xd3, 0x8b, 0x1a), new Color(0x2c, 0x3e, 0x50), new Color(0x16, 0xa0, 0x85)};
-    /** Reference lines: dark grey, then red and orange, apart from the data's colours. */
+        new Color(0x2c, 0x3e, 0x50), new Color(0x16, 0xa0, 0x85), new Color(0x7f, 0x55, 0x39)};
+    /** Reference lines: orange, then red and dark grey, apart from the data's colours and seen over them. */
     private static final Color[] REFERENCE_PALETTE = {
-        new Color(0x44, 0x44, 0x44), new Color(0xc0, 0x39, 0x2b), new Color(0xe6, 0x7e, 0x22)};
+        new Color(0xd3, 0x54, 0x00), new Color(0xc0, 0x39, 0x2b), new Color(0x44, 0x44, 0x44)};
     private static final Color CLEAR = new Color(0, 0, 0, 0);
     private static final Color GRID = new Color(0xdd, 0xdd, 0xdd);
     private static final Color TICK_TEXT = new Color(0x22, 0x22, 0x22);
@@ -54,11 +54,12 @@ final class ChartRenderer {
     /** The chart as PNG bytes, 800 × 480. */
     static byte[] png(Plots.Chart chart) {
         XYChart c = xchart(chart);
-        // a first paint lays the chart out, so that data values map to pixels for the grid
-        BufferedImage scratch = new BufferedImage(WIDTH, HEIGHT, BufferedImage.TYPE_INT_RGB);
-        Graphics2D g0 = scratch.createGraphics();
-        c.paint(g0, WIDTH, HEIGHT);
-        g0.dispose();
+        // XChart paints on a transparent layer; painting lays the chart out, so that data values map to
+        // pixels for the grid, which goes under the layer
+        BufferedImage layer = new BufferedImage(WIDTH, HEIGHT, BufferedImage.TYPE_INT_ARGB);
+        Graphics2D gl = layer.createGraphics();
+        c.paint(gl, WIDTH, HEIGHT);
+        gl.dispose();
         BufferedImage image = new BufferedImage(WIDTH, HEIGHT, BufferedImage.TYPE_INT_RGB);
         Graphics2D g = image.createGraphics();
         g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
@@ -67,7 +68,7 @@ final class ChartRenderer {
         g.fillRect(0, 0, WIDTH, HEIGHT);
         Frame f = new Frame(c, chart);
         drawGrid(g, f, chart);
-        c.paint(g, WIDTH, HEIGHT);
+        g.drawImage(layer, 0, 0, null);
         drawTicks(g, f, chart, c.getStyler().getAxisTickLabelsFont());
         g.dispose();
         try {

@@ -34,14 +34,19 @@ import org.rungtone.internal.Units;
 public final class HtmlReport {
     private static final Map<String, String> KNOWN_PLOTS = Map.of(
             "error-spectrum", "Error spectrum: what the board adds to the sound (output minus the aligned source),"
-                    + " as a density per hertz, with the in-band cutoff marked",
-            "spectrum", "Output spectrum of the single tone, with its harmonics and the ideal quantizer's"
-                    + " noise floor",
+                    + " as a density per hertz, with the in-band cutoff and an ideal quantizer's error for the"
+                    + " same dither marked",
+            "spectrum", "Output spectrum of the single tone, with its harmonics and an ideal quantizer's noise"
+                    + " floor for the same dither",
             "transfer", "Ladder transfer: output volts for every code",
-            "dnl", "Differential non-linearity of every code step (LSB)",
-            "inl", "Integral non-linearity of every code (LSB)",
+            "dnl", "Differential non-linearity of every code step (LSB), with \u00b10.5 LSB and the -1 LSB"
+                    + " monotonic limit",
+            "inl", "Integral non-linearity of every code (LSB), with \u00b10.5 LSB",
             "monte-carlo", "Monte Carlo spread of boards built from toleranced parts",
-            "survey", "SINAD against bit depth, one line per sample rate");
+            "survey-sinad", "SINAD against bit depth, one line per sample rate",
+            "survey-sinad-flash", "SINAD against flash bytes, one line per sample rate",
+            "survey-enob", "ENOB against bit depth, one line per sample rate",
+            "survey-enob-flash", "ENOB against flash bytes, one line per sample rate");
 
     private HtmlReport() {
     }

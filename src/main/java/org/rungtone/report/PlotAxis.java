@@ -111,10 +111,15 @@ public record PlotAxis(String label, double min, double max, double step) {
             return new Span(Math.min(low, other.low), Math.max(high, other.high));
         }
 
-        /** This span widened by {@code fraction} of its width at each end, so nothing sits on a border. */
+        /**
+         * This span widened by {@code fraction} of its width at each end, so that nothing runs along the
+         * frame; an end at or beyond zero stays there (volts from 0 V do not grow a negative range).
+         */
         public Span padded(double fraction) {
             double margin = (high - low) * fraction;
-            return new Span(low - margin, high + margin);
+            double newLow = low >= 0 ? Math.max(0, low - margin) : low - margin;
+            double newHigh = high <= 0 ? Math.min(0, high + margin) : high + margin;
+            return new Span(newLow, newHigh);
         }
 
         /** The smallest span holding this one and {@code v}. */

@@ -89,6 +89,10 @@ class PlotAxisTest {
         PlotAxis.Span s = new PlotAxis.Span(-1, 2).padded(0.1);
         assertEquals(-1.3, s.low(), 1e-12);
         assertEquals(2.3, s.high(), 1e-12);
+        // volts from 0 V: the bottom stays at 0
+        PlotAxis.Span volts = new PlotAxis.Span(0, 5).padded(0.04);
+        assertEquals(0, volts.low());
+        assertEquals(5.2, volts.high(), 1e-12);
         assertEquals(new PlotAxis.Span(-5, 2), new PlotAxis.Span(-1, 2).including(-5));
         assertEquals(new PlotAxis.Span(-1, 7), new PlotAxis.Span(-1, 2).union(new PlotAxis.Span(0, 7)));
     }
