@@ -34,7 +34,8 @@ class LadderChartsTest {
                 Optional.empty());
         Plots.Chart dnl = charts.get(1).chart();
         Plots.Chart inl = charts.get(2).chart();
-        // IEEE Std 1658-2011: DNL > -1 LSB at every step <=> monotonic; +-0.5 LSB is the usual linearity band
+        // IEEE Std 1658-2011: DNL > -1 LSB at every step <=> monotonic; the +-0.5 LSB band is common practice,
+        // no source
         assertEquals(List.of(new Plots.Reference("\u00b10.5 LSB", Plots.Direction.HORIZONTAL, List.of(0.5, -0.5)),
                 new Plots.Reference("-1 LSB (monotonic limit)", Plots.Direction.HORIZONTAL, List.of(-1.0))),
                 dnl.references());
