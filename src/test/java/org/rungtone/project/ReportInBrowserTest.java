@@ -14,8 +14,8 @@ import org.rungtone.testing.HeadlessBrowser;
 
 /**
  * report.html of real builds rendered in headless chromium at a phone's width (390 px) and a desk's
- * (1280 px): nothing may stick out of the page outside a scroll box, and every plot must load. Screenshots
- * are kept in target/browser/ for review.
+ * (1280 px): nothing may stick out of the page outside a scroll box, every plot must load, and at the desk's
+ * width no table needs its scroll box. Screenshots are kept in target/browser/ for review.
  */
 class ReportInBrowserTest {
     private static final List<Integer> WIDTHS = List.of(390, 1280);
@@ -36,6 +36,9 @@ class ReportInBrowserTest {
             assertEquals(f.width(), f.scrollWidth(), at + ": the page scrolls sideways");
             assertEquals(images, f.images(), at);
         }
+        // a phone scrolls the wide tables inside their boxes; a desk shows them whole
+        assertTrue(!frames.get(0).scrolling().isEmpty(), name + ": no table wider than a phone?");
+        assertEquals(List.of(), frames.get(1).scrolling(), name + " at 1280 px: tables that need scrolling");
     }
 
     @Test

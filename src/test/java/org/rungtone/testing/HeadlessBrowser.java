@@ -41,12 +41,13 @@ public final class HeadlessBrowser {
      * What one frame showed.
      *
      * @param width the frame's viewport width, CSS pixels
+     * @param scrolling the elements in a scroll box (class {@code scroll}) wider than the box
      * @param scrollWidth the page's scroll width: more than {@code width} when anything sticks out
      * @param images the number of images on the page
      * @param overflowing the outermost elements past the page's edges outside a scroll box
      * @param brokenImages the images that did not load
      */
-    public record Frame(int width, int scrollWidth, int images, List<String> overflowing,
+    public record Frame(int width, List<String> scrolling, int scrollWidth, int images, List<String> overflowing,
             List<String> brokenImages) {
     }
 

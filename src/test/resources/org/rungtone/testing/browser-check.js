@@ -1,7 +1,8 @@
 // Runs in a harness page that holds the report in iframes of fixed widths, after everything has loaded.
 // For each frame it lists the elements that reach past the page's left or right edge without a scroll box
 // (an ancestor with overflow-x auto or scroll) around them, outermost only, and the images that did not
-// load (naturalWidth 0), then appends the results as JSON in a pre element with the id rungtone-browser-check.
+// load (naturalWidth 0), and the scroll boxes whose content is wider than they are; then it appends the
+// results as JSON in a pre element with the id rungtone-browser-check.
 window.addEventListener('load', function () {
   function check(frame) {
     var doc = frame.contentDocument;
@@ -47,8 +48,16 @@ window.addEventListener('load', function () {
         broken.push(describe(im));
       }
     }
+    var scrolling = [];
+    var boxes = doc.querySelectorAll('.scroll');
+    for (var b = 0; b < boxes.length; b++) {
+      if (boxes[b].scrollWidth > boxes[b].clientWidth + 1) {
+        scrolling.push(describe(boxes[b].firstElementChild || boxes[b]));
+      }
+    }
     return {
       width: width,
+      scrolling: scrolling,
       scrollWidth: doc.documentElement.scrollWidth,
       images: doc.images.length,
       overflowing: over.map(function (o) { return describe(o.el) + ' (right edge ' + o.right + ' px)'; }),
