@@ -20,12 +20,12 @@ import org.rungtone.firmware.Templates;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.OutputFolder;
-import org.rungtone.report.AnalysisPlots;
 import org.rungtone.report.BuildReport;
 import org.rungtone.report.BuildSummary;
 import org.rungtone.report.HtmlReport;
 import org.rungtone.report.Json;
 import org.rungtone.report.Plots;
+import org.rungtone.report.SoundPlots;
 import org.rungtone.source.WavWriter;
 
 /**
@@ -80,7 +80,7 @@ public final class Build {
         // The preview and plots are written on another core while the C files are.
         CompletableFuture<List<Path>> assets = CompletableFuture.supplyAsync(() -> {
             Jobs.join(plotsReady);
-            return writeAssets(r, plan.outDir());
+            return writeAssets(r, plan.outDir(), SoundPlots.Scales.none());
         });
         try {
             if (firmware != null) {
@@ -111,7 +111,7 @@ public final class Build {
         AtomicFiles.writeString(txt, BuildReport.text(summary));
         Json.write(json, BuildReport.json(summary));
         HtmlReport.write(html, new HtmlReport.Page(plan.symbol(), toolVersion, List.of(), List.of(summary),
-                List.of(), flash, plan.firmware().flashBudgetBytes(), List.of(), Optional.empty()));
+                List.of(), flash, plan.firmware().flashBudgetBytes(), List.of(), Optional.empty(), List.of()));
         return summary;
     }
 
@@ -173,24 +173,21 @@ public final class Build {
                 firmwareLines, flash, files, warnings, stageMillis, r.autoLoop());
     }
 
-    /** Writes preview.wav and the plots of a rendered sound into {@code dir}. */
-    public static List<Path> writeAssets(SoundRenderer.Rendered r, Path dir) {
+    /** Writes preview.wav and the plots of a rendered sound into {@code dir}, the plots on {@code scales}. */
+    public static List<Path> writeAssets(SoundRenderer.Rendered r, Path dir, SoundPlots.Scales scales) {
         List<Path> files = new ArrayList<>();
         Path previewFile = dir.resolve("preview.wav");
         WavWriter.write(previewFile, r.preview().signal(), WavWriter.Format.PCM16);
         files.add(previewFile);
-        if (r.errorSpectrum() != null) {
-            Path errPlot = dir.resolve("error-spectrum.png");
-            AnalysisPlots.writeErrorSpectrum(errPlot, r.errorSpectrum(), r.inBandCutoffHz());
-            files.add(errPlot);
-        }
-        if (r.tone().isPresent() && r.toneSpectrum().isPresent()) {
-            Path specPlot = dir.resolve("spectrum.png");
-            AnalysisPlots.writeSpectrum(specPlot, r.toneSpectrum().get(), r.tone().get(), r.plan().bits());
-            files.add(specPlot);
-        }
+        files.addAll(SoundPlots.write(dir, plotData(r), scales));
         return files;
     }
 
-
+    /** What the plots of a rendered sound draw. */
+    public static SoundPlots.Data plotData(SoundRenderer.Rendered r) {
+        BuildPlan plan = r.plan();
+        return new SoundPlots.Data(plan.symbol(), plan.bits(), plan.quantize().dither(),
+                plan.quantize().shaping().order() > 0, Optional.ofNullable(r.errorSpectrum()), r.inBandCutoffHz(),
+                r.toneSpectrum(), r.tone());
+    }
 }

@@ -37,6 +37,7 @@ import org.rungtone.report.BuildSummary;
 import org.rungtone.report.HtmlReport;
 import org.rungtone.report.Json;
 import org.rungtone.report.ProjectReport;
+import org.rungtone.report.SoundPlots;
 
 /**
  * Builds every sound of a {@link Project} into one coherent set of outputs: one header exposing all sounds,
@@ -211,8 +212,10 @@ public final class ProjectBuild {
         Build build = new Build(toolVersion);
         List<Path> files = new ArrayList<>(emitted.files());
         List<BuildSummary> summaries = new ArrayList<>();
+        // comparable plots of all sounds share their y ranges
+        SoundPlots.Scales scales = SoundPlots.Scales.of(rendered.stream().map(Build::plotData).toList());
         for (SoundRenderer.Rendered r : rendered) {
-            List<Path> assets = Build.writeAssets(r, r.plan().outDir());
+            List<Path> assets = Build.writeAssets(r, r.plan().outDir(), scales);
             files.addAll(assets);
             SampleStorage storage = player.map(FirmwareRequest::storage).orElse(SampleStorage.UNPACKED);
             long soundBytes = storage.bytes(r.emitted().length(), r.plan().bits());
@@ -348,7 +351,7 @@ public final class ProjectBuild {
         HtmlReport.write(html, new HtmlReport.Page(project.name() + " (" + project.file().getFileName() + ")",
                 toolVersion, HtmlReport.Setting.of(shared.settings()), summaries, List.of(), emitted.flashBytes(),
                 budget > 0 ? OptionalLong.of(budget) : OptionalLong.empty(), ProjectReport.warningsOf(in),
-                Optional.empty()));
+                Optional.empty(), files));
         return result;
     }
 

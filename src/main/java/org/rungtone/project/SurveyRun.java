@@ -134,7 +134,7 @@ public final class SurveyRun {
             AnalogModel model, Resampler resampler, long start, long surveyed) {
         Path folder = request.output().folder();
         SurveyRequest.Cells cells = request.cells();
-        List<Path> files = new ArrayList<>(SurveyFiles.reports(folder));
+        List<Path> files = new ArrayList<>(SurveyFiles.reports(folder, s.result()));
         Set<String> warnings = new LinkedHashSet<>(s.sourceWarnings());
         warnings.addAll(conditioningWarnings(cells.ratesHz(), s.references()));
         if (request.output().previews()) {

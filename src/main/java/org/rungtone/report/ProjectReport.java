@@ -33,8 +33,7 @@ public final class ProjectReport {
     }
 
     private static String f1(double v) {
-        return Double.isNaN(v) ? "n/a" : Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf")
-                : String.format(Locale.ROOT, "%.1f", v);
+        return FigureText.f1(v);
     }
 
     /** The text report. */
@@ -77,8 +76,8 @@ public final class ProjectReport {
             b.append("  ").append(line).append('\n');
         }
         b.append(String.format(Locale.ROOT, "%nFlash: %,d bytes for all sounds%s%n", in.flashBytes(),
-                in.flashBudgetBytes() > 0 ? String.format(Locale.ROOT, " of a %,d-byte budget (%.0f %%)",
-                        in.flashBudgetBytes(), 100.0 * in.flashBytes() / in.flashBudgetBytes()) : ""));
+                in.flashBudgetBytes() > 0 ? String.format(Locale.ROOT, " of a %,d-byte budget (%s)",
+                        in.flashBudgetBytes(), FigureText.budgetShare(in.flashBytes(), in.flashBudgetBytes())) : ""));
         if (!in.firmware().isEmpty()) {
             b.append("\nFirmware:\n");
             for (String line : in.firmware()) {

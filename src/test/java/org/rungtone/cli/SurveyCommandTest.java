@@ -62,7 +62,8 @@ class SurveyCommandTest {
         assertEquals(0, r.exitCode(), r.err());
         assertEquals("", r.err(), "no progress output when stderr is not a terminal");
         try (Stream<Path> s = Files.list(out)) {
-            assertEquals(List.of(".rungtone-survey-files", "survey-sinad.png", "survey.json", "survey.txt"),
+            assertEquals(List.of(".rungtone-survey-files", "survey-sinad-flash.png", "survey-sinad.png", "survey.json",
+                    "survey.txt"),
                     s.map(p -> p.getFileName().toString()).sorted().toList(), "no temporary files left behind");
         }
         byte[] png = Files.readAllBytes(out.resolve("survey-sinad.png"));
