@@ -34,7 +34,7 @@ class HtmlReportLayoutTest {
                 16_000, 16_000, 1.0, "tpdf", "none", 1, "none", "kaiser", "ideal levels", 0,
                 List.of(quality(37.9)), "ideal", Optional.empty(), Optional.empty(),
                 new BuildSummary.PreviewInfo("none", 44_100, 6_000, -1.3, 0.9), List.of(), 12_000, files,
-                List.of(), Map.of());
+                List.of(), Map.of(), Optional.empty());
     }
 
     private static Path touch(Path f) throws IOException {
