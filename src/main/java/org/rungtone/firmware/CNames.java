@@ -64,8 +64,8 @@ public final class CNames {
 
     /**
      * What became of a name on its way to a symbol prefix, and why, in words; empty when the name is the
-     * symbol but for case and separators ({@code Door-Chime} gives {@code door_chime} without a note). E.g. {@code the name '9x' became the C symbol prefix 'snd_9x': a C identifier cannot start with a
-     * digit}.
+     * symbol but for case and separators ({@code Door-Chime} gives {@code door_chime} without a note). E.g.
+     * {@code the name '9x' became the C symbol prefix 'snd_9x': a C identifier cannot start with a digit}.
      *
      * @throws InputError as {@link #symbol} does
      */
