@@ -11,7 +11,7 @@
  *   target: avr (8-bit AVR, ATmega328P register names), CPU clock 16 MHz
  *   engine: clip, one-shot playback of 1 sound
  *   tick rate: 22.05 kHz requested; timer1 at 16 MHz: prescaler 1, OCR1A = 725 (726 cycles per tick), 22.0386 kHz (-518.5 ppm)
- *   cpu: at most 60 cycles per tick = 8.3 % of the CPU at 22.04 kHz (16 MHz clock); rates up to 66.7 kHz keep it under 25 %; measured in simulation (ATmega328P, avr-gcc -Os); the timer interrupt is off while nothing plays
+ *   cpu: at most 60 cycles per tick = 8.3 % of the CPU at 22.04 kHz (16 MHz clock); rates up to 66.7 kHz keep it under 25 %; measured in simulation (ATmega328P, avr-gcc -Os); the timer interrupt is off while nothing plays; the interrupt is written in assembler
  *   pins: PD2-PD7 on 8-bit ports: bit 0 (LSB) -> PD2, bit 1 -> PD3, bit 2 -> PD4, bit 3 -> PD5, bit 4 -> PD6, bit 5 (MSB) -> PD7
  *   pin strategy: shift and mask, one per port
  *   port update: port D, PORTx written directly where the ladder owns the whole port, else masked read-modify-write; other pins keep their levels

@@ -65,10 +65,9 @@ public final class Main implements Runnable {
     }
 
     /**
-     * The subcommands in help order. They are added in code rather than in the annotation so that a run of
-     * one command builds only that command's model: picocli reads every option annotation of every class it
-     * is given, which costs a tenth of a second at start for all of them. A switch rather than a map of
-     * constructor references: each reference would load its class at start.
+     * The subcommands in help order, added in code so that a run of one command builds only that command's
+     * model (picocli reads every option annotation of every class it is given: a tenth of a second at start),
+     * and made by a switch, as a map of constructor references would load every command class at start.
      */
     private static final List<String> SUBCOMMANDS = List.of("build", "calibrate", "demo", "init", "ladder", "survey",
             "completion", "help");
@@ -153,11 +152,6 @@ public final class Main implements Runnable {
     }
 
     private static boolean isVerbose(ParseResult parsed) {
-        for (ParseResult p = parsed; p != null; p = p.subcommand()) {
-            if (p.hasMatchedOption("--verbose")) {
-                return true;
-            }
-        }
-        return false;
+        return parsed != null && (parsed.hasMatchedOption("--verbose") || isVerbose(parsed.subcommand()));
     }
 }

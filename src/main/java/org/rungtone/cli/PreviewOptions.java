@@ -31,4 +31,9 @@ public final class PreviewOptions {
             throw new org.rungtone.internal.InputError("--preview-length: " + e.getMessage() + ", or all");
         }
     }
+
+    /** The reconstruction filter. */
+    ReconstructionFilter filter() {
+        return filter;
+    }
 }

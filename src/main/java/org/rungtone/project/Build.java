@@ -25,6 +25,7 @@ import org.rungtone.report.BuildSummary;
 import org.rungtone.report.HtmlReport;
 import org.rungtone.report.Json;
 import org.rungtone.report.PlotWarmUp;
+import org.rungtone.report.SoundPlots;
 import org.rungtone.source.WavWriter;
 
 /**
@@ -67,9 +68,8 @@ public final class Build {
     }
 
     private BuildSummary write(BuildPlan plan) {
-        PlotWarmUp.start(); // on another core, before the plots need it
-        SoundPlots plots = new SoundPlots();
-        SoundRenderer.Rendered r = new SoundRenderer(span, progress, plots::draw).render(plan);
+        CompletableFuture<Void> plotsReady = PlotWarmUp.start(); // on another core, before the plots need it
+        SoundRenderer.Rendered r = new SoundRenderer(span, progress).render(plan);
         Stopwatch watch = new Stopwatch(progress);
         List<Path> files = new ArrayList<>();
         List<String> firmwareLines = new ArrayList<>();
@@ -77,9 +77,11 @@ public final class Build {
         // Every check that can refuse the build runs before the first file is written.
         FirmwareEmitter.Rendered firmware = plan.firmware().player().isPresent() ? player(plan, r) : null;
         long flash = firmware != null ? firmware.result().flashBytes() : checkedArrayBytes(plan, r);
-        // The preview and plots (drawn meanwhile) are written on another core while the C files are.
-        CompletableFuture<List<Path>> assets = CompletableFuture.supplyAsync(() -> writeAssets(r, plan.outDir(),
-                plots));
+        // The preview and plots are written on another core while the C files are.
+        CompletableFuture<List<Path>> assets = CompletableFuture.supplyAsync(() -> {
+            Jobs.join(plotsReady);
+            return writeAssets(r, plan.outDir(), SoundPlots.Scales.none());
+        });
         try {
             if (firmware != null) {
                 EmitResult er = FirmwareEmitter.write(firmware, plan.outDir());
@@ -109,7 +111,7 @@ public final class Build {
         AtomicFiles.writeString(txt, BuildReport.text(summary));
         Json.write(json, BuildReport.json(summary));
         HtmlReport.write(html, new HtmlReport.Page(plan.symbol(), toolVersion, List.of(), List.of(summary),
-                List.of(), flash, plan.firmware().flashBudgetBytes(), List.of(), Optional.empty()));
+                List.of(), flash, plan.firmware().flashBudgetBytes(), List.of(), Optional.empty(), List.of()));
         return summary;
     }
 
@@ -134,6 +136,9 @@ public final class Build {
 
     /** The firmware clip of a rendered sound, with its loop points. */
     public static SoundClip clip(String name, SoundRenderer.Rendered r) {
+        if (r.autoLoop().isPresent()) {
+            return new SoundClip(name, r.emitted(), r.autoLoop().get().start(), r.autoLoop().get().end());
+        }
         if (r.plan().firmware().loop().isPresent()) {
             int[] lp = r.plan().firmware().loop().get().samples(r.rateHz(), r.emitted().length());
             return new SoundClip(name, r.emitted(), lp[0], lp[1]);
@@ -165,23 +170,24 @@ public final class Build {
                         .label(), r.shapingGainDb(), r.tone(),
                 new BuildSummary.PreviewInfo(plan.preview().filter().describe(), plan.preview().rateHz(),
                         r.preview().passbandTopHz(), r.preview().zohDroopDb(), r.preview().peak()),
-                firmwareLines, flash, files, warnings, stageMillis);
+                firmwareLines, flash, files, warnings, stageMillis, r.autoLoop());
     }
 
-    /** Writes preview.wav and the plots of a rendered sound into {@code dir}. */
-    public static List<Path> writeAssets(SoundRenderer.Rendered r, Path dir) {
-        return writeAssets(r, dir, new SoundPlots());
-    }
-
-    /** Writes preview.wav and the plots, drawn by {@code plots} or now. */
-    static List<Path> writeAssets(SoundRenderer.Rendered r, Path dir, SoundPlots plots) {
+    /** Writes preview.wav and the plots of a rendered sound into {@code dir}, the plots on {@code scales}. */
+    public static List<Path> writeAssets(SoundRenderer.Rendered r, Path dir, SoundPlots.Scales scales) {
         List<Path> files = new ArrayList<>();
         Path previewFile = dir.resolve("preview.wav");
         WavWriter.write(previewFile, r.preview().signal(), WavWriter.Format.PCM16);
         files.add(previewFile);
-        files.addAll(plots.write(r, dir));
+        files.addAll(SoundPlots.write(dir, plotData(r), scales));
         return files;
     }
 
-
+    /** What the plots of a rendered sound draw. */
+    public static SoundPlots.Data plotData(SoundRenderer.Rendered r) {
+        BuildPlan plan = r.plan();
+        return new SoundPlots.Data(plan.symbol(), plan.bits(), plan.quantize().dither(),
+                plan.quantize().shaping().order() > 0, Optional.ofNullable(r.errorSpectrum()), r.inBandCutoffHz(),
+                r.toneSpectrum(), r.tone());
+    }
 }

@@ -37,6 +37,7 @@ import org.rungtone.report.BuildSummary;
 import org.rungtone.report.HtmlReport;
 import org.rungtone.report.Json;
 import org.rungtone.report.ProjectReport;
+import org.rungtone.report.SoundPlots;
 
 /**
  * Builds every sound of a {@link Project} into one coherent set of outputs: one header exposing all sounds,
@@ -182,7 +183,7 @@ public final class ProjectBuild {
         if (player.isPresent()) {
             checkOneRate(project, o, shared.rateHz());
         }
-        org.rungtone.report.PlotWarmUp.start(); // on another core, before the plots need it
+        java.util.concurrent.CompletableFuture<Void> plotsReady = org.rungtone.report.PlotWarmUp.start();
         // every sound's settings are checked before the first sound is rendered
         List<BuildPlan> plans = new ArrayList<>();
         for (Project.Sound s : project.sounds()) {
@@ -193,28 +194,27 @@ public final class ProjectBuild {
             }
         }
         List<SoundRenderer.Rendered> rendered = new ArrayList<>();
-        // each sound's plots are drawn on another core while the next sound renders
-        List<SoundPlots> plots = new ArrayList<>();
         for (int i = 0; i < plans.size(); i++) {
             Project.Sound s = project.sounds().get(i);
             String label = String.format(Locale.ROOT, "sound %d/%d %s", s.index(), project.sounds().size(),
                     s.name());
-            plots.add(new SoundPlots());
             try {
-                rendered.add(new SoundRenderer(span, stage -> progress.accept(label + ": " + stage + " done"),
-                        plots.get(i)::draw).render(plans.get(i)));
+                rendered.add(new SoundRenderer(span, stage -> progress.accept(label + ": " + stage + " done"))
+                        .render(plans.get(i)));
             } catch (SettingError e) {
                 throw located(project, s, o, e);
             }
         }
         progress.accept("writing firmware, previews and reports");
         Emitted emitted = emit(project, player, shared, rendered);
+        Jobs.join(plotsReady);
         Build build = new Build(toolVersion);
         List<Path> files = new ArrayList<>(emitted.files());
         List<BuildSummary> summaries = new ArrayList<>();
-        for (int i = 0; i < rendered.size(); i++) {
-            SoundRenderer.Rendered r = rendered.get(i);
-            List<Path> assets = Build.writeAssets(r, r.plan().outDir(), plots.get(i));
+        // comparable plots of all sounds share their y ranges
+        SoundPlots.Scales scales = SoundPlots.Scales.of(rendered.stream().map(Build::plotData).toList());
+        for (SoundRenderer.Rendered r : rendered) {
+            List<Path> assets = Build.writeAssets(r, r.plan().outDir(), scales);
             files.addAll(assets);
             SampleStorage storage = player.map(FirmwareRequest::storage).orElse(SampleStorage.UNPACKED);
             long soundBytes = storage.bytes(r.emitted().length(), r.plan().bits());
@@ -275,7 +275,7 @@ public final class ProjectBuild {
         Project.Preview pv = project.preview();
         BuildPlan.Builder plan = BuildPlan.builder(s.source(), symbol,
                         shared.outDir().resolve(CNames.symbol(s.name())))
-                .channel(s.channel().map(Long::intValue).orElse(0)).bits(shared.bits()).rateHz(rate)
+                .channel(s.channel().map(Long::intValue).orElse(0)).name(s.name()).bits(shared.bits()).rateHz(rate)
                 .dither(shared.dither()).shaping(shared.shaping()).seed(shared.seed())
                 .removeDc(!s.keepDc().orElse(false)).trimDbfs(s.trimDbfs()).gainDb(s.gainDb())
                 .normalizeDbfs(s.gainDb().isPresent() ? OptionalDouble.empty()
@@ -350,7 +350,7 @@ public final class ProjectBuild {
         HtmlReport.write(html, new HtmlReport.Page(project.name() + " (" + project.file().getFileName() + ")",
                 toolVersion, HtmlReport.Setting.of(shared.settings()), summaries, List.of(), emitted.flashBytes(),
                 budget > 0 ? OptionalLong.of(budget) : OptionalLong.empty(), ProjectReport.warningsOf(in),
-                Optional.empty()));
+                Optional.empty(), files));
         return result;
     }
 

@@ -1,7 +1,6 @@
 package org.rungtone.report;
 
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
@@ -13,10 +12,6 @@ import org.rungtone.internal.Units;
 /** Renders a {@link BuildSummary} as text for people and as JSON for machines. */
 public final class BuildReport {
     private BuildReport() {
-    }
-
-    private static String f1(double v) {
-        return Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf") : String.format(Locale.ROOT, "%.1f", v);
     }
 
     /**
@@ -31,8 +26,8 @@ public final class BuildReport {
         s.emitted().listener().ifPresent(l -> {
             b.append(String.format(Locale.ROOT, "%nWhat the listener gets (%s):%n", FigureText.listenerScope(l)));
             TextTable lt = new TextTable("figure", "dB");
-            lt.row(FigureText.LISTENER_SNR, f1(l.snrDb()));
-            lt.row(FigureText.LISTENER_A_WEIGHTED, f1(l.aWeightedSnrDb()));
+            lt.row(FigureText.LISTENER_SNR, FigureText.f1(l.snrDb()));
+            lt.row(FigureText.LISTENER_A_WEIGHTED, FigureText.f1(l.aWeightedSnrDb()));
             b.append(lt.render("  "));
         });
         b.append("\nDefinitions:\n");
@@ -45,23 +40,9 @@ public final class BuildReport {
 
     private static TextTable settings(BuildSummary s) {
         TextTable t = new TextTable("setting", "value");
-        t.row("source", s.source().getFileName() + "  (" + s.sourceLayout() + ")");
-        t.row("conditioning", s.conditioning());
-        t.row("resampler", s.resampler());
-        t.row("target", s.bits() + " bits at " + Units.format(s.rateHz(), "Hz") + ", "
-                + s.samples() + " samples, " + String.format(Locale.ROOT, "%.3f s", s.durationSeconds()));
-        t.row("dither / shaping", s.dither() + " / " + s.shaping() + "  (seed " + s.seed() + ")");
-        t.row("levels played", s.ladder());
-        t.row("C files hold", s.emittedCase());
-        t.row("clipped samples", s.clippedSamples() + (s.samples() > 0 ? String.format(Locale.ROOT,
-                "  (%.3f %%)", 100.0 * s.clippedSamples() / s.samples()) : ""));
-        s.emitted().codeUse().ifPresent(u -> {
-            t.row("end codes", FigureText.endCodes(u, "  "));
-            if (u.shaped()) {
-                t.row("shaping headroom", FigureText.headroom(u));
-            }
-        });
-        t.row("flash", String.format(Locale.ROOT, "%,d bytes of samples", s.flashBytes()));
+        for (HtmlReport.Setting row : SoundTables.settings(s, "  ")) {
+            t.row(row.key(), row.value());
+        }
         return t;
     }
 
@@ -73,7 +54,8 @@ public final class BuildReport {
                 "SNR dB <" + Units.format(first.inBandCutoffHz(), "Hz"), "A-wtd SNR dB",
                 FigureText.ENOB_FULL_SCALE, FigureText.ENOB_SIGNAL);
         for (QualityReport r : s.quality()) {
-            q.row(r.label(), f1(r.sinadDb()), f1(r.inBandSnrDb()), f1(r.aWeightedSnrDb()),
+            q.row(r.label(), FigureText.f1(r.sinadDb()), FigureText.f1(r.inBandSnrDb()),
+                    FigureText.f1(r.aWeightedSnrDb()),
                     FigureText.f2(r.enobFullScaleBits()), FigureText.f2(r.enobSignalBits()));
         }
         b.append(q.render("  "));
@@ -107,11 +89,7 @@ public final class BuildReport {
         for (Path f : s.files()) {
             b.append("  ").append(f).append('\n');
         }
-        List<String> warnings = new ArrayList<>(s.warnings());
-        if (p.peak() > 1) {
-            warnings.add(String.format(Locale.ROOT, "the preview's filter rings %.1f %% past full scale;"
-                    + " the preview WAV clips there", 100 * (p.peak() - 1)));
-        }
+        List<String> warnings = FigureText.soundWarnings(s);
         if (!warnings.isEmpty()) {
             b.append("\nWarnings:\n");
             for (String w : warnings) {
@@ -186,6 +164,7 @@ public final class BuildReport {
         m.put("snr_db", s.emitted().sinadDb());
         m.put("quality", s.quality().stream().map(BuildReport::quality).toList());
         s.shapingGainDb().ifPresent(g -> m.put("shaping_in_band_gain_db", g));
+        s.autoLoop().ifPresent(l -> m.put("auto_loop", LoopFigures.json(l, s.rateHz())));
         s.tone().ifPresent(t -> {
             Map<String, Object> tm = new LinkedHashMap<>();
             tm.put("fundamental_hz", t.fundamentalHz());

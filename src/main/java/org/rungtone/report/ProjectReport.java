@@ -33,7 +33,7 @@ public final class ProjectReport {
     }
 
     private static String f1(double v) {
-        return Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf") : String.format(Locale.ROOT, "%.1f", v);
+        return FigureText.f1(v);
     }
 
     /** The text report. */
@@ -56,6 +56,10 @@ public final class ProjectReport {
         }
         b.append(t.render("  "));
         for (BuildSummary x : in.sounds()) {
+            x.autoLoop().ifPresent(l -> b.append("  ").append(x.symbol()).append(" loop (found): ")
+                    .append(LoopFigures.line(l, x.rateHz())).append('\n'));
+        }
+        for (BuildSummary x : in.sounds()) {
             if (x.quality().size() > 1) {
                 b.append("\n").append(x.symbol()).append(" on the board:\n");
                 TextTable q = new TextTable("case", "SINAD dB", "in-band SNR dB", "A-wtd SNR dB",
@@ -72,8 +76,8 @@ public final class ProjectReport {
             b.append("  ").append(line).append('\n');
         }
         b.append(String.format(Locale.ROOT, "%nFlash: %,d bytes for all sounds%s%n", in.flashBytes(),
-                in.flashBudgetBytes() > 0 ? String.format(Locale.ROOT, " of a %,d-byte budget (%.0f %%)",
-                        in.flashBudgetBytes(), 100.0 * in.flashBytes() / in.flashBudgetBytes()) : ""));
+                in.flashBudgetBytes() > 0 ? String.format(Locale.ROOT, " of a %,d-byte budget (%s)",
+                        in.flashBudgetBytes(), FigureText.budgetShare(in.flashBytes(), in.flashBudgetBytes())) : ""));
         if (!in.firmware().isEmpty()) {
             b.append("\nFirmware:\n");
             for (String line : in.firmware()) {

@@ -75,6 +75,13 @@ public final class SurveyReport {
                 + (result.packed() ? ", counting bit-packed bytes" : ", counting unpacked bytes"));
         b.append(t.render("  ")).append('\n');
         b.append(table(result)).append('\n');
+        if (result.rows().stream().anyMatch(r -> !Double.isNaN(r.listenerSnrDb()))) {
+            b.append("SINAD, in-band and A-weighted SNR and ENOB are quantization only (the codes against the source"
+                    + " at each rate); \"heard\" is what the listener gets: the board's output rendered as the"
+                    + " preview against the source as supplied, 20 Hz to 20 kHz, so treble a rate loses counts."
+                    + (result.target() == null ? "" : " The target is checked against the heard figures.")
+                    + "\n");
+        }
         b.append(recommendation(result)).append('\n');
         if (!c.files().isEmpty()) {
             b.append("\nFiles:\n");
@@ -100,6 +107,11 @@ public final class SurveyReport {
                 "A-wtd SNR dB", "ENOB re FS", "flash bytes", "packed bytes", "fits"));
         boolean hasTarget = result.target() != null;
         boolean hasChoice = result.chosen().isPresent();
+        boolean heard = result.rows().stream().anyMatch(r -> !Double.isNaN(r.listenerSnrDb()));
+        if (heard) {
+            header.add("heard SNR dB");
+            header.add("heard A-wtd dB");
+        }
         if (hasTarget) {
             header.add("meets target");
         }
@@ -112,6 +124,10 @@ public final class SurveyReport {
                     fixed(r.sinadDb(), 1), fixed(r.inBandSnrDb(), 1), fixed(r.aWeightedSnrDb(), 1),
                     fixed(r.enobFullScaleBits(), 2), String.format(Locale.ROOT, "%,d", r.flashBytesUnpacked()),
                     String.format(Locale.ROOT, "%,d", r.flashBytesPacked()), yesNo(r.fits())));
+            if (heard) {
+                cells.add(fixed(r.listenerSnrDb(), 1));
+                cells.add(fixed(r.listenerAWeightedSnrDb(), 1));
+            }
             if (hasTarget) {
                 cells.add(yesNo(r.reachesTarget()));
             }
@@ -132,9 +148,11 @@ public final class SurveyReport {
         Optional<SurveyRow> chosen = result.chosen();
         if (chosen.isPresent()) {
             SurveyRow c = chosen.get();
-            return String.format(Locale.ROOT, "Recommended: %d bits at %s (SINAD %s dB, ENOB re full scale %s bits,"
-                    + " %s).",
-                    c.bits(), khz(c.rateHz()), fixed(c.sinadDb(), 1), fixed(c.enobFullScaleBits(), 2),
+            String heard = Double.isNaN(c.listenerSnrDb()) ? "" : "heard SNR " + fixed(c.listenerSnrDb(), 1)
+                    + " dB, ";
+            return String.format(Locale.ROOT, "Recommended: %d bits at %s (%sSINAD %s dB, ENOB re full scale %s"
+                    + " bits, %s).",
+                    c.bits(), khz(c.rateHz()), heard, fixed(c.sinadDb(), 1), fixed(c.enobFullScaleBits(), 2),
                     bytes(result.packed() ? c.flashBytesPacked() : c.flashBytesUnpacked(), result.packed()));
         }
         if (target == null) {
@@ -149,12 +167,15 @@ public final class SurveyReport {
                     bytes(result.flashBudgetBytes(), result.packed()), r.bits(), khz(r.rateHz()),
                     bytes(counted(r, result.packed()), result.packed()));
         }
-        SurveyRow best = result.rows().stream().max(Comparator.comparingDouble(r ->
-                target.kind() == SurveyTarget.Kind.SINAD_DB ? r.sinadDb() : r.enobFullScaleBits())).orElseThrow();
+        boolean heard = result.rows().stream().anyMatch(r -> !Double.isNaN(r.listenerSnrDb()));
+        SurveyRow best = result.rows().stream().max(Comparator.comparingDouble(r -> heard ? r.listenerSnrDb()
+                : target.kind() == SurveyTarget.Kind.SINAD_DB ? r.sinadDb() : r.enobFullScaleBits())).orElseThrow();
         return String.format(Locale.ROOT, "No surveyed setting reaches %s%s; the best is %d bits at %s with"
-                + " SINAD %s dB, ENOB re full scale %s bits.", target.describe(),
+                + " %sSINAD %s dB, ENOB re full scale %s bits.", target.describe(),
                 result.flashBudgetBytes() == null ? "" : ", within the budget or beyond it", best.bits(),
-                khz(best.rateHz()), fixed(best.sinadDb(), 1), fixed(best.enobFullScaleBits(), 2));
+                khz(best.rateHz()), heard ? "heard SNR " + fixed(best.listenerSnrDb(), 1) + " dB (images and lost"
+                        + " treble count; a reconstruction filter or a higher rate helps), " : "",
+                fixed(best.sinadDb(), 1), fixed(best.enobFullScaleBits(), 2));
     }
 
     /**
@@ -210,6 +231,10 @@ public final class SurveyReport {
         m.put("in_band_snr_db", r.inBandSnrDb());
         m.put("a_weighted_snr_db", r.aWeightedSnrDb());
         m.put("enob_full_scale_bits", r.enobFullScaleBits());
+        if (!Double.isNaN(r.listenerSnrDb())) {
+            m.put("heard_snr_db", r.listenerSnrDb());
+            m.put("heard_a_weighted_snr_db", r.listenerAWeightedSnrDb());
+        }
         m.put("clipped_samples", r.clippedSamples());
         m.put("flash_bytes_unpacked", r.flashBytesUnpacked());
         m.put("flash_bytes_packed", r.flashBytesPacked());

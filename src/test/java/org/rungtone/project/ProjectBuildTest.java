@@ -57,6 +57,29 @@ class ProjectBuildTest {
     }
 
     @Test
+    void ventFanExampleLoopsItsSteadyHumAndItsAvrCodeCompiles() throws Exception {
+        Path g = copyExample("vent-fan");
+        Path out = dir.resolve("fan");
+        Cli.Run r = Cli.run("build", g.resolve("vent-fan.toml").toString(), "--out", out.toString(), "-q");
+        assertEquals(0, r.exitCode(), r.err());
+        com.google.gson.JsonObject loop = com.google.gson.JsonParser.parseString(Files.readString(
+                out.resolve("report.json"))).getAsJsonObject().getAsJsonArray("sounds").get(0).getAsJsonObject()
+                .getAsJsonObject("auto_loop");
+        // blade pass: 4 blades at 25 rev/s = 100 Hz, 120 samples at 12 kHz; the loop inside the steady
+        // 0.4 .. 1.8 s and a whole number of blade passes
+        assertEquals(120, loop.get("period_samples").getAsDouble(), 0.12);
+        int start = loop.get("start").getAsInt();
+        int end = loop.get("end").getAsInt();
+        assertTrue(start >= 0.4 * 12_000 && end <= 1.8 * 12_000, loop::toString);
+        assertEquals(0, (end - start) % 120, loop::toString);
+        assertTrue(loop.get("seam_db").getAsDouble() < -40, loop::toString);
+        assertTrue(Files.readString(out.resolve("vent_fan.h")).contains("loop " + start + " .. " + end));
+        CToolchain.require("avr-gcc");
+        CToolchain.compileClean(out, CToolchain.cmd(List.of("avr-gcc", "-mmcu=atmega328p", "-Os"),
+                CToolchain.cmd(CToolchain.STRICT, List.of("-c", "vent_fan.c", "vent_fan_data.c"))));
+    }
+
+    @Test
     void aUnitProfileFixesTheBitDepth() throws IOException {
         Path g = copyExample("greenhouse");
         Cli.Run r = Cli.run("build", g.resolve("greenhouse.toml").toString(), "--bits", "5", "--out",
