@@ -24,7 +24,6 @@ import org.rungtone.report.BuildReport;
 import org.rungtone.report.BuildSummary;
 import org.rungtone.report.HtmlReport;
 import org.rungtone.report.Json;
-import org.rungtone.report.PlotWarmUp;
 import org.rungtone.report.SoundPlots;
 import org.rungtone.source.WavWriter;
 
@@ -68,8 +67,18 @@ public final class Build {
     }
 
     private BuildSummary write(BuildPlan plan) {
-        CompletableFuture<Void> plotsReady = PlotWarmUp.start(); // on another core, before the plots need it
-        SoundRenderer.Rendered r = new SoundRenderer(span, progress).render(plan);
+        // the plots are drawn on another core as soon as the figures are known, while the preview renders
+        EarlyPlots plots = new EarlyPlots(plan.outDir());
+        try {
+            return write(plan, plots, new SoundRenderer(span, progress, plots).render(plan));
+        } catch (RuntimeException e) {
+            // the staging folder goes once the plots are done with it
+            plots.settle();
+            throw e;
+        }
+    }
+
+    private BuildSummary write(BuildPlan plan, EarlyPlots plots, SoundRenderer.Rendered r) {
         Stopwatch watch = new Stopwatch(progress);
         List<Path> files = new ArrayList<>();
         List<String> firmwareLines = new ArrayList<>();
@@ -77,11 +86,8 @@ public final class Build {
         // Every check that can refuse the build runs before the first file is written.
         FirmwareEmitter.Rendered firmware = plan.firmware().player().isPresent() ? player(plan, r) : null;
         long flash = firmware != null ? firmware.result().flashBytes() : checkedArrayBytes(plan, r);
-        // The preview and plots are written on another core while the C files are.
-        CompletableFuture<List<Path>> assets = CompletableFuture.supplyAsync(() -> {
-            Jobs.join(plotsReady);
-            return writeAssets(r, plan.outDir(), SoundPlots.Scales.none());
-        });
+        // The preview is written on another core while the C files are.
+        CompletableFuture<Path> preview = CompletableFuture.supplyAsync(() -> writePreview(r, plan.outDir()));
         try {
             if (firmware != null) {
                 EmitResult er = FirmwareEmitter.write(firmware, plan.outDir());
@@ -92,12 +98,13 @@ public final class Build {
                 files.addAll(emitArray(plan.symbol(), r, plan.outDir()));
             }
         } catch (RuntimeException e) {
-            // the staging folder goes once the assets are done with it
-            assets.handle((done, failed) -> null).join();
+            // the staging folder goes once the preview is done with it
+            preview.handle((done, failed) -> null).join();
             throw e;
         }
         watch.lap("emit");
-        files.addAll(Jobs.join(assets));
+        files.add(Jobs.join(preview));
+        files.addAll(plots.files());
         watch.lap("plots");
         Path txt = plan.outDir().resolve("report.txt");
         Path json = plan.outDir().resolve("report.json");
@@ -176,18 +183,20 @@ public final class Build {
     /** Writes preview.wav and the plots of a rendered sound into {@code dir}, the plots on {@code scales}. */
     public static List<Path> writeAssets(SoundRenderer.Rendered r, Path dir, SoundPlots.Scales scales) {
         List<Path> files = new ArrayList<>();
-        Path previewFile = dir.resolve("preview.wav");
-        WavWriter.write(previewFile, r.preview().signal(), WavWriter.Format.PCM16);
-        files.add(previewFile);
+        files.add(writePreview(r, dir));
         files.addAll(SoundPlots.write(dir, plotData(r), scales));
         return files;
     }
 
+    private static Path writePreview(SoundRenderer.Rendered r, Path dir) {
+        Path previewFile = dir.resolve("preview.wav");
+        WavWriter.write(previewFile, r.preview().signal(), WavWriter.Format.PCM16);
+        return previewFile;
+    }
+
     /** What the plots of a rendered sound draw. */
     public static SoundPlots.Data plotData(SoundRenderer.Rendered r) {
-        BuildPlan plan = r.plan();
-        return new SoundPlots.Data(plan.symbol(), plan.bits(), plan.quantize().dither(),
-                plan.quantize().shaping().order() > 0, Optional.ofNullable(r.errorSpectrum()), r.inBandCutoffHz(),
+        return SoundRenderer.plotData(r.plan(), Optional.ofNullable(r.errorSpectrum()), r.inBandCutoffHz(),
                 r.toneSpectrum(), r.tone());
     }
 }

@@ -10,6 +10,7 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
 import java.util.OptionalLong;
+import java.util.concurrent.CompletableFuture;
 import java.util.function.UnaryOperator;
 import org.rungtone.calibrate.OutputSpan;
 import org.rungtone.condition.ResamplerKind;
@@ -36,6 +37,7 @@ import org.rungtone.quantize.ErrorFilter;
 import org.rungtone.report.BuildSummary;
 import org.rungtone.report.HtmlReport;
 import org.rungtone.report.Json;
+import org.rungtone.report.PlotWarmUp;
 import org.rungtone.report.ProjectReport;
 import org.rungtone.report.SoundPlots;
 
@@ -183,7 +185,7 @@ public final class ProjectBuild {
         if (player.isPresent()) {
             checkOneRate(project, o, shared.rateHz());
         }
-        java.util.concurrent.CompletableFuture<Void> plotsReady = org.rungtone.report.PlotWarmUp.start();
+        CompletableFuture<Void> plotsReady = PlotWarmUp.start();
         // every sound's settings are checked before the first sound is rendered
         List<BuildPlan> plans = new ArrayList<>();
         for (Project.Sound s : project.sounds()) {
@@ -206,19 +208,29 @@ public final class ProjectBuild {
             }
         }
         progress.accept("writing firmware, previews and reports");
-        Emitted emitted = emit(project, player, shared, rendered);
-        Jobs.join(plotsReady);
+        // comparable plots of all sounds share their y ranges; the previews and plots are written on another
+        // core while the firmware is
+        SoundPlots.Scales scales = SoundPlots.Scales.of(rendered.stream().map(Build::plotData).toList());
+        CompletableFuture<List<List<Path>>> assets = plotsReady.thenApplyAsync(loaded -> rendered.stream()
+                .map(r -> Build.writeAssets(r, r.plan().outDir(), scales)).toList());
+        Emitted emitted;
+        try {
+            emitted = emit(project, player, shared, rendered);
+        } catch (RuntimeException e) {
+            // the staging folder goes once the assets are done with it
+            assets.handle((done, failed) -> null).join();
+            throw e;
+        }
         Build build = new Build(toolVersion);
         List<Path> files = new ArrayList<>(emitted.files());
         List<BuildSummary> summaries = new ArrayList<>();
-        // comparable plots of all sounds share their y ranges
-        SoundPlots.Scales scales = SoundPlots.Scales.of(rendered.stream().map(Build::plotData).toList());
-        for (SoundRenderer.Rendered r : rendered) {
-            List<Path> assets = Build.writeAssets(r, r.plan().outDir(), scales);
-            files.addAll(assets);
+        for (int i = 0; i < rendered.size(); i++) {
+            SoundRenderer.Rendered r = rendered.get(i);
+            List<Path> soundAssets = Jobs.join(assets).get(i);
+            files.addAll(soundAssets);
             SampleStorage storage = player.map(FirmwareRequest::storage).orElse(SampleStorage.UNPACKED);
             long soundBytes = storage.bytes(r.emitted().length(), r.plan().bits());
-            summaries.add(build.summary(r, List.of(), soundBytes, assets, r.warnings(), r.stageMillis()));
+            summaries.add(build.summary(r, List.of(), soundBytes, soundAssets, r.warnings(), r.stageMillis()));
         }
         return writeReports(project, shared, summaries, emitted, files);
     }

@@ -28,6 +28,7 @@ import org.rungtone.internal.Units;
 import org.rungtone.ladder.LevelTable;
 import org.rungtone.quantize.Codes;
 import org.rungtone.quantize.Quantizer;
+import org.rungtone.report.SoundPlots;
 import org.rungtone.source.Signal;
 
 /**
@@ -56,14 +57,21 @@ public final class SoundRenderer {
 
     private final OutputSpan span;
     private final Consumer<String> progress;
+    private final Consumer<SoundPlots.Data> analysed;
 
     /**
      * A renderer whose compensated quantization maps full scale onto {@code span} of the board's levels, and
      * that tells {@code progress} the name of every stage it finishes ("open", "condition", ...).
      */
     public SoundRenderer(OutputSpan span, Consumer<String> progress) {
+        this(span, progress, data -> { });
+    }
+
+    /** The same, handing {@code analysed} what the plots draw as soon as it is known (the preview may be busy). */
+    SoundRenderer(OutputSpan span, Consumer<String> progress, Consumer<SoundPlots.Data> analysed) {
         this.span = span;
         this.progress = progress;
+        this.analysed = analysed;
     }
 
     /**
@@ -160,6 +168,7 @@ public final class SoundRenderer {
             tone = Optional.of(ToneAnalysis.analyze(out, toneSpectrum.get()));
         }
         watch.lap("analyze");
+        analysed.accept(plotData(plan, Optional.ofNullable(figures.errorSpectrum()), cutoff, toneSpectrum, tone));
         AnalogModel.Preview preview = Jobs.join(previewJob);
         watch.lap("preview");
         List<QualityReport> quality = figures.quality();
@@ -174,6 +183,13 @@ public final class SoundRenderer {
                 quality, figures.shapingGainDb(), tone, preview, figures.errorSpectrum(), toneSpectrum,
                 cutoff, cases.clipped(), settings(plan, prepared.layout(), conditioned, cases.played(), rate,
                         cases.range()), warnings, watch.laps(), loop.map(AutoLoop.Placed::loop));
+    }
+
+    /** What the plots of a sound draw. */
+    static SoundPlots.Data plotData(BuildPlan plan, Optional<Spectrum> errorSpectrum, double inBandCutoffHz,
+            Optional<Spectrum> toneSpectrum, Optional<ToneReport> tone) {
+        return new SoundPlots.Data(plan.symbol(), plan.bits(), plan.quantize().dither(),
+                plan.quantize().shaping().order() > 0, errorSpectrum, inBandCutoffHz, toneSpectrum, tone);
     }
 
     /** Quantizes onto the ideal ladder and, with a board, onto its real levels when compensating. */
