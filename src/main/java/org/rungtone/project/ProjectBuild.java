@@ -357,12 +357,14 @@ public final class ProjectBuild {
                 shared.settings(), summaries, emitted.firmwareLines(), emitted.flashBytes(), budget, files, warnings);
         Result result = new Result(outDir, summaries, emitted.firmwareLines(), emitted.flashBytes(),
                 shared.settings(), files, warnings, in);
-        AtomicFiles.writeString(txt, ProjectReport.text(in));
-        Json.write(json, ProjectReport.json(in));
-        HtmlReport.write(html, new HtmlReport.Page(project.name() + " (" + project.file().getFileName() + ")",
-                toolVersion, HtmlReport.Setting.of(shared.settings()), summaries, List.of(), emitted.flashBytes(),
-                budget > 0 ? OptionalLong.of(budget) : OptionalLong.empty(), ProjectReport.warningsOf(in),
-                Optional.empty(), files));
+        // the page (with its embedded plots) is written on another core while the text and JSON reports are
+        Jobs.alongside(() -> {
+            AtomicFiles.writeString(txt, ProjectReport.text(in));
+            Json.write(json, ProjectReport.json(in));
+        }, () -> HtmlReport.write(html, new HtmlReport.Page(project.name() + " (" + project.file().getFileName()
+                + ")", toolVersion, HtmlReport.Setting.of(shared.settings()), summaries, List.of(),
+                emitted.flashBytes(), budget > 0 ? OptionalLong.of(budget) : OptionalLong.empty(),
+                ProjectReport.warningsOf(in), Optional.empty(), files)));
         return result;
     }
 
