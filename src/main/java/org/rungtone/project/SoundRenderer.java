@@ -57,21 +57,48 @@ public final class SoundRenderer {
 
     private final OutputSpan span;
     private final Consumer<String> progress;
-    private final Consumer<SoundPlots.Data> analysed;
+    private final Early early;
 
     /**
      * A renderer whose compensated quantization maps full scale onto {@code span} of the board's levels, and
      * that tells {@code progress} the name of every stage it finishes ("open", "condition", ...).
      */
     public SoundRenderer(OutputSpan span, Consumer<String> progress) {
-        this(span, progress, data -> { });
+        this(span, progress, new Early() { });
     }
 
-    /** The same, handing {@code analysed} what the plots draw as soon as it is known (the preview may be busy). */
-    SoundRenderer(OutputSpan span, Consumer<String> progress, Consumer<SoundPlots.Data> analysed) {
+    /** The same, handing {@code early} what the outputs hold as soon as it is known (the figures may be busy). */
+    SoundRenderer(OutputSpan span, Consumer<String> progress, Early early) {
         this.span = span;
         this.progress = progress;
-        this.analysed = analysed;
+        this.early = early;
+    }
+
+    /**
+     * Told what a sound's outputs hold as soon as it is known, while the rest of the sound renders, so that
+     * they can be written on another core meanwhile.
+     */
+    interface Early {
+        /** The codes to store, known before any figure of them. */
+        default void coded(Coded coded) {
+        }
+
+        /** What the plots draw, known while the preview and the listener figures still render. */
+        default void analysed(SoundPlots.Data data) {
+        }
+    }
+
+    /**
+     * What the firmware of one sound holds.
+     *
+     * @param plan the plan it came from
+     * @param rateHz the target rate
+     * @param emitted the codes the firmware holds
+     * @param settings "key: value" lines for the C header comment
+     * @param autoLoop the loop found in the sound, when its loop is auto (the codes hold its crossfades)
+     */
+    record Coded(BuildPlan plan, double rateHz, Codes emitted, List<String> settings,
+            Optional<SeamlessLoop> autoLoop) {
     }
 
     /**
@@ -102,6 +129,11 @@ public final class SoundRenderer {
             Optional<ToneReport> tone, AnalogModel.Preview preview, Spectrum errorSpectrum,
             Optional<Spectrum> toneSpectrum, double inBandCutoffHz, long clippedSamples, List<String> settings,
             List<String> warnings, Map<String, Double> stageMillis, Optional<SeamlessLoop> autoLoop) {
+
+        /** What the sound's firmware holds. */
+        Coded coded() {
+            return new Coded(plan, rateHz, emitted, settings, autoLoop);
+        }
     }
 
     /** The codes of every ladder case and how they use the range. */
@@ -138,15 +170,9 @@ public final class SoundRenderer {
         reference = loop.map(AutoLoop.Placed::signal).orElse(reference);
         Cases cases = quantize(plan, reference);
         watch.lap("quantize");
-        if (cases.clipped() > 0) {
-            warnings.add(cases.clipped() + " samples were beyond full scale and clipped");
-        }
-        CodeUse use = cases.emittedUse();
-        if (use.shapingOverloads()) {
-            warnings.add(String.format(Locale.ROOT, "noise shaping overloaded the quantizer on %.2f %% of the"
-                    + " samples (its input went past the end levels), which adds distortion; lower the level",
-                    100 * use.overloadFraction()));
-        }
+        warnings.addAll(codeWarnings(cases));
+        List<String> settings = settings(plan, prepared.layout(), conditioned, cases.played(), rate, cases.range());
+        early.coded(new Coded(plan, rate, cases.emitted(), settings, loop.map(AutoLoop.Placed::loop)));
         // The preview is independent of the figures: render it on another core meanwhile. With an automatic
         // loop it plays the loop several times, so the listener figures render the stored codes on their own.
         CompletableFuture<AnalogModel.Preview> previewJob = startPreview(plan, AutoLoop.previewed(cases.emitted(),
@@ -168,7 +194,7 @@ public final class SoundRenderer {
             tone = Optional.of(ToneAnalysis.analyze(out, toneSpectrum.get()));
         }
         watch.lap("analyze");
-        analysed.accept(plotData(plan, Optional.ofNullable(figures.errorSpectrum()), cutoff, toneSpectrum, tone));
+        early.analysed(plotData(plan, Optional.ofNullable(figures.errorSpectrum()), cutoff, toneSpectrum, tone));
         AnalogModel.Preview preview = Jobs.join(previewJob);
         watch.lap("preview");
         List<QualityReport> quality = figures.quality();
@@ -181,8 +207,22 @@ public final class SoundRenderer {
         }
         return new Rendered(plan, prepared.layout(), rate, conditioned, cases.emitted(), cases.played(),
                 quality, figures.shapingGainDb(), tone, preview, figures.errorSpectrum(), toneSpectrum,
-                cutoff, cases.clipped(), settings(plan, prepared.layout(), conditioned, cases.played(), rate,
-                        cases.range()), warnings, watch.laps(), loop.map(AutoLoop.Placed::loop));
+                cutoff, cases.clipped(), settings, warnings, watch.laps(), loop.map(AutoLoop.Placed::loop));
+    }
+
+    /** What the user should know about how the emitted codes came out. */
+    private static List<String> codeWarnings(Cases cases) {
+        List<String> warnings = new ArrayList<>();
+        if (cases.clipped() > 0) {
+            warnings.add(cases.clipped() + " samples were beyond full scale and clipped");
+        }
+        CodeUse use = cases.emittedUse();
+        if (use.shapingOverloads()) {
+            warnings.add(String.format(Locale.ROOT, "noise shaping overloaded the quantizer on %.2f %% of the"
+                    + " samples (its input went past the end levels), which adds distortion; lower the level",
+                    100 * use.overloadFraction()));
+        }
+        return warnings;
     }
 
     /** What the plots of a sound draw. */

@@ -2,9 +2,11 @@ package org.rungtone.project;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalDouble;
 import org.junit.jupiter.api.Test;
@@ -14,7 +16,9 @@ import org.rungtone.report.SoundPlots;
 import org.rungtone.source.Signal;
 import org.rungtone.source.WavWriter;
 
-class EarlyPlotsTest {
+class EarlyOutputsTest {
+    private static final Build.Emitted NOTHING = new Build.Emitted(List.of(), List.of(), List.of(), 0);
+
     @TempDir
     Path dir;
 
@@ -34,9 +38,9 @@ class EarlyPlotsTest {
     void plotsDrawnWhileTheSoundRendersEqualPlotsDrawnAfterwards() throws Exception {
         BuildPlan plan = BuildPlan.builder(tone(), "tone", dir.resolve("out")).bits(6)
                 .rateHz(OptionalDouble.of(16_000)).build();
-        EarlyPlots early = new EarlyPlots(Files.createDirectories(dir.resolve("early")));
+        EarlyOutputs early = new EarlyOutputs(Files.createDirectories(dir.resolve("early")), c -> NOTHING);
         SoundRenderer.Rendered r = new SoundRenderer(OutputSpan.FULL, stage -> { }, early).render(plan);
-        List<Path> drawnEarly = early.files();
+        List<Path> drawnEarly = early.plots();
         List<Path> drawnLate = SoundPlots.write(Files.createDirectories(dir.resolve("late")), Build.plotData(r),
                 SoundPlots.Scales.none());
         assertEquals(List.of("error-spectrum.png", "spectrum.png"),
@@ -48,7 +52,23 @@ class EarlyPlotsTest {
     }
 
     @Test
+    void theCodesHandedOnEarlyAreTheRenderedSoundsCodes() {
+        BuildPlan plan = BuildPlan.builder(tone(), "tone", dir.resolve("out")).bits(6)
+                .rateHz(OptionalDouble.of(16_000)).build();
+        List<SoundRenderer.Coded> handed = new ArrayList<>();
+        EarlyOutputs early = new EarlyOutputs(dir, c -> {
+            handed.add(c);
+            return NOTHING;
+        });
+        SoundRenderer.Rendered r = new SoundRenderer(OutputSpan.FULL, stage -> { }, early).render(plan);
+        assertEquals(NOTHING, early.firmware());
+        assertEquals(List.of(r.coded()), handed);
+    }
+
+    @Test
     void noFiguresNoPlots() {
-        assertEquals(List.of(), new EarlyPlots(dir).files());
+        EarlyOutputs early = new EarlyOutputs(dir, c -> NOTHING);
+        assertEquals(List.of(), early.plots());
+        assertThrows(IllegalStateException.class, early::firmware);
     }
 }
