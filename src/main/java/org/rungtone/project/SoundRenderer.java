@@ -22,6 +22,7 @@ import org.rungtone.calibrate.OutputSpan;
 import org.rungtone.condition.Conditioner;
 import org.rungtone.condition.Conditioning;
 import org.rungtone.condition.KaiserResampler;
+import org.rungtone.internal.FileNames;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.Units;
 import org.rungtone.ladder.LevelTable;
@@ -307,7 +308,7 @@ public final class SoundRenderer {
         QuantizeSettings q = plan.quantize();
         return List.of(
                 "name: " + plan.symbol(),
-                "source: " + plan.source().file().getFileName() + " (" + layout + ")",
+                "source: " + FileNames.display(plan.source().file()) + " (" + layout + ")",
                 "conditioning: " + describe(plan, c),
                 "target: " + plan.bits() + " bits at " + Units.format(rate, "Hz"),
                 "dither: " + q.dither().label() + ", shaping: " + q.shaping().name() + ", seed: " + q.seed(),

@@ -3,6 +3,7 @@ package org.rungtone.project;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
+import org.rungtone.internal.FileNames;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.OutputFolder;
 import org.rungtone.internal.Units;
@@ -40,15 +41,17 @@ public final class Sources {
     }
 
     /**
-     * Opens a .wav file for reading by range (mixed down, or one channel), or renders a .rung script (at
-     * {@code scriptRateHz}, or its own declared rate when that is NaN).
+     * Opens a .wav file for reading by range (mixed down, or one channel), a WAV file on standard input for
+     * the path {@code -}, or renders a .rung script (at {@code scriptRateHz}, or its own declared rate when
+     * that is NaN).
      *
      * @throws InputError naming the file for anything unreadable
      */
     public static Opened open(Path source, int channel, double scriptRateHz, long seed) {
         String name = source.getFileName() == null ? "" : source.getFileName().toString().toLowerCase(Locale.ROOT);
-        if (name.endsWith(".wav") || name.endsWith(".wave")) {
-            WavReader.Stream w = WavReader.open(OutputFolder.staged(source), channel);
+        boolean stdin = FileNames.isStandardInput(source);
+        if (stdin || name.endsWith(".wav") || name.endsWith(".wave")) {
+            WavReader.Stream w = WavReader.open(stdin ? source : OutputFolder.staged(source), channel);
             String layout = w.format().describe() + (w.format().channels() > 1
                     ? (channel == 0 ? ", mixed down" : ", channel " + channel) : "");
             return new Opened(w, layout, w.warnings(), Double.NaN, false);

@@ -8,6 +8,7 @@ import java.util.Locale;
 import java.util.Map;
 import org.rungtone.analysis.QualityReport;
 import org.rungtone.analysis.ToneReport;
+import org.rungtone.internal.FileNames;
 import org.rungtone.internal.Units;
 
 /** Renders a {@link BuildSummary} as text for people and as JSON for machines. */
@@ -45,7 +46,7 @@ public final class BuildReport {
 
     private static TextTable settings(BuildSummary s) {
         TextTable t = new TextTable("setting", "value");
-        t.row("source", s.source().getFileName() + "  (" + s.sourceLayout() + ")");
+        t.row("source", FileNames.display(s.source()) + "  (" + s.sourceLayout() + ")");
         t.row("conditioning", s.conditioning());
         t.row("resampler", s.resampler());
         t.row("target", s.bits() + " bits at " + Units.format(s.rateHz(), "Hz") + ", "

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.rungtone.analysis.QualityReport;
+import org.rungtone.internal.FileNames;
 
 /** The report of a whole project: effective settings, every sound's figures, firmware and total flash. */
 public final class ProjectReport {
@@ -49,7 +50,7 @@ public final class ProjectReport {
                 "A-wtd SNR dB", FigureText.ENOB_FULL_SCALE, FigureText.LISTENER_SNR + " dB");
         for (BuildSummary x : in.sounds()) {
             QualityReport q = x.emitted();
-            t.row(x.symbol(), x.source().getFileName(), String.format(Locale.ROOT, "%.0f", x.rateHz()),
+            t.row(x.symbol(), FileNames.display(x.source()), String.format(Locale.ROOT, "%.0f", x.rateHz()),
                     x.samples(), String.format(Locale.ROOT, "%.3f", x.durationSeconds()), q.label(),
                     f1(q.sinadDb()), f1(q.aWeightedSnrDb()), FigureText.f2(q.enobFullScaleBits()),
                     q.listener().map(l -> f1(l.snrDb())).orElse("-"));

@@ -7,6 +7,7 @@ import java.util.Locale;
 import java.util.Map;
 import org.rungtone.analysis.QualityReport;
 import org.rungtone.analysis.ToneReport;
+import org.rungtone.internal.FileNames;
 import org.rungtone.internal.Units;
 import org.rungtone.report.HtmlReport.Setting;
 
@@ -18,7 +19,7 @@ final class SoundTables {
     /** How the sound was built. */
     static List<Setting> settings(BuildSummary s) {
         List<Setting> rows = new ArrayList<>();
-        rows.add(new Setting("source", s.source().getFileName() + " (" + s.sourceLayout() + ")"));
+        rows.add(new Setting("source", FileNames.display(s.source()) + " (" + s.sourceLayout() + ")"));
         rows.add(new Setting("conditioning", s.conditioning()));
         rows.add(new Setting("resampler", s.resampler()));
         rows.add(new Setting("target", s.bits() + " bits at " + Units.format(s.rateHz(), "Hz") + ", "

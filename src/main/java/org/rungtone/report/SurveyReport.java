@@ -13,6 +13,7 @@ import java.util.Optional;
 import org.rungtone.analysis.SurveyResult;
 import org.rungtone.analysis.SurveyRow;
 import org.rungtone.analysis.SurveyTarget;
+import org.rungtone.internal.FileNames;
 
 /**
  * Renders a {@link SurveyResult} as a text table for people and as JSON for machines (stable field names,
@@ -60,10 +61,10 @@ public final class SurveyReport {
     /** The whole text report: settings, the table, the recommendation, files and warnings. */
     public static String text(SurveyResult result, Context c) {
         StringBuilder b = new StringBuilder();
-        b.append("Rungtone ").append(c.toolVersion()).append(" survey: ").append(fileName(c.source()))
+        b.append("Rungtone ").append(c.toolVersion()).append(" survey: ").append(FileNames.display(c.source()))
                 .append("\n\n");
         TextTable t = new TextTable("item", "value");
-        t.row("source", fileName(c.source()) + "  (" + c.sourceLayout() + ")");
+        t.row("source", FileNames.display(c.source()) + "  (" + c.sourceLayout() + ")");
         t.row("conditioning", c.conditioning());
         t.row("resampler", c.resampler());
         t.row("levels", c.levels());
@@ -252,9 +253,5 @@ public final class SurveyReport {
 
     private static String plain(double v) {
         return BigDecimal.valueOf(v).round(new MathContext(9)).stripTrailingZeros().toPlainString();
-    }
-
-    private static String fileName(Path p) {
-        return p.getFileName() == null ? p.toString() : p.getFileName().toString();
     }
 }

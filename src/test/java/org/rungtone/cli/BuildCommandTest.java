@@ -84,8 +84,8 @@ class BuildCommandTest {
                 Arguments.of("notriff.wav", "just some text, no audio".getBytes(), List.of(), "is not a WAV file"),
                 Arguments.of("trunc.wav", new byte[] {'R', 'I', 'F', 'F', 0, 0, 0, 0, 'W', 'A', 'V', 'E', 'f', 'm'},
                         List.of(), "has no fmt chunk (truncated header?)"),
-                Arguments.of("alaw.wav", WavFixtures.wav().layout(WavFixtures.Layout.U8, 1, 8000, new double[] {0})
-                        .tag(6).bytes(), List.of(), "uses format tag 0x0006 (A-law)"),
+                Arguments.of("adpcm.wav", WavFixtures.wav().layout(WavFixtures.Layout.U8, 1, 8000, new double[] {0})
+                        .tag(0x11).bytes(), List.of(), "uses format tag 0x0011 (IMA ADPCM)"),
                 Arguments.of("nochan.wav", WavFixtures.wav().layout(WavFixtures.Layout.S16, 1, 8000,
                         new double[] {0}).channels(0).blockAlign(2).bytes(), List.of(), "says it has 0 channels"),
                 Arguments.of("rate.wav", WavFixtures.wav().layout(WavFixtures.Layout.S16, 1, 8000,
