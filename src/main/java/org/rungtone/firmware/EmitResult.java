@@ -14,9 +14,10 @@ import java.util.Optional;
  * @param timer the solved timer, when the target programs one (or a hint for generic when a timer is named)
  * @param pinStrategy the strategy used for the pins
  * @param warnings problems that do not stop the build
+ * @param facts the report's facts as values, for machine-readable reports
  */
 public record EmitResult(List<Path> files, List<String> report, long flashBytes, Optional<TimerSetting> timer,
-        PinStrategy pinStrategy, List<String> warnings) {
+        PinStrategy pinStrategy, List<String> warnings, FirmwareFacts facts) {
     /** Copies the lists. */
     public EmitResult {
         files = List.copyOf(files);

@@ -29,6 +29,7 @@ import org.rungtone.ladder.LevelTable;
 import org.rungtone.quantize.Codes;
 import org.rungtone.quantize.ErrorFilter;
 import org.rungtone.quantize.Quantizer;
+import org.rungtone.report.SourceFacts;
 import org.rungtone.source.Signal;
 
 /**
@@ -72,6 +73,7 @@ public final class SoundRenderer {
      *
      * @param plan the plan it came from
      * @param layout the source's description
+     * @param source what was read, as values
      * @param rateHz the target rate
      * @param conditioned what conditioning did
      * @param emitted the codes the firmware holds
@@ -88,7 +90,7 @@ public final class SoundRenderer {
      * @param warnings what the user should know
      * @param stageMillis timings so far
      */
-    public record Rendered(BuildPlan plan, String layout, double rateHz, Conditioner.Conditioned conditioned,
+    public record Rendered(BuildPlan plan, String layout, SourceFacts source, double rateHz, Conditioner.Conditioned conditioned,
             Codes emitted, LevelTable played, List<QualityReport> quality, Optional<Double> shapingGainDb,
             Optional<ToneReport> tone, AnalogModel.Preview preview, Spectrum errorSpectrum,
             Optional<Spectrum> toneSpectrum, double inBandCutoffHz, long clippedSamples, List<String> settings,
@@ -166,7 +168,7 @@ public final class SoundRenderer {
             quality.set(last, quality.get(last).withListener(heard.get()));
             watch.lap("listener");
         }
-        return new Rendered(plan, prepared.layout(), rate, conditioned, cases.emitted(), cases.played(),
+        return new Rendered(plan, prepared.layout(), prepared.source(), rate, conditioned, cases.emitted(), cases.played(),
                 quality, figures.shapingGainDb(), tone, preview, figures.errorSpectrum(), toneSpectrum,
                 cutoff, cases.clipped(), settings(plan, prepared.layout(), conditioned, cases.played(), rate,
                         cases.range()), warnings, watch.laps());
@@ -249,8 +251,8 @@ public final class SoundRenderer {
      * The source's description, the conditioned reference, the target rate and the source as supplied for
      * the listener figures (none for a wavetable, which has no rate of its own).
      */
-    private record Prepared(String layout, List<String> warnings, Conditioner.Conditioned conditioned,
-            double rateHz, Optional<ListenerMetrics> listener) {
+    private record Prepared(String layout, SourceFacts source, List<String> warnings,
+            Conditioner.Conditioned conditioned, double rateHz, Optional<ListenerMetrics> listener) {
     }
 
     /**
@@ -280,7 +282,7 @@ public final class SoundRenderer {
                 listener = listener(opened.samples(), conditioned, cs, model);
             }
             watch.lap("condition");
-            return new Prepared(opened.layout(), opened.warnings(), conditioned, rate, listener);
+            return new Prepared(opened.layout(), opened.facts(), opened.warnings(), conditioned, rate, listener);
         }
     }
 

@@ -7,6 +7,7 @@ import org.rungtone.internal.FileNames;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.OutputFolder;
 import org.rungtone.internal.Units;
+import org.rungtone.report.SourceFacts;
 import org.rungtone.script.RungScript;
 import org.rungtone.source.SampleSource;
 import org.rungtone.source.Signal;
@@ -26,9 +27,10 @@ public final class Sources {
      * @param warnings non-fatal problems
      * @param preferredRateHz the rate the source asks to be played at (a script's declared rate), NaN if none
      * @param wavetable true for a single-cycle wavetable: no resampling, trimming or fades apply
+     * @param facts what was read, as values for machine-readable reports
      */
     public record Opened(SampleSource samples, String layout, List<String> warnings, double preferredRateHz,
-            boolean wavetable) implements AutoCloseable {
+            boolean wavetable, SourceFacts facts) implements AutoCloseable {
         /** Copies the warnings. */
         public Opened {
             warnings = List.copyOf(warnings);
@@ -54,7 +56,7 @@ public final class Sources {
             WavReader.Stream w = WavReader.open(stdin ? source : OutputFolder.staged(source), channel);
             String layout = w.format().describe() + (w.format().channels() > 1
                     ? (channel == 0 ? ", mixed down" : ", channel " + channel) : "");
-            return new Opened(w, layout, w.warnings(), Double.NaN, false);
+            return new Opened(w, layout, w.warnings(), Double.NaN, false, SourceFacts.wav(source, w.format(), channel));
         }
         if (name.endsWith(".rung")) {
             RungScript script = RungScript.load(OutputFolder.staged(source));
@@ -63,8 +65,9 @@ public final class Sources {
                     ? String.format(Locale.ROOT, "rung script, clip of %.3f s rendered at %s", script.durationSeconds(),
                             Units.format(s.sampleRateHz(), "Hz"))
                     : "rung script, single-cycle wavetable of " + script.tableLength() + " samples";
+            boolean wavetable = script.kind() == RungScript.Kind.WAVETABLE;
             return new Opened(SampleSource.of(s), layout, List.of(), script.declaredRateHz().orElse(Double.NaN),
-                    script.kind() == RungScript.Kind.WAVETABLE);
+                    wavetable, SourceFacts.script(source, wavetable, s.sampleRateHz(), s.length()));
         }
         throw InputError.inFile(source, "is not a source Rungtone reads; give a .wav file or a .rung script");
     }

@@ -37,13 +37,14 @@ import org.rungtone.analysis.ToneReport;
  * @param files files written, in order
  * @param warnings what the user should know
  * @param stageMillis wall-clock milliseconds per stage, in pipeline order
+ * @param facts what the report states beyond its figures, as values for the JSON report
  */
 public record BuildSummary(String toolVersion, Path source, String sourceLayout, String symbol, int bits,
         double rateHz, int samples, double durationSeconds, String dither, String shaping, long seed,
         String conditioning, String resampler, String ladder, long clippedSamples, List<QualityReport> quality,
         String emittedCase, Optional<Double> shapingGainDb, Optional<ToneReport> tone, PreviewInfo preview,
         List<String> firmware, long flashBytes, List<Path> files, List<String> warnings,
-        Map<String, Double> stageMillis) {
+        Map<String, Double> stageMillis, BuildFacts facts) {
 
     /** Copies the collections. */
     public BuildSummary {

@@ -65,7 +65,8 @@ class BuildCommandTest {
         Cli.Run r = Cli.run("build", fixture().toString(), "--bits", "10", "--dither", "none", "--json",
                 "--out", out.toString());
         assertEquals(0, r.exitCode(), r.err());
-        double snr = Double.parseDouble(r.out().replaceAll("(?s).*\"snr_db\": ([0-9.]+).*", "$1"));
+        double snr = com.google.gson.JsonParser.parseString(r.out()).getAsJsonObject().getAsJsonObject("tone")
+                .get("snr_db").getAsDouble();
         // Bennett 1948: 6.02*10 + 1.76 = 61.96 dB for a full-scale sine; normalized to -1 dBFS it is 1 dB less.
         assertEquals(61.96 - 1, snr, 1.0);
     }
@@ -149,8 +150,11 @@ class BuildCommandTest {
         Cli.Run r = Cli.run("build", project.toString(), "--dds-frequency", "440", "--out",
                 dir.resolve("bg").toString(), "--json");
         assertEquals(0, r.exitCode(), r.err());
-        assertTrue(r.out().contains("32-bit phase accumulator"), r.out());
-        assertTrue(r.out().contains("440 Hz requested"), r.out());
+        com.google.gson.JsonObject dds = com.google.gson.JsonParser.parseString(r.out()).getAsJsonObject()
+                .getAsJsonObject("firmware").getAsJsonObject("dds");
+        assertEquals(32, dds.get("phase_bits").getAsInt());
+        assertEquals(440, dds.get("requested_hz").getAsDouble(), 0);
+        assertTrue(Files.readString(dir.resolve("bg").resolve("report.txt")).contains("32-bit phase accumulator"));
     }
 
     @Test

@@ -103,10 +103,22 @@ class ProjectBuildTest {
         Cli.Run r = Cli.run("build", g.resolve("greenhouse.toml").toString(), "--out", out.toString(), "--bits",
                 "5", "--dither", "none", "--target", "generic", "--pins", "PA0-PA4", "--json");
         assertEquals(0, r.exitCode(), r.err());
-        assertTrue(r.out().contains("\"bits\": \"5  (command line)\""), r.out());
-        assertTrue(r.out().contains("\"dither\": \"none  (command line)\""), r.out());
-        assertTrue(r.out().contains("\"seed\": \"1  (project file)\""), r.out());
-        assertTrue(r.out().contains("\"shaping\": \"none  (default)\""), r.out());
+        // each setting's value and origin are fields of their own
+        com.google.gson.JsonObject settings = com.google.gson.JsonParser.parseString(r.out()).getAsJsonObject()
+                .getAsJsonObject("settings");
+        assertEquals(5, settings.getAsJsonObject("bits").get("value").getAsInt());
+        assertEquals("command_line", settings.getAsJsonObject("bits").get("origin").getAsString());
+        assertEquals("none", settings.getAsJsonObject("dither").get("value").getAsString());
+        assertEquals("command_line", settings.getAsJsonObject("dither").get("origin").getAsString());
+        assertEquals(1, settings.getAsJsonObject("seed").get("value").getAsLong());
+        assertEquals("project_file", settings.getAsJsonObject("seed").get("origin").getAsString());
+        assertEquals("none", settings.getAsJsonObject("shaping").get("value").getAsString());
+        assertEquals("default", settings.getAsJsonObject("shaping").get("origin").getAsString());
+        assertEquals("generic", settings.getAsJsonObject("target").get("value").getAsString());
+        assertEquals("command_line", settings.getAsJsonObject("target").get("origin").getAsString());
+        assertEquals("PA0-PA4", settings.getAsJsonObject("pins").get("value").getAsString());
+        assertTrue(Files.readString(out.resolve("report.txt")).matches("(?s).*\\n  bits +5  \\(command line\\)\\n.*"),
+                "the text report keeps its words");
         assertTrue(Files.readString(out.resolve("greenhouse.h")).contains("generic"));
     }
 
