@@ -232,6 +232,35 @@ class JsonSchemaTest {
                 .add("enob_bits", new JsonPrimitive(5)));
     }
 
+    /** docs/json.md names every field of every schema. */
+    @Test
+    void everySchemaFieldIsDocumented() throws IOException {
+        String doc = Files.readString(Path.of("docs", "json.md"));
+        List<String> missing = new ArrayList<>();
+        try (Stream<Path> files = Files.list(JsonSchemas.FOLDER)) {
+            for (Path f : files.sorted().toList()) {
+                collectUndocumented(JsonParser.parseString(Files.readString(f)), doc, missing);
+            }
+        }
+        assertEquals(List.of(), missing);
+    }
+
+    private static void collectUndocumented(JsonElement e, String doc, List<String> missing) {
+        if (e.isJsonArray()) {
+            e.getAsJsonArray().forEach(x -> collectUndocumented(x, doc, missing));
+        } else if (e.isJsonObject()) {
+            JsonObject o = e.getAsJsonObject();
+            if (o.has("properties")) {
+                for (String key : o.getAsJsonObject("properties").keySet()) {
+                    if (!doc.contains("`" + key + "`")) {
+                        missing.add(key);
+                    }
+                }
+            }
+            o.entrySet().forEach(x -> collectUndocumented(x.getValue(), doc, missing));
+        }
+    }
+
     private static JsonObject sound(JsonObject project) {
         return project.getAsJsonArray("sounds").get(0).getAsJsonObject();
     }
