@@ -211,8 +211,9 @@ public record FirmwareFacts(String name, String family, OptionalDouble cpuClockH
             return Optional.empty();
         }
         DdsSpec d = p.request.dds();
-        return Optional.of(new Oscillator(d.phaseBits(), p.samples.length, Dds.resolutionHz(p.tickRateHz, d.phaseBits()),
-                d.frequencyHz(), p.ddsTuningWord, Dds.actualHz(p.ddsTuningWord, p.tickRateHz, d.phaseBits())));
+        return Optional.of(new Oscillator(d.phaseBits(), p.samples.length,
+                Dds.resolutionHz(p.tickRateHz, d.phaseBits()), d.frequencyHz(), p.ddsTuningWord,
+                Dds.actualHz(p.ddsTuningWord, p.tickRateHz, d.phaseBits())));
     }
 
     private static Optional<Sweep> sweep(EmitPlan p) {

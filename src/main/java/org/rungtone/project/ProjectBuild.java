@@ -38,8 +38,8 @@ import org.rungtone.report.BuildSummary;
 import org.rungtone.report.HtmlReport;
 import org.rungtone.report.Json;
 import org.rungtone.report.ProjectReport;
-import org.rungtone.report.ProjectSetting.Origin;
 import org.rungtone.report.ProjectSetting;
+import org.rungtone.report.ProjectSetting.Origin;
 
 /**
  * Builds every sound of a {@link Project} into one coherent set of outputs: one header exposing all sounds,
@@ -357,7 +357,7 @@ public final class ProjectBuild {
         AtomicFiles.writeString(txt, ProjectReport.text(in));
         Json.write(json, ProjectReport.json(in));
         HtmlReport.write(html, new HtmlReport.Page(project.name() + " (" + project.file().getFileName() + ")",
-                toolVersion, HtmlReport.Setting.of(ProjectSetting.texts(shared.settings())), summaries, List.of(), emitted.flashBytes(),
+                toolVersion, HtmlReport.Setting.of(result.settings()), summaries, List.of(), emitted.flashBytes(),
                 budget > 0 ? OptionalLong.of(budget) : OptionalLong.empty(), ProjectReport.warningsOf(in),
                 Optional.empty()));
         return result;

@@ -90,11 +90,11 @@ public final class SoundRenderer {
      * @param warnings what the user should know
      * @param stageMillis timings so far
      */
-    public record Rendered(BuildPlan plan, String layout, SourceFacts source, double rateHz, Conditioner.Conditioned conditioned,
-            Codes emitted, LevelTable played, List<QualityReport> quality, Optional<Double> shapingGainDb,
-            Optional<ToneReport> tone, AnalogModel.Preview preview, Spectrum errorSpectrum,
-            Optional<Spectrum> toneSpectrum, double inBandCutoffHz, long clippedSamples, List<String> settings,
-            List<String> warnings, Map<String, Double> stageMillis) {
+    public record Rendered(BuildPlan plan, String layout, SourceFacts source, double rateHz,
+            Conditioner.Conditioned conditioned, Codes emitted, LevelTable played, List<QualityReport> quality,
+            Optional<Double> shapingGainDb, Optional<ToneReport> tone, AnalogModel.Preview preview,
+            Spectrum errorSpectrum, Optional<Spectrum> toneSpectrum, double inBandCutoffHz, long clippedSamples,
+            List<String> settings, List<String> warnings, Map<String, Double> stageMillis) {
     }
 
     /** The codes of every ladder case and how they use the range. */
@@ -168,8 +168,8 @@ public final class SoundRenderer {
             quality.set(last, quality.get(last).withListener(heard.get()));
             watch.lap("listener");
         }
-        return new Rendered(plan, prepared.layout(), prepared.source(), rate, conditioned, cases.emitted(), cases.played(),
-                quality, figures.shapingGainDb(), tone, preview, figures.errorSpectrum(), toneSpectrum,
+        return new Rendered(plan, prepared.layout(), prepared.source(), rate, conditioned, cases.emitted(),
+                cases.played(), quality, figures.shapingGainDb(), tone, preview, figures.errorSpectrum(), toneSpectrum,
                 cutoff, cases.clipped(), settings(plan, prepared.layout(), conditioned, cases.played(), rate,
                         cases.range()), warnings, watch.laps());
     }
