@@ -1,6 +1,5 @@
 package org.rungtone.cli;
 
-import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
@@ -82,6 +81,9 @@ public final class CalibrateCommand implements Runnable {
         @Mixin
         CalibrationFolder output;
 
+        @Option(names = "--json", description = "Print JSON instead of text.")
+        boolean json;
+
         @Override
         public Integer call() {
             codes.check();
@@ -99,11 +101,8 @@ public final class CalibrateCommand implements Runnable {
                 files = CalibrationFiles.writeSimulation(r, output.out);
                 folder.commit();
             }
-            PrintWriter o = spec.commandLine().getOut();
-            if (!common.quiet) {
-                o.print(CalibrationReport.simulationText(r, files));
-            }
-            o.flush();
+            common.print(spec, json, () -> CalibrationReport.simulationJson(r, files, output.out, Version.get()),
+                    () -> CalibrationReport.simulationText(r, files));
             return 0;
         }
     }

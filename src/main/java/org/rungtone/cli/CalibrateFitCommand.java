@@ -87,7 +87,8 @@ public final class CalibrateFitCommand implements Callable<Integer> {
             files = CalibrationFiles.writeProfile(r, output.out);
             folder.commit();
         }
-        common.print(spec, json, () -> Json.toJson(UnitFitReport.json(r, files)), () -> UnitFitReport.text(r, files));
+        common.print(spec, json, () -> Json.toJson(UnitFitReport.json(r, files, output.out, Version.get())),
+                () -> UnitFitReport.text(r, files));
         return 0;
     }
 

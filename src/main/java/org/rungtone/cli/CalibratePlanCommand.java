@@ -88,7 +88,7 @@ public final class CalibratePlanCommand implements Callable<Integer> {
             files = CalibrationFiles.writePlan(plan, output.out);
             folder.commit();
         }
-        common.print(spec, json, () -> Json.toJson(CalibrationReport.planJson(plan, files)),
+        common.print(spec, json, () -> Json.toJson(CalibrationReport.planJson(plan, files, output.out, Version.get())),
                 () -> CalibrationReport.planText(plan, files));
         return 0;
     }

@@ -23,11 +23,13 @@ import org.rungtone.condition.Conditioner;
 import org.rungtone.condition.Conditioning;
 import org.rungtone.condition.KaiserResampler;
 import org.rungtone.firmware.CNames;
+import org.rungtone.internal.FileNames;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.Units;
 import org.rungtone.ladder.LevelTable;
 import org.rungtone.quantize.Codes;
 import org.rungtone.quantize.Quantizer;
+import org.rungtone.report.SourceFacts;
 import org.rungtone.source.Signal;
 
 /**
@@ -72,6 +74,7 @@ public final class SoundRenderer {
      *
      * @param plan the plan it came from
      * @param layout the source's description
+     * @param source what was read, as values
      * @param rateHz the target rate
      * @param conditioned what conditioning did
      * @param emitted the codes the firmware holds
@@ -89,11 +92,12 @@ public final class SoundRenderer {
      * @param stageMillis timings so far
      * @param autoLoop the loop found in the sound, when its loop is auto (the codes hold its crossfades)
      */
-    public record Rendered(BuildPlan plan, String layout, double rateHz, Conditioner.Conditioned conditioned,
-            Codes emitted, LevelTable played, List<QualityReport> quality, Optional<Double> shapingGainDb,
-            Optional<ToneReport> tone, AnalogModel.Preview preview, Spectrum errorSpectrum,
-            Optional<Spectrum> toneSpectrum, double inBandCutoffHz, long clippedSamples, List<String> settings,
-            List<String> warnings, Map<String, Double> stageMillis, Optional<SeamlessLoop> autoLoop) {
+    public record Rendered(BuildPlan plan, String layout, SourceFacts source, double rateHz,
+            Conditioner.Conditioned conditioned, Codes emitted, LevelTable played, List<QualityReport> quality,
+            Optional<Double> shapingGainDb, Optional<ToneReport> tone, AnalogModel.Preview preview,
+            Spectrum errorSpectrum, Optional<Spectrum> toneSpectrum, double inBandCutoffHz, long clippedSamples,
+            List<String> settings, List<String> warnings, Map<String, Double> stageMillis,
+            Optional<SeamlessLoop> autoLoop) {
     }
 
     /** The codes of every ladder case and how they use the range. */
@@ -170,8 +174,8 @@ public final class SoundRenderer {
             quality.set(last, quality.get(last).withListener(heard.get()));
             watch.lap("listener");
         }
-        return new Rendered(plan, prepared.layout(), rate, conditioned, cases.emitted(), cases.played(),
-                quality, figures.shapingGainDb(), tone, preview, figures.errorSpectrum(), toneSpectrum,
+        return new Rendered(plan, prepared.layout(), prepared.source(), rate, conditioned, cases.emitted(),
+                cases.played(), quality, figures.shapingGainDb(), tone, preview, figures.errorSpectrum(), toneSpectrum,
                 cutoff, cases.clipped(), settings(plan, prepared.layout(), conditioned, cases.played(), rate,
                         cases.range()), warnings, watch.laps(), loop.map(AutoLoop.Placed::loop));
     }
@@ -224,8 +228,9 @@ public final class SoundRenderer {
      * The source's description, the conditioned reference, the target rate and the source as supplied for
      * the listener figures (none for a wavetable, which has no rate of its own).
      */
-    private record Prepared(String layout, List<String> warnings, Conditioner.Conditioned conditioned,
-            double rateHz, Optional<ListenerMetrics> listener, boolean wavetable) {
+    private record Prepared(String layout, SourceFacts source, List<String> warnings,
+            Conditioner.Conditioned conditioned, double rateHz, Optional<ListenerMetrics> listener,
+            boolean wavetable) {
     }
 
     /**
@@ -258,7 +263,7 @@ public final class SoundRenderer {
                 listener = listener(opened.samples(), conditioned, cs, model);
             }
             watch.lap("condition");
-            return new Prepared(opened.layout(), opened.warnings(), conditioned, rate, listener,
+            return new Prepared(opened.layout(), opened.facts(), opened.warnings(), conditioned, rate, listener,
                     opened.wavetable());
         }
     }
@@ -287,7 +292,7 @@ public final class SoundRenderer {
         QuantizeSettings q = plan.quantize();
         return List.of(
                 "name: " + plan.symbol(),
-                "source: " + plan.source().file().getFileName() + " (" + layout + ")",
+                "source: " + FileNames.display(plan.source().file()) + " (" + layout + ")",
                 "conditioning: " + describe(plan, c),
                 "target: " + plan.bits() + " bits at " + Units.format(rate, "Hz"),
                 "dither: " + q.dither().label() + ", shaping: " + q.shaping().name() + ", seed: " + q.seed(),

@@ -28,7 +28,9 @@ import org.rungtone.internal.SettingError;
 import org.rungtone.internal.Units;
 import org.rungtone.ladder.LevelTable;
 import org.rungtone.quantize.Codes;
+import org.rungtone.report.ConditioningFacts;
 import org.rungtone.report.Json;
+import org.rungtone.report.SourceFacts;
 import org.rungtone.report.SurveyFiles;
 import org.rungtone.report.SurveyReport;
 import org.rungtone.source.Signal;
@@ -88,7 +90,7 @@ public final class SurveyRun {
     }
 
     /** The source, the survey and the conditioned reference at every rate. */
-    private record Surveyed(String layout, List<String> sourceWarnings, SurveyResult result,
+    private record Surveyed(String layout, SourceFacts source, List<String> sourceWarnings, SurveyResult result,
             Map<Double, Conditioner.Conditioned> references) {
     }
 
@@ -149,7 +151,9 @@ public final class SurveyRun {
         SurveyReport.Context context = new SurveyReport.Context(request.output().toolVersion(), request.source(),
                 s.layout(), request.conditioning().describe(), resampler.name(), describeLevels(tables),
                 cells.dither().label(), cells.shaping().name(), cells.seed(), request.filter().describe(),
-                request.output().previews(), files, new ArrayList<>(warnings));
+                request.output().previews(), files, new ArrayList<>(warnings), new SurveyReport.Facts(s.source(),
+                ConditioningFacts.of(request.conditioning().at(cells.ratesHz().get(0))),
+                request.conditioning().resampler(), tables.lastEntry().getValue(), request.filter(), folder));
         SurveyFiles.write(folder, s.result(), context);
         long done = System.nanoTime();
         Map<String, Double> laps = new LinkedHashMap<>();
@@ -187,7 +191,7 @@ public final class SurveyRun {
             SurveyResult result = Survey.run(spec, rate -> references.computeIfAbsent(rate,
                     r -> conditioned(request, conditioner, loaded, conditionings, r)).signal(), listener,
                     (done, total) -> tell("survey", done, total));
-            return new Surveyed(loaded.layout(), loaded.warnings(), result, references);
+            return new Surveyed(loaded.layout(), loaded.facts(), loaded.warnings(), result, references);
         }
     }
 

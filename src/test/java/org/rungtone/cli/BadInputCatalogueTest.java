@@ -97,8 +97,10 @@ class BadInputCatalogueTest {
                 d -> survey(d, write(d, "rate4g.wav", wav16().rate(4_000_000_000L).bytes()))));
         c.add(bad("build: 7-bit PCM", "PCM with 7 bits per sample is not supported",
                 d -> build(d, write(d, "seven.wav", wav16().tag(1).bytes7()))));
-        c.add(bad("build: A-law encoded WAV", "uses format tag 0x0006 (A-law)",
-                d -> build(d, write(d, "alaw.wav", wav16().tag(6).bytes()))));
+        c.add(bad("build: IMA ADPCM encoded WAV", "uses format tag 0x0011 (IMA ADPCM)",
+                d -> build(d, write(d, "adpcm.wav", wav16().tag(0x11).bytes()))));
+        c.add(bad("build: 16-bit A-law WAV", "A-law with 16 bits per sample is not supported (8)",
+                d -> build(d, write(d, "alaw16.wav", wav16().tag(6).bytes()))));
         c.add(bad("build: data chunk of 0 bytes", "has no audio samples (empty data chunk)",
                 d -> build(d, write(d, "empty.wav", WavFixtures.wav().layout(Layout.S16, 1, 8000, new double[0])
                         .bytes()))));

@@ -112,12 +112,12 @@ class AutoLoopTest {
                 .getAsJsonObject("auto_loop");
         double period = loop.get("period_samples").getAsDouble();
         assertEquals(RATE / 440, period, 0.001 * RATE / 440);
-        assertEquals(loop.get("end").getAsInt() - loop.get("start").getAsInt(), loop.get("length").getAsInt());
+        assertEquals(loop.get("end_sample").getAsInt() - loop.get("start_sample").getAsInt(), loop.get("length_samples").getAsInt());
         assertTrue(loop.get("seam_db").getAsDouble() < -40);
         assertEquals(4, loop.get("preview_passes").getAsInt());
         assertTrue(Files.readString(dir.resolve("out/report.html")).contains("loop (found)"));
         Signal preview = WavReader.read(dir.resolve("out/preview.wav")).signal();
-        int length = loop.get("length").getAsInt();
+        int length = loop.get("length_samples").getAsInt();
         assertEquals((32_000 + 3.0 * length) / RATE, preview.durationSeconds(), 1e-3);
     }
 

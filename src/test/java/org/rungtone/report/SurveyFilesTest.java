@@ -16,6 +16,7 @@ import org.rungtone.analysis.SurveyRow;
 import org.rungtone.analysis.SurveyTarget;
 import org.rungtone.source.Signal;
 import org.rungtone.source.WavReader;
+import org.rungtone.testing.FactsFixture;
 
 class SurveyFilesTest {
     @TempDir
@@ -34,7 +35,7 @@ class SurveyFilesTest {
                 SurveyTarget.sinadDb(40), null, false);
         SurveyReport.Context context = new SurveyReport.Context("9.9", Path.of("chime.wav"), "PCM 16-bit",
                 "DC removed", "kaiser", "ideal", "tpdf", "none", 1, "none", false, SurveyFiles.reports(dir, result),
-                List.of());
+                List.of(), FactsFixture.survey(Path.of("chime.wav"), 8, dir));
         SurveyFiles.write(dir, result, context);
         assertEquals(SurveyReport.text(result, context), Files.readString(dir.resolve("survey.txt")));
         assertEquals(Json.toJson(SurveyReport.json(result, context)), Files.readString(dir.resolve("survey.json")));
