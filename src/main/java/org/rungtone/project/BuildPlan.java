@@ -78,6 +78,7 @@ public record BuildPlan(String symbol, Path outDir, SourceSettings source, Condi
         private Optional<LoopSpan> loop = Optional.empty();
         private OptionalLong flashBudgetBytes = OptionalLong.empty();
         private String flashQualifier = "";
+        private Optional<Path> cOutDir = Optional.empty();
 
         private Builder(Path source, String symbol, Path outDir) {
             this.source = source;
@@ -208,6 +209,12 @@ public record BuildPlan(String symbol, Path outDir, SourceSettings source, Condi
             return this;
         }
 
+        /** The folder of the C files (default: the output folder). */
+        public Builder cOutDir(Optional<Path> value) {
+            cOutDir = value;
+            return this;
+        }
+
         /**
          * The validated plan.
          *
@@ -219,7 +226,7 @@ public record BuildPlan(String symbol, Path outDir, SourceSettings source, Condi
                             fadeOutSeconds, resampler),
                     new QuantizeSettings(bits, dither, shaping, seed, board, compensation),
                     new PreviewSettings(filter, previewRateHz, previewSeconds, fullScaleVolts),
-                    new FirmwareSettings(player, loop, flashBudgetBytes, flashQualifier));
+                    new FirmwareSettings(player, loop, flashBudgetBytes, flashQualifier, cOutDir));
         }
     }
 }
