@@ -21,7 +21,6 @@ import org.rungtone.firmware.Templates;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.OutputFolder;
-import org.rungtone.report.AnalysisPlots;
 import org.rungtone.report.BuildFacts;
 import org.rungtone.report.BuildReport;
 import org.rungtone.report.BuildSummary;

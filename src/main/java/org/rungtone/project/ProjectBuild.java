@@ -38,9 +38,9 @@ import org.rungtone.report.BuildSummary;
 import org.rungtone.report.HtmlReport;
 import org.rungtone.report.Json;
 import org.rungtone.report.ProjectReport;
-import org.rungtone.report.SoundPlots;
 import org.rungtone.report.ProjectSetting;
 import org.rungtone.report.ProjectSetting.Origin;
+import org.rungtone.report.SoundPlots;
 
 /**
  * Builds every sound of a {@link Project} into one coherent set of outputs: one header exposing all sounds,
