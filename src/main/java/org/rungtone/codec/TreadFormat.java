@@ -131,9 +131,9 @@ public enum TreadFormat {
         return 2L * (maxIndex(ladderBits) + 1) + magnitudes();
     }
 
-    /** Bytes of one stored decoder state: a 16-bit predictor and an 8-bit step index. */
+    /** Bytes of one stored decoder state: the last two codes (16 bits each) and the step index (8 bits). */
     public static long stateBytes() {
-        return 3;
+        return 5;
     }
 
     /**
