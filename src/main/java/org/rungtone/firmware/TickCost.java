@@ -6,7 +6,8 @@ import java.util.Optional;
  * What one tick of an emitted player costs the CPU: the worst-case cycles of the timer interrupt, from the
  * interrupt request to the end of its return, and the glitch window, the cycles from the first port write of
  * a tick to the last. The figures come from a table measured in simulation (simavr, ATmega328P at 16 MHz,
- * avr-gcc 5.4 with {@code -Os}), taken per storage, engine and number of ladder ports as the largest value
+ * avr-gcc 5.4 with {@code -Os}), taken per storage (each Tread format on its own), engine and number of ladder
+ * ports as the largest value
  * over the pin maps, code widths and strategies measured, rounded up to a multiple of five; the simulator
  * test fails when a build measures more than its figure. Only the avr family has figures: the generic player
  * runs in the user's interrupt, and no Cortex-M simulator checks the cortexm one.
@@ -26,6 +27,16 @@ public record TickCost(int worstCycles, int windowCycles, boolean idleOff) {
         {130, 155, 170}, {225, 265, 250},
         {130, 160, 170}, {130, 160, 170},
     };
+    /**
+     * Worst cycles per tick of the Tread stores for one, two and three ladder ports. Rows: tread2, tread3 and
+     * tread4, each for the clip and then the loop engine; one port holds codes of up to 8 bits (the byte
+     * decoder), two and three ports the widest measured (the 16-bit decoder past 8 bits).
+     */
+    private static final int[][] AVR_TREAD_CYCLES = {
+        {145, 275, 350}, {150, 280, 355},
+        {180, 275, 355}, {190, 280, 360},
+        {150, 275, 350}, {155, 280, 355},
+    };
     /** Each port past the third (parts with more ports than the ATmega328P): extrapolated, not measured. */
     private static final int AVR_CYCLES_PER_EXTRA_PORT = 25;
     /** Each scatter term past one per port: the largest measured step was 16.2 cycles. */
@@ -37,8 +48,10 @@ public record TickCost(int worstCycles, int windowCycles, boolean idleOff) {
             return Optional.empty();
         }
         int ports = p.pins.ports().size();
-        int row = 2 * engineRow(p.engine) + (p.storage == SampleStorage.PACKED ? 1 : 0);
-        int cycles = AVR_CYCLES[row][Math.min(ports, 3) - 1] + AVR_CYCLES_PER_EXTRA_PORT * Math.max(0, ports - 3);
+        int[] row = p.tread != null
+                ? AVR_TREAD_CYCLES[2 * p.tread.format().ordinal() + (p.engine == PlaybackEngine.LOOP ? 1 : 0)]
+                : AVR_CYCLES[2 * engineRow(p.engine) + (p.storage == SampleStorage.PACKED ? 1 : 0)];
+        int cycles = row[Math.min(ports, 3) - 1] + AVR_CYCLES_PER_EXTRA_PORT * Math.max(0, ports - 3);
         if (p.strategy == PinStrategy.SCATTER) {
             cycles += AVR_CYCLES_PER_EXTRA_TERM * (PinCode.termCount(p.pins) - ports);
         }
