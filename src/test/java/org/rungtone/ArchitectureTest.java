@@ -34,7 +34,8 @@ import com.tngtech.archunit.lang.ArchRule;
  * <tr><td>condition</td><td>script, source, internal</td><td>source, internal</td></tr>
  * <tr><td>quantize</td><td>condition, script, source, ladder, internal</td><td>ladder, source, internal</td></tr>
  * <tr><td>codec</td><td>quantize and everything quantize may use</td><td>quantize, ladder, source, internal</td></tr>
- * <tr><td>calibrate</td><td>codec, quantize, condition, script, source, ladder, internal</td><td>ladder, internal</td></tr>
+ * <tr><td>calibrate</td><td>codec, quantize, condition, script, source, ladder, internal</td>
+ * <td>ladder, internal</td></tr>
  * <tr><td>analysis</td><td>calibrate and everything calibrate may use</td>
  * <td>codec, condition, quantize, ladder, source, internal</td></tr>
  * <tr><td>firmware</td><td>analysis and everything analysis may use</td><td>codec, quantize, internal</td></tr>

@@ -1,6 +1,7 @@
 package org.rungtone.codec;
 
 import org.rungtone.internal.Checks;
+import org.rungtone.internal.Setting;
 import org.rungtone.quantize.Codes;
 import org.rungtone.quantize.Quantizer;
 import org.rungtone.source.Signal;
@@ -88,11 +89,14 @@ public final class TreadEncoder {
     /**
      * Encodes a signal.
      *
-     * @throws IllegalArgumentException when the signal is empty
+     * @throws org.rungtone.internal.SettingError when the signal is shorter than one block
+     *     ({@value TreadFormat#BLOCK_CODES} samples)
      */
     public Encoded encode(Signal signal) {
         double[] x = signal.unsafeSamples();
-        Checks.checkArgument(x.length > 0, "nothing to encode: the signal is empty");
+        Setting.STORAGE.check(x.length >= TreadFormat.BLOCK_CODES, "%s needs at least one block of %d samples;"
+                + " the sound has %d; use a longer sound, or %s packed", format.optionName(),
+                TreadFormat.BLOCK_CODES, x.length, Setting.STORAGE.ref());
         TreadDecoder decoder = new TreadDecoder(format, quantizer.table().bits());
         long seed = quantizer.seed();
         TreadSearch.Result best = new TreadSearch(decoder, quantizer, weighting, width, depth).run(x, 1, seed);

@@ -181,11 +181,11 @@ final class EmitReport {
         if (p.tread != null) {
             double seconds = p.samples.length / p.requestedRateHz;
             long bytes = p.sampleBytes + p.decoderBytes();
-            return String.format(Locale.ROOT, "storage: %s: %s bytes of stream + %s bytes of decoder tables and %d"
-                    + " reset points for %s samples (%.2f s): %.3f s per kilobyte (%s: %s bytes, %.3f s per"
-                    + " kilobyte)", p.storage.describe(p.bits), Fmt.bytes(p.sampleBytes), Fmt.bytes(p.decoderBytes()),
-                    p.tread.resets().size(), Fmt.bytes(p.samples.length), seconds, 1000 * seconds / bytes,
-                    other.describe(p.bits), Fmt.bytes(otherBytes), 1000 * seconds / otherBytes);
+            return String.format(Locale.ROOT, "storage: %s: %s bytes of stream + %s bytes of decoder tables and %s"
+                    + " for %s samples (%.2f s): %.3f s per kilobyte (%s: %s bytes, %.3f s per kilobyte)",
+                    p.storage.describe(p.bits), Fmt.bytes(p.sampleBytes), Fmt.bytes(p.decoderBytes()),
+                    count(p.tread.resets().size(), "reset point"), Fmt.bytes(p.samples.length), seconds,
+                    1000 * seconds / bytes, other.describe(p.bits), Fmt.bytes(otherBytes), 1000 * seconds / otherBytes);
         }
         return "storage: " + p.storage.describe(p.bits) + ", " + Fmt.bytes(p.sampleBytes) + " bytes for "
                 + Fmt.bytes(p.samples.length) + " samples (" + other.describe(p.bits) + ": "

@@ -19,6 +19,7 @@ import org.rungtone.analysis.Spectrum;
 import org.rungtone.analysis.ToneAnalysis;
 import org.rungtone.analysis.ToneReport;
 import org.rungtone.calibrate.OutputSpan;
+import org.rungtone.codec.TreadStream;
 import org.rungtone.condition.Conditioner;
 import org.rungtone.condition.Conditioning;
 import org.rungtone.condition.KaiserResampler;
@@ -86,18 +87,19 @@ public final class SoundRenderer {
      * @param settings "key: value" lines for the C header comment
      * @param warnings what the user should know
      * @param stageMillis timings so far
+     * @param stream the Tread stream the emitted codes decode from, for a Tread store
      */
     public record Rendered(BuildPlan plan, String layout, double rateHz, Conditioner.Conditioned conditioned,
             Codes emitted, LevelTable played, List<QualityReport> quality, Optional<Double> shapingGainDb,
             Optional<ToneReport> tone, AnalogModel.Preview preview, Spectrum errorSpectrum,
             Optional<Spectrum> toneSpectrum, double inBandCutoffHz, long clippedSamples, List<String> settings,
-            List<String> warnings, Map<String, Double> stageMillis) {
+            List<String> warnings, Map<String, Double> stageMillis, Optional<TreadStream> stream) {
     }
 
     /** The codes of every ladder case and how they use the range. */
     private record Cases(Quantizer.Quantized ideal, LevelTable idealTable, Codes emitted, LevelTable played,
             long clipped, Optional<Codes> compensated, double[] range, CodeUse idealUse,
-            Optional<CodeUse> compensatedUse) {
+            Optional<CodeUse> compensatedUse, Optional<TreadStream> stream) {
 
         /** How the emitted codes use the range. */
         CodeUse emittedUse() {
@@ -127,7 +129,8 @@ public final class SoundRenderer {
         }
         List<String> warnings = new ArrayList<>(prepared.warnings());
         warnings.addAll(conditioned.warnings());
-        Cases cases = quantize(plan, reference);
+        Coding coding = Coding.of(plan, rate, model.inBandTopHz(rate));
+        Cases cases = quantize(plan, reference, coding);
         watch.lap("quantize");
         if (cases.clipped() > 0) {
             warnings.add(cases.clipped() + " samples were beyond full scale and clipped");
@@ -146,7 +149,7 @@ public final class SoundRenderer {
         // in-band figures stop where the analog output's passband does (rate/2, or a lower filter cutoff),
         // and at 20 kHz: the one definition the survey uses too
         double cutoff = model.inBandTopHz(rate);
-        Figures figures = measure(plan, reference, cases, cutoff);
+        Figures figures = measure(plan, reference, cases, cutoff, coding);
         Optional<ToneReport> tone = Optional.empty();
         Optional<Spectrum> toneSpectrum = Optional.empty();
         if (isTone(reference)) {
@@ -168,30 +171,34 @@ public final class SoundRenderer {
         return new Rendered(plan, prepared.layout(), rate, conditioned, cases.emitted(), cases.played(),
                 quality, figures.shapingGainDb(), tone, preview, figures.errorSpectrum(), toneSpectrum,
                 cutoff, cases.clipped(), settings(plan, prepared.layout(), conditioned, cases.played(), rate,
-                        cases.range()), warnings, watch.laps());
+                        cases.range()), warnings, watch.laps(), cases.stream());
     }
 
-    /** Quantizes onto the ideal ladder and, with a board, onto its real levels when compensating. */
-    private Cases quantize(BuildPlan plan, Signal reference) {
+    /**
+     * Quantizes (or, for a Tread store, encodes) onto the ideal ladder and, with a board, onto its real levels
+     * when compensating.
+     */
+    private Cases quantize(BuildPlan plan, Signal reference, Coding coding) {
         QuantizeSettings q = plan.quantize();
         LevelTable ideal = LevelTable.ideal(plan.bits(), plan.preview().fullScaleVolts());
-        Quantizer idealQuantizer = quantizer(ideal, plan);
-        Quantizer.Quantized idealQ = idealQuantizer.apply(reference);
-        CodeUse idealUse = CodeUse.of(idealQuantizer, idealQ);
+        Coding.Coded idealC = coding.apply(quantizer(ideal, plan), reference);
+        Quantizer.Quantized idealQ = idealC.quantized();
+        CodeUse idealUse = idealC.use();
         if (q.board().isEmpty()) {
             return new Cases(idealQ, ideal, idealQ.codes(), ideal, idealQ.clippedSamples(), Optional.empty(),
-                    new double[] {ideal.minVolts(), ideal.maxVolts()}, idealUse, Optional.empty());
+                    new double[] {ideal.minVolts(), ideal.maxVolts()}, idealUse, Optional.empty(), idealC.stream());
         }
         LevelTable board = q.board().get();
         if (!q.compensate()) {
             return new Cases(idealQ, ideal, idealQ.codes(), board, idealQ.clippedSamples(), Optional.empty(),
-                    new double[] {board.minVolts(), board.maxVolts()}, idealUse, Optional.empty());
+                    new double[] {board.minVolts(), board.maxVolts()}, idealUse, Optional.empty(), idealC.stream());
         }
         double[] range = span.volts(board, ideal);
-        Quantizer compensating = new Quantizer(board, range[0], range[1], q.dither(), q.shaping(), q.seed());
-        Quantizer.Quantized c = compensating.apply(reference);
+        Coding.Coded comp = coding.apply(new Quantizer(board, range[0], range[1], q.dither(), q.shaping(),
+                q.seed()), reference);
+        Quantizer.Quantized c = comp.quantized();
         return new Cases(idealQ, ideal, c.codes(), board, c.clippedSamples(), Optional.of(c.codes()), range,
-                idealUse, Optional.of(CodeUse.of(compensating, c)));
+                idealUse, Optional.of(comp.use()), comp.stream());
     }
 
     /** Starts rendering the preview of the emitted codes (its first seconds) on another core. */
@@ -210,24 +217,27 @@ public final class SoundRenderer {
     }
 
     /** The quality figures of every ladder case and the shaping gain. */
-    private static Figures measure(BuildPlan plan, Signal reference, Cases cases, double cutoff) {
+    private static Figures measure(BuildPlan plan, Signal reference, Cases cases, double cutoff, Coding coding) {
         AudioMetrics metrics = AudioMetrics.of(reference, cutoff);
+        // a Tread store's cases are what its decoder puts out
+        String codec = coding.codec().map(f -> ", " + f.optionName()).orElse("");
         List<QualityReport> quality = new ArrayList<>();
         Codes idealCodes = cases.ideal().codes();
         LevelTable played = cases.played();
         Spectrum errorSpectrum;
         CodeUse idealUse = cases.idealUse();
         if (plan.quantize().board().isEmpty()) {
-            AudioMetrics.Measured m = metrics.measureWithSpectrum("ideal ladder", idealCodes, cases.idealTable());
+            AudioMetrics.Measured m = metrics.measureWithSpectrum("ideal ladder" + codec, idealCodes,
+                    cases.idealTable());
             quality.add(m.report().withCodeUse(idealUse));
             errorSpectrum = m.errorSpectrum();
         } else {
-            quality.add(metrics.measure("ideal ladder", idealCodes, cases.idealTable()).withCodeUse(idealUse));
-            AudioMetrics.Measured plain = metrics.measureWithSpectrum("board, plain codes", idealCodes, played);
+            quality.add(metrics.measure("ideal ladder" + codec, idealCodes, cases.idealTable()).withCodeUse(idealUse));
+            AudioMetrics.Measured plain = metrics.measureWithSpectrum("board, plain codes" + codec, idealCodes, played);
             quality.add(plain.report().withCodeUse(idealUse));
             errorSpectrum = plain.errorSpectrum();
             if (cases.compensated().isPresent()) {
-                AudioMetrics.Measured comp = metrics.measureWithSpectrum("board, compensated",
+                AudioMetrics.Measured comp = metrics.measureWithSpectrum("board, compensated" + codec,
                         cases.compensated().get(), played);
                 quality.add(comp.report().withCodeUse(cases.compensatedUse().orElseThrow()));
                 errorSpectrum = comp.errorSpectrum();
@@ -238,7 +248,8 @@ public final class SoundRenderer {
         if (q.shaping().order() > 0) {
             double[] range = cases.range();
             Quantizer flat = new Quantizer(played, range[0], range[1], q.dither(), ErrorFilter.NONE, q.seed());
-            double flatInBand = metrics.measure("flat", flat.apply(reference).codes(), played).inBandSnrDb();
+            double flatInBand = metrics.measure("flat", coding.apply(flat, reference).quantized().codes(), played)
+                    .inBandSnrDb();
             shapingGain = Optional.of(quality.get(quality.size() - 1).inBandSnrDb() - flatInBand);
         }
         return new Figures(quality, errorSpectrum, shapingGain);

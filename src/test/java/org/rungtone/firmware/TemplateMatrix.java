@@ -9,8 +9,8 @@ import org.rungtone.quantize.Codes;
  * The requests that exercise every template of a family: contiguous, scattered, multi-port and wide pin maps
  * (plus forced strategies), packed and unpacked storage and one Tread store per pin case (tread2, tread3 and
  * tread4 in turn, clip and loop engines: Tread cannot serve the dds engine), every engine, the sweep with and
- * without a button, and the family's timers in turn. Each request has its own symbol prefix ({@code c000}, {@code c001}, ...),
- * so one family's files can be compiled in one run.
+ * without a button, and the family's timers in turn. Each request has its own symbol prefix ({@code c000},
+ * {@code c001}, ...), so one family's files can be compiled in one run.
  */
 final class TemplateMatrix {
     /** Engine and storage combinations per pin case: three engines twice, two sweeps, two Tread engines. */
