@@ -137,6 +137,20 @@ public enum TreadFormat {
     }
 
     /**
+     * Bytes of the decoder's tables in a Rungtone player for {@code ladderBits}-bit codes: up to 8 bits one
+     * table of a difference and the next row (a byte each) per step index and magnitude, 2·M·(kmax + 1);
+     * past 8 bits the step table and the adaptation table ({@link #tableBytes}).
+     */
+    public long playerTableBytes(int ladderBits) {
+        return ladderBits <= 8 ? 2L * magnitudes() * (maxIndex(ladderBits) + 1) : tableBytes(ladderBits);
+    }
+
+    /** Bytes of one reset point in a Rungtone player: three bytes up to 8-bit codes, else {@link #stateBytes}. */
+    public static long resetBytes(int ladderBits) {
+        return ladderBits <= 8 ? 3 : stateBytes();
+    }
+
+    /**
      * Parses the option spelling.
      *
      * @throws IllegalArgumentException when the text names no format

@@ -60,10 +60,8 @@ record TreadPlan(TreadFormat format, int[] codes, List<TreadState> resets, boole
                 resets.add(s.stream().orElseThrow().stateAt(s.loopStart()));
             }
         }
-        boolean compact = bits <= 8;
-        long table = compact ? 2L * format.magnitudes() * (format.maxIndex(bits) + 1) : format.tableBytes(bits);
-        long tables = table + (compact ? 3 : TreadFormat.stateBytes()) * resets.size();
-        return new TreadPlan(format, codes, List.copyOf(resets), compact, tables);
+        long tables = format.playerTableBytes(bits) + TreadFormat.resetBytes(bits) * resets.size();
+        return new TreadPlan(format, codes, List.copyOf(resets), bits <= 8, tables);
     }
 
     /** The packed stream: code i at stream bits i·b .. i·b + b − 1, LSB first. */

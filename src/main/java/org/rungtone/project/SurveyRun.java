@@ -163,7 +163,7 @@ public final class SurveyRun {
         SurveyRequest.Choice choice = request.choice();
         SurveySpec.Builder b = SurveySpec.builder().bitDepths(cells.bitDepths()).ratesHz(cells.ratesHz())
                 .dither(cells.dither()).shaping(cells.shaping()).seed(cells.seed()).tables(tables::get)
-                .inBandCutoffHz(model::inBandTopHz).packed(choice.packed());
+                .inBandCutoffHz(model::inBandTopHz).packed(choice.packed()).codecs(choice.codecs());
         choice.flashBudgetBytes().ifPresent(b::flashBudgetBytes);
         choice.target().ifPresent(b::target);
         return b.build();
@@ -178,7 +178,7 @@ public final class SurveyRun {
         double maxRate = spec.ratesHz().stream().max(Double::compare).orElseThrow();
         Map<Double, Conditioner.Conditioned> references = new ConcurrentHashMap<>();
         try (Sources.Opened loaded = Sources.open(request.source(), request.channel(), maxRate, spec.seed())) {
-            tell("survey", 0, spec.bitDepths().size() * spec.ratesHz().size());
+            tell("survey", 0, Survey.cellCount(spec));
             SurveyResult result = Survey.run(spec, rate -> {
                 Conditioner.Conditioned c = conditioner.apply(loaded.samples(), conditionings.get(rate));
                 if (c.signal().length() < MIN_SAMPLES) {
@@ -209,7 +209,7 @@ public final class SurveyRun {
         return s.result().rows().parallelStream().mapToDouble(row -> {
             LevelTable table = tables.get(row.bits());
             Signal reference = s.references().get(row.rateHz()).signal();
-            Codes codes = Survey.quantize(spec, reference, table).codes();
+            Codes codes = Survey.codes(spec, reference, table, row.codec()).codes();
             AnalogModel.Preview p = model.render(codes, table);
             SurveyFiles.writePreview(folder, row, p.signal());
             tell("previews", done.incrementAndGet(), total);

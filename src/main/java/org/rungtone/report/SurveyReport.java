@@ -54,7 +54,8 @@ public final class SurveyReport {
 
     /** The preview file of a cell, e.g. {@code b06-r16000.wav} (rate in hertz, without trailing zeros). */
     public static String previewFileName(SurveyRow row) {
-        return String.format(Locale.ROOT, "b%02d-r%s.wav", row.bits(), plain(row.rateHz()));
+        return String.format(Locale.ROOT, "b%02d-r%s%s.wav", row.bits(), plain(row.rateHz()),
+                row.codec().map(f -> "-" + f.optionName()).orElse(""));
     }
 
     /** The whole text report: settings, the table, the recommendation, files and warnings. */
@@ -98,6 +99,11 @@ public final class SurveyReport {
     public static String table(SurveyResult result) {
         List<String> header = new ArrayList<>(List.of("bits", "rate", "SINAD dB", "in-band SNR dB",
                 "A-wtd SNR dB", "ENOB re FS", "flash bytes", "packed bytes", "fits"));
+        // a survey of Tread stores names each row's store; its bytes fill both byte columns
+        boolean stores = result.rows().stream().anyMatch(r -> r.codec().isPresent());
+        if (stores) {
+            header.add(2, "storage");
+        }
         boolean hasTarget = result.target() != null;
         boolean hasChoice = result.chosen().isPresent();
         if (hasTarget) {
@@ -112,6 +118,9 @@ public final class SurveyReport {
                     fixed(r.sinadDb(), 1), fixed(r.inBandSnrDb(), 1), fixed(r.aWeightedSnrDb(), 1),
                     fixed(r.enobFullScaleBits(), 2), String.format(Locale.ROOT, "%,d", r.flashBytesUnpacked()),
                     String.format(Locale.ROOT, "%,d", r.flashBytesPacked()), yesNo(r.fits())));
+            if (stores) {
+                cells.add(2, storage(r));
+            }
             if (hasTarget) {
                 cells.add(yesNo(r.reachesTarget()));
             }
@@ -132,10 +141,10 @@ public final class SurveyReport {
         Optional<SurveyRow> chosen = result.chosen();
         if (chosen.isPresent()) {
             SurveyRow c = chosen.get();
-            return String.format(Locale.ROOT, "Recommended: %d bits at %s (SINAD %s dB, ENOB re full scale %s bits,"
+            return String.format(Locale.ROOT, "Recommended: %d bits at %s%s (SINAD %s dB, ENOB re full scale %s bits,"
                     + " %s).",
-                    c.bits(), khz(c.rateHz()), fixed(c.sinadDb(), 1), fixed(c.enobFullScaleBits(), 2),
-                    bytes(result.packed() ? c.flashBytesPacked() : c.flashBytesUnpacked(), result.packed()));
+                    c.bits(), khz(c.rateHz()), c.codec().map(f -> " stored as " + f.optionName()).orElse(""),
+                    fixed(c.sinadDb(), 1), fixed(c.enobFullScaleBits(), 2), bytes(c, result.packed()));
         }
         if (target == null) {
             return "No target given, so nothing is recommended; give a SINAD or ENOB target.";
@@ -145,9 +154,9 @@ public final class SurveyReport {
         if (reaching.isPresent() && result.flashBudgetBytes() != null) {
             SurveyRow r = reaching.get();
             return String.format(Locale.ROOT, "Nothing reaches %s within the %s budget; the smallest setting"
-                    + " that reaches it, %d bits at %s, needs %s.", target.describe(),
+                    + " that reaches it, %d bits at %s%s, needs %s.", target.describe(),
                     bytes(result.flashBudgetBytes(), result.packed()), r.bits(), khz(r.rateHz()),
-                    bytes(counted(r, result.packed()), result.packed()));
+                    r.codec().map(f -> " as " + f.optionName()).orElse(""), bytes(r, result.packed()));
         }
         SurveyRow best = result.rows().stream().max(Comparator.comparingDouble(r ->
                 target.kind() == SurveyTarget.Kind.SINAD_DB ? r.sinadDb() : r.enobFullScaleBits())).orElseThrow();
@@ -216,6 +225,7 @@ public final class SurveyReport {
         m.put("fits", r.fits());
         m.put("reaches_target", r.reachesTarget());
         m.put("chosen", r.chosen());
+        r.codec().ifPresent(f -> m.put("storage", f.optionName()));
         if (previews) {
             m.put("preview", "previews/" + previewFileName(r));
         }
@@ -228,6 +238,16 @@ public final class SurveyReport {
 
     private static String bytes(long n, boolean packed) {
         return String.format(Locale.ROOT, "%,d bytes %s", n, packed ? "bit-packed" : "unpacked");
+    }
+
+    /** A row's counted bytes in words: bit-packed or unpacked for the plain codes, else its Tread store's. */
+    private static String bytes(SurveyRow r, boolean packed) {
+        return r.codec().isEmpty() ? bytes(counted(r, packed), packed)
+                : String.format(Locale.ROOT, "%,d bytes as %s", r.flashBytesPacked(), r.codec().get().optionName());
+    }
+
+    private static String storage(SurveyRow r) {
+        return r.codec().map(f -> f.optionName()).orElse("plain");
     }
 
     private static String yesNo(boolean b) {

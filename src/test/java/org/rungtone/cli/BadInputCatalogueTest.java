@@ -248,8 +248,9 @@ class BadInputCatalogueTest {
                 d -> build(d, script(d, "organ.rung", "wavetable 256 samples\nout sine(1Hz)\n"), "--target",
                         "generic", "--pins", "PB0-PB5", "--bits", "6", "--engine", "dds", "--storage", "tread2")));
         c.add(bad("project: Tread above its ladder limit", "p.toml:10: quantize.bits: 13 is above the 12-bit limit of"
-                + " tread2 storage; use at most 12 bits, or target.storage packed", d -> project(d, "[project]\nname = \"bench\"\nout = \"out\"\n\n[target]\n"
-                        + "pins = \"PB0-PB7,PC0-PC4\"\nstorage = \"tread2\"\n\n[quantize]\nbits = 13\n\n"
+                + " tread2 storage; use at most 12 bits, or target.storage packed", d -> project(d,
+                        "[project]\nname = \"bench\"\nout = \"out\"\n\n[target]\npins = \"PB0-PB7,PC0-PC4\"\n"
+                        + "storage = \"tread2\"\n\n[quantize]\nbits = 13\n\n"
                         + "[[sound]]\nname = \"tone\"\nsource = \"tone.wav\"\n")));
     }
 

@@ -11,6 +11,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import org.junit.jupiter.api.Test;
 import org.rungtone.analysis.SurveyResult;
 import org.rungtone.analysis.SurveyRow;
@@ -30,7 +31,7 @@ class SurveyReportTest {
         int n = (int) rate;
         return new SurveyRow(bits, rate, n, sinad, sinad + 0.5, sinad - 0.3, (sinad - 1.76) / 6.02, 0,
                 SurveyRow.unpackedBytes(n, bits), SurveyRow.packedBytes(n, bits), fits, reaches, chosen, Double.NaN,
-                Double.NaN);
+                Double.NaN, Optional.empty());
     }
 
     private static SurveyReport.Context context(boolean previews) {
