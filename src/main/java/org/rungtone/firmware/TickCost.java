@@ -29,13 +29,15 @@ public record TickCost(int worstCycles, int windowCycles, boolean idleOff) {
     };
     /**
      * Worst cycles per tick of the Tread stores for one, two and three ladder ports. Rows: tread2, tread3 and
-     * tread4, each for the clip and then the loop engine; one port holds codes of up to 8 bits (the byte
-     * decoder), two and three ports the widest measured (the 16-bit decoder past 8 bits).
+     * tread4, each for the clip and then the loop engine. One port holds codes of up to 8 bits (the byte
+     * decoder); two ports are the widest measured (11 bits, the 16-bit decoder); three ports the largest of
+     * the measured ones (6 bits in lookup tables; 12 bits scattered, less their extra terms) and of two ports
+     * and one more port write (30), since three ports of codes past 8 bits were not measured on their own.
      */
     private static final int[][] AVR_TREAD_CYCLES = {
-        {145, 275, 350}, {150, 280, 355},
-        {180, 275, 355}, {190, 280, 360},
-        {150, 275, 350}, {155, 280, 355},
+        {145, 245, 275}, {150, 245, 275},
+        {180, 270, 300}, {180, 275, 305},
+        {150, 245, 275}, {150, 250, 280},
     };
     /** Each port past the third (parts with more ports than the ATmega328P): extrapolated, not measured. */
     private static final int AVR_CYCLES_PER_EXTRA_PORT = 25;
