@@ -12,8 +12,8 @@ import org.rungtone.source.Signal;
 /**
  * How a sound's codes are made with a quantizer: by the quantizer itself, or, for a Tread store, by the Tread
  * encoder through it, whose codes are what the decoder makes of the stream (so every figure, the preview and
- * every plot describe the decoder's output). The encoder weighs its error A-weighted plus plain, the plain part
- * stopping where the in-band figures do ({@link Weighting}).
+ * every plot describe the decoder's output). The encoder weighs its error A-weighted (low-passed where the
+ * in-band figures stop, when a reconstruction filter sets that below rate/2) plus plain ({@link Weighting}).
  */
 final class Coding {
     private final Optional<TreadFormat> codec;
