@@ -163,7 +163,7 @@ class SurveyCommandTest {
         assertEquals(List.of("bits", "rate_hz", "samples", "sinad_db", "in_band_snr_db", "a_weighted_snr_db",
                 "enob_full_scale_bits", "heard_signal_to_error_db", "heard_a_weighted_signal_to_error_db",
                 "clipped_samples", "flash_bytes_unpacked", "flash_bytes_packed", "fits", "reaches_target", "chosen",
-                "preview"), new ArrayList<>(row.keySet()));
+                "storage", "preview"), new ArrayList<>(row.keySet()));
     }
 
     @Test
