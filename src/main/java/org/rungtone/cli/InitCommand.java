@@ -4,6 +4,7 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Optional;
 import java.util.concurrent.Callable;
+import org.rungtone.cli.shell.Choices;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.project.StarterProject;
 import picocli.CommandLine.Command;
@@ -32,10 +33,11 @@ public final class InitCommand implements Callable<Integer> {
     Path file;
 
     @Option(names = "--target", paramLabel = "generic|avr|cortexm|rp2040", defaultValue = "generic",
-            description = "Target family (default ${DEFAULT-VALUE}).")
+            completionCandidates = Choices.Targets.class, description = "Target family (default ${DEFAULT-VALUE}).")
     String target;
 
     @Option(names = "--topology", paramLabel = "weighted|r2r", defaultValue = "r2r",
+            completionCandidates = Choices.StarterTopologies.class,
             description = "Ladder topology (default ${DEFAULT-VALUE}).")
     String topology;
 

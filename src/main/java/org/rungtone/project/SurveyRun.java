@@ -31,6 +31,7 @@ import org.rungtone.quantize.Codes;
 import org.rungtone.report.Json;
 import org.rungtone.report.SurveyFiles;
 import org.rungtone.report.SurveyReport;
+import org.rungtone.source.SampleSource;
 import org.rungtone.source.Signal;
 
 /**
@@ -44,6 +45,8 @@ public final class SurveyRun {
     static final double PREVIEW_RATE_HZ = 44_100;
     /** Fewest samples a cell needs for its quality figures. */
     static final int MIN_SAMPLES = 16;
+    /** The first decode's progress is told in thousandths of the source. */
+    private static final int PER_MILLE = 1000;
 
     private final Progress progress;
 
@@ -56,7 +59,8 @@ public final class SurveyRun {
         /**
          * Called as work finishes, from worker threads but never concurrently.
          *
-         * @param label what is being done: "survey" (the cells), then "previews"
+         * @param label what is being done: "reading" (the first decode of the source, in thousandths of it),
+         *     "survey" (the cells), then "previews"
          * @param done items finished so far
          * @param total items of that kind
          */
@@ -179,21 +183,22 @@ public final class SurveyRun {
         double maxRate = spec.ratesHz().stream().max(Double::compare).orElseThrow();
         Map<Double, Conditioner.Conditioned> references = new ConcurrentHashMap<>();
         try (Sources.Opened loaded = Sources.open(request.source(), request.channel(), maxRate, spec.seed())) {
-            tell("survey", 0, spec.bitDepths().size() * spec.ratesHz().size());
             // The highest rate first: its trim tells which stretch of the source the listener figures compare.
-            Conditioner.Conditioned top = conditioned(request, conditioner, loaded, conditionings, maxRate);
+            Conditioner.Conditioned top = conditioned(request, conditioner, new ReadShare(loaded.samples(),
+                    share -> tell("reading", (int) Math.round(share * PER_MILLE), PER_MILLE)), conditionings, maxRate);
+            tell("survey", 0, spec.bitDepths().size() * spec.ratesHz().size());
             references.put(maxRate, top);
             ListenerMetrics listener = listener(request, loaded, top, model);
             SurveyResult result = Survey.run(spec, rate -> references.computeIfAbsent(rate,
-                    r -> conditioned(request, conditioner, loaded, conditionings, r)).signal(), listener,
+                    r -> conditioned(request, conditioner, loaded.samples(), conditionings, r)).signal(), listener,
                     (done, total) -> tell("survey", done, total));
             return new Surveyed(loaded.layout(), loaded.warnings(), result, references);
         }
     }
 
     private static Conditioner.Conditioned conditioned(SurveyRequest request, Conditioner conditioner,
-            Sources.Opened loaded, Map<Double, Conditioning> conditionings, double rate) {
-        Conditioner.Conditioned c = conditioner.apply(loaded.samples(), conditionings.get(rate));
+            SampleSource samples, Map<Double, Conditioning> conditionings, double rate) {
+        Conditioner.Conditioned c = conditioner.apply(samples, conditionings.get(rate));
         if (c.signal().length() < MIN_SAMPLES) {
             throw tooShort(request.source(), c.signal().length(), rate);
         }
