@@ -66,7 +66,8 @@ public final class ProgressMeter implements AutoCloseable {
     /**
      * Shows how far {@code task} has got: {@code fraction} of it is done (0..1, NaN when unknown) and
      * {@code detail} says what it is at ("" for nothing). The time left is estimated from when the task
-     * began, so a new task starts a new estimate. Any thread may call this.
+     * began, so a new task starts a new estimate; within a task the share shown never goes back. Any thread may
+     * call this.
      */
     public synchronized void show(String task, String detail, double fraction) {
         if (!on || closed) {
@@ -74,8 +75,12 @@ public final class ProgressMeter implements AutoCloseable {
         }
         long now = nanoClock.getAsLong();
         if (!task.equals(this.task)) {
+            // the first task began with the command; a later one with its first report
+            taskStart = this.task.isEmpty() ? start : now;
             this.task = task;
-            taskStart = now;
+        } else if (fraction < this.fraction) {
+            // workers on other threads report out of turn now and then: the share shown never goes back
+            fraction = this.fraction;
         }
         this.detail = detail;
         this.fraction = fraction;

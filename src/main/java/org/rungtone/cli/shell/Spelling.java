@@ -16,11 +16,12 @@ final class Spelling {
 
     /**
      * The known words closest to {@code typed}, in their given order, at most a couple of edits away (one for
-     * words of four letters or fewer); empty when none is close.
+     * words of four letters or fewer, none for a single letter); empty when none is close.
      */
     static List<String> nearest(String typed, Collection<String> known) {
         String t = bare(typed);
-        int limit = t.length() <= 4 ? 1 : 2;
+        // one edit in a short word, two in a longer one, and never a word with no letter right
+        int limit = Math.min(t.length() <= 4 ? 1 : 2, t.length() - 1);
         int best = limit + 1;
         List<String> found = new ArrayList<>();
         for (String word : known) {
@@ -29,7 +30,7 @@ final class Spelling {
                 best = d;
                 found.clear();
             }
-            if (d == best) {
+            if (d == best && d <= limit) {
                 found.add(word);
             }
         }
