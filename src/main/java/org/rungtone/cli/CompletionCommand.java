@@ -16,8 +16,8 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "completion",
         header = "Print a bash, zsh or fish completion script.", mixinStandardHelpOptions = true,
-        description = {"Print a completion script for bash, zsh or fish, generated from Rungtone's own commands",
-            "and options. Load it in the current shell, or save it where your shell loads completions."},
+        description = "Print a completion script for bash, zsh or fish, generated from Rungtone's own commands"
+            + " and options. Load it in the current shell, or save it where your shell loads completions.",
         footerHeading = "%nExamples:%n",
         footer = {"  source <(rungtone completion bash)",
             "  rungtone completion zsh > ~/.zfunc/_rungtone      (a folder on $fpath)",

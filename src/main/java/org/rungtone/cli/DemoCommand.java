@@ -18,9 +18,9 @@ import picocli.CommandLine.Spec;
 /** {@code rungtone demo}: builds the bundled greenhouse scenario end to end. */
 @Command(name = "demo",
         header = "Build the bundled greenhouse example end to end.", mixinStandardHelpOptions = true,
-        description = {"Build the bundled example: a greenhouse controller (8-bit AVR) that plays a door chime",
-            "and a looping frost alarm through a 6-bit R-2R ladder of 5 %% resistors on pins PD2-PD7,",
-            "compensated with the board's measured levels (a simulated calibration).",
+        description = {"Build the bundled example: a greenhouse controller (8-bit AVR) that plays a door chime"
+            + " and a looping frost alarm through a 6-bit R-2R ladder of 5 %% resistors on pins PD2-PD7,"
+            + " compensated with the board's measured levels (a simulated calibration).",
             "The scenario's files are copied next to the outputs so you can change and rebuild them."},
         footerHeading = "%nExample:%n",
         footer = {"  rungtone demo --out /tmp/demo",

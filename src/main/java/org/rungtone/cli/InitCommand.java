@@ -16,10 +16,11 @@ import picocli.CommandLine.Spec;
 /** {@code rungtone init}: writes a commented starter project file. */
 @Command(name = "init",
         header = "Write a commented starter project file.", mixinStandardHelpOptions = true,
-        description = {"Write a commented starter project file for a target family and ladder. It asks nothing:",
-            "every choice is an option, and the file explains each key so you can edit it."},
+        description = {"Write a commented starter project file for a target family and ladder. It asks nothing:"
+            + " every choice is an option, and the file explains each key so you can edit it."},
         footerHeading = "%nExample:%n",
-        footer = {"  rungtone init doorbell.toml --target avr --topology r2r --bits 6 --name doorbell",
+        footer = {"  rungtone init doorbell.toml --target avr --topology r2r --bits 6 \\",
+            "      --name doorbell",
             "  rungtone build doorbell.toml"})
 public final class InitCommand implements Callable<Integer> {
     @Spec

@@ -32,11 +32,11 @@ import picocli.CommandLine.Spec;
 @Command(name = "survey",
         header = "Tabulate quality and flash cost over bit depths x sample rates.", mixinStandardHelpOptions = true,
         description = {"Tabulate quality and flash cost over bit depths x sample rates.",
-            "Quantizes a sound at every setting and measures SINAD, in-band and A-weighted",
-            "SNR, ENOB and what the listener hears; marks the setting with the fewest flash",
-            "bytes whose heard figures reach a target within a flash budget. Writes survey.txt,",
-            "survey.json, two plots (against bit depth and against flash bytes) and, with",
-            "--previews, a 44.1 kHz WAV per cell to listen to."},
+            "Quantizes a sound at every setting and measures SINAD, in-band and A-weighted"
+                + " SNR, ENOB and what the listener hears; marks the setting with the fewest flash"
+                + " bytes whose heard figures reach a target within a flash budget. Writes survey.txt,"
+                + " survey.json, two plots (against bit depth and against flash bytes) and, with"
+                + " --previews, a 44.1 kHz WAV per cell to listen to."},
         sortOptions = false,
         footerHeading = "%nExample:%n",
         footer = {"  rungtone survey door-chime.wav --bits-list 4..10 --rates 8k,16k \\",
