@@ -143,7 +143,8 @@ public final class SurveyCommand implements Callable<Integer> {
                 new SurveyRequest.Output(folder, previews, Version.get()));
         SurveyRun.Result result;
         try (ProgressMeter meter = ProgressMeter.onStandardError(spec.commandLine().getErr(), common.quiet)) {
-            result = new SurveyRun((step, done, total) -> meter.show(step, "", done / (double) total)).run(request);
+            result = new SurveyRun((step, done, total) -> meter.show(step, "", total == 0 ? Double.NaN
+                    : done / (double) total)).run(request);
         }
         common.print(spec, json, () -> result.json(), () -> result.text());
         if (common.verbose) {

@@ -60,9 +60,9 @@ public final class SurveyRun {
          * Called as work finishes, from worker threads but never concurrently.
          *
          * @param label what is being done: "reading" (the first decode of the source, in thousandths of it),
-         *     "survey" (the cells), then "previews"
+         *     "survey" (the cells), "previews", then "writing reports" (told once, with no count)
          * @param done items finished so far
-         * @param total items of that kind
+         * @param total items of that kind; 0 when not counted
          */
         void update(String label, int done, int total);
     }
@@ -154,6 +154,7 @@ public final class SurveyRun {
                 s.layout(), request.conditioning().describe(), resampler.name(), describeLevels(tables),
                 cells.dither().label(), cells.shaping().name(), cells.seed(), request.filter().describe(),
                 request.output().previews(), files, new ArrayList<>(warnings));
+        tell("writing reports", 0, 0);
         SurveyFiles.write(folder, s.result(), context);
         long done = System.nanoTime();
         Map<String, Double> laps = new LinkedHashMap<>();
