@@ -18,12 +18,27 @@ public final class HelpSections {
     private HelpSections() {
     }
 
+    /** The two sections this replaces; a class rather than lambdas, so a run without help links none. */
+    private enum Renderer implements CommandLine.IHelpSectionRenderer {
+        /** Positional parameters: moved under "Input" when there are headings. */
+        PARAMETERS,
+        /** Options: under their headings. */
+        OPTIONS;
+
+        @Override
+        public String render(Help help) {
+            if (this == OPTIONS) {
+                return options(help);
+            }
+            return grouped(help).isEmpty() ? help.parameterList() : "";
+        }
+    }
+
     /** Uses the headings in the help of {@code cl} and of every subcommand it has now. */
     public static void install(CommandLine cl) {
         Map<String, CommandLine.IHelpSectionRenderer> sections = cl.getHelpSectionMap();
-        sections.put(CommandLine.Model.UsageMessageSpec.SECTION_KEY_PARAMETER_LIST,
-                help -> grouped(help).isEmpty() ? help.parameterList() : "");
-        sections.put(CommandLine.Model.UsageMessageSpec.SECTION_KEY_OPTION_LIST, HelpSections::options);
+        sections.put(CommandLine.Model.UsageMessageSpec.SECTION_KEY_PARAMETER_LIST, Renderer.PARAMETERS);
+        sections.put(CommandLine.Model.UsageMessageSpec.SECTION_KEY_OPTION_LIST, Renderer.OPTIONS);
         cl.setHelpSectionMap(sections);
         for (CommandLine sub : cl.getSubcommands().values()) {
             install(sub);
