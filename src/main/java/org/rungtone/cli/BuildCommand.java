@@ -26,12 +26,12 @@ import org.rungtone.report.BuildReport;
 import org.rungtone.report.BuildSummary;
 import org.rungtone.report.Json;
 import org.rungtone.report.ProjectReport;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
-import picocli.CommandLine;
 
 /** {@code rungtone build}: one source to C files and a report. */
 @Command(name = "build",
