@@ -5,6 +5,8 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import org.rungtone.calibrate.BoardSimulation;
 import org.rungtone.calibrate.SimulatedBoard;
+import org.rungtone.cli.shell.Heading;
+import org.rungtone.cli.shell.Section;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.OutputFolder;
@@ -62,19 +64,23 @@ public final class CalibrateCommand implements Runnable {
         @Mixin
         PlanOptions codes;
 
-        @Option(names = "--seed", paramLabel = "N", defaultValue = "1",
+        @Section(Heading.MEASURING)
+    @Option(names = "--seed", paramLabel = "N", defaultValue = "1",
                 description = "Seed of the board and the meter noise (default ${DEFAULT-VALUE}).")
         long seed;
 
-        @Option(names = "--noise", paramLabel = "<volts>", converter = Converters.Volts.class,
+        @Section(Heading.MEASURING)
+    @Option(names = "--noise", paramLabel = "<volts>", converter = Converters.Volts.class,
                 defaultValue = "0.2mV", description = "The meter's rms noise (default ${DEFAULT-VALUE}).")
         double noise;
 
-        @Option(names = "--resolution", paramLabel = "<volts>", converter = Converters.Volts.class,
+        @Section(Heading.MEASURING)
+    @Option(names = "--resolution", paramLabel = "<volts>", converter = Converters.Volts.class,
                 defaultValue = "1mV", description = "The meter's step (default ${DEFAULT-VALUE}).")
         double resolution;
 
-        @Option(names = "--repeat", paramLabel = "R", defaultValue = "1",
+        @Section(Heading.MEASURING)
+    @Option(names = "--repeat", paramLabel = "R", defaultValue = "1",
                 description = "Readings per code (default ${DEFAULT-VALUE}).")
         int repeat;
 

@@ -8,6 +8,8 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 import org.rungtone.calibrate.UnitFit;
+import org.rungtone.cli.shell.Heading;
+import org.rungtone.cli.shell.Section;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.OutputFolder;
@@ -45,6 +47,7 @@ public final class CalibrateFitCommand implements Callable<Integer> {
             + " its measured column filled in, or rows of code, volts.")
     Path measurements;
 
+    @Section(Heading.LADDER)
     @Option(names = "--bits", paramLabel = "N",
             description = "Bit depth (default: the ladder's, else the width of the file's binary column).")
     Integer bits;
@@ -56,10 +59,12 @@ public final class CalibrateFitCommand implements Callable<Integer> {
             description = "The board's name in the profile and its file name (default: the readings' file name).")
     String board;
 
+    @Section(Heading.MEASURING)
     @Option(names = "--date", paramLabel = "YYYY-MM-DD",
             description = "Date of the readings (default: today).")
     String date;
 
+    @Section(Heading.MEASURING)
     @Option(names = "--resolution", paramLabel = "<volts>", converter = Converters.Volts.class,
             description = "The meter's step, e.g. 1mV (default: from the readings' last digits).")
     Double resolution;

@@ -5,6 +5,8 @@ import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.rungtone.calibrate.CodeChoice;
+import org.rungtone.cli.shell.Heading;
+import org.rungtone.cli.shell.Section;
 import org.rungtone.firmware.FirmwareRequest;
 import org.rungtone.firmware.PlaybackEngine;
 import org.rungtone.internal.AtomicFiles;
@@ -44,10 +46,12 @@ public final class CalibratePlanCommand implements Callable<Integer> {
     @Mixin
     PlanOptions codes;
 
+    @Section(Heading.FIRMWARE)
     @Option(names = "--hold", paramLabel = "<time>", converter = Converters.Seconds.class, defaultValue = "2s",
             description = "How long the sweep holds each code (default ${DEFAULT-VALUE}).")
     double holdSeconds;
 
+    @Section(Heading.FIRMWARE)
     @Option(names = "--button", paramLabel = "PIN",
             description = "Step to the next code on each press of a button on this pin (to ground) instead,"
                     + " e.g. PB0.")
@@ -56,6 +60,7 @@ public final class CalibratePlanCommand implements Callable<Integer> {
     @Mixin
     FirmwareOptions firmware;
 
+    @Section(Heading.FIRMWARE)
     @Option(names = "--name", paramLabel = "<symbol>", defaultValue = "sweep",
             description = "C symbol prefix of the sweep program (default ${DEFAULT-VALUE}).")
     String name;

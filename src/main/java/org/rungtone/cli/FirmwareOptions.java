@@ -3,6 +3,9 @@ package org.rungtone.cli;
 import java.nio.file.Path;
 import java.util.Optional;
 import java.util.OptionalLong;
+import org.rungtone.cli.shell.Choices;
+import org.rungtone.cli.shell.Heading;
+import org.rungtone.cli.shell.Section;
 import org.rungtone.firmware.DdsSpec;
 import org.rungtone.firmware.FirmwareRequest;
 import org.rungtone.firmware.PinStrategy;
@@ -18,8 +21,9 @@ import picocli.CommandLine.Option;
  * The firmware options shared by build and calibrate: target family, clock, timer, pins, storage, engine,
  * flash budget. Without --target, --pins or --engine only the sample array is emitted.
  */
+@Section(Heading.FIRMWARE)
 public final class FirmwareOptions {
-    @Option(names = "--target", paramLabel = "generic|avr|cortexm|rp2040",
+    @Option(names = "--target", paramLabel = "generic|avr|cortexm|rp2040", completionCandidates = Choices.Targets.class,
             description = "Emit a complete player for this target family (default: only the sample array,"
                     + " or 'generic' when --pins is given).")
     String target;

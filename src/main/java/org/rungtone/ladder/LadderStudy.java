@@ -21,9 +21,6 @@ public record LadderStudy(LadderAnalysis analysis, List<String> pinNames, Option
     /** The most boards one study simulates. */
     public static final int MAX_BOARDS = 2_000_000;
 
-    /** Level evaluations (boards times codes) from which a Monte Carlo run takes about a second or more. */
-    private static final long SLOW_EVALUATIONS = 1L << 26;
-
     /** Copies the list and checks there is one pin name per bit. */
     public LadderStudy {
         pinNames = List.copyOf(pinNames);
@@ -64,11 +61,6 @@ public record LadderStudy(LadderAnalysis analysis, List<String> pinNames, Option
                     "%d pin names for %d bits", pinNames.size(), spec.bits());
             Checks.checkArgument(monteCarlo.map(m -> m.boards() <= MAX_BOARDS).orElse(true),
                     "at most %d boards", MAX_BOARDS);
-        }
-
-        /** True when the Monte Carlo run is long enough (about a second or more) to be worth a progress line. */
-        public boolean isSlow() {
-            return monteCarlo.map(m -> ((long) m.boards() << spec.bits()) >= SLOW_EVALUATIONS).orElse(false);
         }
 
         /**

@@ -38,19 +38,19 @@ import org.rungtone.source.WavWriter;
 public final class Build {
     private final String toolVersion;
     private final OutputSpan span;
-    private final java.util.function.Consumer<String> progress;
+    private final BuildProgress progress;
 
     /** A build that stamps {@code toolVersion} into its outputs; compensation uses the board's full span. */
     public Build(String toolVersion) {
-        this(toolVersion, OutputSpan.FULL, stage -> { });
+        this(toolVersion, OutputSpan.FULL, BuildProgress.NONE);
     }
 
     /**
      * A build whose compensated quantization maps full scale onto {@code span} of the board's levels, and
-     * that tells {@code progress} the name of every stage it finishes ("open", "condition", ...; a WAV file
-     * is decoded during "condition").
+     * that tells {@code progress} how far it has got: every stage it finishes ("open done", "condition done",
+     * ...) and, while a WAV file is decoded (during "condition"), how much of it is read.
      */
-    public Build(String toolVersion, OutputSpan span, java.util.function.Consumer<String> progress) {
+    public Build(String toolVersion, OutputSpan span, BuildProgress progress) {
         this.toolVersion = toolVersion;
         this.span = span;
         this.progress = progress;
@@ -103,9 +103,9 @@ public final class Build {
             assets.handle((done, failed) -> null).join();
             throw e;
         }
-        watch.lap("emit");
+        watch.lap(BuildStage.EMIT);
         files.addAll(Jobs.join(assets));
-        watch.lap("plots");
+        watch.lap(BuildStage.PLOTS);
         Path txt = plan.outDir().resolve("report.txt");
         Path json = plan.outDir().resolve("report.json");
         Path html = plan.outDir().resolve("report.html");

@@ -58,18 +58,18 @@ public final class ProjectBuild {
 
     private final String toolVersion;
     private final OutputSpan span;
-    private final java.util.function.Consumer<String> progress;
+    private final BuildProgress progress;
 
     /** A project build stamping {@code toolVersion} into its outputs. */
     public ProjectBuild(String toolVersion) {
-        this(toolVersion, OutputSpan.FULL, line -> { });
+        this(toolVersion, OutputSpan.FULL, BuildProgress.NONE);
     }
 
     /**
-     * A project build with the output span of compensated sounds that reports "sound 2/3 door_chime:
-     * decode done" style lines to {@code progress}.
+     * A project build with the output span of compensated sounds that tells {@code progress} how far it has
+     * got: "sound 2/3 door_chime: condition done" and the share of the whole project (every sound counts alike).
      */
-    public ProjectBuild(String toolVersion, OutputSpan span, java.util.function.Consumer<String> progress) {
+    public ProjectBuild(String toolVersion, OutputSpan span, BuildProgress progress) {
         this.toolVersion = toolVersion;
         this.span = span;
         this.progress = progress;
@@ -213,14 +213,16 @@ public final class ProjectBuild {
             Project.Sound s = project.sounds().get(i);
             String label = String.format(Locale.ROOT, "sound %d/%d %s", s.index(), project.sounds().size(),
                     s.name());
+            double before = i;
+            BuildProgress sound = (step, share) -> progress.update(label + ": " + step,
+                    (before + share / BuildStage.rendered()) / plans.size() * BuildStage.rendered());
             try {
-                rendered.add(new SoundRenderer(span, stage -> progress.accept(label + ": " + stage + " done"))
-                        .render(plans.get(i)));
+                rendered.add(new SoundRenderer(span, sound).render(plans.get(i)));
             } catch (SettingError e) {
                 throw located(project, s, o, e);
             }
         }
-        progress.accept("writing firmware, previews and reports");
+        progress.update("writing firmware, previews and reports", BuildStage.rendered());
         Emitted emitted = emit(project, player, shared, rendered, cDir);
         Jobs.join(plotsReady);
         Build build = new Build(toolVersion);

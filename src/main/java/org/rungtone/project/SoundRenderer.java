@@ -7,7 +7,6 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.CompletableFuture;
-import java.util.function.Consumer;
 import org.rungtone.analysis.AnalogModel;
 import org.rungtone.analysis.CodeUse;
 import org.rungtone.analysis.ListenerMetrics;
@@ -58,13 +57,14 @@ public final class SoundRenderer {
 
 
     private final OutputSpan span;
-    private final Consumer<String> progress;
+    private final BuildProgress progress;
 
     /**
      * A renderer whose compensated quantization maps full scale onto {@code span} of the board's levels, and
-     * that tells {@code progress} the name of every stage it finishes ("open", "condition", ...).
+     * that tells {@code progress} every stage it finishes ("open done", "condition done", ...) and, while it
+     * reads the source, how much of it it has read.
      */
-    public SoundRenderer(OutputSpan span, Consumer<String> progress) {
+    public SoundRenderer(OutputSpan span, BuildProgress progress) {
         this.span = span;
         this.progress = progress;
     }
@@ -136,7 +136,7 @@ public final class SoundRenderer {
         reference = loop.map(AutoLoop.Placed::signal).orElse(reference);
         Coding coding = Coding.of(plan, rate, model.inBandTopHz(rate));
         Cases cases = quantize(plan, reference, coding);
-        watch.lap("quantize");
+        watch.lap(BuildStage.QUANTIZE);
         if (cases.clipped() > 0) {
             warnings.add(cases.clipped() + " samples were beyond full scale and clipped");
         }
@@ -166,16 +166,16 @@ public final class SoundRenderer {
             toneSpectrum = Optional.of(ToneAnalysis.spectrum(out));
             tone = Optional.of(ToneAnalysis.analyze(out, toneSpectrum.get()));
         }
-        watch.lap("analyze");
+        watch.lap(BuildStage.ANALYZE);
         AnalogModel.Preview preview = Jobs.join(previewJob);
-        watch.lap("preview");
+        watch.lap(BuildStage.PREVIEW);
         List<QualityReport> quality = figures.quality();
         Optional<ListenerReport> heard = Jobs.join(listenerJob);
         if (heard.isPresent()) {
             quality = new ArrayList<>(quality);
             int last = quality.size() - 1;
             quality.set(last, quality.get(last).withListener(heard.get()));
-            watch.lap("listener");
+            watch.lap(BuildStage.LISTENER);
         }
         return new Rendered(plan, prepared.layout(), prepared.source(), rate, conditioned, cases.emitted(),
                 cases.played(), quality, figures.shapingGainDb(), tone, preview, figures.errorSpectrum(), toneSpectrum,
@@ -248,7 +248,7 @@ public final class SoundRenderer {
         ConditioningSettings cs = plan.conditioning();
         try (Sources.Opened opened = Sources.open(plan.source().file(), plan.source().channel(),
                 cs.rateHz().orElse(Double.NaN), plan.quantize().seed())) {
-            watch.lap("open");
+            watch.lap(BuildStage.OPEN);
             double rate = cs.rateHz().orElse(Double.isNaN(opened.preferredRateHz()) ? Defaults.RATE_HZ
                     : opened.preferredRateHz());
             Conditioner.Conditioned conditioned;
@@ -266,10 +266,11 @@ public final class SoundRenderer {
                         cs.normalizeDbfs(), 0, 0);
                 conditioned = new Conditioner(KaiserResampler.forBits(plan.bits())).apply(table, c);
             } else {
-                conditioned = new Conditioner(cs.resampler().create(plan.bits())).apply(opened.samples(), cs.at(rate));
+                conditioned = new Conditioner(cs.resampler().create(plan.bits())).apply(new ReadShare(opened.samples(),
+                        watch.within(BuildStage.CONDITION, "reading")), cs.at(rate));
                 listener = listener(opened.samples(), conditioned, cs, model);
             }
-            watch.lap("condition");
+            watch.lap(BuildStage.CONDITION);
             return new Prepared(opened.layout(), opened.facts(), opened.warnings(), conditioned, rate, listener,
                     opened.wavetable());
         }

@@ -33,6 +33,7 @@ import org.rungtone.report.Json;
 import org.rungtone.report.SourceFacts;
 import org.rungtone.report.SurveyFiles;
 import org.rungtone.report.SurveyReport;
+import org.rungtone.source.SampleSource;
 import org.rungtone.source.Signal;
 
 /**
@@ -46,6 +47,8 @@ public final class SurveyRun {
     static final double PREVIEW_RATE_HZ = 44_100;
     /** Fewest samples a cell needs for its quality figures. */
     static final int MIN_SAMPLES = 16;
+    /** The first decode's progress is told in thousandths of the source. */
+    private static final int PER_MILLE = 1000;
 
     private final Progress progress;
 
@@ -58,9 +61,10 @@ public final class SurveyRun {
         /**
          * Called as work finishes, from worker threads but never concurrently.
          *
-         * @param label what is being done: "survey" (the cells), then "previews"
+         * @param label what is being done: "reading" (the first decode of the source, in thousandths of it),
+         *     "survey" (the cells), "previews", then "writing reports" (told once, with no count)
          * @param done items finished so far
-         * @param total items of that kind
+         * @param total items of that kind; 0 when not counted
          */
         void update(String label, int done, int total);
     }
@@ -154,6 +158,7 @@ public final class SurveyRun {
                 request.output().previews(), files, new ArrayList<>(warnings), new SurveyReport.Facts(s.source(),
                 ConditioningFacts.of(request.conditioning().at(cells.ratesHz().get(0))),
                 request.conditioning().resampler(), tables.lastEntry().getValue(), request.filter(), folder));
+        tell("writing reports", 0, 0);
         SurveyFiles.write(folder, s.result(), context);
         long done = System.nanoTime();
         Map<String, Double> laps = new LinkedHashMap<>();
@@ -183,21 +188,22 @@ public final class SurveyRun {
         double maxRate = spec.ratesHz().stream().max(Double::compare).orElseThrow();
         Map<Double, Conditioner.Conditioned> references = new ConcurrentHashMap<>();
         try (Sources.Opened loaded = Sources.open(request.source(), request.channel(), maxRate, spec.seed())) {
-            tell("survey", 0, Survey.cellCount(spec));
             // The highest rate first: its trim tells which stretch of the source the listener figures compare.
-            Conditioner.Conditioned top = conditioned(request, conditioner, loaded, conditionings, maxRate);
+            Conditioner.Conditioned top = conditioned(request, conditioner, new ReadShare(loaded.samples(),
+                    share -> tell("reading", (int) Math.round(share * PER_MILLE), PER_MILLE)), conditionings, maxRate);
+            tell("survey", 0, Survey.cellCount(spec));
             references.put(maxRate, top);
             ListenerMetrics listener = listener(request, loaded, top, model);
             SurveyResult result = Survey.run(spec, rate -> references.computeIfAbsent(rate,
-                    r -> conditioned(request, conditioner, loaded, conditionings, r)).signal(), listener,
+                    r -> conditioned(request, conditioner, loaded.samples(), conditionings, r)).signal(), listener,
                     (done, total) -> tell("survey", done, total));
             return new Surveyed(loaded.layout(), loaded.facts(), loaded.warnings(), result, references);
         }
     }
 
     private static Conditioner.Conditioned conditioned(SurveyRequest request, Conditioner conditioner,
-            Sources.Opened loaded, Map<Double, Conditioning> conditionings, double rate) {
-        Conditioner.Conditioned c = conditioner.apply(loaded.samples(), conditionings.get(rate));
+            SampleSource samples, Map<Double, Conditioning> conditionings, double rate) {
+        Conditioner.Conditioned c = conditioner.apply(samples, conditionings.get(rate));
         if (c.signal().length() < MIN_SAMPLES) {
             throw tooShort(request.source(), c.signal().length(), rate);
         }

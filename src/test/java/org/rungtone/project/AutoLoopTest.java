@@ -64,7 +64,7 @@ class AutoLoopTest {
 
     @Test
     void aSustainedSoundGetsItsLoopBakedIntoTheCodesAndAFourfoldPreview() {
-        SoundRenderer.Rendered r = new SoundRenderer(OutputSpan.FULL, s -> { }).render(plan(organ()).build());
+        SoundRenderer.Rendered r = new SoundRenderer(OutputSpan.FULL, BuildProgress.NONE).render(plan(organ()).build());
         SeamlessLoop l = r.autoLoop().orElseThrow();
         assertEquals(32_000, r.emitted().length(), "no budget: the whole sound is kept");
         assertTrue(l.seamLevelDb() < -40, l::toString);
@@ -96,7 +96,7 @@ class AutoLoopTest {
         FirmwareRequest player = FirmwareRequest.builder().family("generic").pins("PB0-PB5").portWidth(8)
                 .engine(PlaybackEngine.LOOP).build();
         BuildPlan plan = plan(organ()).player(Optional.of(player)).flashBudgetBytes(OptionalLong.of(12_000)).build();
-        SoundRenderer.Rendered r = new SoundRenderer(OutputSpan.FULL, s -> { }).render(plan);
+        SoundRenderer.Rendered r = new SoundRenderer(OutputSpan.FULL, BuildProgress.NONE).render(plan);
         // samples plus the loop engine's sound table (4 indices, 16 bytes at most) stay within the budget
         assertTrue(r.emitted().length() + 16 <= 12_000, () -> r.emitted().length() + " samples");
         assertTrue(r.warnings().stream().anyMatch(w -> w.contains("attack and one loop")), r.warnings()::toString);
@@ -126,7 +126,7 @@ class AutoLoopTest {
     void noiseIsRefusedNamingTheFile() {
         Path wav = dir.resolve("fan-noise.wav");
         WavWriter.write(wav, Signal.wrap(SustainedSounds.noise(0.5, RATE, 1, 3), RATE), WavWriter.Format.PCM16);
-        InputError e = assertThrows(InputError.class, () -> new SoundRenderer(OutputSpan.FULL, s -> { })
+        InputError e = assertThrows(InputError.class, () -> new SoundRenderer(OutputSpan.FULL, BuildProgress.NONE)
                 .render(plan(wav).build()));
         assertEquals(wav + ": no repeating section found; give sound.loop START:END", e.getMessage());
     }
