@@ -6,6 +6,7 @@ import java.util.OptionalLong;
 import java.util.concurrent.Callable;
 import org.rungtone.analysis.ReconstructionFilter;
 import org.rungtone.analysis.SurveyTarget;
+import org.rungtone.cli.shell.Choices;
 import org.rungtone.cli.shell.Heading;
 import org.rungtone.cli.shell.ProgressMeter;
 import org.rungtone.cli.shell.Section;
@@ -115,7 +116,8 @@ public final class SurveyCommand implements Callable<Integer> {
     @Option(names = "--packed", description = "Judge the budget and the choice by bit-packed bytes.")
     boolean packed;
 
-    @Option(names = "--storage", paramLabel = "<list>", split = ",", description = "Survey these Tread stores too,"
+    @Option(names = "--storage", paramLabel = "<list>", split = ",", completionCandidates = Choices.TreadStores.class,
+            description = "Survey these Tread stores too,"
             + " e.g. tread2,tread3,tread4 (packed here counts the plain codes bit-packed, as --packed does).")
     java.util.List<org.rungtone.firmware.SampleStorage> storages = new java.util.ArrayList<>();
 

@@ -31,6 +31,13 @@ final class ChoiceWords {
             // the orders ErrorFilter.parse takes; a filter of given taps has no word
             return List.of("none", "first", "second");
         }
+        if (arg.completionCandidates() != null
+                && arg.completionCandidates().getClass().getEnclosingClass() == Choices.class) {
+            // a narrower list than the type's (survey --storage takes only the Tread stores)
+            List<String> words = new ArrayList<>();
+            arg.completionCandidates().forEach(words::add);
+            return words;
+        }
         if (type.isEnum()) {
             List<String> names = new ArrayList<>();
             for (Object constant : type.getEnumConstants()) {

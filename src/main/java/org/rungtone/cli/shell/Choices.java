@@ -2,6 +2,7 @@ package org.rungtone.cli.shell;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.rungtone.firmware.SampleStorage;
 import org.rungtone.firmware.TargetFamily;
 import org.rungtone.ladder.ESeries;
 import org.rungtone.ladder.Topology;
@@ -33,6 +34,20 @@ public final class Choices {
         /** The two a starter file describes. */
         public StarterTopologies() {
             super(List.of(Topology.WEIGHTED.key(), Topology.R2R.key()));
+        }
+    }
+
+    /** The Tread stores a survey can add as rows: tread2, tread3, tread4. */
+    public static final class TreadStores extends ArrayList<String> {
+        private static final long serialVersionUID = 1L;
+
+        /** Every Tread storage's option spelling. */
+        public TreadStores() {
+            for (SampleStorage s : SampleStorage.values()) {
+                if (s.codec().isPresent()) {
+                    add(s.optionName());
+                }
+            }
         }
     }
 

@@ -36,7 +36,8 @@ class CompletionInShellsTest {
         m.put("rungtone build --dither ", "none rpdf tpdf");
         m.put("rungtone build --di", "--dither");
         m.put("rungtone survey --shaping ", "first none second");
-        m.put("rungtone build --storage ", "packed unpacked");
+        m.put("rungtone build --storage ", "packed tread2 tread3 tread4 unpacked");
+        m.put("rungtone survey --storage ", "tread2 tread3 tread4");
         m.put("rungtone build --engine ", "clip dds loop sweep");
         m.put("rungtone build --target ", "avr cortexm generic rp2040");
         m.put("rungtone build --compensation ", "off on");
