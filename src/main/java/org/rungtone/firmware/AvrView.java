@@ -42,7 +42,7 @@ record AvrView(long cpuClockHz, String cpuClockText, boolean timer0, boolean tim
         return new AvrView(Math.round(p.request.cpuClockHz()), Fmt.hz(p.request.cpuClockHz()),
                 k == TimerKind.AVR_TIMER0, k == TimerKind.AVR_TIMER1, k == TimerKind.AVR_TIMER2,
                 clockSelect(k, t.prescaler()), "TIMER" + timerNumber(k) + "_COMPA_vect", reads,
-                AvrFastTick.isr(p).orElse(null));
+                AvrFastTick.isr(p).or(() -> AvrTreadTick.isr(p)).orElse(null));
     }
 
     /**

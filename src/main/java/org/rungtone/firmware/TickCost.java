@@ -52,6 +52,15 @@ public record TickCost(int worstCycles, int windowCycles, boolean idleOff) {
         {180, 270, 300}, {180, 275, 305},
         {150, 245, 275}, {150, 250, 280},
     };
+    /**
+     * The assembler interrupt of a Tread store of codes up to 8 bits ({@link AvrTreadTick}) for one, two and
+     * three ports, the largest over shift and table; rows as {@link #AVR_TREAD_CYCLES}.
+     */
+    private static final int[][] AVR_TREAD_FAST_CYCLES = {
+        {150, 245, 275}, {150, 245, 275},
+        {150, 270, 300}, {150, 275, 305},
+        {150, 245, 275}, {150, 250, 280},
+    };
     /** Each port past the third (parts with more ports than the ATmega328P): extrapolated, not measured. */
     private static final int AVR_CYCLES_PER_EXTRA_PORT = 25;
     /** Each scatter term past one per port: the largest measured step was 16.2 cycles. */
@@ -69,8 +78,13 @@ public record TickCost(int worstCycles, int windowCycles, boolean idleOff) {
             return Optional.of(new TickCost(rows[fast][Math.min(ports, 3) - 1]
                     + AVR_CYCLES_PER_EXTRA_PORT * Math.max(0, ports - 3), ports - 1, true));
         }
+        int treadRow = p.tread == null ? 0
+                : 2 * p.tread.format().ordinal() + (p.engine == PlaybackEngine.LOOP ? 1 : 0);
+        if (AvrTreadTick.applies(p)) {
+            return Optional.of(new TickCost(AVR_TREAD_FAST_CYCLES[treadRow][ports - 1], ports - 1, true));
+        }
         int[] row = p.tread != null
-                ? AVR_TREAD_CYCLES[2 * p.tread.format().ordinal() + (p.engine == PlaybackEngine.LOOP ? 1 : 0)]
+                ? AVR_TREAD_CYCLES[treadRow]
                 : AVR_CYCLES[2 * engineRow(p.engine) + (p.storage == SampleStorage.PACKED ? 1 : 0)];
         int cycles = row[Math.min(ports, 3) - 1] + AVR_CYCLES_PER_EXTRA_PORT * Math.max(0, ports - 3);
         if (p.strategy == PinStrategy.SCATTER) {
