@@ -8,7 +8,8 @@ import java.util.Optional;
  * a tick to the last. The figures come from a table measured in simulation (simavr, ATmega328P at 16 MHz,
  * avr-gcc 5.4 with {@code -Os}), taken per storage (each Tread format on its own), engine and number of ladder
  * ports as the largest value over the pin maps, code widths and strategies measured, rounded up to a multiple
- * of five (the assembler interrupt of {@link AvrFastTick} has its own rows, per strategy); the simulator
+ * of five (the assembler interrupts of {@link AvrFastTick}, per strategy, and of {@link AvrTreadTick} have
+ * their own rows); the simulator
  * test fails when a build measures more than its figure. Only the avr family has figures: the generic player
  * runs in the user's interrupt, and no Cortex-M simulator checks the cortexm one.
  *
@@ -41,11 +42,12 @@ public record TickCost(int worstCycles, int windowCycles, boolean idleOff) {
         {110, 120, 130}, {115, 130, 140},
     };
     /**
-     * Worst cycles per tick of the Tread stores for one, two and three ladder ports. Rows: tread2, tread3 and
-     * tread4, each for the clip and then the loop engine. One port holds codes of up to 8 bits (the byte
-     * decoder); two ports are the widest measured (11 bits, the 16-bit decoder); three ports the largest of
-     * the measured ones (6 bits in lookup tables; 12 bits scattered, less their extra terms) and of two ports
-     * and one more port write (30), since three ports of codes past 8 bits were not measured on their own.
+     * Worst cycles per tick of the Tread stores in the compiled C tick for one, two and three ladder ports.
+     * Rows: tread2, tread3 and tread4, each for the clip and then the loop engine. One port holds codes of up
+     * to 8 bits (the byte decoder, measured on scatter maps, which {@link AvrTreadTick} leaves to it); two
+     * ports are the widest measured (11 bits, the 16-bit decoder); three ports the largest of the measured
+     * ones (6 bits in lookup tables; 12 bits scattered, less their extra terms) and of two ports and one more
+     * port write (30), since three ports of codes past 8 bits were not measured on their own.
      */
     private static final int[][] AVR_TREAD_CYCLES = {
         {145, 245, 275}, {150, 245, 275},
@@ -54,13 +56,16 @@ public record TickCost(int worstCycles, int windowCycles, boolean idleOff) {
     };
     /**
      * The assembler interrupt of a Tread store of codes up to 8 bits ({@link AvrTreadTick}) for one, two and
-     * three ports, the largest over shift and table; rows as {@link #AVR_TREAD_CYCLES}.
+     * three ports, the largest over shift and table and over 6-, 7- and 8-bit codes; rows as
+     * {@link #AVR_TREAD_CYCLES}. With more than 65,535 samples the count of codes left takes a third byte.
      */
     private static final int[][] AVR_TREAD_FAST_CYCLES = {
-        {150, 245, 275}, {150, 245, 275},
-        {150, 270, 300}, {150, 275, 305},
-        {150, 245, 275}, {150, 250, 280},
+        {115, 130, 140}, {120, 130, 140},
+        {125, 140, 150}, {130, 140, 150},
+        {115, 130, 140}, {120, 130, 140},
     };
+    /** The third byte of the count (LDS, SBCI, STS), measured. */
+    private static final int AVR_TREAD_FAST_WIDE_CYCLES = 5;
     /** Each port past the third (parts with more ports than the ATmega328P): extrapolated, not measured. */
     private static final int AVR_CYCLES_PER_EXTRA_PORT = 25;
     /** Each scatter term past one per port: the largest measured step was 16.2 cycles. */
@@ -81,7 +86,8 @@ public record TickCost(int worstCycles, int windowCycles, boolean idleOff) {
         int treadRow = p.tread == null ? 0
                 : 2 * p.tread.format().ordinal() + (p.engine == PlaybackEngine.LOOP ? 1 : 0);
         if (AvrTreadTick.applies(p)) {
-            return Optional.of(new TickCost(AVR_TREAD_FAST_CYCLES[treadRow][ports - 1], ports - 1, true));
+            return Optional.of(new TickCost(AVR_TREAD_FAST_CYCLES[treadRow][ports - 1]
+                    + (p.wideIndex ? AVR_TREAD_FAST_WIDE_CYCLES : 0), ports - 1, true));
         }
         int[] row = p.tread != null
                 ? AVR_TREAD_CYCLES[treadRow]
