@@ -101,7 +101,7 @@ final class AvrTreadTick {
         exit(a);
         a.label("5");
         List<String> copies = new ArrayList<>(List.of("next:loop_code"));
-        int readerBytes = AvrTreadDecode.sentinel(p) ? 3 : 4;
+        int readerBytes = AvrTreadReader.byteCodes(p) ? 3 : 4;
         for (int i = 0; i < readerBytes; i++) {
             copies.add("reader" + offset(i) + ":loop_reader" + offset(i));
         }
