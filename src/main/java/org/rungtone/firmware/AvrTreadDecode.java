@@ -42,9 +42,9 @@ final class AvrTreadDecode {
         a.op("sts %[decoder], r24").op("mov r30, r24").op("lsl r30");
         Runnable notRead = AvrTreadReader.byteCodes(p) ? () -> AvrTreadReader.notRead(a, p, "r25") : () -> { };
         if (p.bits == 8) {
-            predictEightBits(a, notRead);
+            predictEightBits(a, p, notRead);
         } else {
-            predict(a, p.bits, notRead);
+            predict(a, p, notRead);
         }
     }
 
@@ -52,37 +52,38 @@ final class AvrTreadDecode {
      * Codes below 8 bits: q = 2·y1 − y2 (r30, y2 in r31) kept on the ladder, then y = q ± d (d in r25). Below
      * zero q is 0, so y is d or 0 at once.
      */
-    private static void predict(AvrFastTick.Asm a, int bits, Runnable afterFirstReturn) {
+    private static void predict(AvrFastTick.Asm a, EmitPlan p, Runnable afterFirstReturn) {
+        int bits = p.bits;
         String top = Integer.toString(1 << bits);
         String max = Integer.toString((1 << bits) - 1);
         a.op("sub r30, r31").op("brcs 2f").op("cpi r30, " + top).op("brlo 5f").op("ldi r30, " + max);
         a.label("5");
         a.op("brts 6f").op("add r30, r25").op("cpi r30, " + top).op("brlo 7f").op("ldi r30, " + max);
-        store(a, "r30");
+        store(a, p, "r30");
         afterFirstReturn.run();
         a.label("6");
         a.op("sub r30, r25").op("brcc 7f").op("ldi r30, 0");
-        store(a, "r30");
+        store(a, p, "r30");
         a.label("2");
         a.comment("the prediction is below the ladder: y is the difference, or 0");
         a.op("brts 6f");
         a.op("sts %[next], r25");
-        AvrTreadTick.exit(a);
+        AvrTreadTick.exit(a, p);
         a.label("6");
         a.op("ldi r30, 0").op("sts %[next], r30");
-        AvrTreadTick.exit(a);
+        AvrTreadTick.exit(a, p);
     }
 
     /** 8-bit codes: the same, with the doubling's carry (2·y1 ≥ 256) and the addition's carry as the top. */
-    private static void predictEightBits(AvrFastTick.Asm a, Runnable afterFirstReturn) {
+    private static void predictEightBits(AvrFastTick.Asm a, EmitPlan p, Runnable afterFirstReturn) {
         a.op("brcs 1f").op("sub r30, r31").op("brcs 2f");
         a.label("5");
         a.op("brts 6f").op("add r30, r25").op("brcc 7f").op("ldi r30, 255");
-        store(a, "r30");
+        store(a, p, "r30");
         afterFirstReturn.run();
         a.label("6");
         a.op("sub r30, r25").op("brcc 7f").op("ldi r30, 0");
-        store(a, "r30");
+        store(a, p, "r30");
         a.label("1");
         a.comment("2·y1 is 256 or more: q is on the ladder when y2 borrows, else above it");
         a.op("sub r30, r31").op("brcs 5b").op("ldi r30, 255").op("rjmp 5b");
@@ -90,17 +91,17 @@ final class AvrTreadDecode {
         a.comment("the prediction is below the ladder: y is the difference, or 0");
         a.op("brts 6f");
         a.op("sts %[next], r25");
-        AvrTreadTick.exit(a);
+        AvrTreadTick.exit(a, p);
         a.label("6");
         a.op("ldi r30, 0").op("sts %[next], r30");
-        AvrTreadTick.exit(a);
+        AvrTreadTick.exit(a, p);
     }
 
     /** Label 7 and the decoded code from {@code register} into {@code next}, then the return. */
-    private static void store(AvrFastTick.Asm a, String register) {
+    private static void store(AvrFastTick.Asm a, EmitPlan p, String register) {
         a.label("7");
         a.op("sts %[next], " + register);
-        AvrTreadTick.exit(a);
+        AvrTreadTick.exit(a, p);
     }
 
 }

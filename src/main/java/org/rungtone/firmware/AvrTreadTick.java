@@ -7,17 +7,19 @@ import java.util.Optional;
 
 /**
  * The timer interrupt of the AVR clip and loop players of a Tread store (docs/tread.md) written in assembler,
- * for ladder codes of up to 8 bits (the byte-table decoder) put out by shift or table on up to three ports.
- * It keeps the C tick's state and steps ({@code NAME_tick()}): write the code decoded at the previous tick,
- * count it, then read and decode the next one ({@link AvrTreadDecode}); at the loop end of a looping sound
- * it loads the loop start's code, reader and decoder instead. Two things differ, both out of sight: the
- * sign of the stored code waits in the T flag, and the clip engine decodes one code past a sound's end,
- * which is never put out (the pointer's reads stay in flash), rather than spend a branch on every tick.
+ * for ladder codes put out by shift or table on up to three ports. It keeps the C tick's state and steps
+ * ({@code NAME_tick()}): write the code decoded at the previous tick, count it, then read ({@link
+ * AvrTreadReader}) and decode the next one, from the byte table up to 8 bits ({@link AvrTreadDecode}) or from
+ * STEP and ADAPT past them ({@link AvrTreadWideDecode}); at the loop end of a looping sound it loads the loop
+ * start's code, reader and decoder instead. Two things differ, both out of sight: the sign of the stored code
+ * waits in the T flag, and the clip engine decodes one code past a sound's end, which is never put out (the
+ * reads stay in flash), rather than spend a branch on every tick.
  *
- * <p>Registers: r24 the code put out (the last code y1), r25 and Z (r31:r30) everything else, so that the
- * interrupt saves four registers (SREG through r24). Every path reaches the port writes after the same
- * number of cycles. The count of codes left is 16 bits, or 24 of the C type's 32 with wide indices: a
- * stream the reader's 16-bit pointer reaches holds fewer than 2^24 codes.
+ * <p>Registers: up to 8 bits r24 the code put out (the last code y1), r25 and Z everything else, so that the
+ * interrupt saves four registers (SREG through r24); past 8 bits r25:r24 the code, and r18, r19 and r1:r0 as
+ * well. Every path reaches the port writes after the same number of cycles. The count of codes left is 16
+ * bits, or 24 of the C type's 32 with wide indices: a stream the reader's 16-bit pointer reaches holds fewer
+ * than 2^24 codes.
  */
 final class AvrTreadTick {
     /** Ports whose values the free registers hold. */
@@ -29,7 +31,7 @@ final class AvrTreadTick {
     /** True when the plan's interrupt is this one (see the class comment for the cases). */
     static boolean applies(EmitPlan p) {
         return p.family == TargetFamily.AVR && p.isClip() && p.timer.isPresent() && p.tread != null
-                && p.tread.compact() && (p.strategy == PinStrategy.SHIFT || p.strategy == PinStrategy.TABLE)
+                && (p.strategy == PinStrategy.SHIFT || p.strategy == PinStrategy.TABLE)
                 && p.pins.ports().size() <= MAX_PORTS;
     }
 
@@ -40,7 +42,10 @@ final class AvrTreadTick {
         }
         boolean loop = p.engine == PlaybackEngine.LOOP;
         AvrFastTick.Asm a = new AvrFastTick.Asm();
-        a.op("push r24").op("in r24, __SREG__").op("push r24").op("push r25").op("push r30").op("push r31");
+        a.op("push r24").op("in r24, __SREG__").op("push r24");
+        for (String r : saved(p)) {
+            a.op("push " + r);
+        }
         countDown(a, p.wideIndex);
         if (loop) {
             a.comment("the loop end (the zero flag): 3 cycles to the count's store on both paths, so the pins"
@@ -59,7 +64,11 @@ final class AvrTreadTick {
         a.label("7");
         storeLeft(a, p.wideIndex);
         boolean reload = AvrTreadOutput.write(a, p);
-        AvrTreadDecode.next(a, p, reload);
+        if (p.tread.compact()) {
+            AvrTreadDecode.next(a, p, reload);
+        } else {
+            AvrTreadWideDecode.next(a, p);
+        }
         if (loop) {
             a.label("8");
             loopEnd(a, p);
@@ -67,7 +76,7 @@ final class AvrTreadTick {
         a.label("9");
         a.comment("the sound has ended: the compare-match interrupt goes off until the next play");
         a.op("lds r25, %[timsk]").op("andi r25, lo8(~(1 << %[ocie]))").op("sts %[timsk], r25");
-        exit(a);
+        exit(a, p);
         return Optional.of(render(p, a, loop));
     }
 
@@ -98,15 +107,19 @@ final class AvrTreadTick {
      */
     private static void loopEnd(AvrFastTick.Asm a, EmitPlan p) {
         a.op("lds r25, %[looping]").op("tst r25").op("brne 5f");
-        exit(a);
+        exit(a, p);
         a.label("5");
         List<String> copies = new ArrayList<>(List.of("next:loop_code"));
+        if (!p.tread.compact()) {
+            copies.add("next+1:loop_code+1");
+        }
         int readerBytes = AvrTreadReader.byteCodes(p) ? 3 : 4;
         for (int i = 0; i < readerBytes; i++) {
             copies.add("reader" + offset(i) + ":loop_reader" + offset(i));
         }
-        copies.add("decoder:loop_decoder");
-        copies.add("decoder+1:loop_decoder+1");
+        for (int i = 0; i < (p.tread.compact() ? 2 : 3); i++) {
+            copies.add("decoder" + offset(i) + ":loop_decoder" + offset(i));
+        }
         for (int i = 0; i < (p.wideIndex ? 3 : 2); i++) {
             copies.add("left" + offset(i) + ":loop_length" + offset(i));
         }
@@ -114,7 +127,7 @@ final class AvrTreadTick {
             String[] toFrom = c.split(":");
             a.op("lds r25, %[" + bracket(toFrom[1])).op("sts %[" + bracket(toFrom[0]) + ", r25");
         }
-        exit(a);
+        exit(a, p);
     }
 
     /** {@code name+1} as the operand {@code name]+1}. */
@@ -127,10 +140,19 @@ final class AvrTreadTick {
         return i == 0 ? "" : "+" + i;
     }
 
+    /** The registers saved besides r24 (which holds SREG): those of the wide decoder too past 8 bits. */
+    private static List<String> saved(EmitPlan p) {
+        return p.tread.compact() ? List.of("r25", "r30", "r31")
+                : List.of("r25", "r30", "r31", "r18", "r19", "r0", "r1");
+    }
+
     /** The registers back and the return: every path has its own copy, which saves a jump. */
-    static void exit(AvrFastTick.Asm a) {
-        a.op("pop r31").op("pop r30").op("pop r25").op("pop r24").op("out __SREG__, r24").op("pop r24")
-                .op("reti");
+    static void exit(AvrFastTick.Asm a, EmitPlan p) {
+        List<String> saved = saved(p);
+        for (int i = saved.size() - 1; i >= 0; i--) {
+            a.op("pop " + saved.get(i));
+        }
+        a.op("pop r24").op("out __SREG__, r24").op("pop r24").op("reti");
     }
 
     /** The C text: a naked interrupt holding the instructions, with the symbols and registers as operands. */
@@ -144,7 +166,10 @@ final class AvrTreadTick {
         for (String v : variables) {
             operands.add("[" + v + "] \"i\" (&" + p.symbol + "_" + v + ")");
         }
-        operands.add("[table] \"i\" (" + p.symbol + "_decode_table)");
+        for (String table : p.tread.compact() ? List.of("table:decode_table") : List.of("steps:steps", "adapt:adapt")) {
+            String[] nameSymbol = table.split(":");
+            operands.add("[" + nameSymbol[0] + "] \"i\" (" + p.symbol + "_" + nameSymbol[1] + ")");
+        }
         for (String port : p.pins.ports()) {
             String lower = port.toLowerCase(Locale.ROOT);
             operands.add("[port_" + lower + "] \"I\" (_SFR_IO_ADDR(PORT" + port + "))");

@@ -55,7 +55,7 @@ public record TickCost(int worstCycles, int windowCycles, boolean idleOff) {
         {150, 245, 275}, {150, 250, 280},
     };
     /**
-     * The assembler interrupt of a Tread store of codes up to 8 bits ({@link AvrTreadTick}) for one, two and
+     * The assembler interrupt of a Tread store ({@link AvrTreadTick}) of codes up to 8 bits for one, two and
      * three ports, the largest over shift and table and over 6-, 7- and 8-bit codes; rows as
      * {@link #AVR_TREAD_CYCLES}. With more than 65,535 samples the count of codes left takes a third byte.
      */
@@ -63,6 +63,15 @@ public record TickCost(int worstCycles, int windowCycles, boolean idleOff) {
         {115, 130, 140}, {120, 130, 140},
         {125, 140, 150}, {130, 140, 150},
         {115, 130, 140}, {120, 130, 140},
+    };
+    /**
+     * The same for codes of 9 to 12 bits ({@link AvrTreadWideDecode}), over 9 to 12 bits by shift or table;
+     * such codes need two ports at least, so the one-port figures are those of two.
+     */
+    private static final int[][] AVR_TREAD_FAST_WIDE_CODE_CYCLES = {
+        {180, 180, 190}, {180, 180, 190},
+        {190, 190, 200}, {190, 190, 200},
+        {180, 180, 190}, {180, 180, 190},
     };
     /** The third byte of the count (LDS, SBCI, STS), measured. */
     private static final int AVR_TREAD_FAST_WIDE_CYCLES = 5;
@@ -86,7 +95,8 @@ public record TickCost(int worstCycles, int windowCycles, boolean idleOff) {
         int treadRow = p.tread == null ? 0
                 : 2 * p.tread.format().ordinal() + (p.engine == PlaybackEngine.LOOP ? 1 : 0);
         if (AvrTreadTick.applies(p)) {
-            return Optional.of(new TickCost(AVR_TREAD_FAST_CYCLES[treadRow][ports - 1]
+            int[][] rows = p.tread.compact() ? AVR_TREAD_FAST_CYCLES : AVR_TREAD_FAST_WIDE_CODE_CYCLES;
+            return Optional.of(new TickCost(rows[treadRow][ports - 1]
                     + (p.wideIndex ? AVR_TREAD_FAST_WIDE_CYCLES : 0), ports - 1, true));
         }
         int[] row = p.tread != null

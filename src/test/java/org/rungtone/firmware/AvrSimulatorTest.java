@@ -166,14 +166,16 @@ class AvrSimulatorTest {
 
     /**
      * Tread builds besides the first ones: the assembler tick's cases (one port by table, two ports by shift
-     * and by table, three by shift, 8-bit codes on a whole port), codes wider than a byte (16-bit decoder) over
-     * two ports and scattered over three, wide indices, and released loops.
+     * and by table, three by shift, 8-bit codes on a whole port; codes of 9 to 12 bits, the 16-bit decoder, by
+     * shift and by table over two and three ports), twelve bits scattered over three ports and the byte decoder
+     * on a scatter map (the compiled tick), wide indices, and released loops.
      */
     private static List<Build> treadBuilds() {
         List<Build> out = new ArrayList<>();
         List<SampleStorage> tread = List.of(SampleStorage.TREAD2, SampleStorage.TREAD3, SampleStorage.TREAD4);
         for (String pins : List.of("PD2,PD7,PD3,PD6,PD4,PD5", "PD5-PD7,PB0-PB3", "PD2,PD7,PB2,PB1,PD3,PB0",
-                "PD5-PD7,PB0-PB1,PC0-PC1", "PD0-PD7", "PD2-PD7,PB0-PB4", SCATTERED_12)) {
+                "PD5-PD7,PB0-PB1,PC0-PC1", "PD0-PD7", "PD2-PD7,PB0-PB4", "PD2-PD7,PB0-PB3,PC0-PC1",
+                "PD2,PD7,PB2,PB1,PD3,PB0,PD4,PB3,PD5,PB4", "PD2,PD7,PB2,PB1,PD3,PB0,PC0,PC1,PC2", SCATTERED_12)) {
             for (SampleStorage storage : tread) {
                 for (PlaybackEngine engine : List.of(PlaybackEngine.CLIP, PlaybackEngine.LOOP)) {
                     out.add(new Build(pins, storage, engine, 16000, TimerKind.AVR_TIMER1));

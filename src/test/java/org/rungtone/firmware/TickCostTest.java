@@ -48,6 +48,19 @@ class TickCostTest {
     }
 
     @Test
+    void treadCodesPastEightBitsHaveTheirOwnRows() {
+        // the assembler tick with the 16-bit decoder: 11 bits over two ports, 12 over three
+        assertEquals(new TickCost(190, 1, true), cost(wide(SampleStorage.TREAD3, 11, "PD2-PD7,PB0-PB4")));
+        assertEquals(new TickCost(190, 2, true), cost(wide(SampleStorage.TREAD4, 12, "PD2-PD7,PB0-PB3,PC0-PC1")));
+    }
+
+    private static FirmwareRequest wide(SampleStorage storage, int bits, String pins) {
+        SoundClip clip = HostReplayTest.chimeClip("s", storage, bits, 64, 0, 64);
+        return FirmwareRequest.builder().family("avr").name("t").toolVersion("test").pins(pins).cpuClockHz(16e6)
+                .storage(storage).engine(PlaybackEngine.LOOP).sound(clip).build();
+    }
+
+    @Test
     void treadScatterMapsKeepTheCompiledTick() {
         FirmwareRequest r = tread(SampleStorage.TREAD3, PlaybackEngine.LOOP, "PD2-PD7").toBuilder()
                 .pinStrategy(PinStrategy.SCATTER).build();
