@@ -48,8 +48,7 @@ final class AvrTreadTick {
         }
         countDown(a, p.wideIndex);
         if (loop) {
-            a.comment("the loop end (the zero flag): 3 cycles to the count's store on both paths, so the pins"
-                    + " change at the same cycle in every tick");
+            a.comment("the loop end (zero flag): 3 cycles to the store either way, so the pins change at one cycle");
             a.op("breq 6f");
         }
         a.comment("none left: 9 may be out of a branch's reach");
