@@ -7,13 +7,13 @@ import org.rungtone.quantize.Codes;
 
 /**
  * The requests that exercise every template of a family: contiguous, scattered, multi-port and wide pin maps
- * (plus forced strategies), packed and unpacked storage, every engine, the sweep with and without a button,
- * and the family's timers in turn. Each request has its own symbol prefix ({@code c000}, {@code c001}, ...),
+ * (plus forced strategies), packed and unpacked storage, every engine, the sweep with and without a button
+ * and for a recording, and the family's timers in turn. Each request has its own symbol prefix ({@code c000}, {@code c001}, ...),
  * so one family's files can be compiled in one run.
  */
 final class TemplateMatrix {
-    /** Engine and storage combinations per pin case: three engines twice, plus two sweeps. */
-    static final int CASES_PER_PIN_MAP = 8;
+    /** Engine and storage combinations per pin case: three engines twice, plus three sweeps. */
+    static final int CASES_PER_PIN_MAP = 9;
 
     private TemplateMatrix() {
     }
@@ -26,7 +26,8 @@ final class TemplateMatrix {
      * One combination.
      *
      * @param name the symbol prefix
-     * @param engine clip, loop, dds, sweep or button (a sweep advanced by a button)
+     * @param engine clip, loop, dds, sweep, button (a sweep advanced by a button) or record (a sweep for a
+     *     recording)
      */
     record Case(String name, String engine, FirmwareRequest request) {
     }
@@ -88,7 +89,8 @@ final class TemplateMatrix {
             for (SampleStorage storage : SampleStorage.values()) {
                 // the sweep stores no samples: its code does not depend on the storage
                 List<String> engines = storage == SampleStorage.UNPACKED
-                        ? List.of("clip", "loop", "dds", "sweep", "button") : List.of("clip", "loop", "dds");
+                        ? List.of("clip", "loop", "dds", "sweep", "button", "record")
+                        : List.of("clip", "loop", "dds");
                 for (String engine : engines) {
                     String name = String.format(Locale.ROOT, "c%03d", n);
                     FirmwareRequest.Builder b = FirmwareRequest.builder().family(family.folder()).name(name)
@@ -120,6 +122,9 @@ final class TemplateMatrix {
                         .dds(DdsSpec.of(440));
             case "sweep":
                 return b.sweep(SweepSpec.holding(bits, new int[] {0, (1 << bits) - 1, 1}, 500));
+            case "record":
+                return b.sweep(SweepSpec.recording(bits, new int[] {0, (1 << bits) - 1, 0, 1, 2, 0, (1 << bits) - 1},
+                        40, 2, 20));
             default:
                 return b.sweep(SweepSpec.onButton(bits, new int[] {0, 3, 1 << (bits - 1)}, button));
         }
