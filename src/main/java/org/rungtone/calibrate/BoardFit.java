@@ -37,12 +37,19 @@ public final class BoardFit {
      * @param resolutionVolts the meter's step; 0 to take it from the readings' digits
      * @param minVolts the lowest level the board can produce (buffer swing), or NaN
      * @param maxVolts the highest level the board can produce, or NaN
+     * @param keepReadings when every code was read, keep every reading in the table, outliers too (readings
+     *     a program made, which no typing error can touch; the outliers are still reported)
      */
-    public record Settings(double resolutionVolts, double minVolts, double maxVolts) {
+    public record Settings(double resolutionVolts, double minVolts, double maxVolts, boolean keepReadings) {
         /** Checks the values. */
         public Settings {
             Checks.checkArgument(resolutionVolts >= 0 && Double.isFinite(resolutionVolts),
                     "resolution must be 0 or positive: %s", resolutionVolts);
+        }
+
+        /** Settings for readings typed from a meter. */
+        public Settings(double resolutionVolts, double minVolts, double maxVolts) {
+            this(resolutionVolts, minVolts, maxVolts, false);
         }
 
         /** Resolution from the readings, no swing limit. */
@@ -301,6 +308,9 @@ public final class BoardFit {
             }
             int limit = Math.max(1, v.length / 50);
             int replaced = 0;
+            if (s.keepReadings()) {
+                return new Table(LevelTable.of(bits, measured, "measured"), true, 0);
+            }
             if (outliers.size() <= limit) {
                 for (int c : outliers) {
                     measured[c] = v[c];

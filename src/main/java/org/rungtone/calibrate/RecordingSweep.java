@@ -21,6 +21,8 @@ import org.rungtone.internal.Setting;
 public final class RecordingSweep {
     /** Ticks per pattern step: 20 ms at the sweep's 1 kHz tick. */
     public static final int PATTERN_TICKS = 20;
+    /** The hold per code unless told otherwise: 1024 codes take 41 s. */
+    public static final double DEFAULT_HOLD_SECONDS = 0.040;
     /** The shortest hold per code a recording sweep accepts. */
     public static final double MIN_HOLD_SECONDS = 0.010;
     /** The longest hold per code a recording sweep accepts. */

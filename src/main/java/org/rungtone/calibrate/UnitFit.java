@@ -55,10 +55,13 @@ public final class UnitFit {
     /**
      * Reads, fits and makes the profile.
      *
-     * @throws InputError when the readings cannot be read or fitted, their profile would be flat or falling
+     * @throws InputError when the resolution is not a positive voltage below 10 V, the readings cannot be read
+     *     or fitted, a reading shows finer digits than the resolution, their profile would be flat or falling
      *     ({@link UsableLevels}), or the board name is empty
      */
     public static Result run(Request r) {
+        r.resolutionVolts().ifPresent(q -> Setting.RESOLUTION.check(q > 0 && q < 10, "must be a positive voltage"
+                + " below 10 V, e.g. 1mV: %s", q));
         Optional<LadderSpec> ladder = r.ladder();
         int bitsOrZero = r.bits() != 0 ? r.bits() : ladder.map(LadderSpec::bits).orElse(0);
         Measurements m = MeasurementCsv.read(r.measurements(), bitsOrZero);

@@ -99,8 +99,14 @@ public enum Setting {
     RECORDING("sweep.recording"),
     /** The meter's step for every reading of a measurements file. */
     RESOLUTION("fit.resolution"),
+    /** The day a board was measured or recorded. */
+    DATE("fit.date"),
     /** The counts of the meter a plan chooses its codes for. */
     METER_COUNTS("plan.meter_counts"),
+    /** Check codes a plan measures on top of the basis. */
+    VERIFY("plan.verify"),
+    /** A plan measures every code. */
+    EVERY_CODE("plan.every_code"),
     /** A meter reading of the all-ones code that scales a recording's relative levels to volts. */
     FULL_SCALE_READING("listen.full_scale_reading");
 

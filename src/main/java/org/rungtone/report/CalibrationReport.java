@@ -13,7 +13,9 @@ import java.util.Optional;
 import org.rungtone.calibrate.BoardSimulation;
 import org.rungtone.calibrate.MeasurementPlan;
 import org.rungtone.calibrate.MeterAdvice;
+import org.rungtone.calibrate.MeterRanges;
 import org.rungtone.calibrate.PlannedCode;
+import org.rungtone.calibrate.RecordingSweep;
 import org.rungtone.firmware.EmitResult;
 import org.rungtone.internal.Units;
 import org.rungtone.ladder.LadderSpec;
@@ -38,9 +40,12 @@ public final class CalibrationReport {
      * @param sweep the sweep program written, when one was asked for
      * @param holdSeconds how long the sweep holds each code (unless it steps on a button)
      * @param buttonPin the pin of the button that steps the sweep, when given
+     * @param meter the meter the codes were chosen for, when given
+     * @param recording the sweep for a sound card's recording, when the plan is for one
      */
     public record Plan(LadderSpec ladder, MeasurementPlan plan, double lsbVolts, List<MeterAdvice> meters,
-            Optional<EmitResult> sweep, double holdSeconds, Optional<String> buttonPin) {
+            Optional<EmitResult> sweep, double holdSeconds, Optional<String> buttonPin, Optional<MeterRanges> meter,
+            Optional<RecordingSweep> recording) {
         /** Copies the list. */
         public Plan {
             Objects.requireNonNull(ladder, "ladder");
@@ -48,6 +53,14 @@ public final class CalibrationReport {
             meters = List.copyOf(meters);
             Objects.requireNonNull(sweep, "sweep");
             Objects.requireNonNull(buttonPin, "buttonPin");
+            Objects.requireNonNull(meter, "meter");
+            Objects.requireNonNull(recording, "recording");
+        }
+
+        /** A plan for a meter of no known count. */
+        public Plan(LadderSpec ladder, MeasurementPlan plan, double lsbVolts, List<MeterAdvice> meters,
+                Optional<EmitResult> sweep, double holdSeconds, Optional<String> buttonPin) {
+            this(ladder, plan, lsbVolts, meters, sweep, holdSeconds, buttonPin, Optional.empty(), Optional.empty());
         }
     }
 
@@ -70,6 +83,17 @@ public final class CalibrationReport {
         }
         b.append(t.render("  "));
         line(b, "");
+        if (p.recording().isPresent()) {
+            RecordingChecklist.text(b, p.recording().get(), model);
+            sweep(b, p);
+            line(b, "");
+            line(b, "Wrote %s", CalibrationFiles.joined(files));
+            line(b, "Next: record the sweep, then run");
+            line(b, "  rungtone calibrate listen RECORDING.wav --board NAME (with the same ladder, code and --hold"
+                    + " options)");
+            return b.toString();
+        }
+        p.meter().ifPresent(m -> RecordingChecklist.meterLine(b, m, p.plan()));
         meter(b, p);
         line(b, "");
         safety(b);
@@ -165,6 +189,8 @@ public final class CalibrationReport {
         root.put("meters", meters);
         root.put("sweep", p.sweep().map(EmitResult::report).orElse(List.of()));
         root.put("warnings", p.sweep().map(EmitResult::warnings).orElse(List.of()));
+        p.meter().ifPresent(m -> root.put("meter", Map.of("counts", m.counts(), "autoranging", m.autoranging())));
+        p.recording().ifPresent(r -> root.put("recording", RecordingChecklist.json(r, plan.expected())));
         root.put("files", CalibrationFiles.names(files));
         return root;
     }

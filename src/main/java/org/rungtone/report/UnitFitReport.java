@@ -45,6 +45,13 @@ public final class UnitFitReport {
                 : "unknown", r.request().resolutionVolts().isPresent() ? "given" : "from the readings' last digits",
                 fit.repeatSpreadVolts() > 0 ? mv(fit.repeatSpreadVolts()) + " rms" : "none (no code read twice)");
         line(b, "  so the readings resolve nothing below %s rms", mv(fit.floorVolts()));
+        sections(b, fit, s, r.profile(), files);
+        return b.toString();
+    }
+
+    /** The sections after the readings' summary: models, bits, residuals, profile, warnings, files. */
+    static void sections(StringBuilder b, FitReport fit, Optional<LadderSpec> s, UnitProfile profile,
+            List<Path> files) {
         line(b, "");
         models(b, fit);
         line(b, "");
@@ -52,7 +59,7 @@ public final class UnitFitReport {
         line(b, "");
         residuals(b, fit);
         line(b, "");
-        profile(b, fit, r.profile());
+        profile(b, fit, profile);
         if (!fit.warnings().isEmpty()) {
             line(b, "");
             line(b, "Warnings");
@@ -63,7 +70,6 @@ public final class UnitFitReport {
         line(b, "");
         line(b, "Wrote %s", CalibrationFiles.joined(files));
         line(b, "Next: rungtone build SOURCE --unit %s", files.get(0));
-        return b.toString();
     }
 
     private static void models(StringBuilder b, FitReport fit) {
@@ -148,8 +154,13 @@ public final class UnitFitReport {
 
     /** The JSON report of a fit; {@code files} are the profile, then the residuals. */
     public static Map<String, Object> json(UnitFit.Result r, List<Path> files) {
-        FitReport fit = r.fit();
         Map<String, Object> root = new LinkedHashMap<>();
+        fitJson(root, r.fit(), r.profile(), files);
+        return root;
+    }
+
+    /** The fit's JSON fields, from {@code source} to {@code files}, into {@code root}. */
+    static void fitJson(Map<String, Object> root, FitReport fit, UnitProfile p, List<Path> files) {
         root.put("source", fit.source());
         root.put("bits", fit.bits());
         root.put("readings", fit.readingCount());
@@ -177,7 +188,6 @@ public final class UnitFitReport {
         root.put("parameter_sigmas", fit.parameterSigmas());
         root.put("residuals", residualsJson(fit));
         root.put("outlier_codes", fit.outlierCodes());
-        UnitProfile p = r.profile();
         Map<String, Object> prof = new LinkedHashMap<>();
         prof.put("board", p.board());
         prof.put("date", p.date().toString());
@@ -187,7 +197,6 @@ public final class UnitFitReport {
         root.put("profile", prof);
         root.put("warnings", fit.warnings());
         root.put("files", CalibrationFiles.names(files));
-        return root;
     }
 
     private static List<Map<String, Object>> residualsJson(FitReport fit) {
