@@ -59,7 +59,8 @@ public record CodeChoice(boolean everyCode, OptionalInt verifyCount, Optional<Me
             return MeasurementPlan.everyCode(expected);
         }
         if (meter.isPresent() && expected.bits() > MeasurementPlan.EVERY_CODE_MAX_BITS) {
-            return MeasurementPlan.of(expected, verifyCount.orElse(MeasurementPlan.defaultVerifyCount(expected.bits())), meter);
+            int checks = verifyCount.orElse(MeasurementPlan.defaultVerifyCount(expected.bits()));
+            return MeasurementPlan.of(expected, checks, meter);
         }
         return verifyCount.isPresent() ? MeasurementPlan.of(expected, verifyCount.getAsInt(), meter)
                 : MeasurementPlan.of(expected);

@@ -16,10 +16,13 @@ import org.rungtone.ladder.LevelTable;
  * {@code x_k = [1, b_0(k), .., b_{N−1}(k)]}; a code read with the meter's step q has the variance q²/12
  * (Bennett 1948). With the information {@code M = Σ x xᵀ/σ²} of the codes so far, {@code P = M⁻¹} and
  * {@code G} the mean of {@code x_k x_kᵀ} over all codes, adding code c lowers the average variance
- * {@code trace(G·P)} by {@code x_cᵀ P G P x_c / (σ_c² + x_cᵀ P x_c)} (Sherman-Morrison). So an autoranging meter
- * gets most of its checks on its finer ranges, with enough above them that the coarse readings of the top
- * bits average out. A level is read at the step of the range that holds it 5 % higher than the model
- * expects (the parts' tolerance, common practice, no source), so a code near a range's top counts as coarse.
+ * {@code trace(G·P)} by {@code x_cᵀ P G P x_c / (σ_c² + x_cᵀ P x_c)} (Sherman-Morrison). The basis already
+ * reads the lower bits on the meter's finer ranges, so that choice alone puts the checks above them, where
+ * the coarse readings of the top bits need averaging; but a single reading of a bit can hold a typing error
+ * nothing would show, so the first half of the checks is chosen among codes the meter reads on a finer range
+ * than the highest level's (when there are any), the rest among all. A level is read at the step of the
+ * range that holds it 5 % higher than the model expects (the parts' tolerance, common practice, no source),
+ * so a code near a range's top counts as coarse.
  */
 final class MeterDesign {
     /** Above this many codes, the candidates are a spread subset (the choice costs p² per candidate). */
@@ -46,10 +49,15 @@ final class MeterDesign {
             addOuter(info, row(c, bits), 1 / variance(expected, c, meter, maxAbs));
         }
         double[][] g = meanOuter(bits);
-        int[] candidates = candidates(bits, used);
+        int[] all = candidates(bits, used);
+        double topStep = meter.stepVolts(maxAbs, maxAbs);
+        int[] fine = java.util.Arrays.stream(all).filter(c -> meter.stepVolts(expected.volts(c) * MARGIN, maxAbs)
+                < topStep).toArray();
         BitSet taken = (BitSet) used.clone();
         List<Integer> out = new ArrayList<>();
         for (int j = 0; j < count; j++) {
+            // the first half on the finer ranges, so that the basis's single readings there are checked too
+            int[] candidates = j < (count + 1) / 2 && fine.length > 0 ? fine : all;
             double[][] pInv = inverse(info);
             if (pInv == null) {
                 break;

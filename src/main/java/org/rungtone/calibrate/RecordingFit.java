@@ -45,7 +45,9 @@ public final class RecordingFit {
         PatternSearch search = new PatternSearch(y, fs);
         double stepSamples = fs * RecordingSweep.PATTERN_TICKS / 1000;
         PatternSearch.Found start = search.find(RecordingSweep.edgeTemplate(true), stepSamples, 0, y.length);
-        PatternSearch.Found end = search.find(RecordingSweep.edgeTemplate(false), stepSamples, 0, y.length);
+        PatternSearch.Found found = search.find(RecordingSweep.edgeTemplate(false), stepSamples, 0, y.length);
+        // both patterns pass the same input: an end pattern of the other polarity is not this sweep's
+        PatternSearch.Found end = found != null && start != null && found.jump() * start.jump() < 0 ? null : found;
         long[] ticks = sweep.stepStartTicks();
         double toEnd = ticks[sweep.endPatternStart()] * fs / 1000;
         checkPatterns(rec, sweep, start, end, toEnd);
@@ -86,7 +88,8 @@ public final class RecordingFit {
             if (start.start() + toEnd + sweep.patternSteps() * RecordingSweep.PATTERN_TICKS * fs / 1000
                     > rec.length()) {
                 throw refuse(rec, "ends %s after the sweep's start, but this plan's sweep takes %s: record the"
-                        + " whole sweep", seconds((rec.length() - start.start()) / fs), seconds(sweep.durationSeconds()));
+                        + " whole sweep", seconds((rec.length() - start.start()) / fs),
+                        seconds(sweep.durationSeconds()));
             }
             if (!after) {
                 throw refuse(rec, "holds the sweep's start pattern (at %s) but not its end pattern: is the"

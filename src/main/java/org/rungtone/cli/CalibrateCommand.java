@@ -2,7 +2,7 @@ package org.rungtone.cli;
 
 import java.util.concurrent.Callable;
 import org.rungtone.calibrate.BoardSimulation;
-import org.rungtone.calibrate.SimulatedBoard;
+import org.rungtone.calibrate.SimulatedBoard.Meter;
 import org.rungtone.project.CalibrationRuns;
 import org.rungtone.report.CalibrationReport;
 import picocli.CommandLine.Command;
@@ -79,7 +79,7 @@ public final class CalibrateCommand implements Runnable {
         @Override
         public Integer call() {
             CalibrationRuns.Written<BoardSimulation.Result> w = CalibrationRuns.simulate(new BoardSimulation.Request(
-                    codes.spec(), codes.choice(), new SimulatedBoard.Meter(noise, resolution, repeat), seed), output.out);
+                    codes.spec(), codes.choice(), new Meter(noise, resolution, repeat), seed), output.out);
             common.print(spec, false, () -> "", () -> CalibrationReport.simulationText(w.result(), w.files()));
             return 0;
         }

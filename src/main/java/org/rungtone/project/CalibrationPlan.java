@@ -54,8 +54,8 @@ public final class CalibrationPlan {
             Objects.requireNonNull(buttonPin, "buttonPin");
             Objects.requireNonNull(out, "out");
             if (recording && buttonPin.isPresent()) {
-                throw Setting.RECORDING.problem("%s needs the sweep's own timing; leave %s out", Setting.RECORDING.ref(),
-                        Setting.BUTTON.ref());
+                throw Setting.RECORDING.problem("%s needs the sweep's own timing; leave %s out",
+                        Setting.RECORDING.ref(), Setting.BUTTON.ref());
             }
         }
 

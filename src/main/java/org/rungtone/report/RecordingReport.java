@@ -75,7 +75,8 @@ public final class RecordingReport {
         TextTable t = new TextTable("step", "code", "part", "rms residual", "in LSB");
         for (int i = 0; i < Math.min(WORST_STEPS, order.length); i++) {
             int k = order[i];
-            t.row(k, codes[k], part(f.sweep(), k).word(), dbfs(res[k]), String.format(Locale.ROOT, "%.3f", res[k] / lsb));
+            t.row(k, codes[k], part(f.sweep(), k).word(), dbfs(res[k]), String.format(Locale.ROOT, "%.3f",
+                    res[k] / lsb));
         }
         b.append(t.render("  "));
     }

@@ -1,6 +1,9 @@
 package org.rungtone.calibrate;
 
+import java.nio.file.Path;
 import java.util.SplittableRandom;
+import org.rungtone.source.Signal;
+import org.rungtone.source.WavWriter;
 
 /**
  * A sound card's recording of a board playing a {@link RecordingSweep}, computed exactly: the board's levels
@@ -9,7 +12,7 @@ import java.util.SplittableRandom;
  * card's anti-alias filter as a short linear-phase low-pass, and rounding to 16-bit PCM with clipping at full
  * scale. Every parameter is the test's to draw; the fit is told none of them.
  */
-final class SyntheticRecording {
+public final class SyntheticRecording {
     /**
      * What the recording is made of.
      *
@@ -26,7 +29,7 @@ final class SyntheticRecording {
      * @param filtered whether the card's anti-alias filter rings at the edges
      * @param seed the noise's seed
      */
-    record Card(double rateHz, double gain, double offset, double cornerHz, double clockPpm, double leadSeconds,
+    public record Card(double rateHz, double gain, double offset, double cornerHz, double clockPpm, double leadSeconds,
             double tailSeconds, double noiseRms, double humHz, double humRms, boolean filtered, long seed) {
     }
 
@@ -34,7 +37,7 @@ final class SyntheticRecording {
     }
 
     /** The recording of {@code sweep} played on a board with {@code volts} per code, as 16-bit PCM values. */
-    static double[] record(RecordingSweep sweep, double[] volts, Card card) {
+    public static double[] record(RecordingSweep sweep, double[] volts, Card card) {
         double fs = card.rateHz();
         long[] ticks = sweep.stepStartTicks();
         int[] steps = sweep.stepCodes();
@@ -78,6 +81,17 @@ final class SyntheticRecording {
             y[j] = Math.max(-32768, Math.min(32767, Math.rint(v * 32768))) / 32768;
         }
         return y;
+    }
+
+    /** Writes the recording as a 16-bit PCM WAV file (lossless: {@link #record} rounds to 16 bits). */
+    public static Path wav(Path file, double[] y, double rateHz) {
+        WavWriter.write(file, Signal.of(y, rateHz), WavWriter.Format.PCM16);
+        return file;
+    }
+
+    /** A clean card: no hum, noise at {@code noiseRms}, the 5 V swing at {@code swing} full scale, 100 ppm. */
+    public static Card card(double rateHz, double swing, double noiseRms, double leadSeconds, double tailSeconds) {
+        return new Card(rateHz, swing / 5, 0, 4, 100, leadSeconds, tailSeconds, noiseRms, 0, 0, false, 3);
     }
 
     /** A 31-tap Hann-windowed sinc low-pass at 0.45 of the rate: the ringing of a card's decimation filter. */

@@ -8,8 +8,8 @@ import org.rungtone.quantize.Codes;
 /**
  * The requests that exercise every template of a family: contiguous, scattered, multi-port and wide pin maps
  * (plus forced strategies), packed and unpacked storage, every engine, the sweep with and without a button
- * and for a recording, and the family's timers in turn. Each request has its own symbol prefix ({@code c000}, {@code c001}, ...),
- * so one family's files can be compiled in one run.
+ * and for a recording, and the family's timers in turn. Each request has its own symbol prefix
+ * ({@code c000}, {@code c001}, ...), so one family's files can be compiled in one run.
  */
 final class TemplateMatrix {
     /** Engine and storage combinations per pin case: three engines twice, plus three sweeps. */
