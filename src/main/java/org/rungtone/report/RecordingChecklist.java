@@ -74,11 +74,12 @@ final class RecordingChecklist {
         }
         StringBuilder ranges = new StringBuilder();
         bySteps.forEach((step, count) -> ranges.append(ranges.length() == 0 ? "" : ", ").append(count)
-                .append(" on its ").append(Units.format(meter.counts() * step, "V")).append(" range (")
+                .append(" codes on its ").append(Units.format(meter.counts() * step, "V")).append(" range (")
                 .append(Units.format(step, "V")).append(" steps)"));
-        line(b, "Meter: %d-count, %s: %s.", meter.counts(), meter.autoranging() ? "autoranging" : "one range",
-                ranges);
-        line(b, "  Write every digit the meter shows, trailing zeros too: the fit weights each reading by them.");
+        line(b, "The codes for a %d-count %s meter", meter.counts(), meter.autoranging() ? "autoranging"
+                : "one-range");
+        TextLines.wrap(b, "  ", "It reads " + ranges + ". Write every digit it shows, trailing zeros too: the fit"
+                + " weights each reading by them.");
         line(b, "");
     }
 }

@@ -97,7 +97,8 @@ class CalibrateListenCommandTest {
         String[] ten = {"--topology", "weighted", "--bits", "10", "--tolerance", "5%"};
         Cli.Run r = ok(args(ten, "calibrate", "plan", "--meter-counts", "2000", "--out", dir.toString()));
         assertTrue(r.out().contains("32 codes to measure"), r.out());
-        assertTrue(r.out().contains("Meter: 2000-count, autoranging: "), r.out());
+        assertTrue(r.out().contains("The codes for a 2000-count autoranging meter\n  It reads 8 codes on its 200mV"
+                + " range (100µV steps), 12 codes on its 2V range (1mV steps), 12 codes"), r.out());
         assertEquals(32, MeasurementCsv.read(dir.resolve("plan.csv"), 10).unmeasured().size());
     }
 }
