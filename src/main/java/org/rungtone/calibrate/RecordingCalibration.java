@@ -1,15 +1,19 @@
 package org.rungtone.calibrate;
 
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import org.rungtone.internal.FileNames;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.Setting;
+import org.rungtone.internal.Units;
 import org.rungtone.ladder.LadderSpec;
 import org.rungtone.ladder.LevelTable;
 
@@ -21,6 +25,11 @@ import org.rungtone.ladder.LevelTable;
  * and the all-ones code one meter reading of it, or else the model's level too. Writes nothing.
  */
 public final class RecordingCalibration {
+    /** A recorded level may stray from the ladder model's by this many times the parts' tolerance. */
+    public static final double MODEL_TOLERANCES = 4;
+    /** ... and always by this share of the full swing. */
+    public static final double MIN_MODEL_SHARE = 0.05;
+
     private RecordingCalibration() {
     }
 
@@ -63,7 +72,8 @@ public final class RecordingCalibration {
      * Reads and fits the recording.
      *
      * @throws InputError for an unreadable or unusable recording (one line naming the file), a full-scale
-     *     reading at or below code 0's level, or levels that give no usable profile
+     *     reading at or below code 0's level, levels far from the ladder model's (another sweep's codes), or
+     *     levels that give no usable profile
      */
     public static Result run(Request r) {
         RecordingSweep sweep = sweep(r);
@@ -87,12 +97,12 @@ public final class RecordingCalibration {
         double high = r.fullScaleVolts().orElse(model.volts(top));
         if (!(high > low) || !Double.isFinite(high)) {
             throw Setting.FULL_SCALE_READING.error("must be a reading of the all-ones code, above code 0's %s:"
-                    + " %s", org.rungtone.internal.Units.format(low, "V"), org.rungtone.internal.Units.format(high,
-                            "V"));
+                    + " %s", Units.format(low, "V"), Units.format(high, "V"));
         }
         RecordingResult found = RecordingFit.fit(rec, sweep);
         int[] codes = sweep.planCodes();
         double[] rel = found.relativeLevels();
+        checkFollowsModel(rec, codes, rel, r.ladder());
         double[] sigma = found.relativeSigmas();
         List<Reading> readings = new ArrayList<>();
         for (int i = 0; i < codes.length; i++) {
@@ -113,5 +123,39 @@ public final class RecordingCalibration {
         }
         UnitProfile profile = UnitProfile.of(fit, board, r.date(), r.ladder().describe());
         return new Result(r, found, fit, profile);
+    }
+
+    /**
+     * Refuses levels that stray from the ladder model by more than {@value #MODEL_TOLERANCES} times the parts'
+     * tolerance (at least {@value #MIN_MODEL_SHARE}) of the full swing. Parts within a tolerance t move a
+     * level by at most about t/2 of the swing (to first order: the errors of the weights a code switches on
+     * against those of the rest), so a larger move means other codes than the plan's, or another board.
+     */
+    private static void checkFollowsModel(Recording rec, int[] codes, double[] rel, LadderSpec ladder) {
+        LevelTable model = ladder.levels();
+        int top = model.size() - 1;
+        double span = model.volts(top) - model.volts(0);
+        double limit = Math.max(MIN_MODEL_SHARE, MODEL_TOLERANCES * ladder.tolerance());
+        int worst = -1;
+        double worstDeviation = limit;
+        double[] expected = new double[codes.length];
+        for (int i = 0; i < codes.length; i++) {
+            expected[i] = (model.volts(codes[i]) - model.volts(0)) / span;
+            if (Math.abs(rel[i] - expected[i]) > worstDeviation) {
+                worstDeviation = Math.abs(rel[i] - expected[i]);
+                worst = i;
+            }
+        }
+        if (worst >= 0) {
+            throw new InputError(String.format(Locale.ROOT, "%s: the recording does not follow the ladder: code %d"
+                    + " sits at %.3f of the full swing, the model at %.3f (parts of %s keep it within %.3f); is"
+                    + " it of another sweep (give the plan's options: ladder, codes, --hold) or is the board"
+                    + " not built as described?", rec.source(), codes[worst], rel[worst], expected[worst],
+                    percent(ladder.tolerance()), limit));
+        }
+    }
+
+    private static String percent(double fraction) {
+        return new BigDecimal(100 * fraction).round(new MathContext(3)).stripTrailingZeros().toPlainString() + " %";
     }
 }

@@ -1,5 +1,6 @@
 package org.rungtone.calibrate;
 
+import java.util.Arrays;
 import java.util.Locale;
 import org.rungtone.internal.InputError;
 
@@ -17,6 +18,8 @@ public final class RecordingFit {
     public static final double MIN_JUMP = 0.005;
     /** The levels' median uncertainty must stay below this share of an LSB. */
     public static final double MAX_SIGMA_LSB = 0.25;
+    /** A fit that leaves more than this many times the recording's own noise does not follow its steps. */
+    public static final double MISFIT_RATIO = 10;
 
     private RecordingFit() {
     }
@@ -67,6 +70,12 @@ public final class RecordingFit {
         RecordingResult r = RecordingResult.of(rec, sweep, clock, bins, fitted);
         double lsb = Math.abs(r.swing()) / ((1 << sweep.bits()) - 1);
         if (r.medianLevelSigma() > MAX_SIGMA_LSB * lsb) {
+            double own = ownNoise(rec, clock.startSample(), last);
+            if (r.noiseRms() > MISFIT_RATIO * own) {
+                throw refuse(rec, "is of another sweep: this plan's %d codes held %d ms leave %.0f times the"
+                        + " recording's own noise; give the plan's options (codes, --hold) as for 'calibrate plan'",
+                        sweep.planCodes().length, sweep.holdTicks(), r.noiseRms() / own);
+            }
             throw refuse(rec, "is too quiet for %d-bit levels: their noise is %.2f LSB (at most %.2f); turn the"
                     + " line input's level up so the full swing reaches about -6 dBFS, or hold each code longer",
                     sweep.bits(), r.medianLevelSigma() / lsb, MAX_SIGMA_LSB);
@@ -100,6 +109,25 @@ public final class RecordingFit {
                     seconds((end.start() - start.start()) / fs - sweep.patternSteps() * 0.020),
                     sweep.planCodes().length, sweep.holdTicks(), seconds(toEnd / fs - sweep.patternSteps() * 0.020));
         }
+    }
+
+    /**
+     * The recording's own noise per sample between {@code from} and {@code to}, from the median magnitude of
+     * its sample-to-sample differences (steps and hum barely move it; the median of |N(0, 2σ²)| is
+     * 0.6745·√2·σ), at least the rounding of an integer format.
+     */
+    static double ownNoise(Recording rec, double from, double to) {
+        double[] y = rec.samples();
+        int a = (int) Math.max(0, from);
+        int b = (int) Math.min(y.length - 1, to);
+        double[] d = new double[Math.max(0, b - a)];
+        for (int i = a; i < b; i++) {
+            d[i - a] = Math.abs(y[i + 1] - y[i]);
+        }
+        Arrays.sort(d);
+        double median = d.length == 0 ? 0 : d[d.length / 2];
+        double rounding = rec.pcmBits() == 0 ? 0 : Math.pow(2, -(rec.pcmBits() - 1)) / Math.sqrt(12);
+        return Math.max(median / (0.6745 * Math.sqrt(2)), rounding);
     }
 
     /** Refuses two or more samples in a row at the format's largest value (or the smallest) within the sweep. */

@@ -1,6 +1,7 @@
 package org.rungtone.calibrate;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
@@ -11,6 +12,7 @@ import java.util.OptionalDouble;
 import java.util.OptionalInt;
 import java.util.SplittableRandom;
 import org.junit.jupiter.api.Test;
+import org.rungtone.internal.InputError;
 import org.rungtone.ladder.LadderSpec;
 import org.rungtone.ladder.LevelTable;
 import org.rungtone.ladder.Spread;
@@ -78,6 +80,40 @@ class RecordingCalibrationTest {
                 + " calibrated %.3f, loss %.3f bit%n", sweep.durationSeconds(), CompensationTest.median(exact),
                 CompensationTest.median(calibrated), loss);
         assertTrue(loss <= 0.05, "median ENOB loss " + loss + " bit");
+    }
+
+    @Test
+    void refusesTheRecordingOfOneCodeMoreWhoseStepsDoNotFitThePlan() {
+        LadderSpec ladder = LadderSpec.builder().topology(Topology.R2R).bits(8).tolerance(0.01).build();
+        RecordingSweep every = RecordingSweep.of(MeasurementPlan.everyCode(ladder.levels()), 0.020);
+        // the basis and 245 checks: one code fewer; the patterns' distance differs by 20 ms in 5.74 s, within
+        // what the clocks may stretch, so only the steps tell
+        RecordingSweep checks = RecordingSweep.of(MeasurementPlan.of(ladder.levels(), 245), 0.020);
+        assertEquals(every.durationSeconds() - 0.020, checks.durationSeconds(), 1e-12);
+        double[] y = SyntheticRecording.record(every, ladder.levels().levels(), SyntheticRecording.card(48_000, 0.5,
+                NOISE_RMS, 0.4, 0.3));
+        InputError e = assertThrows(InputError.class, () -> RecordingCalibration.fit(new Recording("bench.wav", y,
+                48_000, 16, 1, 1), checks, request(ladder, 0.020)));
+        assertEquals("bench.wav: the recording is of another sweep: this plan's 255 codes held 20 ms leave 2409 times"
+                + " the recording's own noise; give the plan's options (codes, --hold) as for 'calibrate plan'",
+                e.getMessage());
+    }
+
+    @Test
+    void refusesTheRecordingOfOtherCodesInAsManySteps() {
+        LadderSpec ladder = LadderSpec.builder().topology(Topology.R2R).bits(8).tolerance(0.01).build();
+        // a meter's plan and a plain one: the basis and 40 checks each, but not the same checks
+        MeasurementPlan meter = MeasurementPlan.of(ladder.levels(), 40, Optional.of(new MeterRanges(2000, true)));
+        MeasurementPlan plain = MeasurementPlan.of(ladder.levels(), 40);
+        RecordingSweep recorded = RecordingSweep.of(meter, 0.020);
+        RecordingSweep told = RecordingSweep.of(plain, 0.020);
+        double[] y = SyntheticRecording.record(recorded, ladder.levels().levels(), SyntheticRecording.card(48_000,
+                0.5, NOISE_RMS, 0.4, 0.3));
+        InputError e = assertThrows(InputError.class, () -> RecordingCalibration.fit(new Recording("bench.wav", y,
+                48_000, 16, 1, 1), told, request(ladder, 0.020)));
+        assertEquals("bench.wav: the recording does not follow the ladder: code 191 sits at 0.953 of the full swing,"
+                + " the model at 0.749 (parts of 1 % keep it within 0.050); is it of another sweep (give the plan's"
+                + " options: ladder, codes, --hold) or is the board not built as described?", e.getMessage());
     }
 
     @Test
