@@ -45,6 +45,8 @@ public final class AnalogModel {
     private static final int CORRECTION_TERMS = 6;
     /** Output samples per parallel chunk of the preview. */
     private static final int CHUNK = 1 << 17;
+    /** The largest hold factor (fine samples per code) whose summed kernel table is worth building. */
+    private static final int MAX_HELD_FACTOR = 64;
     /** Fine-grid samples each chunk's filter runs before its first needed input (several thousand time constants). */
     private static final int WARMUP = 1 << 16;
 
@@ -150,9 +152,11 @@ public final class AnalogModel {
         // Fixed-size chunks in parallel. Each chunk after the first starts its own filter WARMUP fine samples
         // early, so the filter state it reaches equals the sequential one to far below double precision; the
         // result does not depend on the number of cores.
-        if (raw) {
+        if (raw && factor <= MAX_HELD_FACTOR) {
             // No filter: the grid signal is the held staircase itself, so the kernel is summed over each
-            // hold once and every output reads codes instead of fine samples (factor times less work).
+            // hold once and every output reads codes instead of fine samples (factor times less work). Its
+            // table grows with the factor squared: very low rates (a factor past MAX_HELD_FACTOR) take the
+            // general path below with no filter, which gives the same result to rounding.
             SincResampler.Held held = resampler.new Held(factor);
             java.util.stream.IntStream.range(0, chunks).parallel().forEach(k -> resampler.resampleHeld(held, c,
                     normalised, k * CHUNK, Math.min(outLength, (k + 1) * CHUNK), offset, out));

@@ -31,6 +31,24 @@ public record QualityReport(String label, double sampleRateHz, int samples, doub
         Optional<CodeUse> codeUse, Optional<ListenerReport> listener) {
 
     /**
+     * A case whose figures were not measured (a sound too short for them, or silent): every figure NaN.
+     *
+     * @param label which case this is
+     * @param sampleRateHz rate of the codes
+     * @param samples number of samples
+     * @param inBandCutoffHz upper edge the in-band figure would have had
+     */
+    public static QualityReport unmeasured(String label, double sampleRateHz, int samples, double inBandCutoffHz) {
+        return new QualityReport(label, sampleRateHz, samples, inBandCutoffHz, Double.NaN, Double.NaN, Double.NaN,
+                Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Optional.empty(), Optional.empty());
+    }
+
+    /** True when the figures were measured (not {@link #unmeasured}). */
+    public boolean measured() {
+        return !Double.isNaN(sinadDb);
+    }
+
+    /**
      * ENOB re signal: {@code (sinadDb − 1.76)/6.02}, the programme at its own level. It is lower than
      * {@link #enobFullScaleBits} by the reference's distance below a full-scale sine, in steps of 6.02 dB.
      */

@@ -23,7 +23,9 @@ import org.rungtone.source.Signal;
  * seed from the spec) and measures the codes through the same table with {@link AudioMetrics} (the
  * quantization-only figures). Given the source as supplied ({@link ListenerMetrics}), each cell's codes are
  * also rendered through the analog model and measured against it (the listener figures of
- * {@link SurveyRow}), which shows what each rate loses. Flash bytes
+ * {@link SurveyRow}), which shows what each rate loses; a target is then checked against those (the listener
+ * SNR in the 20 kHz band as the SINAD, and ENOB re full scale from it), so a rate that loses audible treble
+ * does not reach a target its at-rate figures would. Flash bytes
  * are {@code n·(N ≤ 8 ? 1 : 2)} unpacked and {@code ceil(n·N/8)} bit-packed for n samples. The chosen row
  * fits the budget, reaches the target and needs the fewest flash bytes (packed or unpacked, as the spec
  * says); ties go to fewer bits (fewer pins and resistors), then to the lower rate (less CPU). Without a
@@ -160,7 +162,6 @@ public final class Survey {
         long packed = SurveyRow.packedBytes(n, bits);
         long counted = spec.packed() ? packed : unpacked;
         boolean fits = spec.flashBudgetBytes().isEmpty() || counted <= spec.flashBudgetBytes().getAsLong();
-        boolean reaches = spec.target().map(t -> t.isMet(r.sinadDb(), r.enobFullScaleBits())).orElse(false);
         double listenerSnr = Double.NaN;
         double listenerWeighted = Double.NaN;
         if (listener != null && listener.measurable((int) Math.floor(n * listener.model().previewRateHz()
@@ -169,9 +170,21 @@ public final class Survey {
             listenerSnr = heard.snrDb();
             listenerWeighted = heard.aWeightedSnrDb();
         }
+        final double heardSnr = listenerSnr;
+        boolean reaches = spec.target().map(t -> Double.isNaN(heardSnr) ? t.isMet(r.sinadDb(),
+                r.enobFullScaleBits()) : t.isMet(heardSnr, enobFullScale(heardSnr, r))).orElse(false);
         return new SurveyRow(bits, ref.sampleRateHz(), n, r.sinadDb(), r.inBandSnrDb(), r.aWeightedSnrDb(),
                 r.enobFullScaleBits(), quantized.clippedSamples(), unpacked, packed, fits, reaches, false,
                 listenerSnr, listenerWeighted);
+    }
+
+    /**
+     * ENOB re full scale of what the listener gets: its error power against a full-scale sine,
+     * {@code (snr − referenceRmsDbfs − 1.76)/6.02} (IEEE Std 1241-2010 ENOB from the error power), with the
+     * programme's level taken from the at-rate reference.
+     */
+    static double enobFullScale(double listenerSnrDb, QualityReport atRate) {
+        return (listenerSnrDb - atRate.referenceRmsDbfs() - 1.76) / 6.02;
     }
 
     private static List<SurveyRow> choose(List<SurveyRow> rows, SurveySpec spec) {

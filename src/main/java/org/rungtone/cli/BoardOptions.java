@@ -2,7 +2,7 @@ package org.rungtone.cli;
 
 import picocli.CommandLine.Option;
 
-/** The name and date of a fitted board and the report's form, shared by 'calibrate fit' and 'listen'. */
+/** The name and date of a fitted board, shared by 'calibrate fit' and 'listen'. */
 public final class BoardOptions {
     @Option(names = "--board", paramLabel = "NAME",
             description = "The board's name in the profile and its file name (default: the input's file name).")
@@ -10,7 +10,4 @@ public final class BoardOptions {
 
     @Option(names = "--date", paramLabel = "YYYY-MM-DD", description = "Date of the readings (default: today).")
     String date;
-
-    @Option(names = "--json", description = "Print JSON instead of text.")
-    boolean json;
 }

@@ -130,9 +130,7 @@ public final class BuildCommand implements Callable<Integer> {
         Boards.Board board = unit.resolve(bits, ladder, false);
         BuildPlan plan = plan(board);
         if (!common.quiet) {
-            for (String w : board.warnings()) {
-                spec.commandLine().getErr().println("rungtone: warning: " + w);
-            }
+            board.warnings().forEach(w -> spec.commandLine().getErr().println("rungtone: warning: " + w));
         }
         ProgressLine line = ProgressLine.forTerminal(spec.commandLine().getErr(), common);
         BuildSummary summary;
@@ -191,15 +189,16 @@ public final class BuildCommand implements Callable<Integer> {
     }
 
     BuildPlan plan(Boards.Board board) {
-        String symbol = CNames.symbol(name != null ? name : FileNames.stem(source, "sound"));
+        String given = name != null ? name : FileNames.stem(source, "sound");
+        String symbol = CNames.symbol(given);
         BuildPlan.Builder plan = BuildPlan.builder(source, symbol, out != null ? out : Path.of("rungtone-out", symbol))
-                .channel(channel).bits(bits != null ? bits : board.bits())
+                .channel(channel).name(given).bits(bits != null ? bits : board.bits())
                 .rateHz(rateHz == null ? OptionalDouble.empty() : OptionalDouble.of(rateHz)).dither(dither)
                 .shaping(shaping).seed(seed).removeDc(conditioning.removeDc()).trimDbfs(conditioning.trimDbfs())
                 .gainDb(conditioning.gainDb()).normalizeDbfs(conditioning.normalizeDbfs())
                 .fades(conditioning.fadeIn, conditioning.fadeOut).resampler(conditioning.resampler())
-                .fullScaleVolts(fullScale).flashQualifier(flashAttr)
-                .player(firmware.request()).loop(firmware.loopSpan()).flashBudgetBytes(firmware.flashBudgetBytes())
+                .fullScaleVolts(fullScale).flashQualifier(flashAttr).player(firmware.request())
+                .loop(firmware.loopSpan()).flashBudgetBytes(firmware.flashBudgetBytes())
                 .preview(preview.filter(), preview.previewRateHz).previewSeconds(preview.previewSeconds());
         board.levels().ifPresent(levels -> plan.board(levels, compensation));
         return plan.build();

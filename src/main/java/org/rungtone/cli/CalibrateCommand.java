@@ -80,7 +80,8 @@ public final class CalibrateCommand implements Runnable {
         public Integer call() {
             CalibrationRuns.Written<BoardSimulation.Result> w = CalibrationRuns.simulate(new BoardSimulation.Request(
                     codes.spec(), codes.choice(), new Meter(noise, resolution, repeat), seed), output.out);
-            common.print(spec, false, () -> "", () -> CalibrationReport.simulationText(w.result(), w.files()));
+            common.print(spec, output.json, () -> CalibrationReport.simulationJson(w.result(), w.files(), output.out,
+                    Version.get()), () -> CalibrationReport.simulationText(w.result(), w.files()));
             return 0;
         }
     }

@@ -63,8 +63,8 @@ public final class CalibrateFitCommand implements Callable<Integer> {
         CalibrationRuns.Written<UnitFit.Result> w = CalibrationRuns.fit(new UnitFit.Request(measurements, bitsOrZero,
                 ladderSpec, Optional.ofNullable(board.board), CalibrationRuns.day(Optional.ofNullable(board.date)),
                 resolution == null ? OptionalDouble.empty() : OptionalDouble.of(resolution)), output.out);
-        common.print(spec, board.json, () -> Json.toJson(UnitFitReport.json(w.result(), w.files())),
-                () -> UnitFitReport.text(w.result(), w.files()));
+        common.print(spec, output.json, () -> Json.toJson(UnitFitReport.json(w.result(), w.files(), output.out,
+                Version.get())), () -> UnitFitReport.text(w.result(), w.files()));
         return 0;
     }
 }

@@ -54,12 +54,12 @@ public final class CalibrateListenCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        OptionalDouble full = fullScale == null ? OptionalDouble.empty() : OptionalDouble.of(fullScale);
         CalibrationRuns.Written<RecordingCalibration.Result> w = CalibrationRuns.listen(new RecordingCalibration
                 .Request(recording, codes.spec(), codes.choice(), holdSeconds, Optional.ofNullable(board.board),
-                CalibrationRuns.day(Optional.ofNullable(board.date)), fullScale == null ? OptionalDouble.empty()
-                : OptionalDouble.of(fullScale)), output.out);
-        common.print(spec, board.json, () -> Json.toJson(RecordingReport.json(w.result(), w.files())),
-                () -> RecordingReport.text(w.result(), w.files()));
+                CalibrationRuns.day(Optional.ofNullable(board.date)), full), output.out);
+        common.print(spec, output.json, () -> Json.toJson(RecordingReport.json(w.result(), w.files(), output.out,
+                Version.get())), () -> RecordingReport.text(w.result(), w.files()));
         return 0;
     }
 }

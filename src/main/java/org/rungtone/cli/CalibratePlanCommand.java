@@ -57,9 +57,6 @@ public final class CalibratePlanCommand implements Callable<Integer> {
     @Mixin
     CalibrationFolder output;
 
-    @Option(names = "--json", description = "Print JSON instead of text.")
-    boolean json;
-
     @Override
     public Integer call() {
         CalibrationPlan.checkSweepOptions(Optional.ofNullable(firmware.engine), firmware.loop != null
@@ -68,8 +65,8 @@ public final class CalibratePlanCommand implements Callable<Integer> {
         CalibrationRuns.Written<CalibrationReport.Plan> w = CalibrationRuns.plan(new CalibrationPlan.Request(
                 codes.spec(), codes.choice(), firmware.request(), name, Version.get(), hold,
                 Optional.ofNullable(button), output.out, recording));
-        common.print(spec, json, () -> Json.toJson(CalibrationReport.planJson(w.result(), w.files())),
-                () -> CalibrationReport.planText(w.result(), w.files()));
+        common.print(spec, output.json, () -> Json.toJson(CalibrationReport.planJson(w.result(), w.files(), output.out,
+                Version.get())), () -> CalibrationReport.planText(w.result(), w.files()));
         return 0;
     }
 }

@@ -59,8 +59,8 @@ public final class FirmwareOptions {
             description = "Player engine: one-shot clip, looped clip, DDS wavetable oscillator (default clip).")
     PlaybackEngine engine;
 
-    @Option(names = "--loop", paramLabel = "START:END",
-            description = "Loop points of a looped sound, in samples (1200:9600) or times (0.25s:end).")
+    @Option(names = "--loop", paramLabel = "START:END|auto", description = "Loop points of a looped sound, in"
+            + " samples (1200:9600) or times (0.25s:end), or auto: a seamless loop found in a sustained sound.")
     String loop;
 
     @Option(names = "--dds-frequency", paramLabel = "<hz>", converter = Converters.Hertz.class,

@@ -128,7 +128,7 @@ public final class LadderCommand implements Callable<Integer> {
             files = LadderFiles.write(out, study);
             folder.commit();
         }
-        common.print(spec, json, () -> LadderReport.json(study, files),
+        common.print(spec, json, () -> LadderReport.json(study, files, out, Version.get()),
                 () -> LadderReport.text(study, allLevels, files));
         return 0;
     }

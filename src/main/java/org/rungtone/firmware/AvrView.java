@@ -15,9 +15,11 @@ import java.util.List;
  * @param clockSelect the CSn2:0 bits of the prescaler, e.g. {@code (_BV(CS11) | _BV(CS10))}
  * @param vector the compare-match interrupt vector, e.g. {@code TIMER1_COMPA_vect}
  * @param reads the flash reads of the tables
+ * @param isr the whole timer interrupt in assembler ({@link AvrFastTick}), or null (its section is false) when
+ *     the interrupt is the compiled C tick
  */
 record AvrView(long cpuClockHz, String cpuClockText, boolean timer0, boolean timer1, boolean timer2,
-        String clockSelect, String vector, Reads reads) {
+        String clockSelect, String vector, Reads reads, String isr) {
     /**
      * The avr-libc flash read of each table, sized to its entries.
      *
@@ -39,7 +41,8 @@ record AvrView(long cpuClockHz, String cpuClockText, boolean timer0, boolean tim
                 p.bits > 8 ? "lpm %A0, Z+\\n\\tlpm %B0, Z+" : "lpm %0, Z+");
         return new AvrView(Math.round(p.request.cpuClockHz()), Fmt.hz(p.request.cpuClockHz()),
                 k == TimerKind.AVR_TIMER0, k == TimerKind.AVR_TIMER1, k == TimerKind.AVR_TIMER2,
-                clockSelect(k, t.prescaler()), "TIMER" + timerNumber(k) + "_COMPA_vect", reads);
+                clockSelect(k, t.prescaler()), "TIMER" + timerNumber(k) + "_COMPA_vect", reads,
+                AvrFastTick.isr(p).orElse(null));
     }
 
     /**

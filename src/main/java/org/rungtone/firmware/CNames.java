@@ -62,6 +62,35 @@ public final class CNames {
         return s;
     }
 
+    /**
+     * What became of a name on its way to a symbol prefix, and why, in words; empty when the name is the
+     * symbol but for case and separators ({@code Door-Chime} gives {@code door_chime} without a note). E.g.
+     * {@code the name '9x' became the C symbol prefix 'snd_9x': a C identifier cannot start with a digit}.
+     *
+     * @throws InputError as {@link #symbol} does
+     */
+    public static java.util.Optional<String> rewritten(String name) {
+        String symbol = symbol(name);
+        String raw = name == null ? "" : name.trim();
+        // lower case and '-', '.' or spaces as '_' is what anyone expects (door-chime -> door_chime): no note
+        if (symbol.equals(raw.toLowerCase(Locale.ROOT).replaceAll("[-. ]+", "_"))) {
+            return java.util.Optional.empty();
+        }
+        java.util.List<String> why = new java.util.ArrayList<>();
+        if (!raw.equals(raw.toLowerCase(Locale.ROOT))) {
+            why.add("symbols are lower case");
+        }
+        if (!raw.matches("[A-Za-z0-9_]*") || raw.contains("__") || raw.startsWith("_") || raw.endsWith("_")) {
+            why.add("anything but ASCII letters and digits becomes one '_' (none at either end)");
+        }
+        if (symbol.startsWith("snd_") && !raw.toLowerCase(Locale.ROOT).startsWith("snd")) {
+            why.add("a C identifier cannot start with a digit, so 'snd_' goes first");
+        }
+        return java.util.Optional.of(String.format(Locale.ROOT, "the name '%s' became the C symbol prefix '%s': %s;"
+                + " to choose it yourself, give a name that already is one", raw, symbol,
+                String.join("; ", why)));
+    }
+
     /** The macro prefix for a symbol: upper case. */
     public static String macro(String symbol) {
         return symbol.toUpperCase(Locale.ROOT);

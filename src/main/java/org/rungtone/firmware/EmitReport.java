@@ -103,7 +103,8 @@ final class EmitReport {
                 + " (%s clock); rates up to %s keep it under %.0f %%; measured in simulation (ATmega328P,"
                 + " avr-gcc -Os)", c.worstCycles(), 100 * c.cpuShare(clock, p.tickRateHz), Fmt.hz(p.tickRateHz, 4),
                 Fmt.hz(clock), Fmt.hz(c.maxRateHz(clock, CPU_SHARE_LIMIT), 3), 100 * CPU_SHARE_LIMIT);
-        return Optional.of(c.idleOff() ? line + "; the timer interrupt is off while nothing plays" : line);
+        String how = AvrFastTick.applies(p) ? "; the interrupt is written in assembler" : "";
+        return Optional.of((c.idleOff() ? line + "; the timer interrupt is off while nothing plays" : line) + how);
     }
 
     private static String strategy(EmitPlan p) {

@@ -7,7 +7,8 @@ import java.util.Optional;
  * interrupt request to the end of its return, and the glitch window, the cycles from the first port write of
  * a tick to the last. The figures come from a table measured in simulation (simavr, ATmega328P at 16 MHz,
  * avr-gcc 5.4 with {@code -Os}), taken per storage, engine and number of ladder ports as the largest value
- * over the pin maps, code widths and strategies measured, rounded up to a multiple of five; the simulator
+ * over the pin maps, code widths and strategies measured, rounded up to a multiple of five (the assembler
+ * interrupt of {@link AvrFastTick} has its own rows, per strategy); the simulator
  * test fails when a build measures more than its figure. Only the avr family has figures: the generic player
  * runs in the user's interrupt, and no Cortex-M simulator checks the cortexm one.
  *
@@ -26,6 +27,19 @@ public record TickCost(int worstCycles, int windowCycles, boolean idleOff) {
         {130, 155, 170}, {225, 265, 250},
         {130, 160, 170}, {130, 160, 170},
     };
+    /**
+     * The assembler interrupt ({@link AvrFastTick}) for one, two and three ports. Rows: clip by shift, clip by
+     * table, loop by shift, loop by table.
+     */
+    private static final int[][] AVR_FAST_CYCLES = {
+        {60, 70, 85}, {65, 80, 90},
+        {70, 85, 95}, {75, 90, 105},
+    };
+    /** The assembler interrupt over packed codes of 1..7 bits ({@link AvrPackedTick}); rows as above. */
+    private static final int[][] AVR_FAST_PACKED_CYCLES = {
+        {110, 120, 130}, {115, 125, 140},
+        {110, 120, 130}, {115, 130, 140},
+    };
     /** Each port past the third (parts with more ports than the ATmega328P): extrapolated, not measured. */
     private static final int AVR_CYCLES_PER_EXTRA_PORT = 25;
     /** Each scatter term past one per port: the largest measured step was 16.2 cycles. */
@@ -39,6 +53,12 @@ public record TickCost(int worstCycles, int windowCycles, boolean idleOff) {
             return Optional.empty();
         }
         int ports = p.pins.ports().size();
+        if (AvrFastTick.applies(p)) {
+            int fast = 2 * (p.engine == PlaybackEngine.LOOP ? 1 : 0) + (p.strategy == PinStrategy.TABLE ? 1 : 0);
+            int[][] rows = AvrFastTick.packed(p) ? AVR_FAST_PACKED_CYCLES : AVR_FAST_CYCLES;
+            return Optional.of(new TickCost(rows[fast][Math.min(ports, 3) - 1]
+                    + AVR_CYCLES_PER_EXTRA_PORT * Math.max(0, ports - 3), ports - 1, true));
+        }
         int row = 2 * engineRow(p.engine) + (p.storage == SampleStorage.PACKED ? 1 : 0);
         int cycles = AVR_CYCLES[row][Math.min(ports, 3) - 1] + AVR_CYCLES_PER_EXTRA_PORT * Math.max(0, ports - 3);
         if (p.request.sweep().filter(s -> s.patternSteps() > 0 && p.engine == PlaybackEngine.SWEEP).isPresent()) {

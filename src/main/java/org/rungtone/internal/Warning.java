@@ -17,6 +17,8 @@ public record Warning(Kind kind, String text) {
         NOT_MONOTONIC,
         /** A pin sources or sinks more than the stated current limit. */
         PIN_CURRENT,
+        /** A sound was cut short to fit the flash budget (an automatic loop keeps its attack and one loop). */
+        SOUND_SHORTENED,
         /** Anything without a kind of its own. */
         OTHER
     }

@@ -11,6 +11,7 @@ import java.util.concurrent.CompletableFuture;
 import org.rungtone.calibrate.OutputSpan;
 import org.rungtone.firmware.EmitResult;
 import org.rungtone.firmware.FirmwareEmitter;
+import org.rungtone.firmware.FirmwareFacts;
 import org.rungtone.firmware.FirmwareRequest;
 import org.rungtone.firmware.FlashBudget;
 import org.rungtone.firmware.SampleArrayEmitter;
@@ -21,11 +22,14 @@ import org.rungtone.internal.AtomicFiles;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.OutputFolder;
 import org.rungtone.report.AnalysisPlots;
+import org.rungtone.report.BuildFacts;
 import org.rungtone.report.BuildReport;
 import org.rungtone.report.BuildSummary;
+import org.rungtone.report.ConditioningFacts;
 import org.rungtone.report.HtmlReport;
 import org.rungtone.report.Json;
 import org.rungtone.report.Plots;
+import org.rungtone.report.SoundPlots;
 import org.rungtone.source.WavWriter;
 
 /**
@@ -73,6 +77,7 @@ public final class Build {
         Stopwatch watch = new Stopwatch(progress);
         List<Path> files = new ArrayList<>();
         List<String> firmwareLines = new ArrayList<>();
+        Optional<FirmwareFacts> firmwareFacts = Optional.empty();
         List<String> warnings = new ArrayList<>(r.warnings());
         // Every check that can refuse the build runs before the first file is written.
         FirmwareEmitter.Rendered firmware = plan.firmware().player().isPresent() ? player(plan, r) : null;
@@ -80,13 +85,14 @@ public final class Build {
         // The preview and plots are written on another core while the C files are.
         CompletableFuture<List<Path>> assets = CompletableFuture.supplyAsync(() -> {
             Jobs.join(plotsReady);
-            return writeAssets(r, plan.outDir());
+            return writeAssets(r, plan.outDir(), SoundPlots.Scales.none());
         });
         try {
             if (firmware != null) {
                 EmitResult er = FirmwareEmitter.write(firmware, plan.outDir());
                 files.addAll(er.files());
                 firmwareLines.addAll(er.report());
+                firmwareFacts = Optional.of(er.facts());
                 warnings.addAll(er.warnings());
             } else {
                 files.addAll(emitArray(plan.symbol(), r, plan.outDir()));
@@ -107,11 +113,11 @@ public final class Build {
         files.add(html);
         Map<String, Double> laps = new LinkedHashMap<>(r.stageMillis());
         laps.putAll(watch.laps());
-        BuildSummary summary = summary(r, firmwareLines, flash, files, warnings, laps);
+        BuildSummary summary = summary(r, firmwareLines, firmwareFacts, flash, files, warnings, laps);
         AtomicFiles.writeString(txt, BuildReport.text(summary));
         Json.write(json, BuildReport.json(summary));
         HtmlReport.write(html, new HtmlReport.Page(plan.symbol(), toolVersion, List.of(), List.of(summary),
-                List.of(), flash, plan.firmware().flashBudgetBytes(), List.of(), Optional.empty()));
+                List.of(), flash, plan.firmware().flashBudgetBytes(), List.of(), Optional.empty(), List.of()));
         return summary;
     }
 
@@ -136,6 +142,9 @@ public final class Build {
 
     /** The firmware clip of a rendered sound, with its loop points. */
     public static SoundClip clip(String name, SoundRenderer.Rendered r) {
+        if (r.autoLoop().isPresent()) {
+            return new SoundClip(name, r.emitted(), r.autoLoop().get().start(), r.autoLoop().get().end());
+        }
         if (r.plan().firmware().loop().isPresent()) {
             int[] lp = r.plan().firmware().loop().get().samples(r.rateHz(), r.emitted().length());
             return new SoundClip(name, r.emitted(), lp[0], lp[1]);
@@ -154,11 +163,15 @@ public final class Build {
                 r.emitted(), r.plan().firmware().flashQualifier(), toolVersion, r.settings()), dir);
     }
 
-    /** The summary of a rendered sound with what emission added. */
-    public BuildSummary summary(SoundRenderer.Rendered r, List<String> firmwareLines, long flash,
-            List<Path> files, List<String> warnings, Map<String, Double> stageMillis) {
+    /** The summary of a rendered sound with what emission added (the player's facts, when one was emitted). */
+    public BuildSummary summary(SoundRenderer.Rendered r, List<String> firmwareLines,
+            Optional<FirmwareFacts> firmwareFacts, long flash, List<Path> files, List<String> warnings,
+            Map<String, Double> stageMillis) {
         BuildPlan plan = r.plan();
         QuantizeSettings q = plan.quantize();
+        BuildFacts facts = new BuildFacts(r.source(), ConditioningFacts.of(plan.conditioning().at(r.rateHz()),
+                r.conditioned()), plan.conditioning().resampler(), r.played(), q.board().isPresent(),
+                q.board().isPresent() && q.compensate(), plan.preview().filter(), firmwareFacts, plan.outDir());
         return new BuildSummary(toolVersion, plan.source().file(), r.layout(), plan.symbol(), plan.bits(),
                 r.rateHz(), r.emitted().length(), r.emitted().length() / r.rateHz(), q.dither().label(),
                 q.shaping().name(), q.seed(), SoundRenderer.describe(plan, r.conditioned()),
@@ -167,27 +180,24 @@ public final class Build {
                         .label(), r.shapingGainDb(), r.tone(),
                 new BuildSummary.PreviewInfo(plan.preview().filter().describe(), plan.preview().rateHz(),
                         r.preview().passbandTopHz(), r.preview().zohDroopDb(), r.preview().peak()),
-                firmwareLines, flash, files, warnings, stageMillis);
+                firmwareLines, flash, files, warnings, stageMillis, r.autoLoop(), facts);
     }
 
-    /** Writes preview.wav and the plots of a rendered sound into {@code dir}. */
-    public static List<Path> writeAssets(SoundRenderer.Rendered r, Path dir) {
+    /** Writes preview.wav and the plots of a rendered sound into {@code dir}, the plots on {@code scales}. */
+    public static List<Path> writeAssets(SoundRenderer.Rendered r, Path dir, SoundPlots.Scales scales) {
         List<Path> files = new ArrayList<>();
         Path previewFile = dir.resolve("preview.wav");
         WavWriter.write(previewFile, r.preview().signal(), WavWriter.Format.PCM16);
         files.add(previewFile);
-        if (r.errorSpectrum() != null) {
-            Path errPlot = dir.resolve("error-spectrum.png");
-            AnalysisPlots.writeErrorSpectrum(errPlot, r.errorSpectrum(), r.inBandCutoffHz());
-            files.add(errPlot);
-        }
-        if (r.tone().isPresent() && r.toneSpectrum().isPresent()) {
-            Path specPlot = dir.resolve("spectrum.png");
-            AnalysisPlots.writeSpectrum(specPlot, r.toneSpectrum().get(), r.tone().get(), r.plan().bits());
-            files.add(specPlot);
-        }
+        files.addAll(SoundPlots.write(dir, plotData(r), scales));
         return files;
     }
 
-
+    /** What the plots of a rendered sound draw. */
+    public static SoundPlots.Data plotData(SoundRenderer.Rendered r) {
+        BuildPlan plan = r.plan();
+        return new SoundPlots.Data(plan.symbol(), plan.bits(), plan.quantize().dither(),
+                plan.quantize().shaping().order() > 0, Optional.ofNullable(r.errorSpectrum()), r.inBandCutoffHz(),
+                r.toneSpectrum(), r.tone());
+    }
 }

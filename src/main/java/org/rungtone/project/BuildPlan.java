@@ -78,11 +78,18 @@ public record BuildPlan(String symbol, Path outDir, SourceSettings source, Condi
         private Optional<LoopSpan> loop = Optional.empty();
         private OptionalLong flashBudgetBytes = OptionalLong.empty();
         private String flashQualifier = "";
+        private String name;
 
         private Builder(Path source, String symbol, Path outDir) {
             this.source = source;
             this.symbol = symbol;
             this.outDir = outDir;
+        }
+
+        /** The sound's name as given, before it became a C symbol (default: the symbol itself). */
+        public Builder name(String value) {
+            name = value;
+            return this;
         }
 
         /** 0 mixes all channels down (the default), 1..8 picks one. */
@@ -214,7 +221,7 @@ public record BuildPlan(String symbol, Path outDir, SourceSettings source, Condi
          * @throws org.rungtone.internal.SettingError naming the setting at fault
          */
         public BuildPlan build() {
-            return new BuildPlan(symbol, outDir, new SourceSettings(source, channel),
+            return new BuildPlan(symbol, outDir, new SourceSettings(source, channel, name == null ? symbol : name),
                     new ConditioningSettings(rateHz, removeDc, trimDbfs, gainDb, normalizeDbfs, fadeInSeconds,
                             fadeOutSeconds, resampler),
                     new QuantizeSettings(bits, dither, shaping, seed, board, compensation),

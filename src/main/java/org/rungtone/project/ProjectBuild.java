@@ -17,6 +17,7 @@ import org.rungtone.firmware.CNames;
 import org.rungtone.firmware.DdsSpec;
 import org.rungtone.firmware.EmitResult;
 import org.rungtone.firmware.FirmwareEmitter;
+import org.rungtone.firmware.FirmwareFacts;
 import org.rungtone.firmware.FirmwareRequest;
 import org.rungtone.firmware.FlashBudget;
 import org.rungtone.firmware.PlaybackEngine;
@@ -37,6 +38,9 @@ import org.rungtone.report.BuildSummary;
 import org.rungtone.report.HtmlReport;
 import org.rungtone.report.Json;
 import org.rungtone.report.ProjectReport;
+import org.rungtone.report.SoundPlots;
+import org.rungtone.report.ProjectSetting;
+import org.rungtone.report.ProjectSetting.Origin;
 
 /**
  * Builds every sound of a {@link Project} into one coherent set of outputs: one header exposing all sounds,
@@ -161,11 +165,12 @@ public final class ProjectBuild {
      */
     private record Shared(Path outDir, int bits, Dither dither, ErrorFilter shaping, long seed,
             Compensation compensation, Optional<LevelTable> board, OptionalDouble rateHz,
-            Map<String, String> settings) {
+            Map<String, ProjectSetting> settings) {
     }
 
     /** What emission wrote and said. */
-    private record Emitted(List<Path> files, List<String> firmwareLines, List<String> warnings, long flashBytes) {
+    private record Emitted(List<Path> files, List<String> firmwareLines, List<String> warnings, long flashBytes,
+            Optional<FirmwareFacts> facts) {
     }
 
     private Result build(Project project, Overrides o) {
@@ -211,44 +216,52 @@ public final class ProjectBuild {
         Build build = new Build(toolVersion);
         List<Path> files = new ArrayList<>(emitted.files());
         List<BuildSummary> summaries = new ArrayList<>();
+        // comparable plots of all sounds share their y ranges
+        SoundPlots.Scales scales = SoundPlots.Scales.of(rendered.stream().map(Build::plotData).toList());
         for (SoundRenderer.Rendered r : rendered) {
-            List<Path> assets = Build.writeAssets(r, r.plan().outDir());
+            List<Path> assets = Build.writeAssets(r, r.plan().outDir(), scales);
             files.addAll(assets);
             SampleStorage storage = player.map(FirmwareRequest::storage).orElse(SampleStorage.UNPACKED);
             long soundBytes = storage.bytes(r.emitted().length(), r.plan().bits());
-            summaries.add(build.summary(r, List.of(), soundBytes, assets, r.warnings(), r.stageMillis()));
+            summaries.add(build.summary(r, List.of(), Optional.empty(), soundBytes, assets, r.warnings(),
+                    r.stageMillis()));
         }
         return writeReports(project, shared, summaries, emitted, files);
     }
 
     /** Decides the shared settings: command line over project file over defaults. */
     private Shared settle(Project project, Overrides o) {
-        Map<String, String> settings = new LinkedHashMap<>();
+        Map<String, ProjectSetting> settings = new LinkedHashMap<>();
         Path outDir = o.outDir().or(project::outDir)
                 .orElse(project.file().toAbsolutePath().getParent().resolve("rungtone-out").resolve(project.name()))
                 .toAbsolutePath().normalize();
-        settings.put(OUT_SETTING, outDir + origin(o.outDir().isPresent(), project.outDir().isPresent()));
+        settings.put(OUT_SETTING, ProjectSetting.shown(outDir, outDir.toString(), Origin.of(o.outDir().isPresent(),
+                project.outDir().isPresent())));
         AtomicFiles.checkFolderUsable(outDir);
         Project.Quantize q = project.quantize();
         int fixedBits = o.bits().isPresent() ? o.bits().getAsInt() : q.bits().map(Long::intValue).orElse(0);
         Optional<LevelTable> board = Boards.ofProject(project, o.unit(), o.ladder(), fixedBits);
         int bits = fixedBits != 0 ? fixedBits : board.map(LevelTable::bits).orElse(LadderSpec.DEFAULT_BITS);
-        settings.put("bits", bits + (fixedBits == 0 && board.isPresent() ? "  (board)"
-                : origin(o.bits().isPresent(), q.bits().isPresent())));
+        settings.put("bits", ProjectSetting.shown(bits, Integer.toString(bits), fixedBits == 0 && board.isPresent()
+                ? Origin.BOARD : Origin.of(o.bits().isPresent(), q.bits().isPresent())));
         Dither dither = o.dither().or(q::dither).orElse(Defaults.DITHER);
-        settings.put("dither", dither.label() + origin(o.dither().isPresent(), q.dither().isPresent()));
+        settings.put("dither", shown(dither.label(), Origin.of(o.dither().isPresent(), q.dither().isPresent())));
         ErrorFilter shaping = o.shaping().or(q::shaping).orElse(Defaults.SHAPING);
-        settings.put("shaping", shaping.name() + origin(o.shaping().isPresent(), q.shaping().isPresent()));
+        settings.put("shaping", shown(shaping.name(), Origin.of(o.shaping().isPresent(), q.shaping().isPresent())));
         long seed = o.seed().or(project::seed).orElse(Defaults.SEED);
-        settings.put("seed", seed + origin(o.seed().isPresent(), project.seed().isPresent()));
+        settings.put("seed", ProjectSetting.shown(seed, Long.toString(seed), Origin.of(o.seed().isPresent(),
+                project.seed().isPresent())));
         Compensation compensation = o.compensation().or(project::compensation).orElse(Defaults.COMPENSATION);
-        settings.put("levels", board.map(LevelTable::origin).orElse("ideal ladder"));
+        String levels = board.map(LevelTable::origin).orElse("ideal ladder");
+        settings.put("levels", ProjectSetting.plain(levels, levels, board.isEmpty() ? Origin.DEFAULT
+                : Origin.of(o.unit().isPresent() || o.ladder().given(), true)));
         if (board.isPresent() && span != OutputSpan.FULL) {
-            settings.put("span", span.key());
+            settings.put("span", ProjectSetting.plain(span.key(), span.key(),
+                    Origin.of(project.quantize().span().filter(span::equals).isEmpty(), true)));
         }
         if (board.isPresent()) {
-            settings.put("compensation", compensation.key()
-                    + origin(o.compensation().isPresent(), project.compensation().isPresent()));
+            settings.put("compensation", shown(compensation.key(), Origin.of(o.compensation().isPresent(),
+                    project.compensation().isPresent())));
         }
         OptionalDouble rate = o.rateHz().isPresent() ? o.rateHz() : q.rateHz();
         return new Shared(outDir, bits, dither, shaping, seed, compensation, board, rate, settings);
@@ -273,7 +286,7 @@ public final class ProjectBuild {
         Project.Preview pv = project.preview();
         BuildPlan.Builder plan = BuildPlan.builder(s.source(), symbol,
                         shared.outDir().resolve(CNames.symbol(s.name())))
-                .channel(s.channel().map(Long::intValue).orElse(0)).bits(shared.bits()).rateHz(rate)
+                .channel(s.channel().map(Long::intValue).orElse(0)).name(s.name()).bits(shared.bits()).rateHz(rate)
                 .dither(shared.dither()).shaping(shared.shaping()).seed(shared.seed())
                 .removeDc(!s.keepDc().orElse(false)).trimDbfs(s.trimDbfs()).gainDb(s.gainDb())
                 .normalizeDbfs(s.gainDb().isPresent() ? OptionalDouble.empty()
@@ -293,7 +306,7 @@ public final class ProjectBuild {
         String prefix = CNames.symbol(project.name());
         if (player.isPresent()) {
             FirmwareRequest.Builder fb = player.get().toBuilder().name(prefix).toolVersion(toolVersion);
-            for (Map.Entry<String, String> e : shared.settings().entrySet()) {
+            for (Map.Entry<String, String> e : ProjectSetting.texts(shared.settings()).entrySet()) {
                 if (!e.getKey().equals(OUT_SETTING)) {
                     fb.setting(e.getKey() + ": " + e.getValue());
                 }
@@ -307,7 +320,7 @@ public final class ProjectBuild {
                 }
             }
             EmitResult er = FirmwareEmitter.emit(fb.build(), shared.outDir());
-            return new Emitted(er.files(), er.report(), er.warnings(), er.flashBytes());
+            return new Emitted(er.files(), er.report(), er.warnings(), er.flashBytes(), Optional.of(er.facts()));
         }
         long flash = 0;
         for (SoundRenderer.Rendered r : rendered) {
@@ -324,7 +337,7 @@ public final class ProjectBuild {
         for (SoundRenderer.Rendered r : rendered) {
             files.addAll(build.emitArray(r.plan().symbol(), r, shared.outDir()));
         }
-        return new Emitted(files, List.of(), List.of(), flash);
+        return new Emitted(files, List.of(), List.of(), flash, Optional.empty());
     }
 
     /** Writes report.txt, report.json and report.html of the whole project. */
@@ -340,20 +353,21 @@ public final class ProjectBuild {
         long budget = (long) project.target().flashBudgetBytes().orElse(0);
         List<String> warnings = emitted.warnings();
         ProjectReport.Input in = new ProjectReport.Input(toolVersion, project.file(), project.name(),
-                shared.settings(), summaries, emitted.firmwareLines(), emitted.flashBytes(), budget, files, warnings);
+                shared.settings(), summaries, emitted.firmwareLines(), emitted.flashBytes(), budget, files, warnings,
+                emitted.facts(), outDir);
         Result result = new Result(outDir, summaries, emitted.firmwareLines(), emitted.flashBytes(),
-                shared.settings(), files, warnings, in);
+                ProjectSetting.texts(shared.settings()), files, warnings, in);
         AtomicFiles.writeString(txt, ProjectReport.text(in));
         Json.write(json, ProjectReport.json(in));
         HtmlReport.write(html, new HtmlReport.Page(project.name() + " (" + project.file().getFileName() + ")",
-                toolVersion, HtmlReport.Setting.of(shared.settings()), summaries, List.of(), emitted.flashBytes(),
+                toolVersion, HtmlReport.Setting.of(result.settings()), summaries, List.of(), emitted.flashBytes(),
                 budget > 0 ? OptionalLong.of(budget) : OptionalLong.empty(), ProjectReport.warningsOf(in),
-                Optional.empty()));
+                Optional.empty(), files));
         return result;
     }
 
-    private static String origin(boolean cli, boolean file) {
-        return cli ? "  (command line)" : file ? "  (project file)" : "  (default)";
+    private static ProjectSetting shown(String value, Origin origin) {
+        return ProjectSetting.shown(value, value, origin);
     }
 
     private static void checkOneRate(Project p, Overrides o, OptionalDouble projectRate) {
@@ -377,12 +391,14 @@ public final class ProjectBuild {
         }
     }
 
-    private static Optional<FirmwareRequest> player(Project p, Overrides o, Map<String, String> settings) {
+    private static Optional<FirmwareRequest> player(Project p, Overrides o, Map<String, ProjectSetting> settings) {
         Project.Target t = p.target();
         boolean fileWants = t.family().isPresent() || t.pins().isPresent();
         if (!fileWants && !o.wantsPlayer()) {
             if (t.flashBudgetBytes().isPresent()) {
-                settings.put("flash budget", Units.format(t.flashBudgetBytes().getAsDouble(), "B"));
+                double budget = t.flashBudgetBytes().getAsDouble();
+                settings.put("flash budget", ProjectSetting.plain((long) budget, Units.format(budget, "B"),
+                        Origin.PROJECT_FILE));
             }
             return Optional.empty();
         }
@@ -403,8 +419,18 @@ public final class ProjectBuild {
         }
         t.flashBudgetBytes().ifPresent(x -> b.flashBudgetBytes((long) x));
         FirmwareRequest r = o.firmware().apply(b).build();
-        settings.put("target", r.family() + (r.pins().map(x -> ", pins " + x).orElse("")));
-        settings.put("engine", r.engine().name().toLowerCase(Locale.ROOT));
+        settings.put("target", ProjectSetting.plain(r.family(), r.family() + r.pins().map(x -> ", pins " + x)
+                .orElse(""), origin(t.family(), "generic", r.family())));
+        settings.put("pins", ProjectSetting.jsonOnly(r.pins().orElse(null), origin(t.pins(), null,
+                r.pins().orElse(null))));
+        String engineKey = r.engine().name().toLowerCase(Locale.ROOT);
+        settings.put("engine", ProjectSetting.plain(engineKey, engineKey, origin(t.engine(), engine, r.engine())));
         return Optional.of(r);
+    }
+
+    /** Where a target setting came from: the command line when it changed the file's value or the default. */
+    private static <T> Origin origin(Optional<T> inFile, T byDefault, T used) {
+        return !java.util.Objects.equals(inFile.orElse(byDefault), used) ? Origin.COMMAND_LINE
+                : Origin.of(false, inFile.isPresent());
     }
 }

@@ -9,11 +9,11 @@ import java.util.Optional;
 import java.util.concurrent.CompletableFuture;
 import java.util.function.Consumer;
 import org.rungtone.analysis.AnalogModel;
-import org.rungtone.analysis.AudioMetrics;
 import org.rungtone.analysis.CodeUse;
 import org.rungtone.analysis.ListenerMetrics;
 import org.rungtone.analysis.ListenerReport;
 import org.rungtone.analysis.QualityReport;
+import org.rungtone.analysis.SeamlessLoop;
 import org.rungtone.analysis.SineFit;
 import org.rungtone.analysis.Spectrum;
 import org.rungtone.analysis.ToneAnalysis;
@@ -22,12 +22,14 @@ import org.rungtone.calibrate.OutputSpan;
 import org.rungtone.condition.Conditioner;
 import org.rungtone.condition.Conditioning;
 import org.rungtone.condition.KaiserResampler;
+import org.rungtone.firmware.CNames;
+import org.rungtone.internal.FileNames;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.Units;
 import org.rungtone.ladder.LevelTable;
 import org.rungtone.quantize.Codes;
-import org.rungtone.quantize.ErrorFilter;
 import org.rungtone.quantize.Quantizer;
+import org.rungtone.report.SourceFacts;
 import org.rungtone.source.Signal;
 
 /**
@@ -45,6 +47,7 @@ import org.rungtone.source.Signal;
  * from the file (at most its first minute) with the conditioning's trim and fades.
  */
 public final class SoundRenderer {
+
     /** A reference whose 4-parameter sine fit leaves less than this residual (dB) counts as a single tone. */
     private static final double TONE_THRESHOLD_DB = 40;
     /** A three-parameter fit at the spectral peak below this (dB) rules a single tone out at once. */
@@ -71,6 +74,7 @@ public final class SoundRenderer {
      *
      * @param plan the plan it came from
      * @param layout the source's description
+     * @param source what was read, as values
      * @param rateHz the target rate
      * @param conditioned what conditioning did
      * @param emitted the codes the firmware holds
@@ -86,16 +90,18 @@ public final class SoundRenderer {
      * @param settings "key: value" lines for the C header comment
      * @param warnings what the user should know
      * @param stageMillis timings so far
+     * @param autoLoop the loop found in the sound, when its loop is auto (the codes hold its crossfades)
      */
-    public record Rendered(BuildPlan plan, String layout, double rateHz, Conditioner.Conditioned conditioned,
-            Codes emitted, LevelTable played, List<QualityReport> quality, Optional<Double> shapingGainDb,
-            Optional<ToneReport> tone, AnalogModel.Preview preview, Spectrum errorSpectrum,
-            Optional<Spectrum> toneSpectrum, double inBandCutoffHz, long clippedSamples, List<String> settings,
-            List<String> warnings, Map<String, Double> stageMillis) {
+    public record Rendered(BuildPlan plan, String layout, SourceFacts source, double rateHz,
+            Conditioner.Conditioned conditioned, Codes emitted, LevelTable played, List<QualityReport> quality,
+            Optional<Double> shapingGainDb, Optional<ToneReport> tone, AnalogModel.Preview preview,
+            Spectrum errorSpectrum, Optional<Spectrum> toneSpectrum, double inBandCutoffHz, long clippedSamples,
+            List<String> settings, List<String> warnings, Map<String, Double> stageMillis,
+            Optional<SeamlessLoop> autoLoop) {
     }
 
     /** The codes of every ladder case and how they use the range. */
-    private record Cases(Quantizer.Quantized ideal, LevelTable idealTable, Codes emitted, LevelTable played,
+    record Cases(Quantizer.Quantized ideal, LevelTable idealTable, Codes emitted, LevelTable played,
             long clipped, Optional<Codes> compensated, double[] range, CodeUse idealUse,
             Optional<CodeUse> compensatedUse) {
 
@@ -103,10 +109,6 @@ public final class SoundRenderer {
         CodeUse emittedUse() {
             return compensatedUse.orElse(idealUse);
         }
-    }
-
-    /** The figures of every ladder case, emitted case last. */
-    private record Figures(List<QualityReport> quality, Spectrum errorSpectrum, Optional<Double> shapingGainDb) {
     }
 
     /**
@@ -122,11 +124,14 @@ public final class SoundRenderer {
         Conditioner.Conditioned conditioned = prepared.conditioned();
         Signal reference = conditioned.signal();
         if (reference.length() < 2) {
-            throw InputError.inFile(plan.source().file(), "nothing is left to build after conditioning"
-                    + " (all trimmed?)");
+            throw InputError.inFile(plan.source().file(), tooShort(plan, reference.length()));
         }
         List<String> warnings = new ArrayList<>(prepared.warnings());
+        CNames.rewritten(plan.source().name()).ifPresent(warnings::add);
         warnings.addAll(conditioned.warnings());
+        Optional<AutoLoop.Placed> loop = AutoLoop.place(plan, reference);
+        loop.flatMap(AutoLoop.Placed::shortened).ifPresent(w -> warnings.add(w.text()));
+        reference = loop.map(AutoLoop.Placed::signal).orElse(reference);
         Cases cases = quantize(plan, reference);
         watch.lap("quantize");
         if (cases.clipped() > 0) {
@@ -138,15 +143,19 @@ public final class SoundRenderer {
                     + " samples (its input went past the end levels), which adds distortion; lower the level",
                     100 * use.overloadFraction()));
         }
-        // The preview is independent of the figures: render it on another core meanwhile.
-        CompletableFuture<AnalogModel.Preview> previewJob = startPreview(plan, cases, model, rate, warnings);
+        // The preview is independent of the figures: render it on another core meanwhile. With an automatic
+        // loop it plays the loop several times, so the listener figures render the stored codes on their own.
+        CompletableFuture<AnalogModel.Preview> previewJob = startPreview(plan, AutoLoop.previewed(cases.emitted(),
+                loop), cases.played(), model, rate, warnings);
         // What the listener gets follows the preview on the same core.
         CompletableFuture<Optional<ListenerReport>> listenerJob = previewJob.thenApply(p -> prepared.listener()
-                .filter(l -> l.measurable(p.signal().length())).map(l -> l.measure(p.signal())));
+                .filter(l -> l.measurable(p.signal().length())).map(l -> loop.isEmpty() ? l.measure(p.signal())
+                        : l.measure(cases.emitted(), cases.played())));
         // in-band figures stop where the analog output's passband does (rate/2, or a lower filter cutoff),
         // and at 20 kHz: the one definition the survey uses too
         double cutoff = model.inBandTopHz(rate);
-        Figures figures = measure(plan, reference, cases, cutoff);
+        SoundFigures.Figures figures = SoundFigures.of(plan, prepared.wavetable(), reference, cases, cutoff,
+                warnings);
         Optional<ToneReport> tone = Optional.empty();
         Optional<Spectrum> toneSpectrum = Optional.empty();
         if (isTone(reference)) {
@@ -165,10 +174,10 @@ public final class SoundRenderer {
             quality.set(last, quality.get(last).withListener(heard.get()));
             watch.lap("listener");
         }
-        return new Rendered(plan, prepared.layout(), rate, conditioned, cases.emitted(), cases.played(),
-                quality, figures.shapingGainDb(), tone, preview, figures.errorSpectrum(), toneSpectrum,
+        return new Rendered(plan, prepared.layout(), prepared.source(), rate, conditioned, cases.emitted(),
+                cases.played(), quality, figures.shapingGainDb(), tone, preview, figures.errorSpectrum(), toneSpectrum,
                 cutoff, cases.clipped(), settings(plan, prepared.layout(), conditioned, cases.played(), rate,
-                        cases.range()), warnings, watch.laps());
+                        cases.range()), warnings, watch.laps(), loop.map(AutoLoop.Placed::loop));
     }
 
     /** Quantizes onto the ideal ladder and, with a board, onto its real levels when compensating. */
@@ -195,9 +204,8 @@ public final class SoundRenderer {
     }
 
     /** Starts rendering the preview of the emitted codes (its first seconds) on another core. */
-    private static CompletableFuture<AnalogModel.Preview> startPreview(BuildPlan plan, Cases cases,
-            AnalogModel model, double rate, List<String> warnings) {
-        Codes emitted = cases.emitted();
+    private static CompletableFuture<AnalogModel.Preview> startPreview(BuildPlan plan, Codes emitted,
+            LevelTable played, AnalogModel model, double rate, List<String> warnings) {
         int previewCodes = (int) Math.min(emitted.length(), Math.ceil(plan.preview().seconds() * rate));
         Codes previewInput = previewCodes == emitted.length() ? emitted : Codes.of(emitted.bits(), rate,
                 Arrays.copyOf(emitted.unsafeCodes(), previewCodes));
@@ -205,51 +213,24 @@ public final class SoundRenderer {
             warnings.add(String.format(Locale.ROOT, "preview.wav holds the first %.0f s of %.0f s; set"
                     + " the preview length to all for the whole sound", previewCodes / rate, emitted.length() / rate));
         }
-        LevelTable played = cases.played();
         return CompletableFuture.supplyAsync(() -> model.render(previewInput, played));
     }
 
-    /** The quality figures of every ladder case and the shaping gain. */
-    private static Figures measure(BuildPlan plan, Signal reference, Cases cases, double cutoff) {
-        AudioMetrics metrics = AudioMetrics.of(reference, cutoff);
-        List<QualityReport> quality = new ArrayList<>();
-        Codes idealCodes = cases.ideal().codes();
-        LevelTable played = cases.played();
-        Spectrum errorSpectrum;
-        CodeUse idealUse = cases.idealUse();
-        if (plan.quantize().board().isEmpty()) {
-            AudioMetrics.Measured m = metrics.measureWithSpectrum("ideal ladder", idealCodes, cases.idealTable());
-            quality.add(m.report().withCodeUse(idealUse));
-            errorSpectrum = m.errorSpectrum();
-        } else {
-            quality.add(metrics.measure("ideal ladder", idealCodes, cases.idealTable()).withCodeUse(idealUse));
-            AudioMetrics.Measured plain = metrics.measureWithSpectrum("board, plain codes", idealCodes, played);
-            quality.add(plain.report().withCodeUse(idealUse));
-            errorSpectrum = plain.errorSpectrum();
-            if (cases.compensated().isPresent()) {
-                AudioMetrics.Measured comp = metrics.measureWithSpectrum("board, compensated",
-                        cases.compensated().get(), played);
-                quality.add(comp.report().withCodeUse(cases.compensatedUse().orElseThrow()));
-                errorSpectrum = comp.errorSpectrum();
-            }
-        }
-        Optional<Double> shapingGain = Optional.empty();
-        QuantizeSettings q = plan.quantize();
-        if (q.shaping().order() > 0) {
-            double[] range = cases.range();
-            Quantizer flat = new Quantizer(played, range[0], range[1], q.dither(), ErrorFilter.NONE, q.seed());
-            double flatInBand = metrics.measure("flat", flat.apply(reference).codes(), played).inBandSnrDb();
-            shapingGain = Optional.of(quality.get(quality.size() - 1).inBandSnrDb() - flatInBand);
-        }
-        return new Figures(quality, errorSpectrum, shapingGain);
+    /** Why a sound of {@code samples} samples (fewer than 2) cannot be built, in words. */
+    private static String tooShort(BuildPlan plan, int samples) {
+        boolean trimmed = plan.conditioning().trimDbfs().isPresent();
+        String held = samples + (samples == 1 ? " sample" : " samples") + " at the target rate";
+        return (trimmed ? "trimming the quiet ends leaves " + held + "; lower the trim level or leave it out"
+                : "the sound is " + held + "; a sound needs at least 2: give a longer sound or a higher rate");
     }
 
     /**
      * The source's description, the conditioned reference, the target rate and the source as supplied for
      * the listener figures (none for a wavetable, which has no rate of its own).
      */
-    private record Prepared(String layout, List<String> warnings, Conditioner.Conditioned conditioned,
-            double rateHz, Optional<ListenerMetrics> listener) {
+    private record Prepared(String layout, SourceFacts source, List<String> warnings,
+            Conditioner.Conditioned conditioned, double rateHz, Optional<ListenerMetrics> listener,
+            boolean wavetable) {
     }
 
     /**
@@ -265,6 +246,9 @@ public final class SoundRenderer {
                     : opened.preferredRateHz());
             Conditioner.Conditioned conditioned;
             Optional<ListenerMetrics> listener = Optional.empty();
+            if (opened.wavetable() && plan.firmware().loop().map(LoopSpan::auto).orElse(false)) {
+                throw AutoLoop.onWavetable(plan);
+            }
             if (opened.wavetable()) {
                 // One cycle: its samples are the table as it is, played at any rate by the DDS engine. Only DC
                 // removal and level apply; the codes are labelled with the playback rate.
@@ -279,7 +263,8 @@ public final class SoundRenderer {
                 listener = listener(opened.samples(), conditioned, cs, model);
             }
             watch.lap("condition");
-            return new Prepared(opened.layout(), opened.warnings(), conditioned, rate, listener);
+            return new Prepared(opened.layout(), opened.facts(), opened.warnings(), conditioned, rate, listener,
+                    opened.wavetable());
         }
     }
 
@@ -307,7 +292,7 @@ public final class SoundRenderer {
         QuantizeSettings q = plan.quantize();
         return List.of(
                 "name: " + plan.symbol(),
-                "source: " + plan.source().file().getFileName() + " (" + layout + ")",
+                "source: " + FileNames.display(plan.source().file()) + " (" + layout + ")",
                 "conditioning: " + describe(plan, c),
                 "target: " + plan.bits() + " bits at " + Units.format(rate, "Hz"),
                 "dither: " + q.dither().label() + ", shaping: " + q.shaping().name() + ", seed: " + q.seed(),

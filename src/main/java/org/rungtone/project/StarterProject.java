@@ -120,7 +120,7 @@ public final class StarterProject {
         b.append("source    = \"").append(source).append("\"     # .wav or .rung\n");
         b.append("trim      = -60                # drop leading/trailing audio below -60 dBFS\n");
         b.append("fade_out  = \"20ms\"\n");
-        b.append("# loop    = \"0:end\"           # loop points, samples or times\n");
+        b.append("# loop    = \"0:end\"           # loop points, samples or times, or \"auto\" to find one\n");
         return b.toString();
     }
 }

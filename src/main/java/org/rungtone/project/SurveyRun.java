@@ -13,6 +13,7 @@ import java.util.TreeMap;
 import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.atomic.AtomicInteger;
 import org.rungtone.analysis.AnalogModel;
+import org.rungtone.analysis.ListenerMetrics;
 import org.rungtone.analysis.Survey;
 import org.rungtone.analysis.SurveyResult;
 import org.rungtone.analysis.SurveySpec;
@@ -27,7 +28,9 @@ import org.rungtone.internal.SettingError;
 import org.rungtone.internal.Units;
 import org.rungtone.ladder.LevelTable;
 import org.rungtone.quantize.Codes;
+import org.rungtone.report.ConditioningFacts;
 import org.rungtone.report.Json;
+import org.rungtone.report.SourceFacts;
 import org.rungtone.report.SurveyFiles;
 import org.rungtone.report.SurveyReport;
 import org.rungtone.source.Signal;
@@ -87,7 +90,7 @@ public final class SurveyRun {
     }
 
     /** The source, the survey and the conditioned reference at every rate. */
-    private record Surveyed(String layout, List<String> sourceWarnings, SurveyResult result,
+    private record Surveyed(String layout, SourceFacts source, List<String> sourceWarnings, SurveyResult result,
             Map<Double, Conditioner.Conditioned> references) {
     }
 
@@ -118,7 +121,7 @@ public final class SurveyRun {
         }
         AnalogModel model = new AnalogModel(request.filter(), PREVIEW_RATE_HZ);
         SurveySpec spec = spec(request, tables, model);
-        Surveyed s = survey(request, spec, new Conditioner(resampler), conditionings);
+        Surveyed s = survey(request, spec, new Conditioner(resampler), conditionings, model);
         long surveyed = System.nanoTime();
 
         try (OutputFolder out = OutputFolder.open(folder, "survey")) {
@@ -133,7 +136,7 @@ public final class SurveyRun {
             AnalogModel model, Resampler resampler, long start, long surveyed) {
         Path folder = request.output().folder();
         SurveyRequest.Cells cells = request.cells();
-        List<Path> files = new ArrayList<>(SurveyFiles.reports(folder));
+        List<Path> files = new ArrayList<>(SurveyFiles.reports(folder, s.result()));
         Set<String> warnings = new LinkedHashSet<>(s.sourceWarnings());
         warnings.addAll(conditioningWarnings(cells.ratesHz(), s.references()));
         if (request.output().previews()) {
@@ -148,7 +151,9 @@ public final class SurveyRun {
         SurveyReport.Context context = new SurveyReport.Context(request.output().toolVersion(), request.source(),
                 s.layout(), request.conditioning().describe(), resampler.name(), describeLevels(tables),
                 cells.dither().label(), cells.shaping().name(), cells.seed(), request.filter().describe(),
-                request.output().previews(), files, new ArrayList<>(warnings));
+                request.output().previews(), files, new ArrayList<>(warnings), new SurveyReport.Facts(s.source(),
+                ConditioningFacts.of(request.conditioning().at(cells.ratesHz().get(0))),
+                request.conditioning().resampler(), tables.lastEntry().getValue(), request.filter(), folder));
         SurveyFiles.write(folder, s.result(), context);
         long done = System.nanoTime();
         Map<String, Double> laps = new LinkedHashMap<>();
@@ -174,21 +179,44 @@ public final class SurveyRun {
      * held whole at its own rate; a script is rendered at the highest rate.
      */
     private Surveyed survey(SurveyRequest request, SurveySpec spec, Conditioner conditioner,
-            Map<Double, Conditioning> conditionings) {
+            Map<Double, Conditioning> conditionings, AnalogModel model) {
         double maxRate = spec.ratesHz().stream().max(Double::compare).orElseThrow();
         Map<Double, Conditioner.Conditioned> references = new ConcurrentHashMap<>();
         try (Sources.Opened loaded = Sources.open(request.source(), request.channel(), maxRate, spec.seed())) {
             tell("survey", 0, spec.bitDepths().size() * spec.ratesHz().size());
-            SurveyResult result = Survey.run(spec, rate -> {
-                Conditioner.Conditioned c = conditioner.apply(loaded.samples(), conditionings.get(rate));
-                if (c.signal().length() < MIN_SAMPLES) {
-                    throw tooShort(request.source(), c.signal().length(), rate);
-                }
-                references.put(rate, c);
-                return c.signal();
-            }, (done, total) -> tell("survey", done, total));
-            return new Surveyed(loaded.layout(), loaded.warnings(), result, references);
+            // The highest rate first: its trim tells which stretch of the source the listener figures compare.
+            Conditioner.Conditioned top = conditioned(request, conditioner, loaded, conditionings, maxRate);
+            references.put(maxRate, top);
+            ListenerMetrics listener = listener(request, loaded, top, model);
+            SurveyResult result = Survey.run(spec, rate -> references.computeIfAbsent(rate,
+                    r -> conditioned(request, conditioner, loaded, conditionings, r)).signal(), listener,
+                    (done, total) -> tell("survey", done, total));
+            return new Surveyed(loaded.layout(), loaded.facts(), loaded.warnings(), result, references);
         }
+    }
+
+    private static Conditioner.Conditioned conditioned(SurveyRequest request, Conditioner conditioner,
+            Sources.Opened loaded, Map<Double, Conditioning> conditionings, double rate) {
+        Conditioner.Conditioned c = conditioner.apply(loaded.samples(), conditionings.get(rate));
+        if (c.signal().length() < MIN_SAMPLES) {
+            throw tooShort(request.source(), c.signal().length(), rate);
+        }
+        return c;
+    }
+
+    /**
+     * The source as supplied over the stretch conditioning kept, for the listener figures of every cell; null
+     * for a wavetable (it has no rate of its own) or when nothing is left to compare.
+     */
+    private static ListenerMetrics listener(SurveyRequest request, Sources.Opened loaded,
+            Conditioner.Conditioned top, AnalogModel model) {
+        if (loaded.wavetable()) {
+            return null;
+        }
+        ConditioningSettings cs = request.conditioning();
+        return ListenerMetrics.Span.kept(loaded.samples().length(), loaded.samples().sampleRateHz(),
+                top.trimmedStartSeconds(), top.trimmedEndSeconds(), cs.fadeInSeconds(), cs.fadeOutSeconds())
+                .map(span -> ListenerMetrics.prepare(loaded.samples(), span, model)).orElse(null);
     }
 
     private static SettingError tooShort(Path source, int samples, double rateHz) {

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import org.rungtone.analysis.QualityReport;
+import org.rungtone.analysis.SeamlessLoop;
 import org.rungtone.analysis.ToneReport;
 
 /**
@@ -37,13 +38,15 @@ import org.rungtone.analysis.ToneReport;
  * @param files files written, in order
  * @param warnings what the user should know
  * @param stageMillis wall-clock milliseconds per stage, in pipeline order
+ * @param autoLoop the loop found in the sound ({@code loop = "auto"}), when there is one
+ * @param facts what the report states beyond its figures, as values for the JSON report
  */
 public record BuildSummary(String toolVersion, Path source, String sourceLayout, String symbol, int bits,
         double rateHz, int samples, double durationSeconds, String dither, String shaping, long seed,
         String conditioning, String resampler, String ladder, long clippedSamples, List<QualityReport> quality,
         String emittedCase, Optional<Double> shapingGainDb, Optional<ToneReport> tone, PreviewInfo preview,
         List<String> firmware, long flashBytes, List<Path> files, List<String> warnings,
-        Map<String, Double> stageMillis) {
+        Map<String, Double> stageMillis, Optional<SeamlessLoop> autoLoop, BuildFacts facts) {
 
     /** Copies the collections. */
     public BuildSummary {

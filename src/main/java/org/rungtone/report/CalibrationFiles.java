@@ -99,7 +99,7 @@ public final class CalibrationFiles {
         Path steps = out.resolve(RECORDING_STEPS_CSV);
         Path png = out.resolve(RECORDING_PNG);
         AtomicFiles.writeString(steps, RecordingReport.stepsCsv(r.recording()));
-        Plots.write(png, RecordingReport.chart(r.recording()), Plots.Legend.BOTTOM_RIGHT);
+        Plots.write(png, RecordingReport.chart(r.recording()));
         files.add(steps);
         files.add(png);
         return files;

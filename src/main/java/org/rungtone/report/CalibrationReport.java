@@ -3,8 +3,6 @@ package org.rungtone.report;
 import static org.rungtone.report.TextLines.line;
 
 import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -159,40 +157,20 @@ public final class CalibrationReport {
         return s >= 120 ? String.format(Locale.ROOT, "%.1f min", s / 60) : Units.format(s, "s");
     }
 
-    /** The JSON report of a plan. */
-    public static Map<String, Object> planJson(Plan p, List<Path> files) {
-        MeasurementPlan plan = p.plan();
-        Map<String, Object> root = new LinkedHashMap<>();
-        root.put("ladder", p.ladder().describe());
-        root.put("bits", plan.bits());
-        root.put("every_code", plan.everyCode());
-        root.put("lsb_v", p.lsbVolts());
-        List<Map<String, Object>> codes = new ArrayList<>();
-        for (PlannedCode c : plan.codes()) {
-            Map<String, Object> m = new LinkedHashMap<>();
-            m.put("code", c.code());
-            m.put("binary", MeasurementPlan.binary(c.code(), plan.bits()));
-            m.put("expected_v", c.expectedVolts());
-            m.put("role", c.role().name().toLowerCase(Locale.ROOT));
-            codes.add(m);
-        }
-        root.put("codes", codes);
-        List<Map<String, Object>> meters = new ArrayList<>();
-        for (MeterAdvice a : p.meters()) {
-            Map<String, Object> m = new LinkedHashMap<>();
-            m.put("counts", a.counts());
-            m.put("range_v", a.rangeVolts());
-            m.put("step_v", a.stepVolts());
-            m.put("steps_per_lsb", a.stepsPerLsb());
-            meters.add(m);
-        }
-        root.put("meters", meters);
-        root.put("sweep", p.sweep().map(EmitResult::report).orElse(List.of()));
-        root.put("warnings", p.sweep().map(EmitResult::warnings).orElse(List.of()));
-        p.meter().ifPresent(m -> root.put("meter", Map.of("counts", m.counts(), "autoranging", m.autoranging())));
-        p.recording().ifPresent(r -> root.put("recording", RecordingChecklist.json(r, plan.expected())));
-        root.put("files", CalibrationFiles.names(files));
-        return root;
+    /**
+     * The JSON report of a plan ({@code docs/schema/calibrate-plan.schema.json}); paths are relative to
+     * {@code outDir}.
+     */
+    public static Map<String, Object> planJson(Plan p, List<Path> files, Path outDir, String toolVersion) {
+        return CalibrationJson.plan(p, files, outDir, toolVersion);
+    }
+
+    /**
+     * The JSON report of a simulated board ({@code docs/schema/calibrate-simulate.schema.json}); paths are
+     * relative to {@code outDir}.
+     */
+    public static String simulationJson(BoardSimulation.Result r, List<Path> files, Path outDir, String toolVersion) {
+        return Json.toJson(CalibrationJson.simulation(r, files, outDir, toolVersion));
     }
 
     /**

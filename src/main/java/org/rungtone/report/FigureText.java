@@ -1,5 +1,6 @@
 package org.rungtone.report;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.rungtone.analysis.CodeUse;
@@ -95,12 +96,29 @@ final class FigureText {
         return u.endCodeSamples() + gap + String.format(Locale.ROOT, "(%.3f %%)", 100 * u.endCodeFraction());
     }
 
+    /** Flash used as a share of the budget: "97.5 %" (one decimal in every report). */
+    static String budgetShare(long usedBytes, long budgetBytes) {
+        return String.format(Locale.ROOT, "%.1f %%", 100.0 * usedBytes / budgetBytes);
+    }
+
+    /** A sound's warnings as every report lists them: the build's own, then the preview's ringing. */
+    static List<String> soundWarnings(BuildSummary s) {
+        List<String> w = new ArrayList<>(s.warnings());
+        if (s.preview().peak() > 1) {
+            w.add(String.format(Locale.ROOT, "the preview's filter rings %.1f %% past full scale;"
+                    + " the preview WAV clips there", 100 * (s.preview().peak() - 1)));
+        }
+        return w;
+    }
+
     static String f1(double v) {
-        return Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf") : String.format(Locale.ROOT, "%.1f", v);
+        return Double.isNaN(v) ? "n/a" : Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf")
+                : String.format(Locale.ROOT, "%.1f", v);
     }
 
     static String f2(double v) {
-        return Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf") : String.format(Locale.ROOT, "%.2f", v);
+        return Double.isNaN(v) ? "n/a" : Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf")
+                : String.format(Locale.ROOT, "%.2f", v);
     }
 
     private static String db(double v) {

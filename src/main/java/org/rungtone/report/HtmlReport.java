@@ -5,10 +5,8 @@ import com.samskivert.mustache.Template;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Base64;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -20,28 +18,36 @@ import java.util.Set;
 import org.rungtone.analysis.QualityReport;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.internal.Checks;
+import org.rungtone.internal.FileNames;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.Units;
 
 /**
  * The build report as one self-contained HTML page: effective settings, the figures of every sound, the
- * analog preview, the firmware summary, every PNG plot embedded as a {@code data:} URI, and the warnings.
- * The page loads nothing from anywhere (a Content-Security-Policy says so), needs no script, prints cleanly,
- * and is byte-identical for the same page. Layout lives in the JMustache template
- * {@code report.html.mustache} beside this class; every text value is HTML-escaped by the template engine.
+ * analog preview, the firmware summary, every PNG plot embedded as a {@code data:} URI with the alt text the
+ * plot carries, relative links to the preview WAV files and the other output files, and the warnings. The
+ * page loads nothing from anywhere (a Content-Security-Policy says so), needs no script, reads at a phone's
+ * width (wide tables scroll in their own box), prints without forced page breaks, and is byte-identical for
+ * the same page. Figures are formatted by {@link FigureText} and {@link SoundTables}, as in the text
+ * reports. Layout lives in the JMustache template {@code report.html.mustache} beside this class; every
+ * text value is HTML-escaped by the template engine.
  */
 public final class HtmlReport {
-    private static final byte[] PNG_SIGNATURE = {(byte) 0x89, 'P', 'N', 'G', '\r', '\n', 0x1a, '\n'};
     private static final Map<String, String> KNOWN_PLOTS = Map.of(
             "error-spectrum", "Error spectrum: what the board adds to the sound (output minus the aligned source),"
-                    + " as a density per hertz, with the in-band cutoff marked",
-            "spectrum", "Output spectrum of the single tone, with its harmonics and the ideal quantizer's"
-                    + " noise floor",
+                    + " as a density per hertz, with the in-band cutoff and an ideal quantizer's error for the"
+                    + " same dither marked",
+            "spectrum", "Output spectrum of the single tone, with its harmonics and an ideal quantizer's noise"
+                    + " floor for the same dither",
             "transfer", "Ladder transfer: output volts for every code",
-            "dnl", "Differential non-linearity of every code step (LSB)",
-            "inl", "Integral non-linearity of every code (LSB)",
+            "dnl", "Differential non-linearity of every code step (LSB), with \u00b10.5 LSB and the -1 LSB"
+                    + " monotonic limit",
+            "inl", "Integral non-linearity of every code (LSB), with \u00b10.5 LSB",
             "monte-carlo", "Monte Carlo spread of boards built from toleranced parts",
-            "survey", "SINAD against bit depth, one line per sample rate");
+            "survey-sinad", "SINAD against bit depth, one line per sample rate",
+            "survey-sinad-flash", "SINAD against flash bytes, one line per sample rate",
+            "survey-enob", "ENOB against bit depth, one line per sample rate",
+            "survey-enob-flash", "ENOB against flash bytes, one line per sample rate");
 
     private HtmlReport() {
     }
@@ -58,10 +64,12 @@ public final class HtmlReport {
      * @param flashBudgetBytes the flash budget, when one is set
      * @param warnings project-level warnings, shown at the end
      * @param byline an optional line under the title (a date, a commit); the page adds none itself
+     * @param files the output files of the whole job (C files, reports); those a sound lists are shown with
+     *     the sound, the others in a section of their own
      */
     public record Page(String title, String toolVersion, List<Setting> settings, List<BuildSummary> sounds,
             List<Section> sections, long flashBytes, OptionalLong flashBudgetBytes, List<String> warnings,
-            Optional<String> byline) {
+            Optional<String> byline, List<Path> files) {
 
         /** Checks the figures and copies the lists. */
         public Page {
@@ -76,6 +84,7 @@ public final class HtmlReport {
             }
             sections = List.copyOf(sections);
             warnings = List.copyOf(warnings);
+            files = List.copyOf(files);
         }
     }
 
@@ -156,11 +165,11 @@ public final class HtmlReport {
 
     /** Turns a page into the template's context: maps of strings, booleans and lists, no nulls. */
     private static final class Context {
-        private final Optional<Path> base;
+        private final PageLinks links;
         private final Set<String> anchors = new HashSet<>();
 
         Context(Optional<Path> base) {
-            this.base = base;
+            this.links = new PageLinks(base);
         }
 
         Map<String, Object> page(Page page) {
@@ -193,14 +202,30 @@ public final class HtmlReport {
             m.put("warnings", page.warnings());
             m.put("hasWarnings", !page.warnings().isEmpty());
             m.put("definitions", FigureText.definitions());
+            List<Map<String, Object>> files = otherFiles(page);
+            m.put("files", files);
+            m.put("hasFiles", !files.isEmpty());
             return m;
+        }
+
+        /** The page's files that no sound lists, as links. */
+        private List<Map<String, Object>> otherFiles(Page page) {
+            Set<Path> listed = new HashSet<>();
+            page.sounds().forEach(s -> listed.addAll(s.files()));
+            List<Map<String, Object>> files = new ArrayList<>();
+            for (Path f : page.files()) {
+                if (!listed.contains(f)) {
+                    files.add(links.link(f));
+                }
+            }
+            return files;
         }
 
         private Map<String, Object> sound(BuildSummary s) {
             Map<String, Object> m = new LinkedHashMap<>();
             m.put("anchor", anchor("sound-" + s.symbol()));
             m.put("symbol", s.symbol());
-            m.put("sourceName", String.valueOf(s.source().getFileName()));
+            m.put("sourceName", FileNames.display(s.source()));
             m.put("sourceLayout", s.sourceLayout());
             m.put("bits", Integer.toString(s.bits()));
             m.put("rate", Units.format(s.rateHz(), "Hz"));
@@ -208,9 +233,9 @@ public final class HtmlReport {
             m.put("flashBytes", bytes(s.flashBytes()));
             QualityReport emitted = s.emitted();
             m.put("emittedCase", s.emittedCase());
-            m.put("emittedSinad", f1(emitted.sinadDb()));
-            m.put("emittedEnob", f2(emitted.enobFullScaleBits()));
-            m.put("emittedListener", emitted.listener().map(l -> f1(l.snrDb())).orElse("-"));
+            m.put("emittedSinad", FigureText.f1(emitted.sinadDb()));
+            m.put("emittedEnob", FigureText.f2(emitted.enobFullScaleBits()));
+            m.put("emittedListener", emitted.listener().map(l -> FigureText.f1(l.snrDb())).orElse("-"));
             m.put("settings", SoundTables.rows(SoundTables.settings(s)));
             m.put("cutoff", Units.format(s.quality().get(0).inBandCutoffHz(), "Hz"));
             m.put("quality", SoundTables.quality(s.quality()));
@@ -224,39 +249,37 @@ public final class HtmlReport {
             m.put("hasTone", s.tone().isPresent());
             m.put("tone", s.tone().map(SoundTables::tone).orElse(Map.of()));
             m.put("preview", SoundTables.rows(SoundTables.preview(s.preview())));
+            List<Map<String, Object>> wavs = new ArrayList<>();
+            for (Path f : s.files()) {
+                if (hasExtension(f, ".wav")) {
+                    wavs.add(links.link(f));
+                }
+            }
+            m.put("wavs", wavs);
+            m.put("hasWavs", !wavs.isEmpty());
             m.put("hasFirmware", !s.firmware().isEmpty());
             m.put("firmware", String.join("\n", s.firmware()));
             List<Figure> plots = new ArrayList<>();
             for (Path f : s.files()) {
-                if (isPng(f)) {
+                if (hasExtension(f, ".png")) {
                     plots.add(Figure.of(f));
                 }
             }
             m.put("figures", figures(plots, s.symbol()));
             m.put("hasFigures", !plots.isEmpty());
-            List<String> files = new ArrayList<>();
+            List<Map<String, Object>> files = new ArrayList<>();
             for (Path f : s.files()) {
-                files.add(shown(f));
+                files.add(links.link(f));
             }
             m.put("files", files);
             m.put("hasFiles", !files.isEmpty());
-            List<String> warnings = soundWarnings(s);
+            List<String> warnings = FigureText.soundWarnings(s);
             m.put("warnings", warnings);
             m.put("hasWarnings", !warnings.isEmpty());
             m.put("warningsAnchor", anchor("sound-" + s.symbol() + "-warnings"));
             m.put("warningCount", Integer.toString(warnings.size()));
             m.put("warningPhrase", warnings.size() == 1 ? "1 warning" : warnings.size() + " warnings");
             return m;
-        }
-
-        /** The summary's warnings plus the preview's ringing, as the text report lists them. */
-        private static List<String> soundWarnings(BuildSummary s) {
-            List<String> w = new ArrayList<>(s.warnings());
-            if (s.preview().peak() > 1) {
-                w.add(String.format(Locale.ROOT, "the preview's filter rings %.1f %% past full scale;"
-                        + " the preview WAV clips there", 100 * (s.preview().peak() - 1)));
-            }
-            return w;
         }
 
         private static Map<String, Object> flash(long total, OptionalLong budget) {
@@ -267,7 +290,7 @@ public final class HtmlReport {
                 long b = budget.getAsLong();
                 double percent = 100.0 * total / b;
                 m.put("budget", bytes(b));
-                m.put("percent", String.format(Locale.ROOT, "%.1f %%", percent));
+                m.put("percent", FigureText.budgetShare(total, b));
                 m.put("barWidth", String.format(Locale.ROOT, "%.1f", Math.min(100, percent)));
                 m.put("over", total > b);
                 m.put("margin", total > b ? "over budget by " + bytes(total - b)
@@ -279,27 +302,17 @@ public final class HtmlReport {
         private List<Map<String, Object>> figures(List<Figure> figures, String owner) {
             List<Map<String, Object>> list = new ArrayList<>();
             for (Figure f : figures) {
-                byte[] png = readPng(f.png());
+                EmbeddedPng png = EmbeddedPng.read(f.png());
                 Map<String, Object> m = new LinkedHashMap<>();
-                m.put("data", Base64.getEncoder().encodeToString(png));
-                m.put("width", Integer.toString(readInt(png, 16)));
-                m.put("height", Integer.toString(readInt(png, 20)));
+                m.put("data", png.base64());
+                m.put("width", Integer.toString(png.width()));
+                m.put("height", Integer.toString(png.height()));
                 m.put("caption", f.caption());
-                m.put("alt", owner + ": " + plotName(f.png()) + " plot");
-                m.put("file", shown(f.png()));
+                m.put("alt", png.description().orElse(owner + ": " + plotName(f.png()) + " plot"));
+                m.put("file", links.link(f.png()));
                 list.add(m);
             }
             return list;
-        }
-
-        private String shown(Path f) {
-            if (base.isPresent()) {
-                Path abs = f.toAbsolutePath().normalize();
-                if (abs.startsWith(base.get())) {
-                    return base.get().relativize(abs).toString().replace('\\', '/');
-                }
-            }
-            return f.toString();
         }
 
         /** An id made of [a-z0-9-] from {@code text}, unique within the page. */
@@ -314,30 +327,9 @@ public final class HtmlReport {
 
     }
 
-    private static boolean isPng(Path f) {
+    private static boolean hasExtension(Path f, String extension) {
         Path name = f.getFileName();
-        return name != null && name.toString().toLowerCase(Locale.ROOT).endsWith(".png");
-    }
-
-    private static byte[] readPng(Path f) {
-        byte[] bytes;
-        try {
-            bytes = Files.readAllBytes(org.rungtone.internal.OutputFolder.staged(f));
-        } catch (IOException e) {
-            throw new InputError(f + ": cannot read this plot for report.html (" + e.getClass().getSimpleName()
-                    + "); rebuild to write it again", e);
-        }
-        boolean png = bytes.length >= 24;
-        for (int i = 0; png && i < PNG_SIGNATURE.length; i++) {
-            png = bytes[i] == PNG_SIGNATURE[i];
-        }
-        Checks.checkInput(png, "%s: not a PNG image; report.html embeds PNG plots only", f);
-        return bytes;
-    }
-
-    /** A big-endian 32-bit value; PNG's IHDR puts width at byte 16 and height at byte 20. */
-    private static int readInt(byte[] b, int at) {
-        return (b[at] & 0xff) << 24 | (b[at + 1] & 0xff) << 16 | (b[at + 2] & 0xff) << 8 | (b[at + 3] & 0xff);
+        return name != null && name.toString().toLowerCase(Locale.ROOT).endsWith(extension);
     }
 
     private static String defaultCaption(Path png) {
@@ -365,13 +357,5 @@ public final class HtmlReport {
 
     private static String bytes(long n) {
         return String.format(Locale.ROOT, "%,d bytes", n);
-    }
-
-    private static String f1(double v) {
-        return Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf") : String.format(Locale.ROOT, "%.1f", v);
-    }
-
-    private static String f2(double v) {
-        return Double.isInfinite(v) ? (v > 0 ? "inf" : "-inf") : String.format(Locale.ROOT, "%.2f", v);
     }
 }

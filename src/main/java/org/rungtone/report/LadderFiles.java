@@ -30,7 +30,7 @@ public final class LadderFiles {
         files.add(csv.toString());
         for (LadderCharts.Figure figure : LadderCharts.of(study.analysis(), study.monteCarlo())) {
             Path png = folder.resolve(figure.kind().fileName());
-            Plots.write(png, figure.chart(), figure.kind().legend());
+            Plots.write(png, figure.chart());
             files.add(png.toString());
         }
         return files;

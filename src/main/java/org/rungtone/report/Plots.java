@@ -1,28 +1,20 @@
 package org.rungtone.report;
 
-import java.awt.BasicStroke;
-import java.awt.Color;
-import java.io.IOException;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.List;
-import org.knowm.xchart.BitmapEncoder;
-import org.knowm.xchart.XYChart;
-import org.knowm.xchart.XYChartBuilder;
-import org.knowm.xchart.XYSeries;
-import org.knowm.xchart.style.Styler;
-import org.knowm.xchart.style.markers.SeriesMarkers;
+import java.util.Set;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.internal.Checks;
 
 /**
- * PNG plots for reports, drawn with XChart and written atomically. Charts are deterministic: fixed size,
- * fixed colours in series order, no timestamps.
+ * PNG plots for reports: a chart is described completely here (axes with their ticks, data series,
+ * reference lines, where the legend goes, a sentence saying what it shows), then drawn by
+ * {@link ChartRenderer} and written atomically. Charts are deterministic: fixed size, fixed colours in
+ * series order, no timestamps.
  */
 public final class Plots {
-    private static final Color[] PALETTE = {
-        new Color(0x1f, 0x5f, 0x99), new Color(0xc0, 0x39, 0x2b), new Color(0x27, 0x8f, 0x4e),
-        new Color(0x8e, 0x44, 0xad), new Color(0xd3, 0x8b, 0x1a), new Color(0x2c, 0x3e, 0x50)};
-
     private Plots() {
     }
 
@@ -34,7 +26,7 @@ public final class Plots {
         MARKERS,
         /** Lines with markers. */
         LINE_AND_MARKERS,
-        /** A thin dashed line (reference curves, limits). */
+        /** A thin dashed line (a second curve to compare with, such as an ideal one). */
         DASHED
     }
 
@@ -53,24 +45,120 @@ public final class Plots {
         }
     }
 
+    /** Which way a reference line runs. */
+    public enum Direction {
+        /** Across the plot at a y value (a limit, a floor, a target). */
+        HORIZONTAL,
+        /** Up the plot at an x value (a cutoff, a budget). */
+        VERTICAL
+    }
+
+    /**
+     * Dashed reference lines across the whole plot, one legend entry for all of them.
+     *
+     * @param label legend text, e.g. "±0.5 LSB"
+     * @param direction which way the lines run
+     * @param values the y values (horizontal) or x values (vertical) of the lines
+     */
+    public record Reference(String label, Direction direction, List<Double> values) {
+        /** Checks and copies the values. */
+        public Reference {
+            Checks.checkArgument(!values.isEmpty(), "reference %s has no values", label);
+            values = List.copyOf(values);
+            for (double v : values) {
+                Checks.checkArgument(Double.isFinite(v), "reference %s: value must be finite: %s", label, v);
+            }
+        }
+
+        /** One horizontal line. */
+        public static Reference horizontal(String label, double y) {
+            return new Reference(label, Direction.HORIZONTAL, List.of(y));
+        }
+
+        /** One vertical line. */
+        public static Reference vertical(String label, double x) {
+            return new Reference(label, Direction.VERTICAL, List.of(x));
+        }
+    }
+
     /**
      * A chart description.
      *
      * @param title chart title
-     * @param xLabel x axis label with unit
-     * @param yLabel y axis label with unit
-     * @param logX logarithmic x axis
+     * @param x the x axis: label, range, ticks
+     * @param y the y axis
      * @param series the data
+     * @param references reference lines, drawn dashed across the plot
+     * @param description what the chart shows, in one sentence (a page's alt text)
      */
-    public record Chart(String title, String xLabel, String yLabel, boolean logX, List<Series> series) {
+    public record Chart(String title, PlotAxis x, PlotAxis y, List<Series> series, List<Reference> references,
+            String description) {
+        /** Copies the lists; legend entries must differ (each names one thing). */
+        public Chart {
+            series = List.copyOf(series);
+            references = List.copyOf(references);
+            Set<String> names = new HashSet<>();
+            for (String name : legendEntries(series, references)) {
+                Checks.checkArgument(names.add(name), "chart %s: two legend entries are called %s", title, name);
+            }
+        }
+
+        /**
+         * A chart whose axes fit its data and reference lines: the x axis exactly, the y axis rounded out to
+         * whole ticks.
+         */
+        public static Chart of(String title, String xLabel, String yLabel, List<Series> series,
+                List<Reference> references, String description) {
+            PlotAxis.Span xs = span(series, references, Direction.VERTICAL, true);
+            PlotAxis.Span ys = span(series, references, Direction.HORIZONTAL, false);
+            return new Chart(title, PlotAxis.exact(xLabel, xs.low(), xs.high()),
+                    PlotAxis.rounded(yLabel, ys.low(), ys.high()), series, references, description);
+        }
+
+        /** A chart with no reference lines whose description is its title. */
+        public static Chart of(String title, String xLabel, String yLabel, List<Series> series) {
+            return of(title, xLabel, yLabel, series, List.of(), title);
+        }
+
+        /** Where the legend goes: an inside corner the data leave empty, else below the plot. */
+        public LegendPlace legend() {
+            return LegendPlace.choose(this);
+        }
+
+        /** The legend's entries in order: each series, then each reference. */
+        public List<String> legendEntries() {
+            return legendEntries(series, references);
+        }
+
+        private static List<String> legendEntries(List<Series> series, List<Reference> references) {
+            List<String> names = new ArrayList<>();
+            series.forEach(s -> names.add(s.name()));
+            references.forEach(r -> names.add(r.label()));
+            return names;
+        }
     }
 
-    /** Where the legend sits inside the plot area. */
-    public enum Legend {
-        /** Top right (the default). */
-        TOP_RIGHT,
-        /** Bottom right, for data that rise to the right. */
-        BOTTOM_RIGHT
+    /** The range of the finite x (or y) values of the data and of the references running across that axis. */
+    static PlotAxis.Span span(List<Series> series, List<Reference> references, Direction across, boolean x) {
+        double low = Double.POSITIVE_INFINITY;
+        double high = Double.NEGATIVE_INFINITY;
+        for (Series s : series) {
+            for (double v : x ? s.x() : s.y()) {
+                if (Double.isFinite(v)) {
+                    low = Math.min(low, v);
+                    high = Math.max(high, v);
+                }
+            }
+        }
+        for (Reference r : references) {
+            if (r.direction() == across) {
+                for (double v : r.values()) {
+                    low = Math.min(low, v);
+                    high = Math.max(high, v);
+                }
+            }
+        }
+        return low <= high ? new PlotAxis.Span(low, high) : new PlotAxis.Span(0, 1);
     }
 
     /**
@@ -79,71 +167,17 @@ public final class Plots {
      * does not pay a few hundred milliseconds of one-time start-up.
      */
     public static void warmUp() {
-        png(new Chart("", "x", "y", false, List.of(new Series("s", new double[] {0, 1}, new double[] {0, 1},
+        png(Chart.of("", "x", "y", List.of(new Series("s", new double[] {0, 1}, new double[] {0, 1},
                 Style.LINE))));
     }
 
-    /** Renders a chart to PNG bytes (800 x 480). */
+    /** Renders a chart to PNG bytes (800 x 480), its description in the file (see {@link PngText}). */
     public static byte[] png(Chart chart) {
-        return png(chart, Legend.TOP_RIGHT);
-    }
-
-    /** Renders a chart to PNG bytes (800 x 480) with the legend where asked. */
-    public static byte[] png(Chart chart, Legend legend) {
-        XYChart c = new XYChartBuilder().width(800).height(480).title(chart.title())
-                .xAxisTitle(chart.xLabel()).yAxisTitle(chart.yLabel()).build();
-        c.getStyler().setTheme(new org.knowm.xchart.style.theme.XChartTheme());
-        c.getStyler().setLegendPosition(legend == Legend.BOTTOM_RIGHT ? Styler.LegendPosition.InsideSE
-                : Styler.LegendPosition.InsideNE);
-        c.getStyler().setXAxisLogarithmic(chart.logX());
-        c.getStyler().setChartBackgroundColor(Color.WHITE);
-        c.getStyler().setPlotGridLinesColor(new Color(0xdd, 0xdd, 0xdd));
-        c.getStyler().setAntiAlias(true);
-        c.getStyler().setLegendVisible(chart.series().size() > 1);
-        int i = 0;
-        for (Series s : chart.series()) {
-            double[] x = s.x();
-            double[] y = s.y();
-            if (x.length == 0) {
-                continue;
-            }
-            XYSeries xy = c.addSeries(s.name(), x, y);
-            Color color = PALETTE[i++ % PALETTE.length];
-            xy.setLineColor(color);
-            xy.setMarkerColor(color);
-            switch (s.style()) {
-                case MARKERS:
-                    xy.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
-                    xy.setMarker(SeriesMarkers.CIRCLE);
-                    break;
-                case LINE_AND_MARKERS:
-                    xy.setMarker(SeriesMarkers.CIRCLE);
-                    break;
-                case DASHED:
-                    xy.setMarker(SeriesMarkers.NONE);
-                    xy.setLineStyle(new BasicStroke(1.2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
-                            new float[] {6f, 4f}, 0f));
-                    break;
-                default:
-                    xy.setMarker(SeriesMarkers.NONE);
-                    xy.setLineWidth(1.2f);
-                    break;
-            }
-        }
-        try {
-            return BitmapEncoder.getBitmapBytes(c, BitmapEncoder.BitmapFormat.PNG);
-        } catch (IOException e) {
-            throw new IllegalStateException("PNG encoding failed", e);
-        }
+        return PngText.withDescription(ChartRenderer.png(chart), chart.description());
     }
 
     /** Renders a chart and writes it atomically to {@code file}. */
     public static void write(Path file, Chart chart) {
         AtomicFiles.writeBytes(file, png(chart));
-    }
-
-    /** Renders a chart with the legend where asked and writes it atomically to {@code file}. */
-    public static void write(Path file, Chart chart, Legend legend) {
-        AtomicFiles.writeBytes(file, png(chart, legend));
     }
 }

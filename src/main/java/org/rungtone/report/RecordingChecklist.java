@@ -59,8 +59,8 @@ final class RecordingChecklist {
         m.put("pattern_steps", sweep.patternSteps());
         m.put("pattern_step_ms", RecordingSweep.PATTERN_TICKS);
         LineInputDivider d = LineInputDivider.forSwing(model.maxVolts() - model.minVolts());
-        m.put("divider_top_ohms", d.topOhms());
-        m.put("divider_bottom_ohms", d.bottomOhms());
+        m.put("divider_top_ohm", d.topOhms());
+        m.put("divider_bottom_ohm", d.bottomOhms());
         m.put("input_swing_v", d.inputVolts());
         return m;
     }

@@ -6,7 +6,6 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -126,30 +125,21 @@ public final class RecordingReport {
         series.add(new Plots.Series("fitted model", t.seconds(), t.model(), Plots.Style.LINE));
         series.add(new Plots.Series("input staircase (levels times gain)", t.seconds(), t.input(),
                 Plots.Style.DASHED));
-        return new Plots.Chart(String.format(Locale.ROOT, "Recorded sweep and fit: corner %.2f Hz, clocks %+.1f ppm",
-                f.cornerHz(), f.clock().mismatchPpm()), "time (s)", "level (full scale)", false, series);
+        String title = String.format(Locale.ROOT, "Recorded sweep and fit: corner %.2f Hz, clocks %+.1f ppm",
+                f.cornerHz(), f.clock().mismatchPpm());
+        return Plots.Chart.of(title, "time (s)", "level (full scale)", series, List.of(), String.format(Locale.ROOT,
+                "The recording of the sweep in 1 ms means with the model fitted to it (input corner %.2f Hz, clocks"
+                + " %+.1f ppm apart) and the staircase of levels it came from.", f.cornerHz(),
+                f.clock().mismatchPpm()));
     }
 
-    /** The JSON report. */
-    public static Map<String, Object> json(RecordingCalibration.Result r, List<Path> files) {
-        RecordingResult f = r.recording();
-        Map<String, Object> root = new LinkedHashMap<>();
-        Map<String, Object> rec = new LinkedHashMap<>();
-        rec.put("file", f.recording().source());
-        rec.put("rate_hz", f.recording().sampleRateHz());
-        rec.put("pcm_bits", f.recording().pcmBits());
-        rec.put("channel", f.recording().channel());
-        rec.put("sweep_start_s", f.clock().startSample() / f.recording().sampleRateHz());
-        rec.put("clock_mismatch_ppm", f.clock().mismatchPpm());
-        rec.put("corner_hz", f.cornerHz());
-        rec.put("hum_hz", f.humHz() > 0 ? f.humHz() : null);
-        rec.put("swing_fs", f.swing());
-        rec.put("noise_rms_fs", f.noiseRms());
-        rec.put("median_level_sigma_fs", f.medianLevelSigma());
-        rec.put("step_residuals_rms_fs", f.stepResiduals());
-        root.put("recording", rec);
-        UnitFitReport.fitJson(root, r.fit(), r.profile(), files);
-        return root;
+    /**
+     * The JSON report ({@code docs/schema/calibrate-listen.schema.json}); paths are relative to
+     * {@code outDir}.
+     */
+    public static Map<String, Object> json(RecordingCalibration.Result r, List<Path> files, Path outDir,
+            String toolVersion) {
+        return CalibrationJson.listen(r, files, outDir, toolVersion);
     }
 
     private static String dbfs(double v) {

@@ -7,6 +7,7 @@ import java.util.Locale;
 import java.util.Map;
 import org.rungtone.analysis.QualityReport;
 import org.rungtone.analysis.ToneReport;
+import org.rungtone.internal.FileNames;
 import org.rungtone.internal.Units;
 import org.rungtone.report.HtmlReport.Setting;
 
@@ -15,27 +16,33 @@ final class SoundTables {
     private SoundTables() {
     }
 
-    /** How the sound was built. */
+    /** How the sound was built, one space before each bracket. */
     static List<Setting> settings(BuildSummary s) {
+        return settings(s, " ");
+    }
+
+    /** How the sound was built, as every report shows it; {@code gap} goes before each bracket. */
+    static List<Setting> settings(BuildSummary s, String gap) {
         List<Setting> rows = new ArrayList<>();
-        rows.add(new Setting("source", s.source().getFileName() + " (" + s.sourceLayout() + ")"));
+        rows.add(new Setting("source", FileNames.display(s.source()) + gap + "(" + s.sourceLayout() + ")"));
         rows.add(new Setting("conditioning", s.conditioning()));
         rows.add(new Setting("resampler", s.resampler()));
         rows.add(new Setting("target", s.bits() + " bits at " + Units.format(s.rateHz(), "Hz") + ", "
                 + s.samples() + " samples, " + String.format(Locale.ROOT, "%.3f s", s.durationSeconds())));
-        rows.add(new Setting("dither / shaping", s.dither() + " / " + s.shaping() + " (seed " + s.seed()
+        rows.add(new Setting("dither / shaping", s.dither() + " / " + s.shaping() + gap + "(seed " + s.seed()
                 + ")"));
         rows.add(new Setting("levels played", s.ladder()));
         rows.add(new Setting("C files hold", s.emittedCase()));
-        rows.add(new Setting("clipped samples", s.clippedSamples() + (s.samples() > 0 ? String.format(
-                Locale.ROOT, " (%.3f %%)", 100.0 * s.clippedSamples() / s.samples()) : "")));
+        rows.add(new Setting("clipped samples", s.clippedSamples() + (s.samples() > 0 ? gap + String.format(
+                Locale.ROOT, "(%.3f %%)", 100.0 * s.clippedSamples() / s.samples()) : "")));
         s.emitted().codeUse().ifPresent(u -> {
-            rows.add(new Setting("end codes", FigureText.endCodes(u, " ")));
+            rows.add(new Setting("end codes", FigureText.endCodes(u, gap)));
             if (u.shaped()) {
                 rows.add(new Setting("shaping headroom", FigureText.headroom(u)));
             }
         });
         rows.add(new Setting("flash", String.format(Locale.ROOT, "%,d bytes", s.flashBytes()) + " of samples"));
+        s.autoLoop().ifPresent(l -> rows.add(new Setting("loop (found)", LoopFigures.line(l, s.rateHz()))));
         return rows;
     }
 

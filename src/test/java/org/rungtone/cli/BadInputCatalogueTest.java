@@ -17,6 +17,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 import org.rungtone.testing.Cli;
+import org.rungtone.testing.SustainedSounds;
 import org.rungtone.testing.WavFixtures;
 import org.rungtone.testing.WavFixtures.Layout;
 
@@ -97,8 +98,10 @@ class BadInputCatalogueTest {
                 d -> survey(d, write(d, "rate4g.wav", wav16().rate(4_000_000_000L).bytes()))));
         c.add(bad("build: 7-bit PCM", "PCM with 7 bits per sample is not supported",
                 d -> build(d, write(d, "seven.wav", wav16().tag(1).bytes7()))));
-        c.add(bad("build: A-law encoded WAV", "uses format tag 0x0006 (A-law)",
-                d -> build(d, write(d, "alaw.wav", wav16().tag(6).bytes()))));
+        c.add(bad("build: IMA ADPCM encoded WAV", "uses format tag 0x0011 (IMA ADPCM)",
+                d -> build(d, write(d, "adpcm.wav", wav16().tag(0x11).bytes()))));
+        c.add(bad("build: 16-bit A-law WAV", "A-law with 16 bits per sample is not supported (8)",
+                d -> build(d, write(d, "alaw16.wav", wav16().tag(6).bytes()))));
         c.add(bad("build: data chunk of 0 bytes", "has no audio samples (empty data chunk)",
                 d -> build(d, write(d, "empty.wav", WavFixtures.wav().layout(Layout.S16, 1, 8000, new double[0])
                         .bytes()))));
@@ -344,6 +347,21 @@ class BadInputCatalogueTest {
                 + " 25600 samples); the loop must start inside the sound", d -> build(d, longTone(d), "--target",
                         "avr", "--cpu-clock", "16MHz", "--bits", "6", "--pins", "PD2-PD7", "--engine", "loop",
                         "--loop", "5s:end")));
+        c.add(bad("build: --loop auto on white noise", "noise.wav: no repeating section found; give --loop"
+                + " START:END", d -> build(d, noise(d), "--target", "avr", "--cpu-clock", "16MHz", "--bits", "6",
+                        "--pins", "PD2-PD7", "--loop", "auto")));
+        c.add(bad("build: --loop auto on a tone that dies away", "bell.wav: no repeating section found; give"
+                + " --loop START:END", d -> build(d, bell(d), "--loop", "auto")));
+        c.add(bad("build: --loop auto on a wavetable", "cycle.rung: a wavetable is one cycle that the dds engine"
+                + " repeats by itself; --loop auto finds loops in sustained sounds: leave it out",
+                d -> build(d, script(d, "cycle.rung", "wavetable 256 samples\nout sine(1Hz)\n"), "--loop",
+                        "auto")));
+        c.add(bad("project: loop = \"auto\" on white noise", "noise.wav: no repeating section found; give loop"
+                + " START:END", d -> {
+                    noise(d);
+                    return List.of("build", text(d, "p.toml", "[project]\nname = \"bench\"\nout = \"out\"\n\n"
+                            + "[[sound]]\nname = \"fan\"\nsource = \"noise.wav\"\nloop = \"auto\"\n").toString());
+                }));
         c.add(bad("survey: bit depth 0 in --bits-list", "--bits-list 0..20: bit depth must be 1..16: 0",
                 d -> survey(d, wavFile(d), "--bits-list", "0..20")));
         c.add(bad("survey: two quality targets", "give one target, --target-sinad or --target-enob, not both",
@@ -481,6 +499,21 @@ class BadInputCatalogueTest {
     /** A 1.6 s tone at 16 kHz, chirp.wav: 25,600 samples. */
     private static Path longTone(Path d) throws IOException {
         return write(d, "chirp.wav", WavFixtures.sine16(16_000, 1.6, 440, 0.5));
+    }
+
+    /** A second of white noise at 16 kHz, noise.wav: nothing in it repeats. */
+    private static Path noise(Path d) throws IOException {
+        return write(d, "noise.wav", WavFixtures.wav().layout(Layout.S16, 1, 16_000,
+                SustainedSounds.noise(0.5, 16_000, 1, 7)).bytes());
+    }
+
+    /** A struck bell at 523 Hz dying away by 26 dB a second for 2 s, bell.wav: no stretch keeps its level. */
+    private static Path bell(Path d) throws IOException {
+        double[] x = new double[32_000];
+        for (int i = 0; i < x.length; i++) {
+            x[i] = 0.8 * Math.exp(-3.0 * i / 16_000) * Math.sin(2 * Math.PI * 523.3 * i / 16_000);
+        }
+        return write(d, "bell.wav", WavFixtures.wav().layout(Layout.S16, 1, 16_000, x).bytes());
     }
 
     private static byte[] tone() {

@@ -62,7 +62,8 @@ class SurveyCommandTest {
         assertEquals(0, r.exitCode(), r.err());
         assertEquals("", r.err(), "no progress output when stderr is not a terminal");
         try (Stream<Path> s = Files.list(out)) {
-            assertEquals(List.of(".rungtone-survey-files", "survey-sinad.png", "survey.json", "survey.txt"),
+            assertEquals(List.of(".rungtone-survey-files", "survey-sinad-flash.png", "survey-sinad.png", "survey.json",
+                    "survey.txt"),
                     s.map(p -> p.getFileName().toString()).sorted().toList(), "no temporary files left behind");
         }
         byte[] png = Files.readAllBytes(out.resolve("survey-sinad.png"));
@@ -77,7 +78,9 @@ class SurveyCommandTest {
     @Test
     void figuresFollowTheDitheredQuantizerAndTheChosenRowIsTheCheapestThatReaches() throws IOException {
         Path out = dir.resolve("out");
-        Cli.Run r = survey(out, "--bits-list", "4,6,8", "--rates", "8k,16k", "--target-sinad", "30", "--json");
+        // a reconstruction filter, so that the images of the held output do not swamp the heard figures
+        Cli.Run r = survey(out, "--bits-list", "4,6,8", "--rates", "8k,16k", "--target-sinad", "30", "--filter",
+                "lp2:3.4k", "--json");
         assertEquals(0, r.exitCode(), r.err());
         JsonObject o = JsonParser.parseString(r.out()).getAsJsonObject();
         assertEquals(o, json(out.resolve("survey.json")), "--json prints what survey.json holds");
@@ -96,6 +99,9 @@ class SurveyCommandTest {
             assertEquals(row.get("rate_hz").getAsDouble() / 2, samples, 1, "0.5 s of samples");
             assertEquals((long) samples * (bits <= 8 ? 1 : 2), row.get("flash_bytes_unpacked").getAsLong());
             assertEquals(((long) samples * bits + 7) / 8, row.get("flash_bytes_packed").getAsLong());
+            // the target is checked against what the listener gets, not the at-rate SINAD
+            assertEquals(row.get("heard_signal_to_error_db").getAsDouble() >= 30, row.get("reaches_target").getAsBoolean(),
+                    row.toString());
         }
         JsonObject expected = rows.asList().stream().map(JsonElement::getAsJsonObject)
                 .filter(x -> x.get("fits").getAsBoolean() && x.get("reaches_target").getAsBoolean())
@@ -103,9 +109,11 @@ class SurveyCommandTest {
                         .thenComparingInt(x -> x.get("bits").getAsInt())
                         .thenComparingDouble(x -> x.get("rate_hz").getAsDouble()))
                 .orElseThrow();
-        // 6 bits: 32.0 dB by the formula above, the first depth past 30 dB; 8 kHz needs the fewest bytes.
+        // 6 bits: 32.0 dB at its rate by the formula above, the first depth past 30 dB; but at 8 kHz the
+        // images around 7 kHz that pass the 3.4 kHz filter keep the heard figures below 30 dB at any depth,
+        // so the cheapest setting that reaches the target is 6 bits at 16 kHz.
         assertEquals(6, expected.get("bits").getAsInt());
-        assertEquals(8000, expected.get("rate_hz").getAsDouble(), 0);
+        assertEquals(16000, expected.get("rate_hz").getAsDouble(), 0);
         assertEquals(expected, o.getAsJsonObject("chosen"));
         assertEquals(1, rows.asList().stream().filter(x -> x.getAsJsonObject().get("chosen").getAsBoolean())
                 .count());
@@ -113,8 +121,8 @@ class SurveyCommandTest {
         String text = Files.readString(out.resolve("survey.txt"));
         List<String> marked = tableRows(text).stream().filter(l -> l.endsWith("<- chosen")).toList();
         assertEquals(1, marked.size(), text);
-        assertTrue(marked.get(0).matches(" +6 +8 kHz .*"), marked.get(0));
-        assertTrue(text.contains("\nRecommended: 6 bits at 8 kHz ("), text);
+        assertTrue(marked.get(0).matches(" +6 +16 kHz .*"), marked.get(0));
+        assertTrue(text.contains("\nRecommended: 6 bits at 16 kHz (heard SNR "), text);
     }
 
     @Test
@@ -123,7 +131,11 @@ class SurveyCommandTest {
         Cli.Run r = survey(out, "--bits-list", "8", "--rates", "8k", "--gain", "-6", "--json");
         assertEquals(0, r.exitCode(), r.err());
         JsonObject o = JsonParser.parseString(r.out()).getAsJsonObject();
-        assertEquals("DC removed, gain -6.0 dB", o.get("conditioning").getAsString());
+        JsonObject conditioning = o.getAsJsonObject("conditioning");
+        assertEquals("DC removed, gain -6.0 dB", conditioning.get("description").getAsString());
+        assertEquals(-6, conditioning.get("gain_db").getAsDouble(), 0);
+        assertTrue(conditioning.get("normalize_dbfs").isJsonNull());
+        assertTrue(conditioning.get("dc_removed").getAsBoolean());
         // The fixture's 0.5 sine at -6 dB: amplitude 0.5·10^(-6/20); TPDF error power LSB²/4 as above.
         double amplitude = 0.5 * Math.pow(10, -6 / 20.0);
         double lsb = 2 / 255.0;
@@ -135,13 +147,13 @@ class SurveyCommandTest {
     @Test
     void jsonHasTheDocumentedStableFields() throws IOException {
         Path out = dir.resolve("out");
-        Cli.Run r = survey(out, "--bits-list", "6", "--rates", "8k", "--target-enob", "5", "--flash-budget", "32k",
-                "--packed", "--json");
+        Cli.Run r = survey(out, "--bits-list", "6", "--rates", "8k", "--target-enob", "4", "--flash-budget", "32k",
+                "--packed", "--filter", "lp2:3k", "--json");
         assertEquals(0, r.exitCode(), r.err());
         JsonObject o = JsonParser.parseString(r.out()).getAsJsonObject();
-        for (String f : List.of("tool", "version", "source", "source_layout", "conditioning", "resampler", "levels",
-                "dither", "shaping", "seed", "filter", "target", "flash_budget_bytes", "packed", "rows", "chosen",
-                "recommendation", "files", "warnings")) {
+        for (String f : List.of("schema_version", "report", "tool", "version", "source", "conditioning", "resampler",
+                "levels", "dither", "shaping", "seed", "filter", "target", "flash_budget_bytes", "packed", "rows",
+                "chosen", "recommendation", "files", "warnings")) {
             assertTrue(o.has(f), f);
         }
         assertEquals(32_000, o.get("flash_budget_bytes").getAsLong());
@@ -149,27 +161,28 @@ class SurveyCommandTest {
         assertEquals("enob_full_scale_bits", o.getAsJsonObject("target").get("figure").getAsString());
         JsonObject row = o.getAsJsonArray("rows").get(0).getAsJsonObject();
         assertEquals(List.of("bits", "rate_hz", "samples", "sinad_db", "in_band_snr_db", "a_weighted_snr_db",
-                "enob_full_scale_bits", "clipped_samples", "flash_bytes_unpacked",
-                "flash_bytes_packed", "fits", "reaches_target",
-                "chosen"), new ArrayList<>(row.keySet()));
+                "enob_full_scale_bits", "heard_signal_to_error_db", "heard_a_weighted_signal_to_error_db",
+                "clipped_samples", "flash_bytes_unpacked", "flash_bytes_packed", "fits", "reaches_target", "chosen",
+                "preview"), new ArrayList<>(row.keySet()));
     }
 
     @Test
     void aBudgetTooSmallLeavesNothingChosen() throws IOException {
         // 0.5 s at 8 kHz is 4000 samples: 6 bits take 4000 bytes unpacked, 3000 bit-packed.
         Path out = dir.resolve("tight");
-        Cli.Run r = survey(out, "--bits-list", "6,8", "--rates", "8k", "--target-sinad", "30", "--flash-budget",
-                "3500");
+        // with a 3 kHz filter, 6 bits at 8 kHz are heard at about 29 dB: a 25 dB target
+        Cli.Run r = survey(out, "--bits-list", "6,8", "--rates", "8k", "--target-sinad", "25", "--flash-budget",
+                "3500", "--filter", "lp2:3k");
         assertEquals(0, r.exitCode(), r.err());
         assertFalse(r.out().contains("<- chosen"), r.out());
-        assertTrue(r.out().contains("Nothing reaches SINAD >= 30.00 dB within the 3,500 bytes unpacked budget;"
+        assertTrue(r.out().contains("Nothing reaches SINAD >= 25.00 dB within the 3,500 bytes unpacked budget;"
                 + " the smallest setting that reaches it, 6 bits at 8 kHz, needs 4,000 bytes unpacked."), r.out());
-        assertFalse(json(out.resolve("survey.json")).has("chosen"));
+        assertTrue(json(out.resolve("survey.json")).get("chosen").isJsonNull());
 
-        Cli.Run packed = survey(dir.resolve("packed"), "--bits-list", "6,8", "--rates", "8k", "--target-sinad", "30",
-                "--flash-budget", "3500", "--packed");
+        Cli.Run packed = survey(dir.resolve("packed"), "--bits-list", "6,8", "--rates", "8k", "--target-sinad", "25",
+                "--flash-budget", "3500", "--packed", "--filter", "lp2:3k");
         assertEquals(0, packed.exitCode(), packed.err());
-        assertTrue(packed.out().contains("Recommended: 6 bits at 8 kHz (SINAD "), packed.out());
+        assertTrue(packed.out().contains("Recommended: 6 bits at 8 kHz (heard SNR "), packed.out());
         assertTrue(packed.out().contains("3,000 bytes bit-packed)."), packed.out());
     }
 
@@ -189,7 +202,10 @@ class SurveyCommandTest {
         JsonObject o = json(out.resolve("survey.json"));
         assertEquals("previews/b06-r8000.wav",
                 o.getAsJsonArray("rows").get(1).getAsJsonObject().get("preview").getAsString());
-        assertTrue(o.get("filter").getAsString().startsWith("2nd order 3400 Hz"), o.get("filter").getAsString());
+        JsonObject filter = o.getAsJsonObject("filter");
+        assertEquals("second_order", filter.get("kind").getAsString());
+        assertEquals(3400, filter.get("cutoff_hz").getAsDouble(), 0);
+        assertTrue(filter.get("description").getAsString().startsWith("2nd order 3400 Hz"), filter.toString());
     }
 
     static Stream<Arguments> badInputs() {

@@ -106,6 +106,10 @@ class AvrSimulatorTest {
         }
         // A whole port (plain OUT), and ten bits over two ports on an 8-bit timer with a prescaler.
         out.add(new Build("PD0-PD7", SampleStorage.UNPACKED, PlaybackEngine.CLIP, 8000, TimerKind.AVR_TIMER1));
+        out.add(new Build("PD0-PD7", SampleStorage.PACKED, PlaybackEngine.LOOP, 8000, TimerKind.AVR_TIMER1));
+        // Packed narrow codes whose shifts are longest: 4 bits (four-place window shift) and 3 bits.
+        out.add(new Build("PB0-PB3", SampleStorage.PACKED, PlaybackEngine.LOOP, 8000, TimerKind.AVR_TIMER1));
+        out.add(new Build("PB0-PB2", SampleStorage.PACKED, PlaybackEngine.CLIP, 8000, TimerKind.AVR_TIMER1));
         out.add(new Build("PD2-PD7,PB0-PB3", SampleStorage.PACKED, PlaybackEngine.CLIP, 16000,
                 TimerKind.AVR_TIMER0));
         out.add(new Build("PD2-PD7,PB0-PB3", SampleStorage.UNPACKED, PlaybackEngine.LOOP, 16000,
@@ -117,6 +121,15 @@ class AvrSimulatorTest {
         out.add(new Build("PD2-PD7,PB0-PB4", SampleStorage.PACKED, PlaybackEngine.LOOP, 8000,
                 TimerKind.AVR_TIMER1));
         out.add(new Build(SCATTERED_12, SampleStorage.PACKED, PlaybackEngine.CLIP, 8000, TimerKind.AVR_TIMER1));
+        // The assembler ticks' cases: 7 bits by shift over two and three ports, 6 by table on one and two ports.
+        for (String pins : List.of("PD5-PD7,PB0-PB3", "PD5-PD7,PB0-PB1,PC0-PC1", "PD2,PD7,PD3,PD6,PD4,PD5",
+                "PD2,PD7,PB2,PB1,PD3,PB0")) {
+            for (PlaybackEngine engine : List.of(PlaybackEngine.CLIP, PlaybackEngine.LOOP)) {
+                for (SampleStorage storage : SampleStorage.values()) {
+                    out.add(new Build(pins, storage, engine, 16000, TimerKind.AVR_TIMER1));
+                }
+            }
+        }
         return out.stream();
     }
 

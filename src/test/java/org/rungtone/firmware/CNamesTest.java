@@ -2,6 +2,7 @@ package org.rungtone.firmware;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
 import org.rungtone.internal.InputError;
@@ -22,5 +23,19 @@ class CNamesTest {
                 assertThrows(InputError.class, () -> CNames.symbol("!!!")).getMessage());
         assertEquals("sound.name 'int' would make the C keyword 'int'; choose another name, e.g. int_sound",
                 assertThrows(InputError.class, () -> CNames.symbol("int")).getMessage());
+    }
+
+    @Test
+    void saysWhatANameBecameAndWhy() {
+        assertTrue(CNames.rewritten("door_chime").isEmpty(), "a name that is its symbol needs no note");
+        assertTrue(CNames.rewritten("Door-Chime.v2").isEmpty(), "case and separators need no note");
+        assertEquals("the name '9x' became the C symbol prefix 'snd_9x': a C identifier cannot start with a digit,"
+                + " so 'snd_' goes first; to choose it yourself, give a name that already is one",
+                CNames.rewritten("9x").orElseThrow());
+        assertEquals("the name 'Glöckchen' became the C symbol prefix 'gl_ckchen': symbols are lower case; anything"
+                + " but ASCII letters and digits becomes one '_' (none at either end); to choose it yourself, give a"
+                + " name that already is one", CNames.rewritten("Glöckchen").orElseThrow());
+        assertTrue(CNames.rewritten("../x").orElseThrow().startsWith("the name '../x' became the C symbol prefix"
+                + " 'x': anything but"));
     }
 }

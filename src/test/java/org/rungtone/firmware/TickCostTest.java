@@ -18,11 +18,16 @@ class TickCostTest {
 
     @Test
     void avrFiguresGrowWithStoragePortsAndLooping() {
-        assertEquals(new TickCost(70, 0, true), cost(avr("PD2-PD7", 6).build()));
-        assertEquals(new TickCost(135, 0, true), cost(avr("PD2-PD7", 6).storage(SampleStorage.PACKED).build()));
+        // whole-byte unpacked codes by shift or table: the assembler interrupt's figures
+        assertEquals(new TickCost(60, 0, true), cost(avr("PD2-PD7", 6).build()));
+        assertEquals(new TickCost(90, 2, true), cost(avr("PD2,PD7,PC0,PC1,PB2,PB1", 6).build()));
+        assertEquals(new TickCost(70, 0, true), cost(avr("PD2-PD7", 6).engine(PlaybackEngine.LOOP).build()));
+        assertEquals(new TickCost(110, 0, true), cost(avr("PD2-PD7", 6).storage(SampleStorage.PACKED).build()));
         assertEquals(new TickCost(95, 1, true), cost(avr("PD2-PD7,PB0-PB3", 10).build()));
-        assertEquals(new TickCost(125, 2, true), cost(avr("PD2,PD7,PC0,PC1,PB2,PB1", 6).engine(PlaybackEngine.LOOP)
+        assertEquals(new TickCost(105, 2, true), cost(avr("PD2,PD7,PC0,PC1,PB2,PB1", 6).engine(PlaybackEngine.LOOP)
                 .build()));
+        assertEquals(new TickCost(140, 2, true), cost(avr("PD2,PD7,PC0,PC1,PB2,PB1", 6).engine(PlaybackEngine.LOOP)
+                .storage(SampleStorage.PACKED).build()));
     }
 
     @Test

@@ -77,7 +77,7 @@ class SurveyRunTest {
 
         Path out = dir.resolve("out");
         assertEquals(List.of(out.resolve("survey.txt"), out.resolve("survey.json"), out.resolve("survey-sinad.png"),
-                out.resolve("previews")), r.context().files());
+                out.resolve("survey-sinad-flash.png"), out.resolve("previews")), r.context().files());
         assertEquals(r.text(), Files.readString(out.resolve("survey.txt")));
         assertEquals(r.json(), Files.readString(out.resolve("survey.json")));
         for (SurveyRow row : r.survey().rows()) {
@@ -102,7 +102,8 @@ class SurveyRunTest {
         assertEquals(List.of("at 8kHz, 16kHz: the whole source is below the -0.5 dBFS trim threshold; nothing was"
                 + " trimmed"), r.context().warnings());
         assertEquals(List.of(dir.resolve("out").resolve("survey.txt"), dir.resolve("out").resolve("survey.json"),
-                dir.resolve("out").resolve("survey-sinad.png")), r.context().files());
+                dir.resolve("out").resolve("survey-sinad.png"), dir.resolve("out").resolve("survey-sinad-flash.png")),
+                r.context().files());
         assertFalse(Files.exists(dir.resolve("out").resolve("previews")));
     }
 

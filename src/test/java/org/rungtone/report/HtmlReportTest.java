@@ -30,6 +30,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.rungtone.analysis.QualityReport;
 import org.rungtone.analysis.ToneReport;
 import org.rungtone.internal.InputError;
+import org.rungtone.testing.FactsFixture;
 
 class HtmlReportTest {
     private static final byte[] PNG_SIGNATURE = {(byte) 0x89, 'P', 'N', 'G', '\r', '\n', 0x1a, '\n'};
@@ -60,7 +61,8 @@ class HtmlReportTest {
                 24_000, List.of(chimeOut.resolve("door_chime.c"), chimeOut.resolve("preview.wav"), errorPlot,
                         spectrumPlot, chimeOut.resolve("report.txt")),
                 List.of("12 samples clipped before quantization; lower --gain by 0.3 dB"),
-                Map.of("decode", 12.0));
+                Map.of("decode", 12.0), Optional.empty(),
+                FactsFixture.of(Path.of("sounds/door-chime.wav"), 44_100, 6, chimeOut));
 
         Path alarmOut = dir.resolve("freezer_alarm");
         Path alarmPlot = plot(alarmOut.resolve("error-spectrum.png"), "alarm error");
@@ -69,7 +71,8 @@ class HtmlReportTest {
                 "ideal levels", 0, List.of(quality("ideal", 6, 0.0), quality("shaped", 6, -2.5)), "shaped",
                 Optional.of(3.4), Optional.empty(), new BuildSummary.PreviewInfo("none", 48_000, 3_400, -1.58,
                         1.042), List.of(), 6_400, List.of(alarmPlot), List.of("alarm is louder than the chime"),
-                Map.of());
+                Map.of(), Optional.empty(),
+                FactsFixture.of(Path.of("sounds/freezer-alarm.rung"), 8_000, 6, alarmOut));
         transferPng = plot(dir.resolve("ladder/transfer.png"), "transfer");
     }
 
@@ -84,9 +87,10 @@ class HtmlReportTest {
                 (sinad - 1.76) / 6.02 + 0.5, -sinad, 1.0, 0.0, Optional.empty(), Optional.empty());
     }
 
+    /** A plot whose description (its alt text on the page) is "{@code name} plot for the test". */
     private static Path plot(Path file, String name) {
-        Plots.write(file, new Plots.Chart(name, "x", "y", false, List.of(
-                new Plots.Series(name, new double[] {0, 1, 2}, new double[] {0, 1, 0}, Plots.Style.LINE))));
+        Plots.write(file, Plots.Chart.of(name, "x", "y", List.of(new Plots.Series(name, new double[] {0, 1, 2},
+                new double[] {0, 1, 0}, Plots.Style.LINE)), List.of(), name + " plot for the test"));
         return file;
     }
 
@@ -101,7 +105,7 @@ class HtmlReportTest {
                 List.of(new HtmlReport.Section("Ladder", "bit  pin  R\n  0  PB0  20k\n",
                         List.of(HtmlReport.Figure.of(transferPng))),
                         new HtmlReport.Section("Calibration", "fitted from 64 measured codes")),
-                flash, budget, warnings, Optional.empty());
+                flash, budget, warnings, Optional.empty(), List.of());
     }
 
     private static String f1(double v) {
@@ -138,7 +142,23 @@ class HtmlReportTest {
         }
         assertTrue(doc.select("section#sound-door-chime figcaption").first().text()
                 .startsWith("Error spectrum"));
-        assertEquals("door_chime: error spectrum plot", images.get(0).attr("alt"));
+        // the alt text is the description the plot carries (PngText)
+        assertEquals("error plot for the test", images.get(0).attr("alt"));
+        assertEquals("transfer plot for the test", images.last().attr("alt"));
+    }
+
+    @Test
+    void namesAPlotWithoutADescriptionByItsOwnerAndFile() throws IOException {
+        Path bare = dir.resolve("ladder/fit_residuals.png");
+        java.awt.image.BufferedImage image = new java.awt.image.BufferedImage(4, 3,
+                java.awt.image.BufferedImage.TYPE_INT_RGB);
+        javax.imageio.ImageIO.write(image, "png", bare.toFile());
+        HtmlReport.Page p = new HtmlReport.Page("board", "0.1.0", List.of(), List.of(),
+                List.of(new HtmlReport.Section("Fit", "", List.of(HtmlReport.Figure.of(bare)))), 0,
+                OptionalLong.empty(), List.of(), Optional.empty(), List.of());
+        Element img = Jsoup.parse(HtmlReport.render(p)).selectFirst("img");
+        assertEquals("Fit: fit residuals plot", img.attr("alt"));
+        assertEquals("4", img.attr("width"));
     }
 
     @Test
@@ -240,7 +260,7 @@ class HtmlReportTest {
     void keepsEveryIdUniqueAndEveryLinkResolved() {
         HtmlReport.Page p = new HtmlReport.Page("board", "0.1.0", List.of(), List.of(chime, chime, alarm),
                 List.of(new HtmlReport.Section("Ladder", "a"), new HtmlReport.Section("ladder!", "b")), 0,
-                OptionalLong.empty(), List.of(), Optional.empty());
+                OptionalLong.empty(), List.of(), Optional.empty(), List.of());
         Document doc = Jsoup.parse(HtmlReport.render(p));
         List<String> ids = doc.select("[id]").eachAttr("id");
         assertEquals(ids.size(), ids.stream().distinct().count(), ids.toString());
@@ -257,10 +277,11 @@ class HtmlReportTest {
         BuildSummary s = new BuildSummary("0.1.0", Path.of("a.wav"), evil, "snd", 4, 8000, 8, 0.001, "none",
                 "none", 0, evil, "none", "ideal", 0, List.of(quality(evil, 4, 0)), evil, Optional.empty(),
                 Optional.empty(), new BuildSummary.PreviewInfo(evil, 8000, 3400, -1.5, 0.5), List.of(evil), 8,
-                List.of(), List.of(evil), Map.of());
+                List.of(), List.of(evil), Map.of(), Optional.empty(),
+                FactsFixture.of(Path.of("a.wav"), 8000, 4, dir));
         HtmlReport.Page p = new HtmlReport.Page(evil, "0.1.0", List.of(new HtmlReport.Setting(evil, evil)),
                 List.of(s), List.of(new HtmlReport.Section(evil, evil)), 8, OptionalLong.empty(), List.of(evil),
-                Optional.of(evil));
+                Optional.of(evil), List.of());
         String html = HtmlReport.render(p);
         assertFalse(html.contains("<script"), html);
         assertFalse(html.contains("<b>"));
@@ -300,7 +321,7 @@ class HtmlReportTest {
         Path missing = dir.resolve("gone.png");
         HtmlReport.Page p = new HtmlReport.Page("board", "0.1.0", List.of(), List.of(),
                 List.of(new HtmlReport.Section("plots", "", List.of(HtmlReport.Figure.of(missing)))), 0,
-                OptionalLong.empty(), List.of(), Optional.empty());
+                OptionalLong.empty(), List.of(), Optional.empty(), List.of());
         InputError e = assertThrows(InputError.class, () -> HtmlReport.render(p));
         assertEquals(missing + ": cannot read this plot for report.html (NoSuchFileException);"
                 + " rebuild to write it again", e.getMessage());

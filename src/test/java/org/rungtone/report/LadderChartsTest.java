@@ -16,18 +16,49 @@ class LadderChartsTest {
     private static final LadderSpec R2R3 = LadderSpec.builder().topology(Topology.R2R).bits(3).build();
 
     @Test
-    void eachKindHasItsFileAndLegend() {
+    void eachKindHasItsFile() {
         LadderAnalysis a = LadderAnalysis.of(R2R3, Double.POSITIVE_INFINITY);
         List<LadderCharts.Figure> plain = LadderCharts.of(a, Optional.empty());
         assertEquals(List.of(LadderCharts.Kind.TRANSFER, LadderCharts.Kind.DNL, LadderCharts.Kind.INL),
                 plain.stream().map(LadderCharts.Figure::kind).toList());
         assertEquals("Transfer curve (r2r 3-bit, 5% parts)", plain.get(0).chart().title());
-        assertEquals(Plots.Legend.BOTTOM_RIGHT, LadderCharts.Kind.TRANSFER.legend());
-        assertEquals(Plots.Legend.TOP_RIGHT, LadderCharts.Kind.INL.legend());
         List<LadderCharts.Figure> all = LadderCharts.of(a,
                 Optional.of(new MonteCarlo(4, 1, Spread.uniform()).run(R2R3)));
         assertEquals(LadderCharts.Kind.MONTE_CARLO, all.get(3).kind());
         assertEquals("monte-carlo.png", all.get(3).kind().fileName());
+    }
+
+    @Test
+    void linearityChartsDrawTheHalfLsbBandAndDnlTheMonotonicLimit() {
+        List<LadderCharts.Figure> charts = LadderCharts.of(LadderAnalysis.of(R2R3, Double.POSITIVE_INFINITY),
+                Optional.empty());
+        Plots.Chart dnl = charts.get(1).chart();
+        Plots.Chart inl = charts.get(2).chart();
+        // IEEE Std 1658-2011: DNL > -1 LSB at every step <=> monotonic; the +-0.5 LSB band is common practice,
+        // no source
+        assertEquals(List.of(new Plots.Reference("\u00b10.5 LSB", Plots.Direction.HORIZONTAL, List.of(0.5, -0.5)),
+                new Plots.Reference("-1 LSB (monotonic limit)", Plots.Direction.HORIZONTAL, List.of(-1.0))),
+                dnl.references());
+        assertEquals(List.of(new Plots.Reference("\u00b10.5 LSB", Plots.Direction.HORIZONTAL, List.of(0.5, -0.5))),
+                inl.references());
+        // the y range holds every reference line with room to spare, on round ticks
+        assertEquals(List.of(-1.2, -1.0, -0.8, -0.6, -0.4, -0.2, 0.0, 0.2, 0.4, 0.6), dnl.y().ticks());
+        assertEquals(List.of(-0.6, -0.4, -0.2, 0.0, 0.2, 0.4, 0.6), inl.y().ticks());
+        // codes 0..7 along x, every code a tick
+        assertEquals(List.of(0.0, 1.0, 2.0, 3.0, 4.0, 5.0, 6.0, 7.0), dnl.x().ticks());
+        assertEquals(0, dnl.x().min());
+        assertEquals(7, dnl.x().max());
+        assertEquals("Differential non-linearity of the r2r 3-bit, 5% parts ladder, codes 0\u20137, LSB, with"
+                + " \u00b10.5 LSB and the -1 LSB monotonic limit dashed", dnl.description());
+    }
+
+    @Test
+    void monteCarloShowsTheShareOfBoardsFromNoneToAll() {
+        Plots.Chart mc = LadderCharts.of(LadderAnalysis.of(R2R3, Double.POSITIVE_INFINITY),
+                Optional.of(new MonteCarlo(200, 1, Spread.uniform()).run(R2R3))).get(3).chart();
+        assertEquals(List.of(0.0, 20.0, 40.0, 60.0, 80.0, 100.0), mc.y().ticks());
+        assertEquals(0, mc.x().min());
+        assertEquals(List.of(Plots.Reference.vertical("0.5 LSB", 0.5)), mc.references());
     }
 
     @Test

@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
 import com.google.gson.JsonParser;
+import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
 import java.util.TreeSet;
@@ -47,7 +48,8 @@ class LadderReportTest {
     @Test
     void jsonGivesWarningTextsAndTheWiring() {
         JsonObject json = JsonParser.parseString(LadderReport.json(study(SWAPPED, 100e-6, true),
-                List.of("a.csv"))).getAsJsonObject();
+                List.of(Path.of("out", "a.csv").toString()), Path.of("out"), "9.9")).getAsJsonObject();
+        assertEquals("ladder", json.get("report").getAsString());
         JsonArray warnings = json.getAsJsonArray("warnings");
         assertEquals(5, warnings.size());
         assertTrue(warnings.get(0).getAsString().startsWith("not monotonic: 1 inverted step"), warnings.toString());

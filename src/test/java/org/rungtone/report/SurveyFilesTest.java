@@ -16,6 +16,7 @@ import org.rungtone.analysis.SurveyRow;
 import org.rungtone.analysis.SurveyTarget;
 import org.rungtone.source.Signal;
 import org.rungtone.source.WavReader;
+import org.rungtone.testing.FactsFixture;
 
 class SurveyFilesTest {
     @TempDir
@@ -33,23 +34,33 @@ class SurveyFilesTest {
         SurveyResult result = new SurveyResult(List.of(row(4, 8000, 25.8), row(8, 8000, 49.9)),
                 SurveyTarget.sinadDb(40), null, false);
         SurveyReport.Context context = new SurveyReport.Context("9.9", Path.of("chime.wav"), "PCM 16-bit",
-                "DC removed", "kaiser", "ideal", "tpdf", "none", 1, "none", false, SurveyFiles.reports(dir),
-                List.of());
+                "DC removed", "kaiser", "ideal", "tpdf", "none", 1, "none", false, SurveyFiles.reports(dir, result),
+                List.of(), FactsFixture.survey(Path.of("chime.wav"), 8, dir));
         SurveyFiles.write(dir, result, context);
         assertEquals(SurveyReport.text(result, context), Files.readString(dir.resolve("survey.txt")));
         assertEquals(Json.toJson(SurveyReport.json(result, context)), Files.readString(dir.resolve("survey.json")));
-        byte[] png = Files.readAllBytes(dir.resolve("survey-sinad.png"));
-        assertArrayEquals(new byte[] {(byte) 0x89, 'P', 'N', 'G'}, Arrays.copyOf(png, 4));
+        for (String plot : List.of("survey-sinad.png", "survey-sinad-flash.png")) {
+            byte[] png = Files.readAllBytes(dir.resolve(plot));
+            assertArrayEquals(new byte[] {(byte) 0x89, 'P', 'N', 'G'}, Arrays.copyOf(png, 4));
+            assertEquals(Plots.png(plot.endsWith("flash.png") ? SurveyCharts.againstFlash(result)
+                    : SurveyCharts.againstBits(result)).length, png.length, plot);
+        }
         try (Stream<Path> s = Files.list(dir)) {
-            assertEquals(List.of("survey-sinad.png", "survey.json", "survey.txt"),
+            assertEquals(List.of("survey-sinad-flash.png", "survey-sinad.png", "survey.json", "survey.txt"),
                     s.map(p -> p.getFileName().toString()).sorted().toList(), "no temporary files left behind");
         }
     }
 
     @Test
-    void listsTheReportsTextFirst() {
-        assertEquals(List.of(dir.resolve("survey.txt"), dir.resolve("survey.json"), dir.resolve("survey-sinad.png")),
-                SurveyFiles.reports(dir));
+    void listsTheReportsTextFirstAndNamesThePlotsByTheirFigure() {
+        SurveyResult sinad = new SurveyResult(List.of(row(4, 8000, 25.8)), SurveyTarget.sinadDb(40), null, false);
+        assertEquals(List.of(dir.resolve("survey.txt"), dir.resolve("survey.json"), dir.resolve("survey-sinad.png"),
+                dir.resolve("survey-sinad-flash.png")), SurveyFiles.reports(dir, sinad));
+        SurveyResult none = new SurveyResult(List.of(row(4, 8000, 25.8)), null, null, false);
+        assertEquals(dir.resolve("survey-sinad.png"), SurveyFiles.reports(dir, none).get(2));
+        SurveyResult enob = new SurveyResult(List.of(row(4, 8000, 25.8)), SurveyTarget.enobBits(5), null, true);
+        assertEquals(List.of(dir.resolve("survey-enob.png"), dir.resolve("survey-enob-flash.png")),
+                SurveyFiles.reports(dir, enob).subList(2, 4));
         assertEquals(dir.resolve("previews"), SurveyFiles.previews(dir));
     }
 
