@@ -1,7 +1,6 @@
 package org.rungtone.cli;
 
 import java.nio.file.Path;
-import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
@@ -80,6 +79,9 @@ public final class BuildCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "<dir>", description = "Output folder (default ./rungtone-out/NAME).")
     Path out;
 
+    @Option(names = "--c-out", paramLabel = "<dir>", description = "Folder of the C files (default: the --out folder).")
+    Optional<Path> cOut = Optional.empty();
+
     @Option(names = "--channel", paramLabel = "<n>", defaultValue = "0",
             description = "0 mixes all channels down (default); 1..8 picks one.")
     int channel;
@@ -123,8 +125,7 @@ public final class BuildCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         LadderOptions.bitsOrZero(bits);
-        if (source.getFileName() != null && source.getFileName().toString().toLowerCase(Locale.ROOT)
-                .endsWith(".toml")) {
+        if (ProjectFile.isProjectFile(source)) {
             return buildProject();
         }
         Boards.Board board = unit.resolve(bits, ladder, false);
@@ -172,14 +173,13 @@ public final class BuildCommand implements Callable<Integer> {
                 pr.hasMatchedOption("--dither") ? Optional.of(dither) : Optional.empty(),
                 pr.hasMatchedOption("--shaping") ? Optional.of(shaping) : Optional.empty(),
                 pr.hasMatchedOption("--seed") ? Optional.of(seed) : Optional.empty(), Optional.ofNullable(out),
-                pr.hasMatchedOption("--compensation") ? Optional.of(compensation) : Optional.empty(),
-                unit.path(), ladder, firmware::applyGiven, firmware.wantsPlayer());
+                cOut, pr.hasMatchedOption("--compensation") ? Optional.of(compensation)
+                        : Optional.empty(), unit.path(), ladder, firmware::applyGiven, firmware.wantsPlayer());
         ProgressLine line = ProgressLine.forTerminal(spec.commandLine().getErr(), common);
         ProjectBuild.Result r;
+        OutputSpan chosen = pr.hasMatchedOption("--span") ? span : project.quantize().span().orElse(OutputSpan.FULL);
         try {
-            OutputSpan outputSpan = pr.hasMatchedOption("--span") ? span
-                    : project.quantize().span().orElse(OutputSpan.FULL);
-            r = new ProjectBuild(Version.get(), outputSpan, line::show).run(project, o);
+            r = new ProjectBuild(Version.get(), chosen, line::show).run(project, o);
         } finally {
             line.clear();
         }
@@ -198,7 +198,7 @@ public final class BuildCommand implements Callable<Integer> {
                 .gainDb(conditioning.gainDb()).normalizeDbfs(conditioning.normalizeDbfs())
                 .fades(conditioning.fadeIn, conditioning.fadeOut).resampler(conditioning.resampler())
                 .fullScaleVolts(fullScale).flashQualifier(flashAttr).player(firmware.request())
-                .loop(firmware.loopSpan()).flashBudgetBytes(firmware.flashBudgetBytes())
+                .loop(firmware.loopSpan()).flashBudgetBytes(firmware.flashBudgetBytes()).cOutDir(cOut)
                 .preview(preview.filter(), preview.previewRateHz).previewSeconds(preview.previewSeconds());
         board.levels().ifPresent(levels -> plan.board(levels, compensation));
         return plan.build();

@@ -11,6 +11,8 @@ public enum Setting {
     NAME("sound.name"),
     /** The output folder. */
     OUT("project.out"),
+    /** The folder of the emitted C files, when apart from the output folder. */
+    C_OUT("project.c_out"),
     /** Seed of every random process. */
     SEED("project.seed"),
     /** A measured unit profile. */

@@ -58,20 +58,22 @@ public final class Build {
     }
 
     /**
-     * Runs the plan and writes every output into the plan's folder, replacing the folder's previous outputs as
-     * a whole ({@link OutputFolder}).
+     * Runs the plan and writes every output into the plan's folder (the C files into their own, when given),
+     * replacing each folder's previous outputs as a whole ({@link OutputFolder}).
      *
-     * @throws InputError for anything the user can fix; the folder is then as it was
+     * @throws InputError for anything the user can fix; the folders are then as they were
      */
     public BuildSummary run(BuildPlan plan) {
-        try (OutputFolder folder = OutputFolder.open(plan.outDir())) {
-            BuildSummary summary = write(plan);
+        try (OutputFolder folder = OutputFolder.open(plan.outDir());
+                CFolder c = CFolder.open(plan.outDir(), plan.firmware().cOutDir())) {
+            BuildSummary summary = write(plan, c.dir());
+            c.commit();
             folder.commit();
             return summary;
         }
     }
 
-    private BuildSummary write(BuildPlan plan) {
+    private BuildSummary write(BuildPlan plan, Path cDir) {
         CompletableFuture<Void> plotsReady = CompletableFuture.runAsync(Plots::warmUp);
         SoundRenderer.Rendered r = new SoundRenderer(span, progress).render(plan);
         Stopwatch watch = new Stopwatch(progress);
@@ -89,13 +91,13 @@ public final class Build {
         });
         try {
             if (firmware != null) {
-                EmitResult er = FirmwareEmitter.write(firmware, plan.outDir());
+                EmitResult er = FirmwareEmitter.write(firmware, cDir);
                 files.addAll(er.files());
                 firmwareLines.addAll(er.report());
                 firmwareFacts = Optional.of(er.facts());
                 warnings.addAll(er.warnings());
             } else {
-                files.addAll(emitArray(plan.symbol(), r, plan.outDir()));
+                files.addAll(emitArray(plan.symbol(), r, cDir));
             }
         } catch (RuntimeException e) {
             // the staging folder goes once the assets are done with it

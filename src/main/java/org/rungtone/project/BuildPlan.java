@@ -79,6 +79,7 @@ public record BuildPlan(String symbol, Path outDir, SourceSettings source, Condi
         private OptionalLong flashBudgetBytes = OptionalLong.empty();
         private String flashQualifier = "";
         private String name;
+        private Optional<Path> cOutDir = Optional.empty();
 
         private Builder(Path source, String symbol, Path outDir) {
             this.source = source;
@@ -215,6 +216,12 @@ public record BuildPlan(String symbol, Path outDir, SourceSettings source, Condi
             return this;
         }
 
+        /** The folder of the C files (default: the output folder). */
+        public Builder cOutDir(Optional<Path> value) {
+            cOutDir = value;
+            return this;
+        }
+
         /**
          * The validated plan.
          *
@@ -226,7 +233,7 @@ public record BuildPlan(String symbol, Path outDir, SourceSettings source, Condi
                             fadeOutSeconds, resampler),
                     new QuantizeSettings(bits, dither, shaping, seed, board, compensation),
                     new PreviewSettings(filter, previewRateHz, previewSeconds, fullScaleVolts),
-                    new FirmwareSettings(player, loop, flashBudgetBytes, flashQualifier));
+                    new FirmwareSettings(player, loop, flashBudgetBytes, flashQualifier, cOutDir));
         }
     }
 }

@@ -52,6 +52,8 @@ import org.rungtone.report.ProjectSetting.Origin;
 public final class ProjectBuild {
     /** The setting naming the output folder: in the report, never in the C files (they must not depend on it). */
     private static final String OUT_SETTING = "out";
+    /** The setting naming the C files' own folder: in the report only, like {@link #OUT_SETTING}. */
+    private static final String C_OUT_SETTING = "c_out";
 
     private final String toolVersion;
     private final OutputSpan span;
@@ -81,6 +83,7 @@ public final class ProjectBuild {
      * @param shaping --shaping
      * @param seed --seed
      * @param outDir --out
+     * @param cOutDir --c-out
      * @param compensation --compensation
      * @param unit --unit, a measured unit profile that replaces the project's board
      * @param ladder the command line's ladder description, on top of the project's [ladder] table
@@ -88,7 +91,7 @@ public final class ProjectBuild {
      * @param wantsPlayer the command line asked for a player
      */
     public record Overrides(OptionalInt bits, OptionalDouble rateHz, Optional<Dither> dither,
-            Optional<ErrorFilter> shaping, Optional<Long> seed, Optional<Path> outDir,
+            Optional<ErrorFilter> shaping, Optional<Long> seed, Optional<Path> outDir, Optional<Path> cOutDir,
             Optional<Compensation> compensation, Optional<Path> unit, LadderDescription ladder,
             UnaryOperator<FirmwareRequest.Builder> firmware, boolean wantsPlayer) {
         /**
@@ -109,6 +112,8 @@ public final class ProjectBuild {
                     return seed.isPresent();
                 case OUT:
                     return outDir.isPresent();
+                case C_OUT:
+                    return cOutDir.isPresent();
                 case COMPENSATION:
                     return compensation.isPresent();
                 case UNIT:
@@ -121,8 +126,8 @@ public final class ProjectBuild {
         /** No overrides: the project as written. */
         public static Overrides none() {
             return new Overrides(OptionalInt.empty(), OptionalDouble.empty(), Optional.empty(), Optional.empty(),
-                    Optional.empty(), Optional.empty(), Optional.empty(), Optional.empty(), LadderDescription.none(),
-                    b -> b, false);
+                    Optional.empty(), Optional.empty(), Optional.empty(), Optional.empty(), Optional.empty(),
+                    LadderDescription.none(), b -> b, false);
         }
     }
 
@@ -163,8 +168,8 @@ public final class ProjectBuild {
      * The settings every sound of the project shares, with command-line overrides applied, and each one's
      * value and origin for the reports.
      */
-    private record Shared(Path outDir, int bits, Dither dither, ErrorFilter shaping, long seed,
-            Compensation compensation, Optional<LevelTable> board, OptionalDouble rateHz,
+    private record Shared(Path outDir, Optional<Path> cOutDir, int bits, Dither dither, ErrorFilter shaping,
+            long seed, Compensation compensation, Optional<LevelTable> board, OptionalDouble rateHz,
             Map<String, ProjectSetting> settings) {
     }
 
@@ -175,14 +180,16 @@ public final class ProjectBuild {
 
     private Result build(Project project, Overrides o) {
         Shared shared = settle(project, o);
-        try (OutputFolder folder = OutputFolder.open(shared.outDir())) {
-            Result r = build(project, o, shared);
+        try (OutputFolder folder = OutputFolder.open(shared.outDir());
+                CFolder c = CFolder.open(shared.outDir(), shared.cOutDir())) {
+            Result r = build(project, o, shared, c.dir());
+            c.commit();
             folder.commit();
             return r;
         }
     }
 
-    private Result build(Project project, Overrides o, Shared shared) {
+    private Result build(Project project, Overrides o, Shared shared, Path cDir) {
         Optional<FirmwareRequest> player = player(project, o, shared.settings());
         if (player.isPresent()) {
             checkOneRate(project, o, shared.rateHz());
@@ -211,7 +218,7 @@ public final class ProjectBuild {
             }
         }
         progress.accept("writing firmware, previews and reports");
-        Emitted emitted = emit(project, player, shared, rendered);
+        Emitted emitted = emit(project, player, shared, rendered, cDir);
         Jobs.join(plotsReady);
         Build build = new Build(toolVersion);
         List<Path> files = new ArrayList<>(emitted.files());
@@ -238,6 +245,9 @@ public final class ProjectBuild {
         settings.put(OUT_SETTING, ProjectSetting.shown(outDir, outDir.toString(), Origin.of(o.outDir().isPresent(),
                 project.outDir().isPresent())));
         AtomicFiles.checkFolderUsable(outDir);
+        Optional<Path> cOut = o.cOutDir().or(project::cOutDir).map(p -> p.toAbsolutePath().normalize());
+        cOut.ifPresent(p -> settings.put(C_OUT_SETTING, ProjectSetting.shown(p, p.toString(),
+                Origin.of(o.cOutDir().isPresent(), true))));
         Project.Quantize q = project.quantize();
         int fixedBits = o.bits().isPresent() ? o.bits().getAsInt() : q.bits().map(Long::intValue).orElse(0);
         Optional<LevelTable> board = Boards.ofProject(project, o.unit(), o.ladder(), fixedBits);
@@ -264,7 +274,7 @@ public final class ProjectBuild {
                     project.compensation().isPresent())));
         }
         OptionalDouble rate = o.rateHz().isPresent() ? o.rateHz() : q.rateHz();
-        return new Shared(outDir, bits, dither, shaping, seed, compensation, board, rate, settings);
+        return new Shared(outDir, cOut, bits, dither, shaping, seed, compensation, board, rate, settings);
     }
 
     /**
@@ -302,12 +312,12 @@ public final class ProjectBuild {
 
     /** Emits one player for every sound, or each sound's bare sample array. */
     private Emitted emit(Project project, Optional<FirmwareRequest> player, Shared shared,
-            List<SoundRenderer.Rendered> rendered) {
+            List<SoundRenderer.Rendered> rendered, Path cDir) {
         String prefix = CNames.symbol(project.name());
         if (player.isPresent()) {
             FirmwareRequest.Builder fb = player.get().toBuilder().name(prefix).toolVersion(toolVersion);
             for (Map.Entry<String, String> e : ProjectSetting.texts(shared.settings()).entrySet()) {
-                if (!e.getKey().equals(OUT_SETTING)) {
+                if (!e.getKey().equals(OUT_SETTING) && !e.getKey().equals(C_OUT_SETTING)) {
                     fb.setting(e.getKey() + ": " + e.getValue());
                 }
             }
@@ -319,7 +329,7 @@ public final class ProjectBuild {
                     throw located(project, s, Overrides.none(), e);
                 }
             }
-            EmitResult er = FirmwareEmitter.emit(fb.build(), shared.outDir());
+            EmitResult er = FirmwareEmitter.emit(fb.build(), cDir);
             return new Emitted(er.files(), er.report(), er.warnings(), er.flashBytes(), Optional.of(er.facts()));
         }
         long flash = 0;
@@ -335,7 +345,7 @@ public final class ProjectBuild {
         List<Path> files = new ArrayList<>();
         Build build = new Build(toolVersion);
         for (SoundRenderer.Rendered r : rendered) {
-            files.addAll(build.emitArray(r.plan().symbol(), r, shared.outDir()));
+            files.addAll(build.emitArray(r.plan().symbol(), r, cDir));
         }
         return new Emitted(files, List.of(), List.of(), flash, Optional.empty());
     }

@@ -266,6 +266,19 @@ class JsonSchemaTest {
                 .addProperty("worst_cycles", "57 cycles"));
     }
 
+    /** A project's C folder of its own is a setting of the JSON report, relative to the output folder. */
+    @Test
+    void aSeparateCFolderIsASetting(@TempDir Path dir) {
+        Cli.Run r = Cli.run("build", EXAMPLES.resolve("greenhouse/greenhouse.toml").toString(), "--out",
+                dir.resolve("report").toString(), "--c-out", dir.resolve("firmware").toString(), "--json", "-q");
+        assertEquals(0, r.exitCode(), r.err());
+        assertValid("project", r.out());
+        JsonObject cOut = JsonParser.parseString(r.out()).getAsJsonObject().getAsJsonObject("settings")
+                .getAsJsonObject("c_out");
+        assertEquals("../firmware", cOut.get("value").getAsString());
+        assertEquals("command_line", cOut.get("origin").getAsString());
+    }
+
     /** docs/json.md names every field of every schema. */
     @Test
     void everySchemaFieldIsDocumented() throws IOException {

@@ -19,8 +19,9 @@ import org.rungtone.testing.FactsFixture;
 
 class SurveyReportTest {
     private static final List<String> ROW_FIELDS = List.of("bits", "rate_hz", "samples", "sinad_db",
-            "in_band_snr_db", "a_weighted_snr_db", "enob_full_scale_bits", "clipped_samples", "flash_bytes_unpacked",
-            "flash_bytes_packed", "fits", "reaches_target", "chosen", "preview");
+            "in_band_snr_db", "a_weighted_snr_db", "enob_full_scale_bits", "heard_signal_to_error_db",
+            "heard_a_weighted_signal_to_error_db", "clipped_samples", "flash_bytes_unpacked", "flash_bytes_packed",
+            "fits", "reaches_target", "chosen", "preview");
 
     /**
      * A cell of a 1 s clip; flash bytes follow from the rate and depth as in SurveyRow, ENOB from SINAD as
