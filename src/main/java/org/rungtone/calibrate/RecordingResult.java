@@ -11,8 +11,9 @@ import java.util.Arrays;
  *
  * <p>A level's uncertainty: the level of step k is a running sum of the step amplitudes, so its variance
  * grows along the sweep like a random walk, {@code W_k = Σ_{m<k} (1 − ρ_m)²/d_m} in units of the noise
- * variance, and the codes the patterns repeat at both ends tie the walk down there: it is taken as a bridge,
- * {@code σ_k² = σ²·(W_k·(W − W_k)/W + 1/d_k)}.
+ * variance, and the visits of code 0 (in the patterns, and the sweep's returns to it) tie the walk down: between
+ * the visits a and b around step k it is taken as a bridge,
+ * {@code σ_k² = σ²·((W_k − W_a)·(W_b − W_k)/(W_b − W_a) + 1/d_k)}.
  *
  * @param recording the recording fitted
  * @param sweep the sweep it holds
@@ -83,14 +84,26 @@ public record RecordingResult(Recording recording, RecordingSweep sweep, SweepCl
         for (int k = 0; k < steps.length; k++) {
             walk[k + 1] = walk[k] + sq(1 - s.rho()[k]) / s.information()[k];
         }
-        double total = walk[steps.length];
+        int[] before = new int[steps.length];
+        int[] after = new int[steps.length];
+        for (int k = 0, last = 0; k < steps.length; k++) {
+            last = steps[k] == 0 ? k : last;
+            before[k] = last;
+        }
+        for (int k = steps.length - 1, next = steps.length; k >= 0; k--) {
+            next = steps[k] == 0 ? k : next;
+            after[k] = next;
+        }
         int[] plan = sweep.planCodes();
         double[] rel = new double[plan.length];
         double[] sig = new double[plan.length];
         for (int i = 0; i < plan.length; i++) {
-            int k = sweep.patternSteps() + i;
+            int k = sweep.planStep(i);
             rel[i] = (g[k] - g0) / swing;
-            double v = walk[k] * (total - walk[k]) / total + 1 / s.information()[k];
+            // the walk is tied down at the visits of code 0 on either side (the end when none follows)
+            double wa = walk[k] - walk[before[k]];
+            double wb = walk[after[k]] - walk[k];
+            double v = (wa + wb > 0 ? wa * wb / (wa + wb) : 0) + 1 / s.information()[k];
             sig[i] = noise * Math.sqrt(v) / Math.abs(swing);
         }
         double[] stepRms = new double[steps.length];

@@ -27,6 +27,8 @@ public final class RecordingSweep {
     public static final double MIN_HOLD_SECONDS = 0.010;
     /** The longest hold per code a recording sweep accepts. */
     public static final double MAX_HOLD_SECONDS = 1.0;
+    /** Between the patterns the sweep returns to code 0 before every this many planned codes. */
+    public static final int RETURN_EVERY = 16;
     private static final String START = "1000011000011110111011101100000";
     private static final String END = "1000001100011011000111011100011";
 
@@ -72,28 +74,68 @@ public final class RecordingSweep {
         return START.length();
     }
 
-    /** Every step's code: the start pattern, the plan's codes, the end pattern. */
+    /** The returns to code 0 between the patterns: one before every {@value #RETURN_EVERY} planned codes. */
+    public int returns() {
+        return (planCodes.length - 1) / RETURN_EVERY;
+    }
+
+    /** Steps between the two patterns: the planned codes and the returns to code 0, each held the same. */
+    public int middleSteps() {
+        return planCodes.length + returns();
+    }
+
+    /** The step at which planned code {@code i} (in plan order) is held. */
+    public int planStep(int i) {
+        return patternSteps() + i + i / RETURN_EVERY;
+    }
+
+    /** Which part of the sweep step {@code step} belongs to. */
+    public Part part(int step) {
+        int p = patternSteps();
+        if (step < p) {
+            return Part.START;
+        }
+        if (step >= endPatternStart()) {
+            return Part.END;
+        }
+        return (step - p + 1) % (RETURN_EVERY + 1) == 0 ? Part.RETURN : Part.PLAN;
+    }
+
+    /** The plan index of a step of {@link Part#PLAN}. */
+    public int planIndex(int step) {
+        int m = step - patternSteps();
+        return m - (m + 1) / (RETURN_EVERY + 1);
+    }
+
+    /**
+     * Every step's code: the start pattern, the plan's codes with a return to code 0 before every
+     * {@value #RETURN_EVERY} of them (so that no level is more than a few steps from a visit of code 0: the
+     * input passes no DC, and a level is known from the jumps that lead to it), the end pattern.
+     */
     public int[] stepCodes() {
         int top = (1 << bits) - 1;
         int p = patternSteps();
-        int[] out = new int[2 * p + planCodes.length];
+        int middle = middleSteps();
+        int[] out = new int[2 * p + middle];
         for (int i = 0; i < p; i++) {
             out[i] = START.charAt(i) == '1' ? top : 0;
-            out[p + planCodes.length + i] = END.charAt(i) == '1' ? top : 0;
+            out[p + middle + i] = END.charAt(i) == '1' ? top : 0;
         }
-        System.arraycopy(planCodes, 0, out, p, planCodes.length);
+        for (int i = 0; i < planCodes.length; i++) {
+            out[planStep(i)] = planCodes[i];
+        }
         return out;
     }
 
     /** Ticks step {@code i} is held. */
     public int ticksOf(int step) {
         int p = patternSteps();
-        return step < p || step >= p + planCodes.length ? PATTERN_TICKS : holdTicks;
+        return step < p || step >= p + middleSteps() ? PATTERN_TICKS : holdTicks;
     }
 
     /** The tick at which each step begins, the first at 0, and one more entry: the end of the last. */
     public long[] stepStartTicks() {
-        int steps = 2 * patternSteps() + planCodes.length;
+        int steps = 2 * patternSteps() + middleSteps();
         long[] out = new long[steps + 1];
         for (int i = 0; i < steps; i++) {
             out[i + 1] = out[i] + ticksOf(i);
@@ -109,7 +151,24 @@ public final class RecordingSweep {
 
     /** The step index where the end pattern begins. */
     public int endPatternStart() {
-        return patternSteps() + planCodes.length;
+        return patternSteps() + middleSteps();
+    }
+
+    /** The parts of a recording sweep. */
+    public enum Part {
+        /** The start pattern. */
+        START,
+        /** A planned code. */
+        PLAN,
+        /** A return to code 0 between planned codes. */
+        RETURN,
+        /** The end pattern. */
+        END;
+
+        /** The part's name in reports. */
+        public String word() {
+            return name().toLowerCase(java.util.Locale.ROOT);
+        }
     }
 
     /**

@@ -235,7 +235,8 @@ final class EmitReport {
                 : "each held " + Fmt.plain(s.holdMillis(), 3) + " ms (" + s.holdTicks() + " ticks)"
                         + (s.patternSteps() > 0 ? ", between a start and an end pattern of " + s.patternSteps()
                                 + " steps of " + s.patternTicks() + " ticks for a recording" : "");
-        return "sweep: " + count(s.codes().length - 2 * s.patternSteps(), "code") + " at "
+        String what = s.patternSteps() > 0 ? "step" : "code";
+        return "sweep: " + count(s.codes().length - 2 * s.patternSteps(), what) + " at "
                 + Fmt.hz(SweepSpec.TICK_HZ) + " ticks, " + mode;
     }
 

@@ -31,7 +31,7 @@ record SweepView(int count, Long holdTicks, int debounceTicks, String modeText, 
                 : null;
         String held = recording == null ? "each held " + s.holdTicks() + " ticks" : "a start pattern and an end"
                 + " pattern of " + s.patternSteps() + " steps of " + s.patternTicks() + " ticks around "
-                + (codes.length - 2 * s.patternSteps()) + " codes each held " + s.holdTicks() + " ticks";
+                + (codes.length - 2 * s.patternSteps()) + " steps each held " + s.holdTicks() + " ticks";
         return new SweepView(codes.length, p.button.isPresent() ? null : s.holdTicks(), s.debounceTicks(),
                 p.button.map(b -> "the next on each press of " + b.name()).orElse(held),
                 CLiterals.arrayBody(codes, CLiterals.hexDigits(p.bits), PER_LINE, "    "), recording);

@@ -123,8 +123,9 @@ public final class CalibrationPlan {
         String what = recording.isPresent() ? "calibration sweep for a recording: a start pattern, the " : "calibration"
                 + " sweep: the ";
         return base.toBuilder().name(r.name()).toolVersion(r.toolVersion())
-                .setting(what + plan.codes().size() + " codes of plan.csv, in its order"
-                        + (recording.isPresent() ? ", an end pattern" : ""))
+                .setting(what + plan.codes().size() + " codes of plan.csv, in its order" + (recording.isPresent()
+                        ? " with a return to code 0 before every " + RecordingSweep.RETURN_EVERY + "th, an end pattern"
+                        : ""))
                 .sweep(sweep).build();
     }
 }

@@ -67,6 +67,21 @@ public final class CalibrationReport {
         StringBuilder b = new StringBuilder();
         MeasurementPlan plan = p.plan();
         LevelTable model = plan.expected();
+        if (p.recording().isPresent()) {
+            line(b, "Calibration plan for a recording: %s, %d codes%s", p.ladder().describe(), plan.codes().size(),
+                    plan.everyCode() ? " (every code: the recorded levels will be the profile)" : "");
+            line(b, "  the model expects %s .. %s, an average step (LSB) of %s", v(model.minVolts()),
+                    v(model.maxVolts()), v(p.lsbVolts()));
+            line(b, "");
+            RecordingChecklist.text(b, p.recording().get(), plan);
+            sweep(b, p);
+            line(b, "");
+            line(b, "Wrote %s", CalibrationFiles.joined(files));
+            line(b, "Next: record the sweep, then run");
+            line(b, "  rungtone calibrate listen RECORDING.wav --board NAME (with the same ladder, code and --hold"
+                    + " options)");
+            return b.toString();
+        }
         line(b, "Calibration plan: %s, %d codes to measure%s", p.ladder().describe(), plan.codes().size(),
                 plan.everyCode() ? " (every code: the readings will be the profile)" : "");
         line(b, "  the model expects %s .. %s, an average step (LSB) of %s", v(model.minVolts()),
@@ -81,16 +96,6 @@ public final class CalibrationReport {
         }
         b.append(t.render("  "));
         line(b, "");
-        if (p.recording().isPresent()) {
-            RecordingChecklist.text(b, p.recording().get(), model);
-            sweep(b, p);
-            line(b, "");
-            line(b, "Wrote %s", CalibrationFiles.joined(files));
-            line(b, "Next: record the sweep, then run");
-            line(b, "  rungtone calibrate listen RECORDING.wav --board NAME (with the same ladder, code and --hold"
-                    + " options)");
-            return b.toString();
-        }
         p.meter().ifPresent(m -> RecordingChecklist.meterLine(b, m, p.plan()));
         meter(b, p);
         line(b, "");

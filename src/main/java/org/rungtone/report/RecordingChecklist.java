@@ -3,6 +3,7 @@ package org.rungtone.report;
 import static org.rungtone.report.TextLines.line;
 
 import java.util.LinkedHashMap;
+import java.util.Locale;
 import java.util.Map;
 import org.rungtone.calibrate.LineInputDivider;
 import org.rungtone.calibrate.MeasurementPlan;
@@ -20,13 +21,18 @@ final class RecordingChecklist {
     private RecordingChecklist() {
     }
 
-    /** The recording checklist of {@code sweep} on a ladder with the modelled levels {@code model}. */
-    static void text(StringBuilder b, RecordingSweep sweep, LevelTable model) {
+    /** The recording checklist of {@code sweep}, the sweep of {@code plan}'s codes. */
+    static void text(StringBuilder b, RecordingSweep sweep, MeasurementPlan plan) {
+        LevelTable model = plan.expected();
         double patternSeconds = sweep.patternSteps() * RecordingSweep.PATTERN_TICKS / 1000.0;
         line(b, "Recording the sweep with a sound card's line input");
-        line(b, "  The sweep: a start pattern (%s), the %d codes held %d ms each, an end pattern (%s): %s in all.",
-                Units.format(patternSeconds, "s"), sweep.planCodes().length, sweep.holdTicks(),
-                Units.format(patternSeconds, "s"), Units.format(sweep.durationSeconds(), "s"));
+        String codes = plan.everyCode() ? String.format(Locale.ROOT, "every code from 0 to %d", model.size() - 1)
+                : String.format(Locale.ROOT, "the %d codes of plan.csv in its order", plan.codes().size());
+        TextLines.wrap(b, "  ", String.format(Locale.ROOT, "The sweep: a start pattern (%s), %s, each held %d ms%s,"
+                + " an end pattern (%s): %s in all.", Units.format(patternSeconds, "s"), codes, sweep.holdTicks(),
+                sweep.returns() == 0 ? "" : String.format(Locale.ROOT, ", with %d returns to code 0 among them",
+                        sweep.returns()), Units.format(patternSeconds, "s"), Units.format(sweep.durationSeconds(),
+                                "s")));
         LineInputDivider d = LineInputDivider.forSwing(model.maxVolts() - model.minVolts());
         line(b, "  A line input takes about 1-2 V peak before it clips (common practice, no source); the board swings"
                 + " %s.", Units.format(d.swingVolts(), "V"));

@@ -39,9 +39,9 @@ public final class RecordingReport {
                 : "PCM " + rec.pcmBits() + "-bit", rec.sampleRateHz(), rec.channel(), rec.channels(),
                 rec.durationSeconds());
         double start = f.clock().startSample() / rec.sampleRateHz();
-        line(b, "  sweep from %.3f s to %.3f s: %d codes held %d ms between its patterns", start,
-                start + sweep.durationSeconds() * (1 + f.clock().mismatchPpm() * 1e-6), sweep.planCodes().length,
-                sweep.holdTicks());
+        line(b, "  sweep from %.3f s to %.3f s: %d codes held %d ms (and %d returns to code 0) between its patterns",
+                start, start + sweep.durationSeconds() * (1 + f.clock().mismatchPpm() * 1e-6), sweep.planCodes().length,
+                sweep.holdTicks(), sweep.returns());
         line(b, "  clocks: a board tick lasts %+.1f ppm against the sound card's millisecond (%d edges timed,"
                 + " %.2f samples rms)", f.clock().mismatchPpm(), f.clock().edgesTimed(), f.clock().edgeRmsSamples());
         line(b, "  input: high-pass corner %.3f Hz (time constant %.1f ms), %s", f.cornerHz(),
@@ -74,23 +74,10 @@ public final class RecordingReport {
         TextTable t = new TextTable("step", "code", "part", "rms residual", "in LSB");
         for (int i = 0; i < Math.min(WORST_STEPS, order.length); i++) {
             int k = order[i];
-            t.row(k, codes[k], part(f.sweep(), k).word(), dbfs(res[k]), String.format(Locale.ROOT, "%.3f",
+            t.row(k, codes[k], f.sweep().part(k).word(), dbfs(res[k]), String.format(Locale.ROOT, "%.3f",
                     res[k] / lsb));
         }
         b.append(t.render("  "));
-    }
-
-    /** Which part of the sweep a step belongs to. */
-    private enum Part {
-        START, PLAN, END;
-
-        String word() {
-            return name().toLowerCase(Locale.ROOT);
-        }
-    }
-
-    private static Part part(RecordingSweep sweep, int step) {
-        return step < sweep.patternSteps() ? Part.START : step >= sweep.endPatternStart() ? Part.END : Part.PLAN;
     }
 
     /** Every step: its code, part, start time, relative level and rms residual. */
@@ -106,8 +93,8 @@ public final class RecordingReport {
                 "start_seconds", "relative_level", "residual_rms").build();
         try (CSVPrinter p = new CSVPrinter(sb, format)) {
             for (int k = 0; k < codes.length; k++) {
-                Part part = part(sweep, k);
-                double level = part == Part.PLAN ? rel[k - sweep.patternSteps()] : codes[k] == 0 ? 0 : 1;
+                RecordingSweep.Part part = sweep.part(k);
+                double level = part == RecordingSweep.Part.PLAN ? rel[sweep.planIndex(k)] : codes[k] == 0 ? 0 : 1;
                 p.printRecord(k, codes[k], part.word(), String.format(Locale.ROOT, "%.6f", f.clock().sampleAt(ticks[k])
                         / rate), String.format(Locale.ROOT, "%.9f", level), String.format(Locale.ROOT, "%.3e", res[k]));
             }

@@ -55,7 +55,7 @@ class RecordingFitTest {
                 refusal(silent, SWEEP));
         double[] faint = SyntheticRecording.record(SWEEP, LEVELS, new SyntheticRecording.Card(48_000, 0.012 / 5, 0,
                 4, 0, 0.4, 0.3, 1e-3, 0, 0, false, 3));
-        assertEquals("bench.wav: the recording is too quiet for 6-bit levels: their noise is 0.55 LSB (at most 0.25);"
+        assertEquals("bench.wav: the recording is too quiet for 6-bit levels: their noise is 0.29 LSB (at most 0.25);"
                 + " turn the line input's level up so the full swing reaches about -6 dBFS, or hold each code longer",
                 refusal(faint, SWEEP));
     }
@@ -63,11 +63,11 @@ class RecordingFitTest {
     @Test
     void refusesARecordingShorterThanTheSweep() {
         double[] y = SyntheticRecording.record(SWEEP, LEVELS, card(0.5, 0.4, 0.3));
-        assertEquals("bench.wav: the recording is 1.50 s long, shorter than the sweep of this plan (2.52 s): record"
+        assertEquals("bench.wav: the recording is 1.50 s long, shorter than the sweep of this plan (2.58 s): record"
                 + " the whole sweep, from before the board starts it to after it ends",
                 refusal(Arrays.copyOf(y, 72_000), SWEEP));
         double[] late = SyntheticRecording.record(SWEEP, LEVELS, card(0.5, 1.5, 0.3));
-        assertEquals("bench.wav: the recording ends 1.33 s after the sweep's start, but this plan's sweep takes 2.52"
+        assertEquals("bench.wav: the recording ends 1.33 s after the sweep's start, but this plan's sweep takes 2.58"
                 + " s: record the whole sweep", refusal(Arrays.copyOf(late, 136_000), SWEEP));
     }
 
@@ -75,13 +75,13 @@ class RecordingFitTest {
     void refusesTheRecordingOfAnotherSweep() {
         RecordingSweep slower = RecordingSweep.of(MeasurementPlan.everyCode(SIX_BITS.levels()), 0.025);
         double[] y = SyntheticRecording.record(SWEEP, LEVELS, card(0.5, 0.4, 1.0));
-        assertEquals("bench.wav: the recording is of another sweep: its codes take 1.28 s between the patterns, this"
-                + " plan's 64 codes held 25 ms take 1.60 s; give the plan's options (codes, --hold) as for"
+        assertEquals("bench.wav: the recording is of another sweep: its codes take 1.34 s between the patterns, this"
+                + " plan's 64 codes held 25 ms take 1.67 s; give the plan's options (codes, --hold) as for"
                 + " 'calibrate plan'", refusal(y, slower));
         RecordingSweep fewer = RecordingSweep.of(new CodeChoice(false, OptionalInt.of(20)).plan(SIX_BITS.levels()),
                 0.020);
-        assertEquals("bench.wav: the recording is of another sweep: its codes take 1.28 s between the patterns, this"
-                + " plan's 28 codes held 20 ms take 0.56 s; give the plan's options (codes, --hold) as for"
+        assertEquals("bench.wav: the recording is of another sweep: its codes take 1.34 s between the patterns, this"
+                + " plan's 28 codes held 20 ms take 0.58 s; give the plan's options (codes, --hold) as for"
                 + " 'calibrate plan'", refusal(y, fewer));
     }
 
@@ -94,7 +94,7 @@ class RecordingFitTest {
         assertEquals("bench.wav: the recording holds no start pattern of a recording sweep: is the board's output on"
                 + " the line input, running the sweep of 'calibrate plan --recording'?", refusal(tone, SWEEP));
         double[] y = SyntheticRecording.record(SWEEP, LEVELS, card(0.5, 0.4, 0.5));
-        assertEquals("bench.wav: the recording has the sweep's end pattern (at 1.55 s) but not its start pattern:"
+        assertEquals("bench.wav: the recording has the sweep's end pattern (at 1.61 s) but not its start pattern:"
                 + " start the recorder before the board starts the sweep",
                 refusal(Arrays.copyOfRange(y, 36_000, y.length), SWEEP));
     }

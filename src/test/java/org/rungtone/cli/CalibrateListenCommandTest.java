@@ -1,8 +1,10 @@
 package org.rungtone.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import com.google.gson.JsonParser;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -48,19 +50,22 @@ class CalibrateListenCommandTest {
     void planForARecordingSaysHowToConnectAndWhatNeverTo() throws IOException {
         Cli.Run r = ok(args(LADDER, "calibrate", "plan", "--recording", "--pins", "PB0-PB7", "--out", dir.toString()));
         String out = r.out();
-        assertTrue(out.contains("256 codes to measure (every code"), out);
+        assertTrue(out.startsWith("Calibration plan for a recording: weighted 8-bit, 5% parts, 256 codes (every code:"
+                + " the recorded levels will be the profile)\n"), out);
+        assertFalse(out.contains("write each reading"), "no meter readings to write");
         // 5 V into 4.7k of 51.7k: 0.4545 V
         assertTrue(out.contains("Divide it: 47k from the board's output to the input's tip, 4.7k from the tip to"
                 + " ground"), out);
         assertTrue(out.contains("the full swing arrives as about 454.5mV"), out);
-        assertTrue(out.contains("the 256 codes held 40 ms each, an end pattern (620ms): 11.48s in all."), out);
+        assertTrue(out.contains("The sweep: a start pattern (620ms), every code from 0 to 255, each held 40 ms, with 15"
+                + " returns to\n  code 0 among them, an end pattern (620ms): 12.08s in all."), out);
         assertTrue(out.contains("! Never connect a speaker amplifier's output"), out);
         assertTrue(out.contains("! Never connect equipment referenced to the mains"), out);
-        assertTrue(out.contains("sweep: 256 codes at 1 kHz ticks, each held 40 ms (40 ticks), between a start and"
+        assertTrue(out.contains("sweep: 271 steps at 1 kHz ticks, each held 40 ms (40 ticks), between a start and"
                 + " an end pattern of 31 steps of 20 ticks for a recording"), out);
         String header = Files.readString(dir.resolve("sweep.h"));
         assertTrue(header.contains("#define SWEEP_PATTERN_STEPS 31u"), header);
-        assertTrue(header.contains("#define SWEEP_STEP_COUNT 318u"), header);
+        assertTrue(header.contains("#define SWEEP_STEP_COUNT 333u"), header);
     }
 
     @Test
@@ -74,7 +79,7 @@ class CalibrateListenCommandTest {
         Cli.Run r = ok(args(LADDER, "calibrate", "listen", wav.toString(), "--board", "bench", "--date", "2026-05-01",
                 "--full-scale-reading", String.format(java.util.Locale.ROOT, "%.4f", truth[255]), "--out",
                 out.toString()));
-        assertTrue(r.out().contains("clocks: a board tick lasts +99.8 ppm"), r.out());
+        assertTrue(r.out().contains("clocks: a board tick lasts +100.0 ppm"), r.out());
         assertTrue(r.out().contains("input: high-pass corner 4.0"), r.out());
         assertTrue(r.out().contains("Profile: board bench, 2026-05-01; the readings of every code"), r.out());
         UnitProfile p = UnitProfile.load(out.resolve("bench.unit.toml"));
@@ -89,7 +94,9 @@ class CalibrateListenCommandTest {
         }
         Cli.Run json = ok(args(LADDER, "calibrate", "listen", wav.toString(), "--board", "bench", "--date",
                 "2026-05-01", "--out", out.toString(), "--json"));
-        assertTrue(json.out().contains("\"clock_mismatch_ppm\": 99.8"), json.out());
+        double ppm = JsonParser.parseString(json.out()).getAsJsonObject().getAsJsonObject("recording")
+                .get("clock_mismatch_ppm").getAsDouble();
+        assertEquals(100, ppm, 0.5, "the card's clock: 100 ppm");
     }
 
     @Test

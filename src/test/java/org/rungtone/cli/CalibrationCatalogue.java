@@ -47,7 +47,7 @@ final class CalibrationCatalogue {
                 + " 0.64 s between the patterns, this plan's 16 codes held 50 ms take 0.80 s",
                 d -> listen(d, recording(d, "hold.wav", 0.5, 0.4, 1.0), "--hold", "50ms")));
         c.add(bad("calibrate listen: another step count", "count.wav: the recording is of another sweep: its codes"
-                + " take 0.64 s between the patterns, this plan's 32 codes held 40 ms take 1.28 s",
+                + " take 0.64 s between the patterns, this plan's 32 codes held 40 ms take 1.32 s",
                 d -> listen(d, recording(d, "count.wav", 0.5, 0.4, 1.0), "--bits", "5")));
         c.add(bad("calibrate listen: no pattern", "tone.wav: the recording holds no start pattern of a recording"
                 + " sweep", d -> listen(d, write(d, "tone.wav", WavFixtures.sine16(48_000, 3, 440, 0.5)))));

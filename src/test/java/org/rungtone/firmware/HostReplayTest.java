@@ -181,7 +181,7 @@ class HostReplayTest {
     @ParameterizedTest(name = "{0} {1}")
     @MethodSource("recordingTargets")
     void recordingSweepPutsThePatternsAndThePlanOnThePinsAtTheirTicks(String family, String pins) {
-        // every 6-bit code held 30 ms between the two 31-step patterns of 20 ms
+        // every 6-bit code held 30 ms, with 3 returns to code 0, between the two 31-step patterns of 20 ms
         RecordingSweep sweep = RecordingSweep.of(MeasurementPlan.everyCode(LevelTable.ideal(6, 5.0)), 0.030);
         int[] steps = sweep.stepCodes();
         FirmwareRequest r = FirmwareRequest.builder().family(family).name("mock").toolVersion("test").pins(pins)
@@ -199,7 +199,7 @@ class HostReplayTest {
         assertEquals(want, format(tickWrites(events)));
         assertEquals(start[steps.length], events.stream().filter(e -> e.kind() == 'T').count(),
                 "done when the last pattern step has been held");
-        assertEquals(62 * 20 + 64 * 30, start[steps.length], "two patterns of 31 x 20 ticks, 64 codes x 30");
+        assertEquals(62 * 20 + (64 + 3) * 30, start[steps.length], "two patterns of 31 x 20 ticks, 67 steps x 30");
     }
 
     static Stream<Arguments> rp2040PinMaps() {
