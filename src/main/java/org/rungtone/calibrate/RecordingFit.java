@@ -1,6 +1,8 @@
 package org.rungtone.calibrate;
 
+import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.List;
 import java.util.Locale;
 import org.rungtone.internal.InputError;
 
@@ -18,8 +20,13 @@ public final class RecordingFit {
     public static final double MIN_JUMP = 0.005;
     /** The levels' median uncertainty must stay below this share of an LSB. */
     public static final double MAX_SIGMA_LSB = 0.25;
-    /** A fit that leaves more than this many times the recording's own noise does not follow its steps. */
+    /**
+     * A fit too noisy for the levels that leaves more than this many times the recording's own noise does not
+     * follow its steps, or the input carries something besides the sweep.
+     */
     public static final double MISFIT_RATIO = 10;
+    /** A fit that leaves more than this many times the recording's own noise is worth a warning. */
+    public static final double WARN_NOISE_RATIO = 2;
 
     private RecordingFit() {
     }
@@ -67,14 +74,16 @@ public final class RecordingFit {
         checkClipping(rec, clock.startSample(), last);
         StepBins bins = StepBins.of(y, fs, sweep, clock);
         InputModelFit.Fitted fitted = new InputModelFit(bins, sweep.stepCodes()).fit();
-        RecordingResult r = RecordingResult.of(rec, sweep, clock, bins, fitted);
+        double own = ownNoise(rec, clock.startSample(), last);
+        RecordingResult r = RecordingResult.of(rec, sweep, clock, bins, fitted, warnings(clock, fitted, bins, own,
+                sweep));
         double lsb = Math.abs(r.swing()) / ((1 << sweep.bits()) - 1);
         if (r.medianLevelSigma() > MAX_SIGMA_LSB * lsb) {
-            double own = ownNoise(rec, clock.startSample(), last);
             if (r.noiseRms() > MISFIT_RATIO * own) {
-                throw refuse(rec, "is of another sweep: this plan's %d codes held %d ms leave %.0f times the"
-                        + " recording's own noise; give the plan's options (codes, --hold) as for 'calibrate plan'",
-                        sweep.planCodes().length, sweep.holdTicks(), r.noiseRms() / own);
+                throw refuse(rec, "does not fit this plan's %d codes held %d ms: the fit leaves %.0f times the"
+                        + " recording's own noise; is it of another sweep (give the plan's options: ladder, codes,"
+                        + " --hold), or does something else sound in the input?", sweep.planCodes().length,
+                        sweep.holdTicks(), r.noiseRms() / own);
             }
             throw refuse(rec, "is too quiet for %d-bit levels: their noise is %.2f LSB (at most %.2f); turn the"
                     + " line input's level up so the full swing reaches about -6 dBFS, or hold each code longer",
@@ -105,10 +114,37 @@ public final class RecordingFit {
                         + " recording cut, or the board reset during the sweep?", seconds(start.start() / fs));
             }
             throw refuse(rec, "is of another sweep: its codes take %s between the patterns, this plan's %d codes"
-                    + " held %d ms take %s; give the plan's options (codes, --hold) as for 'calibrate plan'",
+                    + " held %d ms take %s; give the plan's options (ladder, codes, --hold) as for 'calibrate plan'",
                     seconds((end.start() - start.start()) / fs - sweep.patternSteps() * 0.020),
                     sweep.planCodes().length, sweep.holdTicks(), seconds(toEnd / fs - sweep.patternSteps() * 0.020));
         }
+    }
+
+    /**
+     * What the report should point out: pattern edges that could not be timed (the clock then rests on fewer),
+     * and a fit that leaves more than {@value #WARN_NOISE_RATIO} times the recording's own noise (something the
+     * model leaves out: a second coupling stage, a card's own processing, or steps out of place).
+     */
+    private static List<String> warnings(SweepClock clock, InputModelFit.Fitted fitted, StepBins bins, double own,
+            RecordingSweep sweep) {
+        List<String> out = new ArrayList<>();
+        int edges = 0;
+        for (boolean start : new boolean[] {true, false}) {
+            for (int e : RecordingSweep.edgeTemplate(start)) {
+                edges += Math.abs(e);
+            }
+        }
+        if (clock.edgesTimed() < edges * 2 / 3) {
+            out.add(String.format(Locale.ROOT, "only %d of the patterns' %d edges could be timed: the clocks' ratio"
+                    + " rests on those; check the recording's plot around the patterns", clock.edgesTimed(), edges));
+        }
+        double noise = fitted.solution().noiseRms(bins.bins());
+        if (noise > WARN_NOISE_RATIO * own) {
+            out.add(String.format(Locale.ROOT, "the fit leaves %.1f times the recording's own noise: look at the"
+                    + " steps with the largest residuals and the plot; a card with effects or a second high-pass"
+                    + " stage is not modelled (switch the input's effects off)", noise / own));
+        }
+        return out;
     }
 
     /**

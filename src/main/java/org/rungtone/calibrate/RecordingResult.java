@@ -1,6 +1,7 @@
 package org.rungtone.calibrate;
 
 import java.util.Arrays;
+import java.util.List;
 
 /**
  * What a recording's fit found: where the sweep is and how the clocks compare, the input's corner and hum,
@@ -26,10 +27,11 @@ import java.util.Arrays;
  * @param relativeSigmas their standard deviations, relative
  * @param stepResiduals each step's rms residual of its bins, full-scale units
  * @param trace the recording and the model for a plot
+ * @param warnings what deserves attention although the fit went through
  */
 public record RecordingResult(Recording recording, RecordingSweep sweep, SweepClock clock, double cornerHz,
         double humHz, double swing, double noiseRms, double[] relativeLevels, double[] relativeSigmas,
-        double[] stepResiduals, Trace trace) {
+        double[] stepResiduals, Trace trace, List<String> warnings) {
     /** The most points a trace keeps. */
     static final int TRACE_POINTS = 6000;
 
@@ -72,14 +74,14 @@ public record RecordingResult(Recording recording, RecordingSweep sweep, SweepCl
     }
 
     static RecordingResult of(Recording rec, RecordingSweep sweep, SweepClock clock, StepBins bins,
-            InputModelFit.Fitted fitted) {
+            InputModelFit.Fitted fitted, List<String> warnings) {
         StaircaseSolver.Solution s = fitted.solution();
         int[] steps = sweep.stepCodes();
         double[] g = s.levels();
         int top = (1 << sweep.bits()) - 1;
         double g0 = g[firstVisit(steps, 0)];
         double swing = g[firstVisit(steps, top)] - g0;
-        double noise = Math.sqrt(s.rss() / Math.max(1, bins.bins() - s.parameters()));
+        double noise = s.noiseRms(bins.bins());
         double[] walk = new double[steps.length + 1];
         for (int k = 0; k < steps.length; k++) {
             walk[k + 1] = walk[k] + sq(1 - s.rho()[k]) / s.information()[k];
@@ -117,7 +119,7 @@ public record RecordingResult(Recording recording, RecordingSweep sweep, SweepCl
             stepRms[k] = n == 0 ? 0 : Math.sqrt(ss / n);
         }
         return new RecordingResult(rec, sweep, clock, fitted.cornerHz(), fitted.humHz(), swing, noise, rel, sig,
-                stepRms, trace(bins, s, g));
+                stepRms, trace(bins, s, g), warnings);
     }
 
     private static int firstVisit(int[] steps, int code) {
@@ -164,6 +166,7 @@ public record RecordingResult(Recording recording, RecordingSweep sweep, SweepCl
 
     /** Copies the arrays. */
     public RecordingResult {
+        warnings = List.copyOf(warnings);
         relativeLevels = relativeLevels.clone();
         relativeSigmas = relativeSigmas.clone();
         stepResiduals = stepResiduals.clone();

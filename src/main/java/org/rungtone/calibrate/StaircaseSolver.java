@@ -54,6 +54,11 @@ final class StaircaseSolver {
      * @param parameters how many linear parameters were fitted, less the constraints
      */
     record Solution(double[] a, double[] rho, double[] information, double[] model, double rss, int parameters) {
+        /** The noise per sample the solution leaves, rms, from the residuals of {@code bins} bins. */
+        double noiseRms(int bins) {
+            return Math.sqrt(rss / Math.max(1, bins - parameters));
+        }
+
         /** The input level of every step, relative to step 0, in recording units (gain times volts). */
         double[] levels() {
             double[] g = new double[a.length];

@@ -15,6 +15,8 @@ package org.rungtone.calibrate;
  */
 public record SweepClock(double startSample, double samplesPerTick, double nominalSamplesPerTick,
         double edgeRmsSamples, int edgesTimed) {
+    /** How far from where the patterns were found the first pass looks for each edge. */
+    static final double FIRST_REACH_SECONDS = 0.0012;
 
     /** The clocks' mismatch in parts per million: positive when a board tick spans more recorded samples. */
     public double mismatchPpm() {
@@ -27,7 +29,10 @@ public record SweepClock(double startSample, double samplesPerTick, double nomin
     }
 
     /**
-     * Times the edges of both patterns around a first estimate.
+     * Times the edges of both patterns around a first estimate, twice: first within
+     * {@value #FIRST_REACH_SECONDS} s of where the patterns were found (a find is only as sharp as the jump
+     * windows of {@link PatternSearch}, whose plateau spans {@link PatternSearch#GAP_SECONDS} either side of an
+     * edge, and the clocks drift across a pattern), then within 0.6 ms of the line through those times.
      *
      * @param y the recording
      * @param rateHz its rate
@@ -38,10 +43,20 @@ public record SweepClock(double startSample, double samplesPerTick, double nomin
     static SweepClock measure(double[] y, double rateHz, RecordingSweep sweep, double startSample,
             double endPatternSample) {
         long[] ticks = sweep.stepStartTicks();
+        double perTick = (endPatternSample - startSample) / ticks[sweep.endPatternStart()];
+        int near = Math.max(2, (int) Math.round(0.0003 * rateHz));
+        int wide = Math.max(2 * near, (int) Math.round(FIRST_REACH_SECONDS * rateHz));
+        SweepClock first = line(y, rateHz, sweep, startSample, perTick, wide);
+        return first.edgesTimed() < 4 ? first : line(y, rateHz, sweep, first.startSample(),
+                first.samplesPerTick(), 2 * near);
+    }
+
+    /** The line through the pattern edges found within {@code reach} samples of {@code start + perTick·T}. */
+    private static SweepClock line(double[] y, double rateHz, RecordingSweep sweep, double start, double perTick,
+            int reach) {
+        long[] ticks = sweep.stepStartTicks();
         int endStart = sweep.endPatternStart();
         double nominal = rateHz / 1000;
-        double perTick = (endPatternSample - startSample) / ticks[endStart];
-        int near = Math.max(2, (int) Math.round(0.0003 * rateHz));
         int span = Math.max(4, (int) Math.round(0.001 * rateHz));
         double sx = 0;
         double sy = 0;
@@ -58,7 +73,7 @@ public record SweepClock(double startSample, double samplesPerTick, double nomin
                     continue;
                 }
                 double t = ticks[first + j];
-                double x = crossing(y, startSample + perTick * t, near, span);
+                double x = crossing(y, start + perTick * t, reach, span);
                 if (!Double.isNaN(x)) {
                     xs[n] = x;
                     ts[n] = t;
@@ -71,7 +86,7 @@ public record SweepClock(double startSample, double samplesPerTick, double nomin
             }
         }
         if (n < 4) {
-            return new SweepClock(startSample, perTick, nominal, Double.NaN, n);
+            return new SweepClock(start, perTick, nominal, Double.NaN, n);
         }
         double slope = (n * sxy - sx * sy) / (n * sxx - sx * sx);
         double intercept = (sy - slope * sx) / n;
@@ -85,23 +100,23 @@ public record SweepClock(double startSample, double samplesPerTick, double nomin
 
     /**
      * Where the recording crosses the midpoint between the levels before and after an edge expected near
-     * {@code p}: lines fitted over {@code span} samples ending {@code near} samples before p and starting
-     * {@code near} after it; NaN when no crossing is found.
+     * {@code p}: lines fitted over {@code span} samples ending {@code reach} samples before p and starting
+     * {@code reach} after it; NaN when no crossing is found within {@code reach} of p.
      */
-    private static double crossing(double[] y, double p, int near, int span) {
+    private static double crossing(double[] y, double p, int reach, int span) {
         int c = (int) Math.round(p);
-        int lo = c - 2 * near - span;
-        int hi = c + 2 * near + span;
+        int lo = c - reach - span;
+        int hi = c + reach + span;
         if (lo < 0 || hi >= y.length) {
             return Double.NaN;
         }
-        Line before = Line.fit(y, c - 2 * near - span, c - 2 * near, c);
-        Line after = Line.fit(y, c + 2 * near, c + 2 * near + span, c);
+        Line before = Line.fit(y, c - reach - span, c - reach, c);
+        Line after = Line.fit(y, c + reach, c + reach + span, c);
         double rise = after.value() - before.value();
         if (rise == 0) {
             return Double.NaN;
         }
-        for (int i = c - 2 * near; i < c + 2 * near; i++) {
+        for (int i = c - reach; i < c + reach; i++) {
             double mid0 = 0.5 * (before.at(i - c) + after.at(i - c));
             double mid1 = 0.5 * (before.at(i + 1 - c) + after.at(i + 1 - c));
             double d0 = (y[i] - mid0) * Math.signum(rise);

@@ -8,6 +8,6 @@ public final class BoardOptions {
             description = "The board's name in the profile and its file name (default: the input's file name).")
     String board;
 
-    @Option(names = "--date", paramLabel = "YYYY-MM-DD", description = "Date of the readings (default: today).")
+    @Option(names = "--date", paramLabel = "YYYY-MM-DD", description = "Date of the measurement (default: today).")
     String date;
 }

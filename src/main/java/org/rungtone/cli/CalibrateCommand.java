@@ -16,7 +16,7 @@ import picocli.CommandLine.Spec;
         description = {"Measure a built ladder and fit a profile of it.",
             "'plan' says what to measure and writes a sweep program; 'fit' turns the readings into a unit"
                 + " profile that 'build --unit' quantizes onto; 'listen' does so from a sound card's recording of"
-                + " the sweep; 'simulate' makes readings of a drawn board to try it out."},
+                + " the sweep of 'plan --recording'; 'simulate' makes readings of a drawn board to try it out."},
         subcommands = {CalibratePlanCommand.class, CalibrateFitCommand.class, CalibrateListenCommand.class,
             CalibrateCommand.Simulate.class},
         footerHeading = "%nExample, the whole loop:%n",

@@ -39,7 +39,7 @@ public final class CalibrateListenCommand implements Callable<Integer> {
     PlanOptions codes;
 
     @Option(names = "--hold", paramLabel = "<time>", converter = Converters.Seconds.class, defaultValue = "40ms",
-            description = "The hold per code of the sweep recorded (default ${DEFAULT-VALUE}).")
+            description = "The hold per code given to 'calibrate plan --recording' (default ${DEFAULT-VALUE}).")
     double holdSeconds;
 
     @Option(names = "--full-scale-reading", paramLabel = "<volts>", converter = Converters.Volts.class, description

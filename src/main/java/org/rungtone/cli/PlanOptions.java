@@ -16,11 +16,11 @@ public final class PlanOptions {
     @Mixin
     LadderOptions ladder;
 
-    @Option(names = "--verify", paramLabel = "K",
-            description = "Check codes on top of the basis (default: every code up to 6 bits, else 2·N).")
+    @Option(names = "--verify", paramLabel = "K", description = "Check codes on top of the basis (default: every code"
+            + " up to 6 bits, or up to 10 for a recording; else 2·N).")
     Integer verify;
 
-    @Option(names = "--every-code", description = "Measure every code; the readings then are the profile.")
+    @Option(names = "--every-code", description = "Measure every code; the measured levels then are the profile.")
     boolean everyCode;
 
     @Option(names = "--meter-counts", paramLabel = "N", description = "Choose the check codes for a meter of N"

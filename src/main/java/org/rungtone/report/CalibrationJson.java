@@ -123,6 +123,7 @@ final class CalibrationJson {
         rec.put("full_scale_reading_v", r.request().fullScaleVolts().isPresent()
                 ? r.request().fullScaleVolts().getAsDouble() : null);
         rec.put("step_residuals_rms_fs", f.stepResiduals());
+        rec.put("warnings", f.warnings());
         root.put("recording", rec);
         boardFit(root, r.fit(), r.profile(), files, outDir);
         return root;

@@ -56,6 +56,9 @@ public final class RecordingReport {
                         r.request().fullScaleVolts().getAsDouble()) : String.format(Locale.ROOT,
                         "the model's %.4f V (give --full-scale-reading for the board's own)",
                         r.request().ladder().levels().maxVolts()));
+        for (String w : f.warnings()) {
+            TextLines.wrap(b, "  warning: ", w);
+        }
         line(b, "");
         worstSteps(b, f, lsb);
         UnitFitReport.sections(b, r.fit(), Optional.of(r.request().ladder()), r.profile(), files);

@@ -36,9 +36,13 @@ public final class CalibrationStudy {
     private CalibrationStudy() {
     }
 
-    /** Runs the study over {@code args[0]} boards (default 101). */
+    /** Runs the study over {@code args[0]} boards (default 101); {@code args[1]} "harsh" runs that card alone. */
     public static void main(String[] args) {
         int boards = args.length > 0 ? Integer.parseInt(args[0]) : 101;
+        if (args.length > 1 && args[1].equals("harsh")) {
+            recording(boards, true);
+            return;
+        }
         System.out.printf(Locale.ROOT, "10-bit weighted ladder of 5 %% parts, %d boards; ENOB loss = median exact"
                 + " - median calibrated%n", boards);
         recording(boards, false);
@@ -65,6 +69,7 @@ public final class CalibrationStudy {
         double[] loss = new double[boards];
         SplittableRandom random = new SplittableRandom(harsh ? 4242 : 2026);
         List<String> refused = new ArrayList<>();
+        int warned = 0;
         long t0 = System.nanoTime();
         for (int b = 0; b < boards; b++) {
             SimulatedBoard board = SimulatedBoard.draw(TEN_BITS, Spread.uniform(), 7000 + b);
@@ -74,22 +79,26 @@ public final class CalibrationStudy {
                     true);
             exact[b] = enob(board.levels(), truth);
             try {
-                LevelTable fitted = RecordingCalibration.fit(new Recording("bench.wav", SyntheticRecording.record(
-                        sweep, truth, card), rate, 16, 1, 1), sweep, request).profile().levels();
-                calibrated[b] = enob(fitted, truth);
+                RecordingCalibration.Result r = RecordingCalibration.fit(new Recording("bench.wav",
+                        SyntheticRecording.record(sweep, truth, card), rate, 16, 1, 1), sweep, request);
+                calibrated[b] = enob(r.profile().levels(), truth);
+                warned += r.recording().warnings().isEmpty() ? 0 : 1;
             } catch (InputError e) {
                 refused.add(e.getMessage());
                 calibrated[b] = Double.NaN;
             }
             loss[b] = exact[b] - calibrated[b];
+            if (loss[b] > 0.1) {
+                System.out.printf(Locale.ROOT, "  board %d lost %.3f bit: %s%n", b, loss[b], card);
+            }
         }
         double seconds = (System.nanoTime() - t0) / 1e9;
         System.out.printf(Locale.ROOT, "recording, %s card, %.1f s sweep: median ENOB exact %.3f, calibrated %.3f,"
                 + " loss %.3f bit; per board loss median %.3f, 90th percentile %.3f, worst %.3f; %d refused;"
-                + " %.2f s a board%n", harsh ? "harsh" : "test's", sweep.durationSeconds(),
+                + " %d warned; %.2f s a board%n", harsh ? "harsh" : "test's", sweep.durationSeconds(),
                 CompensationTest.median(exact), median(calibrated), CompensationTest.median(exact)
                 - median(calibrated), median(loss), percentile(loss, 0.9), percentile(loss, 1.0), refused.size(),
-                seconds / boards);
+                warned, seconds / boards);
         refused.stream().limit(3).forEach(m -> System.out.println("  refused: " + m));
     }
 

@@ -94,9 +94,9 @@ class RecordingCalibrationTest {
                 NOISE_RMS, 0.4, 0.3));
         InputError e = assertThrows(InputError.class, () -> RecordingCalibration.fit(new Recording("bench.wav", y,
                 48_000, 16, 1, 1), checks, request(ladder, 0.020)));
-        assertEquals("bench.wav: the recording is of another sweep: this plan's 255 codes held 20 ms leave 4430 times"
-                + " the recording's own noise; give the plan's options (codes, --hold) as for 'calibrate plan'",
-                e.getMessage());
+        assertEquals("bench.wav: the recording does not fit this plan's 255 codes held 20 ms: the fit leaves 4508 times"
+                + " the recording's own noise; is it of another sweep (give the plan's options: ladder, codes, --hold),"
+                + " or does something else sound in the input?", e.getMessage());
     }
 
     @Test

@@ -2,8 +2,10 @@ package org.rungtone.calibrate;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.Arrays;
+import java.util.List;
 import java.util.OptionalInt;
 import org.junit.jupiter.api.Test;
 import org.rungtone.internal.InputError;
@@ -38,6 +40,31 @@ class RecordingFitTest {
         assertEquals(0.0, r.relativeLevels()[0], 1e-12);
         // an R-2R ladder of 1 % parts: code 32 is half the swing within about 1 %
         assertEquals(0.5, r.relativeLevels()[32], 0.01);
+    }
+
+    @Test
+    void timesThePatternEdgesWhenTheFindIsOffByTheJumpWindowsPlateau() {
+        // a 14 Hz corner biases the find towards the early end of the jump windows' plateau (half a millisecond),
+        // and -470 ppm moves the last pattern edge 0.3 ms further: every edge is still timed, the clocks exactly
+        SyntheticRecording.Card card = new SyntheticRecording.Card(44_100, -0.045, 5e-4, 14, -470, 1.1, 0.4,
+                RecordingCalibrationTest.NOISE_RMS, 60, RecordingCalibrationTest.HUM_RMS, true, 8);
+        RecordingResult r = RecordingFit.fit(new Recording("bench.wav", SyntheticRecording.record(SWEEP, LEVELS,
+                card), 44_100, 16, 1, 1), SWEEP);
+        assertEquals(23, r.clock().edgesTimed());
+        assertEquals(-470, r.clock().mismatchPpm(), 5);
+        assertEquals(List.of(), r.warnings());
+    }
+
+    @Test
+    void warnsOfResidualsAboveTheRecordingsOwnNoise() {
+        // a 170 Hz whine at -73 dBFS rms that the model has no term for: the fit goes through and says so
+        double[] y = SyntheticRecording.record(SWEEP, LEVELS, card(0.5, 0.4, 0.3));
+        for (int i = 0; i < y.length; i++) {
+            y[i] += 3e-4 * Math.sin(2 * Math.PI * 170 * i / 48_000.0);
+        }
+        RecordingResult r = RecordingFit.fit(new Recording("bench.wav", y, 48_000, 16, 1, 1), SWEEP);
+        assertEquals(1, r.warnings().size(), r.warnings()::toString);
+        assertTrue(r.warnings().get(0).startsWith("the fit leaves 20."), r.warnings().get(0));
     }
 
     @Test
@@ -76,12 +103,12 @@ class RecordingFitTest {
         RecordingSweep slower = RecordingSweep.of(MeasurementPlan.everyCode(SIX_BITS.levels()), 0.025);
         double[] y = SyntheticRecording.record(SWEEP, LEVELS, card(0.5, 0.4, 1.0));
         assertEquals("bench.wav: the recording is of another sweep: its codes take 1.34 s between the patterns, this"
-                + " plan's 64 codes held 25 ms take 1.67 s; give the plan's options (codes, --hold) as for"
+                + " plan's 64 codes held 25 ms take 1.67 s; give the plan's options (ladder, codes, --hold) as for"
                 + " 'calibrate plan'", refusal(y, slower));
         RecordingSweep fewer = RecordingSweep.of(new CodeChoice(false, OptionalInt.of(20)).plan(SIX_BITS.levels()),
                 0.020);
         assertEquals("bench.wav: the recording is of another sweep: its codes take 1.34 s between the patterns, this"
-                + " plan's 28 codes held 20 ms take 0.58 s; give the plan's options (codes, --hold) as for"
+                + " plan's 28 codes held 20 ms take 0.58 s; give the plan's options (ladder, codes, --hold) as for"
                 + " 'calibrate plan'", refusal(y, fewer));
     }
 

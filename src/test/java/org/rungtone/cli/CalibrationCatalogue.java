@@ -60,6 +60,15 @@ final class CalibrationCatalogue {
         c.add(bad("calibrate listen: full-scale reading below code 0", "--full-scale-reading must be a reading of"
                 + " the all-ones code, above code 0's 0V: -1V", d -> listen(d, write(d, "tone.wav",
                         WavFixtures.sine16(48_000, 3, 440, 0.5)), "--full-scale-reading", "-1V")));
+        c.add(bad("calibrate listen: ladder described the other way round", "reversed.wav: the recording does not"
+                + " follow the ladder: code 12 sits at 0.800 of the full swing, the model at 0.200 (parts of 1 %"
+                + " keep it within 0.050); is it of another sweep", d -> reversed(d)));
+        c.add(bad("calibrate listen: clipped, into a folder of an earlier fit", "clipped.wav: the recording clips",
+                d -> {
+                    Path out = Files.createDirectories(d.resolve("out"));
+                    Files.writeString(out.resolve("bench.unit.toml"), "# an earlier profile, kept as it is\n");
+                    return listen(d, recording(d, "clipped.wav", 1.3, 0.4, 0.3));
+                }));
         c.add(bad("calibrate plan: meter counts not a count", "--meter-counts must be the meter's count, a whole"
                 + " number such as 2000 (3½ digits) or 20000 (4½ digits): 3.5", d -> List.of("calibrate", "plan",
                         "--bits", "10", "--meter-counts", "3.5", "--out", d.resolve("out").toString())));
@@ -81,6 +90,20 @@ final class CalibrationCatalogue {
         RecordingSweep sweep = RecordingSweep.of(MeasurementPlan.everyCode(SPEC.levels()), 0.040);
         return SyntheticRecording.wav(d.resolve(name), SyntheticRecording.record(sweep, SPEC.levels().levels(),
                 SyntheticRecording.card(48_000, swing, 5.6e-5, lead, tail)), 48_000);
+    }
+
+    /**
+     * A 4-bit weighted board of 80k (bit 0) .. 10k (bit 3) recorded, listened to with its resistors listed from
+     * the top bit: the levels are far from that model's.
+     */
+    private static List<String> reversed(Path d) {
+        LadderSpec built = LadderSpec.builder().topology(Topology.WEIGHTED).resistors(List.of(80e3, 40e3, 20e3,
+                10e3)).tolerance(0.01).build();
+        RecordingSweep sweep = RecordingSweep.of(MeasurementPlan.everyCode(built.levels()), 0.040);
+        Path wav = SyntheticRecording.wav(d.resolve("reversed.wav"), SyntheticRecording.record(sweep,
+                built.levels().levels(), SyntheticRecording.card(48_000, 0.5, 5.6e-5, 0.4, 0.3)), 48_000);
+        return List.of("calibrate", "listen", wav.toString(), "--topology", "weighted", "--resistors",
+                "10k,20k,40k,80k", "--tolerance", "1%", "--out", d.resolve("out").toString());
     }
 
     /** The file with only its first {@code samples} samples. */
