@@ -4,8 +4,9 @@ import java.util.Arrays;
 import org.rungtone.internal.Setting;
 
 /**
- * The sweep a sound card records: a start pattern, the plan's codes each held for the same time, and an end
- * pattern, all on the sweep program's 1 kHz tick. The patterns let a fit find the sweep in a recording
+ * The sweep a sound card records: a start pattern, the plan's codes each held for the same time with a return
+ * to code 0 before every {@value #RETURN_EVERY}th of them, and an end pattern, all on the sweep program's
+ * 1 kHz tick. The patterns let a fit find the sweep in a recording
  * without knowing when it began, and their distance tells the sound card's clock against the board's.
  *
  * <p>Each pattern is 31 steps of {@value #PATTERN_TICKS} ticks, each step code 0 or the all-ones code (the

@@ -8,8 +8,9 @@
  * and {@link org.rungtone.calibrate.OutputSpan} chooses the span that compensated quantization maps onto.
  * A meter of known count gets check codes chosen for its ranges ({@link org.rungtone.calibrate.MeterRanges}),
  * and each reading weighs by its own digits. A sound card's recording of the recording sweep
- * ({@link org.rungtone.calibrate.RecordingSweep}) is fitted step by step ({@link org.rungtone.calibrate.RecordingFit})
- * into levels that enter the same board fit. {@link org.rungtone.calibrate.UnitFit},
+ * ({@link org.rungtone.calibrate.RecordingSweep}: two patterns around the codes, with returns to code 0
+ * among them) is fitted step by step ({@link org.rungtone.calibrate.RecordingFit}) into levels that enter the
+ * same board fit. {@link org.rungtone.calibrate.UnitFit},
  * {@link org.rungtone.calibrate.RecordingCalibration} and {@link org.rungtone.calibrate.BoardSimulation} are the
  * work of {@code calibrate fit}, {@code calibrate listen} and {@code calibrate simulate}. Nothing here writes
  * files: texts and results are returned for the report to write.
