@@ -51,8 +51,8 @@ public final class FirmwareOptions {
             description = "How codes become port values (default auto: shift when the pins allow it).")
     PinStrategy pinStrategy;
 
-    @Option(names = "--storage", paramLabel = "unpacked|packed",
-            description = "Samples one per byte/word, or bit-packed (default unpacked).")
+    @Option(names = "--storage", paramLabel = "unpacked|packed|tread2|tread3|tread4",
+            description = "Samples one per byte/word, bit-packed, or Tread codes of 2-4 bits (default unpacked).")
     SampleStorage storage;
 
     @Option(names = "--engine", paramLabel = "clip|loop|dds|sweep",

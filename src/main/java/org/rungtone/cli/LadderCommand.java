@@ -62,7 +62,7 @@ public final class LadderCommand implements Callable<Integer> {
     Integer bits;
 
     @Option(names = "--pin-names", split = ",", paramLabel = "NAME",
-            description = "Names of the pins driving bits 0.. for the wiring table, e.g. PB0,PB1 (default D0..).")
+            description = "Names of the pins driving bits 0.. for the wiring table, e.g. PB0,PB1 (default pin0..).")
     List<String> pinNames;
 
     @Option(names = "--all-levels", description = "Print every code's level (default: all up to 64 codes).")

@@ -102,6 +102,10 @@ public final class SurveyCommand implements Callable<Integer> {
     @Option(names = "--packed", description = "Judge the budget and the choice by bit-packed bytes.")
     boolean packed;
 
+    @Option(names = "--storage", paramLabel = "<list>", split = ",", description = "Survey these Tread stores too,"
+            + " e.g. tread2,tread3,tread4 (packed here counts the plain codes bit-packed, as --packed does).")
+    java.util.List<org.rungtone.firmware.SampleStorage> storages = new java.util.ArrayList<>();
+
     @Option(names = "--previews", description = "Write a 16-bit preview WAV per cell into OUT/previews/.")
     boolean previews;
 
@@ -125,9 +129,8 @@ public final class SurveyCommand implements Callable<Integer> {
                 : Path.of("rungtone-out", "survey-" + CNames.symbol(FileNames.stem(source, "sound")));
         SurveyRequest request = new SurveyRequest(source, channel, cells, conditioning.settings(),
                 Boards.perDepth(unit.path(), ladder, Defaults.FULL_SCALE_VOLTS),
-                new SurveyRequest.Choice(flashBudget == null ? OptionalLong.empty()
-                        : OptionalLong.of(flashBudget), target(), packed), filter,
-                new SurveyRequest.Output(folder, previews, Version.get()));
+                SurveyRequest.Choice.of(flashBudget == null ? OptionalLong.empty() : OptionalLong.of(flashBudget),
+                        target(), packed, storages), filter, new SurveyRequest.Output(folder, previews, Version.get()));
         ProgressLine line = ProgressLine.forTerminal(spec.commandLine().getErr(), common);
         SurveyRun.Result result;
         try {
@@ -138,7 +141,6 @@ public final class SurveyCommand implements Callable<Integer> {
         common.print(spec, json, () -> result.json(), () -> result.text());
         if (common.verbose) {
             spec.commandLine().getErr().println(SurveyReport.timings(result.stageMillis()));
-            spec.commandLine().getErr().flush();
         }
         return 0;
     }
@@ -149,9 +151,7 @@ public final class SurveyCommand implements Callable<Integer> {
             throw new SettingError(Setting.TARGET_SINAD, "give one target, " + Setting.TARGET_SINAD.ref() + " or "
                     + Setting.TARGET_ENOB.ref() + ", not both", null);
         }
-        if (targetSinadDb != null) {
-            return Optional.of(SurveyTarget.sinadDb(targetSinadDb));
-        }
-        return targetEnobBits == null ? Optional.empty() : Optional.of(SurveyTarget.enobBits(targetEnobBits));
+        return Optional.ofNullable(targetSinadDb).map(SurveyTarget::sinadDb)
+                .or(() -> Optional.ofNullable(targetEnobBits).map(SurveyTarget::enobBits));
     }
 }

@@ -178,9 +178,19 @@ final class EmitReport {
 
     private static String storage(EmitPlan p) {
         SampleStorage other = p.storage == SampleStorage.PACKED ? SampleStorage.UNPACKED : SampleStorage.PACKED;
+        long otherBytes = other.bytes(p.samples.length, p.bits);
+        if (p.tread != null) {
+            double seconds = p.samples.length / p.requestedRateHz;
+            long bytes = p.sampleBytes + p.decoderBytes();
+            return String.format(Locale.ROOT, "storage: %s: %s bytes of stream + %s bytes of decoder tables and %s"
+                    + " for %s samples (%.2f s): %.3f s per kilobyte (%s: %s bytes, %.3f s per kilobyte)",
+                    p.storage.describe(p.bits), Fmt.bytes(p.sampleBytes), Fmt.bytes(p.decoderBytes()),
+                    count(p.tread.resets().size(), "reset point"), Fmt.bytes(p.samples.length), seconds,
+                    1000 * seconds / bytes, other.describe(p.bits), Fmt.bytes(otherBytes), 1000 * seconds / otherBytes);
+        }
         return "storage: " + p.storage.describe(p.bits) + ", " + Fmt.bytes(p.sampleBytes) + " bytes for "
                 + Fmt.bytes(p.samples.length) + " samples (" + other.describe(p.bits) + ": "
-                + Fmt.bytes(other.bytes(p.samples.length, p.bits)) + " bytes)";
+                + Fmt.bytes(otherBytes) + " bytes)";
     }
 
     private static String flash(EmitPlan p) {
@@ -197,6 +207,9 @@ final class EmitReport {
         }
         if (p.sweepBytes > 0) {
             parts.add("sweep codes " + Fmt.bytes(p.sweepBytes));
+        }
+        if (p.decoderBytes() > 0) {
+            parts.add("decoder tables " + Fmt.bytes(p.decoderBytes()));
         }
         b.append(String.join(" + ", parts)).append(" = ").append(Fmt.bytes(p.totalBytes())).append(" bytes");
         long budget = p.request.flashBudgetBytes();

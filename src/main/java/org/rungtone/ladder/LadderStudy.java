@@ -93,11 +93,11 @@ public record LadderStudy(LadderAnalysis analysis, List<String> pinNames, Option
         }
     }
 
-    /** D0, D1, ...: the pins by bit number when the user gave no names. */
+    /** pin0, pin1, ...: the pins by bit number when the user gave no names (no part's or board's names). */
     static List<String> defaultPinNames(int bits) {
         List<String> names = new ArrayList<>();
         for (int i = 0; i < bits; i++) {
-            names.add("D" + i);
+            names.add("pin" + i);
         }
         return names;
     }

@@ -21,7 +21,6 @@ import org.rungtone.firmware.Templates;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.OutputFolder;
-import org.rungtone.report.AnalysisPlots;
 import org.rungtone.report.BuildFacts;
 import org.rungtone.report.BuildReport;
 import org.rungtone.report.BuildSummary;
@@ -149,9 +148,9 @@ public final class Build {
         }
         if (r.plan().firmware().loop().isPresent()) {
             int[] lp = r.plan().firmware().loop().get().samples(r.rateHz(), r.emitted().length());
-            return new SoundClip(name, r.emitted(), lp[0], lp[1]);
+            return new SoundClip(name, r.emitted(), lp[0], lp[1], r.stream());
         }
-        return SoundClip.of(name, r.emitted());
+        return new SoundClip(name, r.emitted(), 0, r.emitted().length(), r.stream());
     }
 
     /** Flash bytes of a plain sample array. */

@@ -54,7 +54,7 @@ public record Project(Path file, String name, Optional<Path> outDir, Optional<Pa
      * @param pins pin list
      * @param portWidth port width for generic
      * @param pinStrategy auto, shift, table, scatter
-     * @param storage unpacked or packed
+     * @param storage unpacked, packed or a Tread store
      * @param engine clip, loop, dds
      * @param rateTolerancePpm allowed rate error
      * @param flashBudgetBytes flash budget

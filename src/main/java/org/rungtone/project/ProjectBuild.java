@@ -12,6 +12,7 @@ import java.util.OptionalInt;
 import java.util.OptionalLong;
 import java.util.function.UnaryOperator;
 import org.rungtone.calibrate.OutputSpan;
+import org.rungtone.codec.TreadFormat;
 import org.rungtone.condition.ResamplerKind;
 import org.rungtone.firmware.CNames;
 import org.rungtone.firmware.DdsSpec;
@@ -38,9 +39,9 @@ import org.rungtone.report.BuildSummary;
 import org.rungtone.report.HtmlReport;
 import org.rungtone.report.Json;
 import org.rungtone.report.ProjectReport;
-import org.rungtone.report.SoundPlots;
 import org.rungtone.report.ProjectSetting;
 import org.rungtone.report.ProjectSetting.Origin;
+import org.rungtone.report.SoundPlots;
 
 /**
  * Builds every sound of a {@link Project} into one coherent set of outputs: one header exposing all sounds,
@@ -198,9 +199,11 @@ public final class ProjectBuild {
                 java.util.concurrent.CompletableFuture.runAsync(org.rungtone.report.Plots::warmUp);
         // every sound's settings are checked before the first sound is rendered
         List<BuildPlan> plans = new ArrayList<>();
+        Optional<TreadFormat> codec = player.filter(p -> p.engine() != PlaybackEngine.SWEEP)
+                .flatMap(p -> p.storage().codec());
         for (Project.Sound s : project.sounds()) {
             try {
-                plans.add(plan(project, s, o, shared));
+                plans.add(plan(project, s, o, shared, codec));
             } catch (SettingError e) {
                 throw located(project, s, o, e);
             }
@@ -289,7 +292,8 @@ public final class ProjectBuild {
     }
 
     /** The build plan of one sound. */
-    private static BuildPlan plan(Project project, Project.Sound s, Overrides o, Shared shared) {
+    private static BuildPlan plan(Project project, Project.Sound s, Overrides o, Shared shared,
+            Optional<TreadFormat> codec) {
         OptionalDouble rate = o.rateHz().isPresent() ? o.rateHz() : s.rateHz().isPresent() ? s.rateHz()
                 : shared.rateHz();
         String symbol = CNames.symbol(project.name()) + "_" + CNames.symbol(s.name());
@@ -305,7 +309,7 @@ public final class ProjectBuild {
                 .resampler(s.resampler().orElse(ResamplerKind.KAISER))
                 .flashQualifier(project.target().flashAttr().orElse(""))
                 .preview(pv.filter().orElse(Defaults.filter()), pv.rateHz().orElse(Defaults.PREVIEW_RATE_HZ))
-                .loop(s.loop());
+                .loop(s.loop()).codec(codec);
         shared.board().ifPresent(levels -> plan.board(levels, shared.compensation()));
         return plan.build();
     }

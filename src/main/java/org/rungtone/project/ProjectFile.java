@@ -146,7 +146,7 @@ public final class ProjectFile {
                 f.quantity("cpu_clock", "Hz"), f.parsed("timer", TimerKind::parse), f.string("pins"),
                 f.integer("port_width", 8, 32),
                 f.choice("pin_strategy", "auto", "shift", "table", "scatter").map(PinStrategy::parse),
-                f.choice("storage", "unpacked", "packed").map(SampleStorage::parse),
+                f.choice("storage", "unpacked", "packed", "tread2", "tread3", "tread4").map(SampleStorage::parse),
                 f.choice("engine", "clip", "loop", "dds").map(PlaybackEngine::parse),
                 f.quantity("rate_tolerance", ""), bytes(f, "flash_budget"),
                 f.parsed("flash_attr", FlashAttribute::check),

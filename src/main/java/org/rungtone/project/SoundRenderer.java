@@ -19,6 +19,7 @@ import org.rungtone.analysis.Spectrum;
 import org.rungtone.analysis.ToneAnalysis;
 import org.rungtone.analysis.ToneReport;
 import org.rungtone.calibrate.OutputSpan;
+import org.rungtone.codec.TreadStream;
 import org.rungtone.condition.Conditioner;
 import org.rungtone.condition.Conditioning;
 import org.rungtone.condition.KaiserResampler;
@@ -91,19 +92,20 @@ public final class SoundRenderer {
      * @param warnings what the user should know
      * @param stageMillis timings so far
      * @param autoLoop the loop found in the sound, when its loop is auto (the codes hold its crossfades)
+     * @param stream the Tread stream the emitted codes decode from, for a Tread store
      */
     public record Rendered(BuildPlan plan, String layout, SourceFacts source, double rateHz,
             Conditioner.Conditioned conditioned, Codes emitted, LevelTable played, List<QualityReport> quality,
             Optional<Double> shapingGainDb, Optional<ToneReport> tone, AnalogModel.Preview preview,
             Spectrum errorSpectrum, Optional<Spectrum> toneSpectrum, double inBandCutoffHz, long clippedSamples,
             List<String> settings, List<String> warnings, Map<String, Double> stageMillis,
-            Optional<SeamlessLoop> autoLoop) {
+            Optional<SeamlessLoop> autoLoop, Optional<TreadStream> stream) {
     }
 
     /** The codes of every ladder case and how they use the range. */
     record Cases(Quantizer.Quantized ideal, LevelTable idealTable, Codes emitted, LevelTable played,
             long clipped, Optional<Codes> compensated, double[] range, CodeUse idealUse,
-            Optional<CodeUse> compensatedUse) {
+            Optional<CodeUse> compensatedUse, Optional<TreadStream> stream) {
 
         /** How the emitted codes use the range. */
         CodeUse emittedUse() {
@@ -132,7 +134,8 @@ public final class SoundRenderer {
         Optional<AutoLoop.Placed> loop = AutoLoop.place(plan, reference);
         loop.flatMap(AutoLoop.Placed::shortened).ifPresent(w -> warnings.add(w.text()));
         reference = loop.map(AutoLoop.Placed::signal).orElse(reference);
-        Cases cases = quantize(plan, reference);
+        Coding coding = Coding.of(plan, rate, model.inBandTopHz(rate));
+        Cases cases = quantize(plan, reference, coding);
         watch.lap("quantize");
         if (cases.clipped() > 0) {
             warnings.add(cases.clipped() + " samples were beyond full scale and clipped");
@@ -155,7 +158,7 @@ public final class SoundRenderer {
         // and at 20 kHz: the one definition the survey uses too
         double cutoff = model.inBandTopHz(rate);
         SoundFigures.Figures figures = SoundFigures.of(plan, prepared.wavetable(), reference, cases, cutoff,
-                warnings);
+                warnings, coding);
         Optional<ToneReport> tone = Optional.empty();
         Optional<Spectrum> toneSpectrum = Optional.empty();
         if (isTone(reference)) {
@@ -177,30 +180,34 @@ public final class SoundRenderer {
         return new Rendered(plan, prepared.layout(), prepared.source(), rate, conditioned, cases.emitted(),
                 cases.played(), quality, figures.shapingGainDb(), tone, preview, figures.errorSpectrum(), toneSpectrum,
                 cutoff, cases.clipped(), settings(plan, prepared.layout(), conditioned, cases.played(), rate,
-                        cases.range()), warnings, watch.laps(), loop.map(AutoLoop.Placed::loop));
+                        cases.range()), warnings, watch.laps(), loop.map(AutoLoop.Placed::loop), cases.stream());
     }
 
-    /** Quantizes onto the ideal ladder and, with a board, onto its real levels when compensating. */
-    private Cases quantize(BuildPlan plan, Signal reference) {
+    /**
+     * Quantizes (or, for a Tread store, encodes) onto the ideal ladder and, with a board, onto its real levels
+     * when compensating.
+     */
+    private Cases quantize(BuildPlan plan, Signal reference, Coding coding) {
         QuantizeSettings q = plan.quantize();
         LevelTable ideal = LevelTable.ideal(plan.bits(), plan.preview().fullScaleVolts());
-        Quantizer idealQuantizer = quantizer(ideal, plan);
-        Quantizer.Quantized idealQ = idealQuantizer.apply(reference);
-        CodeUse idealUse = CodeUse.of(idealQuantizer, idealQ);
+        Coding.Coded idealC = coding.apply(quantizer(ideal, plan), reference);
+        Quantizer.Quantized idealQ = idealC.quantized();
+        CodeUse idealUse = idealC.use();
         if (q.board().isEmpty()) {
             return new Cases(idealQ, ideal, idealQ.codes(), ideal, idealQ.clippedSamples(), Optional.empty(),
-                    new double[] {ideal.minVolts(), ideal.maxVolts()}, idealUse, Optional.empty());
+                    new double[] {ideal.minVolts(), ideal.maxVolts()}, idealUse, Optional.empty(), idealC.stream());
         }
         LevelTable board = q.board().get();
         if (!q.compensate()) {
             return new Cases(idealQ, ideal, idealQ.codes(), board, idealQ.clippedSamples(), Optional.empty(),
-                    new double[] {board.minVolts(), board.maxVolts()}, idealUse, Optional.empty());
+                    new double[] {board.minVolts(), board.maxVolts()}, idealUse, Optional.empty(), idealC.stream());
         }
         double[] range = span.volts(board, ideal);
-        Quantizer compensating = new Quantizer(board, range[0], range[1], q.dither(), q.shaping(), q.seed());
-        Quantizer.Quantized c = compensating.apply(reference);
+        Coding.Coded comp = coding.apply(new Quantizer(board, range[0], range[1], q.dither(), q.shaping(),
+                q.seed()), reference);
+        Quantizer.Quantized c = comp.quantized();
         return new Cases(idealQ, ideal, c.codes(), board, c.clippedSamples(), Optional.of(c.codes()), range,
-                idealUse, Optional.of(CodeUse.of(compensating, c)));
+                idealUse, Optional.of(comp.use()), comp.stream());
     }
 
     /** Starts rendering the preview of the emitted codes (its first seconds) on another core. */

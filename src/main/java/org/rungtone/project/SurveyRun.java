@@ -168,7 +168,7 @@ public final class SurveyRun {
         SurveyRequest.Choice choice = request.choice();
         SurveySpec.Builder b = SurveySpec.builder().bitDepths(cells.bitDepths()).ratesHz(cells.ratesHz())
                 .dither(cells.dither()).shaping(cells.shaping()).seed(cells.seed()).tables(tables::get)
-                .inBandCutoffHz(model::inBandTopHz).packed(choice.packed());
+                .inBandCutoffHz(model::inBandTopHz).packed(choice.packed()).codecs(choice.codecs());
         choice.flashBudgetBytes().ifPresent(b::flashBudgetBytes);
         choice.target().ifPresent(b::target);
         return b.build();
@@ -183,7 +183,7 @@ public final class SurveyRun {
         double maxRate = spec.ratesHz().stream().max(Double::compare).orElseThrow();
         Map<Double, Conditioner.Conditioned> references = new ConcurrentHashMap<>();
         try (Sources.Opened loaded = Sources.open(request.source(), request.channel(), maxRate, spec.seed())) {
-            tell("survey", 0, spec.bitDepths().size() * spec.ratesHz().size());
+            tell("survey", 0, Survey.cellCount(spec));
             // The highest rate first: its trim tells which stretch of the source the listener figures compare.
             Conditioner.Conditioned top = conditioned(request, conditioner, loaded, conditionings, maxRate);
             references.put(maxRate, top);
@@ -237,7 +237,7 @@ public final class SurveyRun {
         return s.result().rows().parallelStream().mapToDouble(row -> {
             LevelTable table = tables.get(row.bits());
             Signal reference = s.references().get(row.rateHz()).signal();
-            Codes codes = Survey.quantize(spec, reference, table).codes();
+            Codes codes = Survey.codes(spec, reference, table, row.codec()).codes();
             AnalogModel.Preview p = model.render(codes, table);
             SurveyFiles.writePreview(folder, row, p.signal());
             tell("previews", done.incrementAndGet(), total);

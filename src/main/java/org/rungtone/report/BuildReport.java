@@ -1,14 +1,11 @@
 package org.rungtone.report;
 
 import java.nio.file.Path;
-import java.util.LinkedHashMap;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.rungtone.analysis.QualityReport;
 import org.rungtone.analysis.ToneReport;
-import org.rungtone.internal.FileNames;
 import org.rungtone.internal.Units;
 
 /** Renders a {@link BuildSummary} as text for people and as JSON for machines. */

@@ -68,6 +68,7 @@ final class SurveyJson {
         m.put("fits", r.fits());
         m.put("reaches_target", r.reachesTarget());
         m.put("chosen", r.chosen());
+        m.put("storage", r.codec().map(f -> f.optionName()).orElse(null));
         m.put("preview", previews ? "previews/" + SurveyReport.previewFileName(r) : null);
         return m;
     }

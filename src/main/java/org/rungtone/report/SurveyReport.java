@@ -72,7 +72,8 @@ public final class SurveyReport {
 
     /** The preview file of a cell, e.g. {@code b06-r16000.wav} (rate in hertz, without trailing zeros). */
     public static String previewFileName(SurveyRow row) {
-        return String.format(Locale.ROOT, "b%02d-r%s.wav", row.bits(), plain(row.rateHz()));
+        return String.format(Locale.ROOT, "b%02d-r%s%s.wav", row.bits(), plain(row.rateHz()),
+                row.codec().map(f -> "-" + f.optionName()).orElse(""));
     }
 
     /** The whole text report: settings, the table, the recommendation, files and warnings. */
@@ -123,6 +124,11 @@ public final class SurveyReport {
     public static String table(SurveyResult result) {
         List<String> header = new ArrayList<>(List.of("bits", "rate", "SINAD dB", "in-band SNR dB",
                 "A-wtd SNR dB", "ENOB re FS", "flash bytes", "packed bytes", "fits"));
+        // a survey of Tread stores names each row's store; its bytes fill both byte columns
+        boolean stores = result.rows().stream().anyMatch(r -> r.codec().isPresent());
+        if (stores) {
+            header.add(2, "storage");
+        }
         boolean hasTarget = result.target() != null;
         boolean hasChoice = result.chosen().isPresent();
         boolean heard = result.rows().stream().anyMatch(r -> !Double.isNaN(r.listenerSnrDb()));
@@ -146,6 +152,9 @@ public final class SurveyReport {
                 cells.add(fixed(r.listenerSnrDb(), 1));
                 cells.add(fixed(r.listenerAWeightedSnrDb(), 1));
             }
+            if (stores) {
+                cells.add(2, storage(r));
+            }
             if (hasTarget) {
                 cells.add(yesNo(r.reachesTarget()));
             }
@@ -168,10 +177,10 @@ public final class SurveyReport {
             SurveyRow c = chosen.get();
             String heard = Double.isNaN(c.listenerSnrDb()) ? "" : "heard SNR " + fixed(c.listenerSnrDb(), 1)
                     + " dB, ";
-            return String.format(Locale.ROOT, "Recommended: %d bits at %s (%sSINAD %s dB, ENOB re full scale %s"
-                    + " bits, %s).",
-                    c.bits(), khz(c.rateHz()), heard, fixed(c.sinadDb(), 1), fixed(c.enobFullScaleBits(), 2),
-                    bytes(result.packed() ? c.flashBytesPacked() : c.flashBytesUnpacked(), result.packed()));
+            return String.format(Locale.ROOT, "Recommended: %d bits at %s%s (%sSINAD %s dB, ENOB re full scale %s"
+                    + " bits, %s).", c.bits(), khz(c.rateHz()), c.codec().map(f -> " stored as " + f.optionName())
+                    .orElse(""), heard, fixed(c.sinadDb(), 1), fixed(c.enobFullScaleBits(), 2),
+                    bytes(c, result.packed()));
         }
         if (target == null) {
             return "No target given, so nothing is recommended; give a SINAD or ENOB target.";
@@ -181,9 +190,9 @@ public final class SurveyReport {
         if (reaching.isPresent() && result.flashBudgetBytes() != null) {
             SurveyRow r = reaching.get();
             return String.format(Locale.ROOT, "Nothing reaches %s within the %s budget; the smallest setting"
-                    + " that reaches it, %d bits at %s, needs %s.", target.describe(),
+                    + " that reaches it, %d bits at %s%s, needs %s.", target.describe(),
                     bytes(result.flashBudgetBytes(), result.packed()), r.bits(), khz(r.rateHz()),
-                    bytes(counted(r, result.packed()), result.packed()));
+                    r.codec().map(f -> " as " + f.optionName()).orElse(""), bytes(r, result.packed()));
         }
         boolean heard = result.rows().stream().anyMatch(r -> !Double.isNaN(r.listenerSnrDb()));
         SurveyRow best = result.rows().stream().max(Comparator.comparingDouble(r -> heard ? r.listenerSnrDb()
@@ -221,6 +230,16 @@ public final class SurveyReport {
 
     private static String bytes(long n, boolean packed) {
         return String.format(Locale.ROOT, "%,d bytes %s", n, packed ? "bit-packed" : "unpacked");
+    }
+
+    /** A row's counted bytes in words: bit-packed or unpacked for the plain codes, else its Tread store's. */
+    private static String bytes(SurveyRow r, boolean packed) {
+        return r.codec().isEmpty() ? bytes(counted(r, packed), packed)
+                : String.format(Locale.ROOT, "%,d bytes as %s", r.flashBytesPacked(), r.codec().get().optionName());
+    }
+
+    private static String storage(SurveyRow r) {
+        return r.codec().map(f -> f.optionName()).orElse("plain");
     }
 
     private static String yesNo(boolean b) {

@@ -100,8 +100,8 @@ class SurveyCommandTest {
             assertEquals((long) samples * (bits <= 8 ? 1 : 2), row.get("flash_bytes_unpacked").getAsLong());
             assertEquals(((long) samples * bits + 7) / 8, row.get("flash_bytes_packed").getAsLong());
             // the target is checked against what the listener gets, not the at-rate SINAD
-            assertEquals(row.get("heard_signal_to_error_db").getAsDouble() >= 30, row.get("reaches_target").getAsBoolean(),
-                    row.toString());
+            assertEquals(row.get("heard_signal_to_error_db").getAsDouble() >= 30,
+                    row.get("reaches_target").getAsBoolean(), row.toString());
         }
         JsonObject expected = rows.asList().stream().map(JsonElement::getAsJsonObject)
                 .filter(x -> x.get("fits").getAsBoolean() && x.get("reaches_target").getAsBoolean())
@@ -163,7 +163,7 @@ class SurveyCommandTest {
         assertEquals(List.of("bits", "rate_hz", "samples", "sinad_db", "in_band_snr_db", "a_weighted_snr_db",
                 "enob_full_scale_bits", "heard_signal_to_error_db", "heard_a_weighted_signal_to_error_db",
                 "clipped_samples", "flash_bytes_unpacked", "flash_bytes_packed", "fits", "reaches_target", "chosen",
-                "preview"), new ArrayList<>(row.keySet()));
+                "storage", "preview"), new ArrayList<>(row.keySet()));
     }
 
     @Test

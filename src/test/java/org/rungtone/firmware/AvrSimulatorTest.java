@@ -21,6 +21,9 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
+import org.rungtone.codec.TreadFormat;
+import org.rungtone.codec.TreadState;
+import org.rungtone.codec.TreadStream;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.quantize.Codes;
 import org.rungtone.testing.AvrSimulator;
@@ -98,7 +101,8 @@ class AvrSimulatorTest {
         for (String pins : List.of("PD2-PD7", "PD2,PD7,PC0,PC1,PB2,PB1")) {
             for (SampleStorage storage : SampleStorage.values()) {
                 for (PlaybackEngine engine : List.of(PlaybackEngine.CLIP, PlaybackEngine.LOOP)) {
-                    for (int rate : new int[] {8000, 22050}) {
+                    // the Tread stores at the rate of the compression goals only
+                    for (int rate : storage.codec().isPresent() ? new int[] {16000} : new int[] {8000, 22050}) {
                         out.add(new Build(pins, storage, engine, rate, TimerKind.AVR_TIMER1));
                     }
                 }
@@ -125,11 +129,21 @@ class AvrSimulatorTest {
         for (String pins : List.of("PD5-PD7,PB0-PB3", "PD5-PD7,PB0-PB1,PC0-PC1", "PD2,PD7,PD3,PD6,PD4,PD5",
                 "PD2,PD7,PB2,PB1,PD3,PB0")) {
             for (PlaybackEngine engine : List.of(PlaybackEngine.CLIP, PlaybackEngine.LOOP)) {
-                for (SampleStorage storage : SampleStorage.values()) {
+                for (SampleStorage storage : List.of(SampleStorage.UNPACKED, SampleStorage.PACKED)) {
                     out.add(new Build(pins, storage, engine, 16000, TimerKind.AVR_TIMER1));
                 }
             }
         }
+        // Tread codes wider than a byte (16-bit decoder) over two ports and scattered over three, and on a
+        // whole port
+        for (String pins : List.of("PD2-PD7,PB0-PB4", SCATTERED_12)) {
+            for (SampleStorage storage : List.of(SampleStorage.TREAD2, SampleStorage.TREAD3, SampleStorage.TREAD4)) {
+                for (PlaybackEngine engine : List.of(PlaybackEngine.CLIP, PlaybackEngine.LOOP)) {
+                    out.add(new Build(pins, storage, engine, 16000, TimerKind.AVR_TIMER1));
+                }
+            }
+        }
+        out.add(new Build("PD0-PD7", SampleStorage.TREAD4, PlaybackEngine.CLIP, 16000, TimerKind.AVR_TIMER1));
         return out.stream();
     }
 
@@ -137,7 +151,7 @@ class AvrSimulatorTest {
     static Stream<Build> costOnlyBuilds() {
         List<Build> out = new ArrayList<>();
         for (String pins : List.of("PB0-PB4", "PD2-PD7,PB0-PB4", "PD2,PD7,PC0,PC1,PB2,PB1", SCATTERED_12)) {
-            for (SampleStorage storage : SampleStorage.values()) {
+            for (SampleStorage storage : List.of(SampleStorage.UNPACKED, SampleStorage.PACKED)) {
                 out.add(new Build(pins, storage, PlaybackEngine.DDS, 8000, TimerKind.AVR_TIMER1));
             }
             out.add(new Build(pins, SampleStorage.UNPACKED, PlaybackEngine.SWEEP, 1000, TimerKind.AVR_TIMER1));
@@ -154,6 +168,20 @@ class AvrSimulatorTest {
             c[i] = (i * 37 + offset) & ((1 << bits) - 1);
         }
         return c;
+    }
+
+    /**
+     * A sound of {@link #codes}: those codes, or for a Tread store a stream of them as b-bit codes from the
+     * mid code, whose decoded codes (the reference decoder's) hit both ends of the ladder and every step index.
+     */
+    static SoundClip clip(String name, Build b, int bits, int length, int offset, int loopStart, int loopEnd) {
+        if (b.storage().codec().isEmpty()) {
+            return new SoundClip(name, Codes.of(bits, b.rateHz(), codes(bits, length, offset)), loopStart, loopEnd);
+        }
+        TreadFormat f = b.storage().codec().get();
+        TreadStream s = TreadStream.of(f, bits, b.rateHz(), new TreadState(1 << (bits - 1), 1 << (bits - 1),
+                offset % (f.maxIndex(bits) + 1)), codes(f.codeBits(), length, offset));
+        return SoundClip.encoded(name, s, loopStart, loopEnd);
     }
 
     @ParameterizedTest(name = "{0}")
@@ -266,12 +294,11 @@ class AvrSimulatorTest {
                         : SweepSpec.holding(bits, codes(bits, 64, 5), 1));
                 break;
             default:
-                request.sound("other", Codes.of(bits, b.rateHz(), codes(bits, 50, 11)));
-                if (loop) {
-                    request.sound("played", Codes.of(bits, b.rateHz(), played), LOOP_START, LOOP_END);
-                } else {
-                    request.sound("played", Codes.of(bits, b.rateHz(), played));
-                }
+                request.sound(clip("other", b, bits, 50, 11, 0, 50));
+                SoundClip clip = loop ? clip("played", b, bits, played.length, 5, LOOP_START, LOOP_END)
+                        : clip("played", b, bits, played.length, 5, 0, played.length);
+                request.sound(clip);
+                played = clip.codes().codes();
                 start = (loop ? "player_loop" : "player_play") + "(1u)";
                 ticks = loop ? LOOP_TICKS : played.length + TICKS_AFTER_END;
         }

@@ -31,6 +31,22 @@ class TickCostTest {
     }
 
     @Test
+    void treadFiguresAreThoseOfTheirFormatAndEngine() {
+        // measured by AvrSimulatorTest: a one-port ladder of up to 8 bits, 16 kHz, ATmega328P
+        assertEquals(new TickCost(145, 0, true), cost(tread(SampleStorage.TREAD2, PlaybackEngine.CLIP)));
+        assertEquals(new TickCost(180, 0, true), cost(tread(SampleStorage.TREAD3, PlaybackEngine.LOOP)));
+        assertEquals(new TickCost(150, 0, true), cost(tread(SampleStorage.TREAD4, PlaybackEngine.LOOP)));
+        // 16 kHz x 150 cycles of 16 MHz: 15 % of the CPU
+        assertEquals(0.15, cost(tread(SampleStorage.TREAD4, PlaybackEngine.CLIP)).cpuShare(16e6, 16000), 1e-12);
+    }
+
+    private static FirmwareRequest tread(SampleStorage storage, PlaybackEngine engine) {
+        SoundClip clip = HostReplayTest.chimeClip("s", storage, 6, 64, 0, 64);
+        return FirmwareRequest.builder().family("avr").name("t").toolVersion("test").pins("PD2-PD7").cpuClockHz(16e6)
+                .storage(storage).engine(engine).sound(clip).build();
+    }
+
+    @Test
     void scatterTermsPastOnePerPortAddToTheFigure() {
         // 12 bits over D, B, C, four terms per port: 3 ports (105) + 9 extra terms x 17 = 258
         TickCost c = cost(avr("PD2,PB0,PC0,PD3,PB1,PC1,PD4,PB2,PC2,PD5,PB3,PC3", 12).build());

@@ -130,6 +130,15 @@ class LadderSpecTest {
                 + " the swing"), clipped.warnings());
     }
 
+    /** All pins high with no load puts the top code on the 5 V rail itself: on the swing, not beyond it. */
+    @Test
+    void aLevelOnTheRailIsNotClipped() {
+        // E24 legs of a 4-bit weighted ladder, as ladder --series E24 chooses them
+        LadderSpec spec = LadderSpec.builder().bits(4).resistors(82e3, 39e3, 20e3, 10e3).build();
+        assertEquals(5.0, Ladder.nominal(spec).levels().volts(15), 1e-9);
+        assertEquals(List.of(), spec.warnings());
+    }
+
     @Test
     void readsALadderTable() {
         LadderSpec spec = parse("[ladder]\n"

@@ -17,7 +17,7 @@ class LadderStudyTest {
     void analysesOnlyWhenNothingElseIsAsked() {
         LadderStudy s = new LadderStudy.Request(R2R4, List.of(), Double.POSITIVE_INFINITY, Optional.empty(),
                 Optional.empty(), false).run(n -> { });
-        assertEquals(List.of("D0", "D1", "D2", "D3"), s.pinNames());
+        assertEquals(List.of("pin0", "pin1", "pin2", "pin3"), s.pinNames());
         assertEquals(Optional.empty(), s.monteCarlo());
         assertEquals(Optional.empty(), s.design());
         assertEquals(R2R4, s.analysis().spec());

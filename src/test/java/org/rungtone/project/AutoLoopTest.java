@@ -112,7 +112,8 @@ class AutoLoopTest {
                 .getAsJsonObject("auto_loop");
         double period = loop.get("period_samples").getAsDouble();
         assertEquals(RATE / 440, period, 0.001 * RATE / 440);
-        assertEquals(loop.get("end_sample").getAsInt() - loop.get("start_sample").getAsInt(), loop.get("length_samples").getAsInt());
+        assertEquals(loop.get("end_sample").getAsInt() - loop.get("start_sample").getAsInt(),
+                loop.get("length_samples").getAsInt());
         assertTrue(loop.get("seam_db").getAsDouble() < -40);
         assertEquals(4, loop.get("preview_passes").getAsInt());
         assertTrue(Files.readString(dir.resolve("out/report.html")).contains("loop (found)"));

@@ -8,6 +8,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Arrays;
 import java.util.List;
+import java.util.Optional;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -26,7 +27,7 @@ class SurveyFilesTest {
         int n = (int) rate;
         return new SurveyRow(bits, rate, n, sinad, sinad, sinad, (sinad - 1.76) / 6.02, 0,
                 SurveyRow.unpackedBytes(n, bits), SurveyRow.packedBytes(n, bits), true, sinad >= 40, false, Double.NaN,
-                Double.NaN);
+                Double.NaN, Optional.empty());
     }
 
     @Test

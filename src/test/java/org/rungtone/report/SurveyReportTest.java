@@ -11,6 +11,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import org.junit.jupiter.api.Test;
 import org.rungtone.analysis.SurveyResult;
 import org.rungtone.analysis.SurveyRow;
@@ -21,7 +22,7 @@ class SurveyReportTest {
     private static final List<String> ROW_FIELDS = List.of("bits", "rate_hz", "samples", "sinad_db",
             "in_band_snr_db", "a_weighted_snr_db", "enob_full_scale_bits", "heard_signal_to_error_db",
             "heard_a_weighted_signal_to_error_db", "clipped_samples", "flash_bytes_unpacked", "flash_bytes_packed",
-            "fits", "reaches_target", "chosen", "preview");
+            "fits", "reaches_target", "chosen", "storage", "preview");
 
     /**
      * A cell of a 1 s clip; flash bytes follow from the rate and depth as in SurveyRow, ENOB from SINAD as
@@ -32,7 +33,7 @@ class SurveyReportTest {
         int n = (int) rate;
         return new SurveyRow(bits, rate, n, sinad, sinad + 0.5, sinad - 0.3, (sinad - 1.76) / 6.02, 0,
                 SurveyRow.unpackedBytes(n, bits), SurveyRow.packedBytes(n, bits), fits, reaches, chosen, Double.NaN,
-                Double.NaN);
+                Double.NaN, Optional.empty());
     }
 
     private static SurveyReport.Context context(boolean previews) {
