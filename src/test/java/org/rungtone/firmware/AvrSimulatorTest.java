@@ -66,12 +66,17 @@ class AvrSimulatorTest {
     @TempDir
     static Path root;
 
-    /** One AVR build: pins, storage, engine, sample rate and timer. */
-    record Build(String pins, SampleStorage storage, PlaybackEngine engine, int rateHz, TimerKind timer) {
+    /** One AVR build: pins, storage, engine, sample rate and timer; a sweep may be one for a recording. */
+    record Build(String pins, SampleStorage storage, PlaybackEngine engine, int rateHz, TimerKind timer,
+            boolean recording) {
+        Build(String pins, SampleStorage storage, PlaybackEngine engine, int rateHz, TimerKind timer) {
+            this(pins, storage, engine, rateHz, timer, false);
+        }
+
         @Override
         public String toString() {
-            return String.format(Locale.ROOT, "%-48s %-8s %-5s %5d Hz %s", pins, storage.optionName(),
-                    engine.optionName(), rateHz, timer.optionName());
+            return String.format(Locale.ROOT, "%-48s %-8s %-5s %5d Hz %s%s", pins, storage.optionName(),
+                    engine.optionName(), rateHz, timer.optionName(), recording ? " recording" : "");
         }
 
         boolean isClip() {
@@ -150,6 +155,8 @@ class AvrSimulatorTest {
                 out.add(new Build(pins, storage, PlaybackEngine.DDS, 8000, TimerKind.AVR_TIMER1));
             }
             out.add(new Build(pins, SampleStorage.UNPACKED, PlaybackEngine.SWEEP, 1000, TimerKind.AVR_TIMER1));
+            out.add(new Build(pins, SampleStorage.UNPACKED, PlaybackEngine.SWEEP, 1000, TimerKind.AVR_TIMER1,
+                    true));
         }
         return out.stream();
     }
@@ -282,7 +289,9 @@ class AvrSimulatorTest {
                 request.sound("wave", Codes.of(bits, b.rateHz(), codes(bits, 256, 5))).dds(DdsSpec.of(440));
                 break;
             case SWEEP:
-                request.sweep(SweepSpec.holding(bits, codes(bits, 64, 5), 1));
+                // a recording sweep of one-tick steps takes its longer branch (which hold comes next) every tick
+                request.sweep(b.recording() ? SweepSpec.recording(bits, codes(bits, 64, 5), 1, 8, 1)
+                        : SweepSpec.holding(bits, codes(bits, 64, 5), 1));
                 break;
             default:
                 request.sound(clip("other", b, bits, 50, 11, 0, 50));
