@@ -246,9 +246,12 @@ final class EmitReport {
         SweepSpec s = p.request.sweep().orElseThrow();
         String mode = p.button.isPresent() ? "advancing on each press of " + p.button.get().name()
                 + " (active low, pull-up, " + SweepSpec.DEBOUNCE_MILLIS + " ms debounce)"
-                : "each held " + Fmt.plain(s.holdMillis(), 3) + " ms (" + s.holdTicks() + " ticks)";
-        return "sweep: " + count(s.codes().length, "code") + " at " + Fmt.hz(SweepSpec.TICK_HZ) + " ticks, "
-                + mode;
+                : "each held " + Fmt.plain(s.holdMillis(), 3) + " ms (" + s.holdTicks() + " ticks)"
+                        + (s.patternSteps() > 0 ? ", between a start and an end pattern of " + s.patternSteps()
+                                + " steps of " + s.patternTicks() + " ticks for a recording" : "");
+        String what = s.patternSteps() > 0 ? "step" : "code";
+        return "sweep: " + count(s.codes().length - 2 * s.patternSteps(), what) + " at "
+                + Fmt.hz(SweepSpec.TICK_HZ) + " ticks, " + mode;
     }
 
     private static String count(int n, String what) {

@@ -79,6 +79,8 @@ public record TickCost(int worstCycles, int windowCycles, boolean idleOff) {
     private static final int AVR_CYCLES_PER_EXTRA_PORT = 25;
     /** Each scatter term past one per port: the largest measured step was 16.2 cycles. */
     private static final int AVR_CYCLES_PER_EXTRA_TERM = 17;
+    /** A sweep for a recording chooses each next hold: 13 to 14 cycles more than the sweep, measured. */
+    private static final int AVR_CYCLES_RECORDING = 15;
 
     /** The cost of the plan's player, or empty when there is no measured figure (generic, cortexm). */
     static Optional<TickCost> of(EmitPlan p) {
@@ -103,6 +105,9 @@ public record TickCost(int worstCycles, int windowCycles, boolean idleOff) {
                 ? AVR_TREAD_CYCLES[treadRow]
                 : AVR_CYCLES[2 * engineRow(p.engine) + (p.storage == SampleStorage.PACKED ? 1 : 0)];
         int cycles = row[Math.min(ports, 3) - 1] + AVR_CYCLES_PER_EXTRA_PORT * Math.max(0, ports - 3);
+        if (p.request.sweep().filter(s -> s.patternSteps() > 0 && p.engine == PlaybackEngine.SWEEP).isPresent()) {
+            cycles += AVR_CYCLES_RECORDING;
+        }
         if (p.strategy == PinStrategy.SCATTER) {
             cycles += AVR_CYCLES_PER_EXTRA_TERM * (PinCode.termCount(p.pins) - ports);
         }

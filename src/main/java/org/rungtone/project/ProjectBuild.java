@@ -44,16 +44,14 @@ import org.rungtone.report.ProjectSetting.Origin;
 import org.rungtone.report.SoundPlots;
 
 /**
- * Builds every sound of a {@link Project} into one coherent set of outputs: one header exposing all sounds,
- * shared player code and one pin map (or one sample array per sound without a player), each sound's preview
- * and plots in a folder of its own, and one report covering all sounds and their total flash. Command-line
- * overrides win over file values, which win over defaults; the report lists the effective settings and where
- * each came from.
+ * Builds every sound of a {@link Project} into one set of outputs: one header for all sounds, shared player
+ * code and one pin map (or a sample array per sound without a player), each sound's preview and plots in a
+ * folder of its own, one report of all sounds and their flash. The command line wins over the file, the file
+ * over defaults; the report lists each effective setting and where it came from.
  */
 public final class ProjectBuild {
-    /** The setting naming the output folder: in the report, never in the C files (they must not depend on it). */
+    /** The settings naming the output folder and the C files' own: in the report, never in the C files. */
     private static final String OUT_SETTING = "out";
-    /** The setting naming the C files' own folder: in the report only, like {@link #OUT_SETTING}. */
     private static final String C_OUT_SETTING = "c_out";
 
     private final String toolVersion;

@@ -14,6 +14,8 @@ import org.rungtone.calibrate.MeasurementPlan;
 import org.rungtone.calibrate.MeterAdvice;
 import org.rungtone.calibrate.ModelSummary;
 import org.rungtone.calibrate.PlannedCode;
+import org.rungtone.calibrate.RecordingCalibration;
+import org.rungtone.calibrate.RecordingResult;
 import org.rungtone.calibrate.UnitFit;
 import org.rungtone.calibrate.UnitProfile;
 import org.rungtone.ladder.LevelTable;
@@ -21,8 +23,9 @@ import org.rungtone.ladder.Part;
 
 /**
  * The calibrate reports for machines: a measurement plan ({@code calibrate-plan.schema.json}), a board's fit
- * and its unit profile ({@code calibrate-fit.schema.json}) and a simulated board
- * ({@code calibrate-simulate.schema.json}); paths relative to the output folder.
+ * and its unit profile from readings ({@code calibrate-fit.schema.json}) or from a recorded sweep
+ * ({@code calibrate-listen.schema.json}), and a simulated board ({@code calibrate-simulate.schema.json}); paths
+ * relative to the output folder.
  */
 final class CalibrationJson {
     private CalibrationJson() {
@@ -64,16 +67,19 @@ final class CalibrationJson {
         root.put("button_pin", p.buttonPin().orElse(null));
         root.put("sweep", p.sweep().map(e -> FirmwareJson.of(e.facts())).orElse(null));
         root.put("warnings", p.sweep().map(e -> e.warnings()).orElse(List.of()));
+        root.put("meter", p.meter().map(m -> (Object) Map.of("counts", m.counts(), "autoranging", m.autoranging()))
+                .orElse(null));
+        root.put("recording", p.recording().map(r -> (Object) RecordingChecklist.json(r, model)).orElse(null));
         root.put("files", Json.paths(files, outDir));
         return root;
     }
 
     /** A board's fit and the unit profile made from it; {@code files} are the profile, then the residuals. */
     static Map<String, Object> fit(UnitFit.Result r, List<Path> files, Path outDir, String toolVersion) {
-        FitReport fit = r.fit();
         Map<String, Object> root = Json.header("calibrate-fit", toolVersion);
         root.put("source", Json.path(r.request().measurements(), outDir));
         root.put("ladder", r.request().ladder().map(LadderJson::description).orElse(null));
+        FitReport fit = r.fit();
         root.put("bits", fit.bits());
         root.put("readings", fit.readingCount());
         root.put("codes_measured", fit.codesMeasured());
@@ -82,6 +88,50 @@ final class CalibrationJson {
         root.put("meter_step_given", r.request().resolutionVolts().isPresent());
         root.put("repeat_spread_rms_v", fit.repeatSpreadVolts());
         root.put("floor_rms_v", fit.floorVolts());
+        boardFit(root, fit, r.profile(), files, outDir);
+        return root;
+    }
+
+    /**
+     * A board fitted from a recorded sweep ({@code calibrate-listen.schema.json}): what the recording's fit
+     * found, then the board fit and profile as for readings; {@code files} are the profile, the residuals,
+     * the steps and the plot.
+     */
+    static Map<String, Object> listen(RecordingCalibration.Result r, List<Path> files, Path outDir,
+            String toolVersion) {
+        RecordingResult f = r.recording();
+        Map<String, Object> root = Json.header("calibrate-listen", toolVersion);
+        root.put("source", Json.path(r.request().recording(), outDir));
+        root.put("ladder", LadderJson.description(r.request().ladder()));
+        root.put("bits", r.fit().bits());
+        Map<String, Object> rec = new LinkedHashMap<>();
+        rec.put("rate_hz", f.recording().sampleRateHz());
+        rec.put("pcm_bits", f.recording().pcmBits() == 0 ? null : f.recording().pcmBits());
+        rec.put("channel", f.recording().channel());
+        rec.put("channels", f.recording().channels());
+        rec.put("duration_s", f.recording().durationSeconds());
+        rec.put("codes", f.sweep().planCodes().length);
+        rec.put("hold_s", f.sweep().holdTicks() / 1000.0);
+        rec.put("sweep_start_s", f.clock().startSample() / f.recording().sampleRateHz());
+        rec.put("clock_mismatch_ppm", f.clock().mismatchPpm());
+        rec.put("corner_hz", f.cornerHz());
+        rec.put("hum_hz", f.humHz() > 0 ? f.humHz() : null);
+        rec.put("inverted", !f.upright());
+        rec.put("swing_fs", Math.abs(f.swing()));
+        rec.put("noise_rms_fs", f.noiseRms());
+        rec.put("median_level_sigma_fs", f.medianLevelSigma());
+        rec.put("full_scale_reading_v", r.request().fullScaleVolts().isPresent()
+                ? r.request().fullScaleVolts().getAsDouble() : null);
+        rec.put("step_residuals_rms_fs", f.stepResiduals());
+        rec.put("warnings", f.warnings());
+        root.put("recording", rec);
+        boardFit(root, r.fit(), r.profile(), files, outDir);
+        return root;
+    }
+
+    /** The board fit's fields, from the models to the files, shared by fit and listen. */
+    private static void boardFit(Map<String, Object> root, FitReport fit, UnitProfile p, List<Path> files,
+            Path outDir) {
         List<Map<String, Object>> models = new ArrayList<>();
         for (ModelSummary m : List.of(fit.superposition(), fit.switchedLoad())) {
             models.add(model(m, fit.bits()));
@@ -92,7 +142,6 @@ final class CalibrationJson {
         root.put("parameter_sigmas", fit.parameterSigmas());
         root.put("residuals", residuals(fit));
         root.put("outlier_codes", fit.outlierCodes());
-        UnitProfile p = r.profile();
         Map<String, Object> prof = new LinkedHashMap<>();
         prof.put("board", p.board());
         prof.put("date", p.date().toString());
@@ -103,7 +152,6 @@ final class CalibrationJson {
         root.put("profile", prof);
         root.put("warnings", fit.warnings());
         root.put("files", Json.paths(files, outDir));
-        return root;
     }
 
     private static Map<String, Object> model(ModelSummary m, int bits) {

@@ -44,6 +44,13 @@ public final class UnitFitReport {
                 : "unknown", r.request().resolutionVolts().isPresent() ? "given" : "from the readings' last digits",
                 fit.repeatSpreadVolts() > 0 ? mv(fit.repeatSpreadVolts()) + " rms" : "none (no code read twice)");
         line(b, "  so the readings resolve nothing below %s rms", mv(fit.floorVolts()));
+        sections(b, fit, s, r.profile(), files);
+        return b.toString();
+    }
+
+    /** The sections after the readings' summary: models, bits, residuals, profile, warnings, files. */
+    static void sections(StringBuilder b, FitReport fit, Optional<LadderSpec> s, UnitProfile profile,
+            List<Path> files) {
         line(b, "");
         models(b, fit);
         line(b, "");
@@ -51,7 +58,7 @@ public final class UnitFitReport {
         line(b, "");
         residuals(b, fit);
         line(b, "");
-        profile(b, fit, r.profile());
+        profile(b, fit, profile);
         if (!fit.warnings().isEmpty()) {
             line(b, "");
             line(b, "Warnings");
@@ -62,7 +69,6 @@ public final class UnitFitReport {
         line(b, "");
         line(b, "Wrote %s", CalibrationFiles.joined(files));
         line(b, "Next: rungtone build SOURCE --unit %s", files.get(0));
-        return b.toString();
     }
 
     private static void models(StringBuilder b, FitReport fit) {

@@ -71,6 +71,7 @@ class BadInputCatalogueTest {
         outputCases(c);
         projectCases(c);
         optionCases(c);
+        CalibrationCatalogue.add(c);
         return c.stream();
     }
 

@@ -24,6 +24,13 @@ import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
+import org.rungtone.calibrate.MeasurementPlan;
+import org.rungtone.calibrate.RecordingSweep;
+import org.rungtone.calibrate.SimulatedBoard;
+import org.rungtone.calibrate.SyntheticRecording;
+import org.rungtone.ladder.LadderSpec;
+import org.rungtone.ladder.Spread;
+import org.rungtone.ladder.Topology;
 import org.rungtone.report.Json;
 import org.rungtone.testing.Cli;
 import org.rungtone.testing.JsonSchemas;
@@ -34,8 +41,8 @@ import org.rungtone.testing.WavFixtures;
  * (draft 2020-12, checked with networknt's json-schema-validator): builds of WAV files and scripts on the ideal,
  * a weighted and an R-2R ladder, with and without a unit profile and a player of each family, from standard
  * input; project builds with and without a player; surveys with and without a target; the ladder study with
- * and without Monte Carlo and design; calibrate plan, fit and simulate. The schemas are strict enough that a
- * renamed field or a number written as a string fails.
+ * and without Monte Carlo and design; calibrate plan (also for a meter of known count and for a recording), fit,
+ * listen and simulate. The schemas are strict enough that a renamed field or a number written as a string fails.
  */
 class JsonSchemaTest {
     private static final Path EXAMPLES = Path.of("examples").toAbsolutePath();
@@ -50,6 +57,7 @@ class JsonSchemaTest {
 
     private static Path tone;
     private static Path chord;
+    private static Path recording;
 
     @BeforeAll
     static void sources() throws IOException {
@@ -64,6 +72,12 @@ class JsonSchemaTest {
             x[2 * i + 1] = 0.4 * Math.sin(2 * Math.PI * 550 * i / 22_050.0);
         }
         Files.write(chord, WavFixtures.wav().layout(WavFixtures.Layout.S24, 2, 22_050, x).bytes());
+        // a 6-bit R-2R board of 1 % parts playing the recording sweep, held 20 ms, through a clean card
+        LadderSpec six = LadderSpec.builder().topology(Topology.R2R).bits(6).tolerance(0.01).build();
+        RecordingSweep sweep = RecordingSweep.of(MeasurementPlan.everyCode(six.levels()), 0.020);
+        recording = SyntheticRecording.wav(shared.resolve("sweep.wav"), SyntheticRecording.record(sweep,
+                SimulatedBoard.draw(six, Spread.uniform(), 5).levels().levels(), SyntheticRecording.card(48_000, 0.5,
+                5.6e-5, 0.4, 0.3)), 48_000);
     }
 
     /** One command of the matrix: what it is, its arguments before {@code --out DIR --json}, its report. */
@@ -134,6 +148,13 @@ class JsonSchemaTest {
                         R2R, "--target", "cortexm", "--pins", "PA0-PA5", "--cpu-clock", "72MHz", "--hold", "1s"),
                 c("calibrate plan: 10 bits, no sweep program", "calibrate-plan", "calibrate", "plan", "--topology",
                         "r2r", "--bits", "10"),
+                c("calibrate plan: a recording sweep for avr", "calibrate-plan", "calibrate", "plan", "--ladder",
+                        R2R, "--recording", "--target", "avr", "--pins", "PD2-PD7", "--cpu-clock", "16MHz"),
+                c("calibrate plan: 10 bits for a 3½-digit meter", "calibrate-plan", "calibrate", "plan",
+                        "--topology", "weighted", "--bits", "10", "--meter-counts", "2000"),
+                c("calibrate listen: a recorded sweep, one meter reading", "calibrate-listen", "calibrate", "listen",
+                        "@recording", "--topology", "r2r", "--bits", "6", "--tolerance", "1%", "--hold", "20ms",
+                        "--board", "b5", "--date", "2026-05-01", "--full-scale-reading", "4.98V"),
                 c("calibrate fit: with the ladder", "calibrate-fit", "calibrate", "fit", READINGS, "--ladder", R2R,
                         "--board", "g1", "--date", "2026-05-01"),
                 c("calibrate fit: without a ladder, meter step given", "calibrate-fit", "calibrate", "fit", READINGS,
@@ -148,6 +169,7 @@ class JsonSchemaTest {
             a.add(switch (s) {
                 case "@tone" -> tone.toString();
                 case "@chord" -> chord.toString();
+                case "@recording" -> recording.toString();
                 case "@bare" -> bareProject(out.resolveSibling(out.getFileName() + "-project")).toString();
                 default -> s;
             });

@@ -79,7 +79,7 @@ class AvrSimulatorTest {
     @TempDir
     static Path root;
 
-    /** What a build varies: nothing, its sounds' length, how main() plays it, or the pin strategy. */
+    /** What a build varies: nothing, its sounds' length, how main() plays it, the pin strategy, the sweep. */
     enum Variant {
         /** main() plays sound 1 (or loops it) and idles. */
         PLAIN,
@@ -88,7 +88,9 @@ class AvrSimulatorTest {
         /** The other sound is long enough for 32-bit sample indices. */
         WIDE,
         /** main() loops sound 1 and releases it after some {@link #RELEASE_AFTER_TICKS} ticks. */
-        RELEASED
+        RELEASED,
+        /** A sweep for a sound card's recording (its longer branch: which hold comes next). */
+        RECORDING
     }
 
     /** One AVR build: pins, storage, engine, sample rate, timer and how main() plays it. */
@@ -103,6 +105,10 @@ class AvrSimulatorTest {
             return String.format(Locale.ROOT, "%-48s %-8s %-5s %5d Hz %s", pins
                     + (variant == Variant.PLAIN ? "" : " (" + variant.name().toLowerCase(Locale.ROOT) + ")"),
                     storage.optionName(), engine.optionName(), rateHz, timer.optionName());
+        }
+
+        boolean recording() {
+            return variant == Variant.RECORDING;
         }
 
         boolean isClip() {
@@ -208,6 +214,8 @@ class AvrSimulatorTest {
                 out.add(new Build(pins, storage, PlaybackEngine.DDS, 8000, TimerKind.AVR_TIMER1));
             }
             out.add(new Build(pins, SampleStorage.UNPACKED, PlaybackEngine.SWEEP, 1000, TimerKind.AVR_TIMER1));
+            out.add(new Build(pins, SampleStorage.UNPACKED, PlaybackEngine.SWEEP, 1000, TimerKind.AVR_TIMER1,
+                    Variant.RECORDING));
         }
         return out.stream();
     }
@@ -345,7 +353,9 @@ class AvrSimulatorTest {
                 request.sound("wave", Codes.of(bits, b.rateHz(), codes(bits, 256, 5))).dds(DdsSpec.of(440));
                 break;
             case SWEEP:
-                request.sweep(SweepSpec.holding(bits, codes(bits, 64, 5), 1));
+                // a recording sweep of one-tick steps takes its longer branch (which hold comes next) every tick
+                request.sweep(b.recording() ? SweepSpec.recording(bits, codes(bits, 64, 5), 1, 8, 1)
+                        : SweepSpec.holding(bits, codes(bits, 64, 5), 1));
                 break;
             default:
                 int other = b.variant() == Variant.WIDE ? WIDE_OTHER_SAMPLES : 50;

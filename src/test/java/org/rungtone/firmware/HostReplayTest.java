@@ -15,6 +15,8 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.EnumSource;
 import org.junit.jupiter.params.provider.MethodSource;
+import org.rungtone.calibrate.MeasurementPlan;
+import org.rungtone.calibrate.RecordingSweep;
 import org.rungtone.codec.TreadEncoder;
 import org.rungtone.codec.TreadStream;
 import org.rungtone.codec.Weighting;
@@ -216,6 +218,34 @@ class HostReplayTest {
                 format(tickWrites(events)));
         long ticks = events.stream().filter(e -> e.kind() == 'T').count();
         assertEquals(600 + debounce, ticks, "the press after the last code ends the sweep");
+    }
+
+    static Stream<Arguments> recordingTargets() {
+        return Stream.of(Arguments.of("generic", "PB0,PB1,PD7,PD6,PC0,PC1"), Arguments.of("rp2040", "GPIO2-GPIO7"));
+    }
+
+    @ParameterizedTest(name = "{0} {1}")
+    @MethodSource("recordingTargets")
+    void recordingSweepPutsThePatternsAndThePlanOnThePinsAtTheirTicks(String family, String pins) {
+        // every 6-bit code held 30 ms, with 3 returns to code 0, between the two 31-step patterns of 20 ms
+        RecordingSweep sweep = RecordingSweep.of(MeasurementPlan.everyCode(LevelTable.ideal(6, 5.0)), 0.030);
+        int[] steps = sweep.stepCodes();
+        FirmwareRequest r = FirmwareRequest.builder().family(family).name("mock").toolVersion("test").pins(pins)
+                .portWidth(family.equals("rp2040") ? 32 : 8).storage(SampleStorage.UNPACKED)
+                .sweep(SweepSpec.recording(6, steps, 30, sweep.patternSteps(), RecordingSweep.PATTERN_TICKS))
+                .build();
+        List<Event> events = MockPortRun.run(r, dir, false);
+        assertEquals(steps[0], events.stream().filter(e -> e.kind() == 'S').findFirst().orElseThrow().code());
+        // step i (i >= 1) begins at tick start[i]; it goes out in the tick of that index counted from 1
+        long[] start = sweep.stepStartTicks();
+        List<String> want = new ArrayList<>();
+        for (int i = 1; i < steps.length; i++) {
+            want.add((start[i] - 1) + ":" + steps[i]);
+        }
+        assertEquals(want, format(tickWrites(events)));
+        assertEquals(start[steps.length], events.stream().filter(e -> e.kind() == 'T').count(),
+                "done when the last pattern step has been held");
+        assertEquals(62 * 20 + (64 + 3) * 30, start[steps.length], "two patterns of 31 x 20 ticks, 67 steps x 30");
     }
 
     static Stream<Arguments> rp2040PinMaps() {

@@ -9,12 +9,12 @@ import org.rungtone.quantize.Codes;
  * The requests that exercise every template of a family: contiguous, scattered, multi-port and wide pin maps
  * (plus forced strategies), packed and unpacked storage and one Tread store per pin case (tread2, tread3 and
  * tread4 in turn, clip and loop engines: Tread cannot serve the dds engine), every engine, the sweep with and
- * without a button, and the family's timers in turn. Each request has its own symbol prefix ({@code c000},
- * {@code c001}, ...), so one family's files can be compiled in one run.
+ * without a button and for a recording, and the family's timers in turn. Each request has its own symbol
+ * prefix ({@code c000}, {@code c001}, ...), so one family's files can be compiled in one run.
  */
 final class TemplateMatrix {
-    /** Engine and storage combinations per pin case: three engines twice, two sweeps, two Tread engines. */
-    static final int CASES_PER_PIN_MAP = 10;
+    /** Engine and storage combinations per pin case: three engines twice, three sweeps, two Tread engines. */
+    static final int CASES_PER_PIN_MAP = 11;
 
     private TemplateMatrix() {
     }
@@ -27,7 +27,8 @@ final class TemplateMatrix {
      * One combination.
      *
      * @param name the symbol prefix
-     * @param engine clip, loop, dds, sweep or button (a sweep advanced by a button)
+     * @param engine clip, loop, dds, sweep, button (a sweep advanced by a button) or record (a sweep for a
+     *     recording)
      */
     record Case(String name, String engine, FirmwareRequest request) {
     }
@@ -92,7 +93,7 @@ final class TemplateMatrix {
             for (SampleStorage storage : List.of(SampleStorage.UNPACKED, SampleStorage.PACKED, tread)) {
                 // the sweep stores no samples: its code does not depend on the storage
                 List<String> engines = storage == SampleStorage.UNPACKED
-                        ? List.of("clip", "loop", "dds", "sweep", "button")
+                        ? List.of("clip", "loop", "dds", "sweep", "button", "record")
                         : storage == SampleStorage.PACKED ? List.of("clip", "loop", "dds") : List.of("clip", "loop");
                 for (String engine : engines) {
                     String name = String.format(Locale.ROOT, "c%03d", n);
@@ -127,6 +128,9 @@ final class TemplateMatrix {
                         .dds(DdsSpec.of(440));
             case "sweep":
                 return b.sweep(SweepSpec.holding(bits, new int[] {0, (1 << bits) - 1, 1}, 500));
+            case "record":
+                return b.sweep(SweepSpec.recording(bits, new int[] {0, (1 << bits) - 1, 0, 1, 2, 0, (1 << bits) - 1},
+                        40, 2, 20));
             default:
                 return b.sweep(SweepSpec.onButton(bits, new int[] {0, 3, 1 << (bits - 1)}, button));
         }

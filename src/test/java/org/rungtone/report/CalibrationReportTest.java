@@ -54,8 +54,11 @@ class CalibrationReportTest {
     void jsonListsTheCodesMetersAndFilesUnderStableKeys() {
         Map<String, Object> json = CalibrationReport.planJson(plan(2, Optional.empty()), FILES, Path.of("cal"), "9.9");
         assertEquals(List.of("schema_version", "report", "tool", "version", "ladder", "bits", "every_code", "lsb_v",
-                "min_v", "max_v", "codes", "meters", "hold_s", "button_pin", "sweep", "warnings", "files"),
-                List.copyOf(json.keySet()));
+                "min_v", "max_v", "codes", "meters", "hold_s", "button_pin", "sweep", "warnings", "meter", "recording",
+                "files"), List.copyOf(json.keySet()));
+        // a plan read with a meter of unknown count: neither applies
+        assertEquals(null, json.get("meter"));
+        assertEquals(null, json.get("recording"));
         assertEquals("calibrate-plan", json.get("report"));
         assertEquals(8, json.get("bits"));
         assertEquals(26, ((List<?>) json.get("codes")).size());

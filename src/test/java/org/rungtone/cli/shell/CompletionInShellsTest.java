@@ -45,7 +45,7 @@ class CompletionInShellsTest {
         m.put("rungtone init --topology ", "r2r weighted");
         m.put("rungtone ladder --series E1", "E12 E192");
         m.put("rungtone calibrate plan --timer ", "alarm general16 general32 systick timer0 timer1 timer2");
-        m.put("rungtone calibrate ", "fit plan simulate");
+        m.put("rungtone calibrate ", "fit listen plan simulate");
         m.put("rungtone build gre", "greenhouse.toml");
         m.put("rungtone survey ala", "alarm.rung");
         m.put("rungtone build --ladder bo", "board.toml");
