@@ -104,6 +104,15 @@ public record ReconstructionFilter(Kind kind, double cutoffHz, double q) {
         return 20 * Math.log10(magnitude(hz));
     }
 
+    /**
+     * The record's usual text, written out: the generated method builds its method handles on first use, which
+     * costs a start-up tens of milliseconds, and the command line turns every option value into text.
+     */
+    @Override
+    public String toString() {
+        return "ReconstructionFilter[kind=" + kind + ", cutoffHz=" + cutoffHz + ", q=" + q + "]";
+    }
+
     /** Short description for reports: "none", "RC 3.4 kHz", "2nd order 3.4 kHz Q 0.71". */
     public String describe() {
         switch (kind) {

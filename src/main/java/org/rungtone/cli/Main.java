@@ -1,10 +1,12 @@
 package org.rungtone.cli;
 
 import java.io.PrintWriter;
+import java.util.List;
 import org.rungtone.cli.shell.HelpSections;
 import org.rungtone.cli.shell.Mistyped;
 import org.rungtone.cli.shell.Terminal;
 import org.rungtone.internal.InputError;
+import org.rungtone.report.PlotWarmUp;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.ParseResult;
@@ -16,9 +18,7 @@ import picocli.CommandLine.ParseResult;
         description = {"Turns sounds and waveform scripts into firmware for resistor-ladder DACs on GPIO pins, "
             + "and tells you how the result will sound on your board.", ""},
         exitCodeListHeading = "%nExit codes:%n",
-        exitCodeList = {
-            " 0:done",
-            " 1:bad input (a file or value you can fix; one line says which)",
+        exitCodeList = {" 0:done", " 1:bad input (a file or value you can fix; one line says which)",
             " 2:bad usage (unknown option, missing argument)",
             " 3:internal error (please report it with --verbose output)"},
         footer = {"%nRun 'rungtone COMMAND --help' for the options of a command; start with 'rungtone demo'."})
@@ -50,6 +50,9 @@ public final class Main implements Runnable {
             }
             System.exit(0);
         }
+        if (args.length > 0 && (args[0].equals("build") || args[0].equals("demo"))) {
+            PlotWarmUp.start(); // these draw plots: load that machinery on the other core while options parse
+        }
         int code;
         try {
             CommandLine cl = newCommandLine(args);
@@ -58,7 +61,7 @@ public final class Main implements Runnable {
         } catch (OutOfMemoryError e) {
             System.err.println("rungtone: error: out of memory for this input; give Java more with"
                     + " RUNGTONE_JAVA_OPTS=-Xmx4g (or shorten the sound)");
-            if (java.util.Arrays.asList(args).contains("--verbose")) {
+            if (List.of(args).contains("--verbose")) {
                 e.printStackTrace();
             }
             code = EXIT_INTERNAL;
@@ -67,23 +70,24 @@ public final class Main implements Runnable {
     }
 
     /**
-     * The subcommands in help order. They are added in code rather than in the annotation so that a run of
-     * one command builds only that command's model: picocli reads every option annotation of every class it
-     * is given, which costs a tenth of a second at start for all of them.
+     * The subcommands in help order, added in code so that a run of one command builds only that command's
+     * model (picocli reads every option annotation of every class it is given: a tenth of a second at start),
+     * and made by a switch, as a map of constructor references would load every command class at start.
      */
-    private static final java.util.Map<String, java.util.function.Supplier<Object>> SUBCOMMANDS = subcommands();
+    private static final List<String> SUBCOMMANDS = List.of("build", "calibrate", "demo", "init", "ladder", "survey",
+            "completion", "help");
 
-    private static java.util.Map<String, java.util.function.Supplier<Object>> subcommands() {
-        java.util.Map<String, java.util.function.Supplier<Object>> m = new java.util.LinkedHashMap<>();
-        m.put("build", BuildCommand::new);
-        m.put("calibrate", CalibrateCommand::new);
-        m.put("demo", DemoCommand::new);
-        m.put("init", InitCommand::new);
-        m.put("ladder", LadderCommand::new);
-        m.put("survey", SurveyCommand::new);
-        m.put("completion", CompletionCommand::new);
-        m.put("help", CommandLine.HelpCommand::new);
-        return m;
+    private static Object subcommand(String name) {
+        return switch (name) {
+            case "build" -> new BuildCommand();
+            case "calibrate" -> new CalibrateCommand();
+            case "demo" -> new DemoCommand();
+            case "init" -> new InitCommand();
+            case "ladder" -> new LadderCommand();
+            case "survey" -> new SurveyCommand();
+            case "completion" -> new CompletionCommand();
+            default -> new CommandLine.HelpCommand();
+        };
     }
 
     /** A configured command line with every subcommand, for tests that capture its output. */
@@ -98,10 +102,10 @@ public final class Main implements Runnable {
     static CommandLine newCommandLine(String[] args) {
         CommandLine cl = new CommandLine(new Main());
         String first = args.length > 0 ? args[0] : "";
-        boolean alone = SUBCOMMANDS.containsKey(first) && !first.equals("help") && !first.equals("completion");
-        for (java.util.Map.Entry<String, java.util.function.Supplier<Object>> e : SUBCOMMANDS.entrySet()) {
-            if (!alone || e.getKey().equals(first)) {
-                cl.addSubcommand(e.getKey(), e.getValue().get());
+        boolean alone = SUBCOMMANDS.contains(first) && !first.equals("help") && !first.equals("completion");
+        for (String name : SUBCOMMANDS) {
+            if (!alone || name.equals(first)) {
+                cl.addSubcommand(name, subcommand(name));
             }
         }
         cl.setExecutionExceptionHandler(Main::handleFailure);
@@ -154,11 +158,6 @@ public final class Main implements Runnable {
     }
 
     private static boolean isVerbose(ParseResult parsed) {
-        for (ParseResult p = parsed; p != null; p = p.subcommand()) {
-            if (p.hasMatchedOption("--verbose")) {
-                return true;
-            }
-        }
-        return false;
+        return parsed != null && (parsed.hasMatchedOption("--verbose") || isVerbose(parsed.subcommand()));
     }
 }

@@ -115,10 +115,12 @@ public final class Build {
         Map<String, Double> laps = new LinkedHashMap<>(r.stageMillis());
         laps.putAll(watch.laps());
         BuildSummary summary = summary(r, firmwareLines, firmwareFacts, flash, files, warnings, laps);
-        AtomicFiles.writeString(txt, BuildReport.text(summary));
-        Json.write(json, BuildReport.json(summary));
-        HtmlReport.write(html, new HtmlReport.Page(plan.symbol(), toolVersion, List.of(), List.of(summary),
-                List.of(), flash, plan.firmware().flashBudgetBytes(), List.of(), Optional.empty(), List.of()));
+        // the page (with its embedded plots) is written on another core while the text and JSON reports are
+        Jobs.alongside(() -> {
+            AtomicFiles.writeString(txt, BuildReport.text(summary));
+            Json.write(json, BuildReport.json(summary));
+        }, () -> HtmlReport.write(html, new HtmlReport.Page(plan.symbol(), toolVersion, List.of(), List.of(summary),
+                List.of(), flash, plan.firmware().flashBudgetBytes(), List.of(), Optional.empty(), List.of())));
         return summary;
     }
 

@@ -8,6 +8,21 @@ final class Jobs {
     private Jobs() {
     }
 
+    /**
+     * Runs {@code elsewhere} on another core while {@code here} runs on this thread, and returns when both are
+     * done (so that a failure never leaves the other writing into a folder that goes), passing on this
+     * thread's failure first.
+     */
+    static void alongside(Runnable here, Runnable elsewhere) {
+        CompletableFuture<Void> other = CompletableFuture.runAsync(elsewhere);
+        try {
+            here.run();
+        } finally {
+            other.handle((done, failed) -> null).join();
+        }
+        join(other);
+    }
+
     /** Waits for a job, passing on the user's input errors and programming errors unwrapped. */
     static <T> T join(CompletableFuture<T> job) {
         try {

@@ -20,6 +20,12 @@ public final class SurveyLists {
             ranges = List.copyOf(ranges);
         }
 
+        /** The record's usual text, written out (see {@link RateList#toString}). */
+        @Override
+        public String toString() {
+            return "BitList[text=" + text + ", ranges=" + ranges + "]";
+        }
+
         /**
          * The depths in order.
          *
@@ -42,6 +48,11 @@ public final class SurveyLists {
 
         /** Depths {@code first} to {@code last}, both included; a single depth is a range of one. */
         public record Range(int first, int last) {
+            /** The record's usual text, written out (see {@link RateList#toString}). */
+            @Override
+            public String toString() {
+                return "Range[first=" + first + ", last=" + last + "]";
+            }
         }
 
         /**
@@ -82,6 +93,15 @@ public final class SurveyLists {
         /** Copies the rates. */
         public RateList {
             ratesHz = List.copyOf(ratesHz);
+        }
+
+        /**
+         * The record's usual text, written out: the generated method builds its method handles on first use,
+         * which costs a start-up tens of milliseconds, and the command line turns every option value into text.
+         */
+        @Override
+        public String toString() {
+            return "RateList[text=" + text + ", ratesHz=" + ratesHz + "]";
         }
 
         /**

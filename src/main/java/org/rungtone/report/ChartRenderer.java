@@ -80,6 +80,15 @@ final class ChartRenderer {
         }
     }
 
+    /**
+     * The axis's labels, each value formatted once: XChart labels evenly spaced data (a spectrum's bins) by
+     * trying every n-th value for n = 1, 2, ... until the labels fit, which formats each value many times.
+     */
+    private static java.util.function.Function<Double, String> remembered(PlotAxis axis) {
+        java.util.Map<Double, String> labels = new java.util.HashMap<>();
+        return value -> labels.computeIfAbsent(value, axis::format);
+    }
+
     private static XYChart xchart(Plots.Chart chart) {
         XYChart c = new XYChartBuilder().width(WIDTH).height(HEIGHT).title(chart.title())
                 .xAxisTitle(chart.x().label()).yAxisTitle(chart.y().label()).build();
@@ -104,8 +113,8 @@ final class ChartRenderer {
         st.setYAxisMin(chart.y().min());
         st.setYAxisMax(chart.y().max());
         // XChart's (invisible) labels take the room ours need
-        st.setxAxisTickLabelsFormattingFunction(chart.x()::format);
-        st.setyAxisTickLabelsFormattingFunction(chart.y()::format);
+        st.setxAxisTickLabelsFormattingFunction(remembered(chart.x()));
+        st.setyAxisTickLabelsFormattingFunction(remembered(chart.y()));
         st.setAntiAlias(true);
         int i = 0;
         for (Plots.Series s : chart.series()) {

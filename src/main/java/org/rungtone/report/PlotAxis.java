@@ -5,6 +5,7 @@ import java.math.RoundingMode;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.regex.Pattern;
 import org.rungtone.internal.Checks;
 
 /**
@@ -18,6 +19,9 @@ import org.rungtone.internal.Checks;
  * @param step the distance between ticks: 1, 2 or 5 × 10^k
  */
 public record PlotAxis(String label, double min, double max, double step) {
+    /** "-0", "-0.0", ...: a value that rounds to zero from below, labelled without its sign. */
+    private static final Pattern NEGATIVE_ZERO = Pattern.compile("-0(\\.0*)?");
+
     /** Intervals between ticks, at most: at least 34 pixels apart on a 340-pixel-high plot. */
     static final int MAX_INTERVALS = 10;
 
@@ -86,7 +90,7 @@ public record PlotAxis(String label, double min, double max, double step) {
         boolean grouped = Math.max(Math.abs(min), Math.abs(max)) >= 10_000;
         String pattern = grouped ? "%,." + decimals + "f" : "%." + decimals + "f";
         String text = String.format(Locale.ROOT, pattern, value);
-        return text.matches("-0(\\.0*)?") ? text.substring(1) : text;
+        return NEGATIVE_ZERO.matcher(text).matches() ? text.substring(1) : text;
     }
 
     /** The same axis with another label. */
