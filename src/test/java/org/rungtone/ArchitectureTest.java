@@ -12,7 +12,7 @@ import com.tngtech.archunit.lang.ArchRule;
 /**
  * The package layers of DESIGN.md, checked on the compiled main classes (the generated parser included).
  *
- * <p>Data flows source/script → condition → quantize → calibrate → analysis → firmware → report → project →
+ * <p>Data flows source/script → condition → quantize → codec → calibrate → analysis → firmware → report → project →
  * cli, and a package may use only the packages listed for it below (besides itself, the JDK and third-party
  * libraries). Where the flow leaves a choice, today's imports decide:
  * <ul>
@@ -33,10 +33,12 @@ import com.tngtech.archunit.lang.ArchRule;
  * <tr><td>script (with ast, eval, parser)</td><td>source, internal</td><td>source, internal</td></tr>
  * <tr><td>condition</td><td>script, source, internal</td><td>source, internal</td></tr>
  * <tr><td>quantize</td><td>condition, script, source, ladder, internal</td><td>ladder, source, internal</td></tr>
- * <tr><td>calibrate</td><td>quantize, condition, script, source, ladder, internal</td><td>ladder, internal</td></tr>
+ * <tr><td>codec</td><td>quantize and everything quantize may use</td><td>quantize, ladder, source, internal</td></tr>
+ * <tr><td>calibrate</td><td>codec, quantize, condition, script, source, ladder, internal</td>
+ * <td>ladder, internal</td></tr>
  * <tr><td>analysis</td><td>calibrate and everything calibrate may use</td>
- * <td>condition, quantize, ladder, source, internal</td></tr>
- * <tr><td>firmware</td><td>analysis and everything analysis may use</td><td>quantize, internal</td></tr>
+ * <td>codec, condition, quantize, ladder, source, internal</td></tr>
+ * <tr><td>firmware</td><td>analysis and everything analysis may use</td><td>codec, quantize, internal</td></tr>
  * <tr><td>report</td><td>firmware and everything firmware may use</td><td>analysis, internal</td></tr>
  * <tr><td>project</td><td>report and everything report may use</td><td>all of the above</td></tr>
  * <tr><td>cli</td><td>everything; nothing uses cli</td><td>all of the above</td></tr>
@@ -50,8 +52,8 @@ import com.tngtech.archunit.lang.ArchRule;
  */
 @AnalyzeClasses(packages = "org.rungtone", importOptions = ImportOption.DoNotIncludeTests.class)
 final class ArchitectureTest {
-    private static final String[] BELOW_ANALYSIS = {"calibrate", "quantize", "condition", "script", "source",
-        "ladder", "internal"};
+    private static final String[] BELOW_ANALYSIS = {"calibrate", "codec", "quantize", "condition", "script",
+        "source", "ladder", "internal"};
 
     @ArchTest
     static final ArchRule PACKAGES_USE_ONLY_THE_LAYERS_BEFORE_THEM = layeredArchitecture()
@@ -62,6 +64,7 @@ final class ArchitectureTest {
             .layer("script").definedBy("org.rungtone.script..")
             .layer("condition").definedBy("org.rungtone.condition..")
             .layer("quantize").definedBy("org.rungtone.quantize..")
+            .layer("codec").definedBy("org.rungtone.codec..")
             .layer("calibrate").definedBy("org.rungtone.calibrate..")
             .layer("analysis").definedBy("org.rungtone.analysis..")
             .layer("firmware").definedBy("org.rungtone.firmware..")
@@ -74,8 +77,10 @@ final class ArchitectureTest {
             .whereLayer("script").mayOnlyAccessLayers("source", "internal")
             .whereLayer("condition").mayOnlyAccessLayers("script", "source", "internal")
             .whereLayer("quantize").mayOnlyAccessLayers("condition", "script", "source", "ladder", "internal")
-            .whereLayer("calibrate").mayOnlyAccessLayers("quantize", "condition", "script", "source", "ladder",
+            .whereLayer("codec").mayOnlyAccessLayers("quantize", "condition", "script", "source", "ladder",
                     "internal")
+            .whereLayer("calibrate").mayOnlyAccessLayers("codec", "quantize", "condition", "script", "source",
+                    "ladder", "internal")
             .whereLayer("analysis").mayOnlyAccessLayers(BELOW_ANALYSIS)
             .whereLayer("firmware").mayOnlyAccessLayers(plus("analysis"))
             .whereLayer("report").mayOnlyAccessLayers(plus("firmware", "analysis"))

@@ -10,6 +10,9 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.function.DoubleFunction;
+import org.rungtone.codec.TreadEncoder;
+import org.rungtone.codec.TreadFormat;
+import org.rungtone.codec.Weighting;
 import org.rungtone.internal.Checks;
 import org.rungtone.ladder.LevelTable;
 import org.rungtone.quantize.Quantizer;
@@ -26,10 +29,13 @@ import org.rungtone.source.Signal;
  * {@link SurveyRow}), which shows what each rate loses; a target is then checked against those (the listener
  * SNR in the 20 kHz band as the SINAD, and ENOB re full scale from it), so a rate that loses audible treble
  * does not reach a target its at-rate figures would. Flash bytes
- * are {@code n·(N ≤ 8 ? 1 : 2)} unpacked and {@code ceil(n·N/8)} bit-packed for n samples. The chosen row
- * fits the budget, reaches the target and needs the fewest flash bytes (packed or unpacked, as the spec
- * says); ties go to fewer bits (fewer pins and resistors), then to the lower rate (less CPU). Without a
- * target nothing is chosen.
+ * are {@code n·(N ≤ 8 ? 1 : 2)} unpacked and {@code ceil(n·N/8)} bit-packed for n samples. Each Tread store
+ * the spec names adds a row to every cell whose depth it decodes to: the reference encoded through the same
+ * quantizer ({@link TreadEncoder}) and measured as the decoder puts it out, its bytes the stream, the
+ * decoder's tables and one reset point. The chosen row fits the budget, reaches the target and needs the
+ * fewest flash bytes (packed or unpacked, as the spec says, for the plain codes); ties go to fewer bits
+ * (fewer pins and resistors), then to the lower rate (less CPU), then to the plain codes (no decoding).
+ * Without a target nothing is chosen.
  *
  * <p>Cells run in parallel on the spec's number of threads; the result does not depend on the scheduling
  * (every cell has the same seed and its own random stream).
@@ -100,7 +106,7 @@ public final class Survey {
             Checks.checkArgument(t.bits() == bits, "the table for %d bits has %d bits", bits, t.bits());
             tables.add(t);
         }
-        int total = bitDepths.size() * rates.size();
+        int total = cellCount(spec);
         ExecutorService pool = Executors.newFixedThreadPool(Math.min(spec.threads(), total), runnable -> {
             Thread t = new Thread(runnable, "rungtone-survey");
             t.setDaemon(true);
@@ -123,11 +129,16 @@ public final class Survey {
                 for (int b = 0; b < bitDepths.size(); b++) {
                     AudioMetrics m = metrics.get(r);
                     LevelTable table = tables.get(b);
-                    cellTasks.add(() -> {
-                        SurveyRow row = cell(spec, m, table, listener);
-                        counter.done();
-                        return row;
-                    });
+                    List<Optional<TreadFormat>> stores = new ArrayList<>(List.of(Optional.empty()));
+                    spec.codecs().stream().filter(f -> decodes(f, table.bits())).map(Optional::of)
+                            .forEach(stores::add);
+                    for (Optional<TreadFormat> codec : stores) {
+                        cellTasks.add(() -> {
+                            SurveyRow row = cell(spec, m, table, listener, codec);
+                            counter.done();
+                            return row;
+                        });
+                    }
                 }
             }
             List<SurveyRow> rows = getAll(pool.invokeAll(cellTasks));
@@ -151,15 +162,45 @@ public final class Survey {
                 spec.seed()).apply(reference);
     }
 
+    /**
+     * The codes of one row exactly as the survey measures it: {@link #quantize}, or for a Tread store what its
+     * decoder makes of the reference encoded through that quantizer. For previews of a row.
+     */
+    public static Quantizer.Quantized codes(SurveySpec spec, Signal reference, LevelTable table,
+            Optional<TreadFormat> codec) {
+        if (codec.isEmpty()) {
+            return quantize(spec, reference, table);
+        }
+        Quantizer q = new Quantizer(table, table.minVolts(), table.maxVolts(), spec.dither(), spec.shaping(),
+                spec.seed());
+        double rate = reference.sampleRateHz();
+        Weighting w = Weighting.aWeighted(rate, spec.inBandCutoffHz().applyAsDouble(rate));
+        return new TreadEncoder(codec.get(), q, w).encode(reference).quantized();
+    }
+
+    /** The rows a survey of {@code spec} makes: one per cell, and one per Tread store that fits its depth. */
+    public static int cellCount(SurveySpec spec) {
+        int total = 0;
+        for (int bits : spec.bitDepths()) {
+            total += spec.ratesHz().size() * (1 + (int) spec.codecs().stream().filter(f -> decodes(f, bits)).count());
+        }
+        return total;
+    }
+
+    /** True when {@code codec} decodes to {@code bits}-bit codes. */
+    private static boolean decodes(TreadFormat codec, int bits) {
+        return bits >= codec.minLadderBits() && bits <= TreadFormat.MAX_LADDER_BITS;
+    }
+
     private static SurveyRow cell(SurveySpec spec, AudioMetrics metrics, LevelTable table,
-            ListenerMetrics listener) {
+            ListenerMetrics listener, Optional<TreadFormat> codec) {
         Signal ref = metrics.reference();
-        Quantizer.Quantized quantized = quantize(spec, ref, table);
+        Quantizer.Quantized quantized = codes(spec, ref, table, codec);
         QualityReport r = metrics.measure("survey", quantized.codes(), table);
         int n = ref.length();
         int bits = table.bits();
-        long unpacked = SurveyRow.unpackedBytes(n, bits);
-        long packed = SurveyRow.packedBytes(n, bits);
+        long unpacked = codec.map(f -> SurveyRow.treadBytes(f, n, bits)).orElse(SurveyRow.unpackedBytes(n, bits));
+        long packed = codec.map(f -> SurveyRow.treadBytes(f, n, bits)).orElse(SurveyRow.packedBytes(n, bits));
         long counted = spec.packed() ? packed : unpacked;
         boolean fits = spec.flashBudgetBytes().isEmpty() || counted <= spec.flashBudgetBytes().getAsLong();
         double listenerSnr = Double.NaN;
@@ -175,7 +216,7 @@ public final class Survey {
                 r.enobFullScaleBits()) : t.isMet(heardSnr, enobFullScale(heardSnr, r))).orElse(false);
         return new SurveyRow(bits, ref.sampleRateHz(), n, r.sinadDb(), r.inBandSnrDb(), r.aWeightedSnrDb(),
                 r.enobFullScaleBits(), quantized.clippedSamples(), unpacked, packed, fits, reaches, false,
-                listenerSnr, listenerWeighted);
+                listenerSnr, listenerWeighted, codec);
     }
 
     /**
@@ -191,7 +232,8 @@ public final class Survey {
         Comparator<SurveyRow> order = Comparator
                 .comparingLong((SurveyRow r) -> spec.packed() ? r.flashBytesPacked() : r.flashBytesUnpacked())
                 .thenComparingInt(SurveyRow::bits)
-                .thenComparingDouble(SurveyRow::rateHz);
+                .thenComparingDouble(SurveyRow::rateHz)
+                .thenComparing(r -> r.codec().isPresent());
         Optional<SurveyRow> best = rows.stream().filter(r -> r.fits() && r.reachesTarget()).min(order);
         List<SurveyRow> out = new ArrayList<>(rows.size());
         for (SurveyRow r : rows) {

@@ -6,6 +6,7 @@ import java.util.Optional;
 import java.util.OptionalLong;
 import java.util.function.DoubleUnaryOperator;
 import java.util.function.IntFunction;
+import org.rungtone.codec.TreadFormat;
 import org.rungtone.internal.Checks;
 import org.rungtone.ladder.LevelTable;
 import org.rungtone.quantize.Dither;
@@ -14,11 +15,12 @@ import org.rungtone.quantize.ErrorFilter;
 /**
  * What a {@link Survey} explores: bit depths × sample rates, how each cell is quantized (dither, shaping,
  * seed, level table per bit depth), how it is judged (in-band cutoff per rate, target) and what it may cost
- * (flash budget, packed or unpacked samples). Immutable; build with {@link #builder()}.
+ * (flash budget, packed or unpacked samples) and which Tread stores to survey as well. Immutable; build with
+ * {@link #builder()}.
  *
  * <p>Defaults: bits 1..12; rates 8, 11.025, 16 and 22.05 kHz; TPDF dither; no shaping; seed 0; ideal
  * tables; in-band cutoff {@link AnalogModel#inBandTopHz} without a filter, min(rate/2, 20 kHz); no budget;
- * no target; unpacked bytes; one thread per core.
+ * no target; unpacked bytes; no Tread stores; one thread per core.
  */
 public final class SurveySpec {
     private final List<Integer> bitDepths;
@@ -31,6 +33,7 @@ public final class SurveySpec {
     private final long flashBudgetBytes;
     private final SurveyTarget target;
     private final boolean packed;
+    private final List<TreadFormat> codecs;
     private final int threads;
 
     private SurveySpec(Builder b) {
@@ -57,6 +60,7 @@ public final class SurveySpec {
         flashBudgetBytes = b.flashBudgetBytes;
         target = b.target;
         packed = b.packed;
+        codecs = List.copyOf(b.codecs);
         threads = b.threads;
     }
 
@@ -78,6 +82,7 @@ public final class SurveySpec {
         b.flashBudgetBytes = flashBudgetBytes;
         b.target = target;
         b.packed = packed;
+        b.codecs = new ArrayList<>(codecs);
         b.threads = threads;
         return b;
     }
@@ -132,6 +137,11 @@ public final class SurveySpec {
         return packed;
     }
 
+    /** The Tread stores surveyed besides the plain codes, in survey order. */
+    public List<TreadFormat> codecs() {
+        return codecs;
+    }
+
     /** Worker threads. */
     public int threads() {
         return threads;
@@ -149,6 +159,7 @@ public final class SurveySpec {
         private long flashBudgetBytes = -1;
         private SurveyTarget target;
         private boolean packed;
+        private List<TreadFormat> codecs = List.of();
         private int threads = Runtime.getRuntime().availableProcessors();
 
         private Builder() {
@@ -226,6 +237,15 @@ public final class SurveySpec {
         /** Count bit-packed bytes (true) or unpacked ones (false). */
         public Builder packed(boolean value) {
             packed = value;
+            return this;
+        }
+
+        /**
+         * Tread stores to survey as well: each cell whose depth the store decodes to ({@link
+         * TreadFormat#minLadderBits()} .. 12) gets a row of it.
+         */
+        public Builder codecs(List<TreadFormat> value) {
+            codecs = new ArrayList<>(value);
             return this;
         }
 

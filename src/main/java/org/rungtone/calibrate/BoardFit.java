@@ -37,12 +37,19 @@ public final class BoardFit {
      * @param resolutionVolts the meter's step; 0 to take it from the readings' digits
      * @param minVolts the lowest level the board can produce (buffer swing), or NaN
      * @param maxVolts the highest level the board can produce, or NaN
+     * @param keepReadings when every code was read, keep every reading in the table, outliers too (readings
+     *     a program made, which no typing error can touch; the outliers are still reported)
      */
-    public record Settings(double resolutionVolts, double minVolts, double maxVolts) {
+    public record Settings(double resolutionVolts, double minVolts, double maxVolts, boolean keepReadings) {
         /** Checks the values. */
         public Settings {
             Checks.checkArgument(resolutionVolts >= 0 && Double.isFinite(resolutionVolts),
                     "resolution must be 0 or positive: %s", resolutionVolts);
+        }
+
+        /** Settings for readings typed from a meter. */
+        public Settings(double resolutionVolts, double minVolts, double maxVolts) {
+            this(resolutionVolts, minVolts, maxVolts, false);
         }
 
         /** Resolution from the readings, no swing limit. */
@@ -55,14 +62,15 @@ public final class BoardFit {
     private record SwitchedTry(RobustFit.Outcome outcome, String note) {
     }
 
-    private static SwitchedTry trySwitchedLoad(int bits, int[] codes, double[] values, double floor) {
+    private static SwitchedTry trySwitchedLoad(int bits, int[] codes, double[] values, double[] root,
+            double floor) {
         int n = codes.length;
         int pb = 2 * bits + 1;
         if (n < pb + 1) {
             return new SwitchedTry(null, String.format(Locale.ROOT, "the switched-load model needs at least %d"
                     + " measured codes (2N + 2), there are %d", pb + 1, n));
         }
-        SwitchedLoadFit b = new SwitchedLoadFit(bits, codes, values);
+        SwitchedLoadFit b = new SwitchedLoadFit(bits, codes, values, root);
         RobustFit.Outcome ob = b.determined(RobustFit.rows(new boolean[n])) ? RobustFit.run(b, values, floor) : null;
         if (ob == null) {
             return new SwitchedTry(null, "the readings do not determine the switched-load model (each bit must also"
@@ -98,32 +106,34 @@ public final class BoardFit {
                 missingBasis.add(c);
             }
         }
-        SuperpositionFit a = new SuperpositionFit(bits, codes, values);
+        double q = settings.resolutionVolts() > 0 ? settings.resolutionVolts() : m.resolutionVolts();
+        double spread = m.repeatSpreadVolts();
+        double meter = Math.sqrt(q * q / 12 + spread * spread);
+        double floor = Math.max(meter, 1e-9 * Math.max(maxAbs, 1e-3));
+        double[] root = ReadingWeights.rootWeights(m, settings.resolutionVolts(), q, meter);
+        double[] weighted = ReadingWeights.scaled(values, root);
+        SuperpositionFit a = new SuperpositionFit(bits, codes, weighted, root);
         if (n == 0 || !a.determined(RobustFit.rows(new boolean[n]))) {
             throw new InputError(m.source() + ": cannot fit: no reading of " + describeCodes(missingBasis, bits)
                     + "; the superposition fit needs code 0 and each single-bit code (or other codes that"
                     + " stand in for them)" + alsoMissing(m, missingBasis));
         }
-        double q = settings.resolutionVolts() > 0 ? settings.resolutionVolts() : m.resolutionVolts();
-        double spread = m.repeatSpreadVolts();
-        double meter = Math.sqrt(q * q / 12 + spread * spread);
-        double floor = Math.max(meter, 1e-9 * Math.max(maxAbs, 1e-3));
 
-        RobustFit.Outcome oa = RobustFit.run(a, values, floor);
-        SwitchedTry tried = trySwitchedLoad(bits, codes, values, floor);
+        RobustFit.Outcome oa = RobustFit.run(a, weighted, floor);
+        SwitchedTry tried = trySwitchedLoad(bits, codes, weighted, root, floor);
         RobustFit.Outcome ob = tried.outcome();
         String bNote = tried.note();
-        Choice choice = choose(a, values, ob, bNote, bits, floor);
+        Choice choice = choose(a, weighted, ob, bNote, bits, floor);
         RobustFit.Outcome chosen = choice.useB ? ob : oa;
         BoardModel model = chosen.kind().model(chosen.theta());
         List<String> warnings = new ArrayList<>();
-        List<CodeResidual> residuals = residuals(means, chosen, model);
+        List<CodeResidual> residuals = residuals(means, chosen, model, root);
         List<Integer> outliers = new ArrayList<>();
         for (int i : chosen.outliers()) {
             outliers.add(codes[i]);
         }
         Table table = table(m, model, outliers, settings, warnings);
-        double[] levelSigmas = levelSigmas(chosen, m, table.measured, outliers, meter);
+        double[] levelSigmas = levelSigmas(chosen, m, table.measured, outliers, meter, root);
         uncertaintyWarning(levelSigmas, table, warnings);
         String reason = choice.reason + (table.measured ? "; every code was read, so the readings themselves are"
                 + " the profile's table" : "");
@@ -133,20 +143,21 @@ public final class BoardFit {
             sigmas.add(s);
         }
         return new FitReport(m.source(), bits, m.readings().size(), new ArrayList<>(m.unmeasured()), q, spread,
-                meter, summary(oa, a.key(), codes), ob == null
+                meter, summary(oa, a.key(), codes, root), ob == null
                         ? new ModelSummary("switched-load", Optional.empty(), 0, Double.NaN, Double.NaN, List.of(),
                                 bNote)
-                        : summary(ob, "switched-load", codes), model, reason, sigmas, residuals, outliers,
+                        : summary(ob, "switched-load", codes, root), model, reason, sigmas, residuals, outliers,
                 table.levels, table.measured, java.util.Arrays.stream(levelSigmas).boxed().toList(), warnings);
     }
 
     /**
      * The standard deviation of every level of the table. A fitted level's is the prediction's,
-     * {@code s·sqrt(g·(JᵀJ)⁻¹·gᵀ)} for the model's gradient g at that code and the fit's scale s; a read
-     * level's is the meter floor over the square root of its count of readings.
+     * {@code s·sqrt(g·(JᵀWJ)⁻¹·gᵀ)} for the model's gradient g at that code and the fit's scale s; a read
+     * level's is its own floor (the file's over the square root of its weight) over the square root of its
+     * count of readings.
      */
     private static double[] levelSigmas(RobustFit.Outcome o, Measurements m, boolean measured,
-            List<Integer> outliers, double floor) {
+            List<Integer> outliers, double floor, double[] root) {
         int n = 1 << m.bits();
         double[] sigma = new double[n];
         for (int k = 0; k < n; k++) {
@@ -154,9 +165,11 @@ public final class BoardFit {
                     o.rInverse()));
         }
         if (measured) {
-            for (CodeMean c : m.means()) {
+            List<CodeMean> means = m.means();
+            for (int i = 0; i < means.size(); i++) {
+                CodeMean c = means.get(i);
                 if (!outliers.contains(c.code())) {
-                    sigma[c.code()] = floor / Math.sqrt(c.count());
+                    sigma[c.code()] = floor / root[i] / Math.sqrt(c.count());
                 }
             }
         }
@@ -249,7 +262,8 @@ public final class BoardFit {
         return true;
     }
 
-    private static List<CodeResidual> residuals(List<CodeMean> means, RobustFit.Outcome o, BoardModel model) {
+    private static List<CodeResidual> residuals(List<CodeMean> means, RobustFit.Outcome o, BoardModel model,
+            double[] root) {
         List<CodeResidual> out = new ArrayList<>();
         for (int i = 0; i < means.size(); i++) {
             CodeMean c = means.get(i);
@@ -258,18 +272,18 @@ public final class BoardFit {
                     : o.unchecked()[i] ? CodeResidual.Status.UNCHECKED
                     : Math.abs(t) > RobustFit.THRESHOLD ? CodeResidual.Status.SUSPECT : CodeResidual.Status.OK;
             out.add(new CodeResidual(c.code(), c.meanVolts(), c.count(), c.stdVolts(), model.volts(c.code()),
-                    o.residual()[i], t, status));
+                    o.residual()[i] / root[i], t, status));
         }
         return out;
     }
 
-    private static ModelSummary summary(RobustFit.Outcome o, String key, int[] codes) {
+    private static ModelSummary summary(RobustFit.Outcome o, String key, int[] codes, double[] root) {
         int kept = o.kept();
         int p = o.theta().length;
         double max = 0;
         for (int i = 0; i < codes.length; i++) {
             if (!o.excluded()[i]) {
-                max = Math.max(max, Math.abs(o.residual()[i]));
+                max = Math.max(max, Math.abs(o.residual()[i] / root[i]));
             }
         }
         List<Integer> outliers = new ArrayList<>();
@@ -294,6 +308,9 @@ public final class BoardFit {
             }
             int limit = Math.max(1, v.length / 50);
             int replaced = 0;
+            if (s.keepReadings()) {
+                return new Table(LevelTable.of(bits, measured, "measured"), true, 0);
+            }
             if (outliers.size() <= limit) {
                 for (int c : outliers) {
                     measured[c] = v[c];

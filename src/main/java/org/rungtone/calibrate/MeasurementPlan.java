@@ -6,6 +6,7 @@ import java.util.BitSet;
 import java.util.Collections;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 import org.rungtone.internal.Checks;
@@ -56,6 +57,17 @@ public final class MeasurementPlan {
      * @throws org.rungtone.internal.InputError when verifyCount is negative
      */
     public static MeasurementPlan of(LevelTable expected, int verifyCount) {
+        return of(expected, verifyCount, Optional.empty());
+    }
+
+    /**
+     * The basis codes plus {@code verifyCount} verification codes chosen for {@code meter} when given
+     * ({@link MeterDesign}: most on the meter's finer ranges), else spread over the range; when they would
+     * cover every code, the plan measures every code in order.
+     *
+     * @throws org.rungtone.internal.InputError when verifyCount is negative
+     */
+    public static MeasurementPlan of(LevelTable expected, int verifyCount, Optional<MeterRanges> meter) {
         Checks.checkInput(verifyCount >= 0, "--verify must be 0 or more: %d", verifyCount);
         int bits = expected.bits();
         int n = 1 << bits;
@@ -71,7 +83,10 @@ public final class MeasurementPlan {
             return everyCode(expected);
         }
         List<Integer> checks = new ArrayList<>();
-        for (int j = 0; j < verifyCount; j++) {
+        if (meter.isPresent()) {
+            checks.addAll(MeterDesign.checks(expected, used, verifyCount, meter.get()));
+        }
+        for (int j = 0; meter.isEmpty() && j < verifyCount; j++) {
             double u = (0.5 + j * GOLDEN_STEP) % 1.0;
             int c = nearestFree(used, 1 + (int) Math.floor(u * (n - 2)), n);
             used.set(c);

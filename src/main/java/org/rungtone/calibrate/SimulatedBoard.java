@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.SplittableRandom;
 import org.rungtone.internal.Checks;
+import org.rungtone.internal.Setting;
 import org.rungtone.ladder.Ladder;
 import org.rungtone.ladder.LadderSpec;
 import org.rungtone.ladder.LevelTable;
@@ -40,8 +41,8 @@ public final class SimulatedBoard {
         public Meter {
             Checks.checkInput(Double.isFinite(noiseVolts) && noiseVolts >= 0, "meter noise must be 0 or positive:"
                     + " %s", noiseVolts);
-            Checks.checkInput(Double.isFinite(stepVolts) && stepVolts >= 0, "meter step must be 0 or positive: %s",
-                    stepVolts);
+            Setting.RESOLUTION.check(stepVolts >= 0 && stepVolts < 10, "must be 0 (exact) or a positive voltage"
+                    + " below 10 V: %s", stepVolts);
             Checks.checkInput(repeats >= 1 && repeats <= 100, "readings per code must be 1..100: %d", repeats);
         }
 

@@ -2,19 +2,21 @@ package org.rungtone.calibrate;
 
 /**
  * Fits {@link Superposition} by linear least squares: the design row of code k is
- * {@code [1, b_0(k), .., b_{N−1}(k)]}.
+ * {@code [1, b_0(k), .., b_{N−1}(k)]}, times the square root of the code's weight ({@link ReadingWeights}), so
+ * that {@link #predict} and {@link #gradient} are in the weighted fit's units; {@link #gradientAtCode} is not.
  */
 final class SuperpositionFit implements ModelKind {
     private final double[][] design;
     private final double[] values;
 
-    SuperpositionFit(int bits, int[] codes, double[] values) {
+    /** A fit of {@code values} (already scaled by {@code rootWeights}) at {@code codes}. */
+    SuperpositionFit(int bits, int[] codes, double[] values, double[] rootWeights) {
         this.values = values;
         design = new double[codes.length][bits + 1];
         for (int r = 0; r < codes.length; r++) {
-            design[r][0] = 1;
+            design[r][0] = rootWeights[r];
             for (int i = 0; i < bits; i++) {
-                design[r][i + 1] = codes[r] >> i & 1;
+                design[r][i + 1] = (codes[r] >> i & 1) * rootWeights[r];
             }
         }
     }

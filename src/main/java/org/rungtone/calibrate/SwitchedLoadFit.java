@@ -19,7 +19,9 @@ import org.apache.commons.math3.util.Pair;
  * in the design; its least-squares solution (exact for exact data) starts a Levenberg-Marquardt refinement of
  * the true residuals (Commons Math {@link LevenbergMarquardtOptimizer}; Moré, "The Levenberg-Marquardt
  * algorithm: implementation and theory", 1978). The Jacobian row is
- * {@code [1/D, b_i/D, −b_i·V/D]} with {@code D = 1 + Σ b_i·d_i}.
+ * {@code [1/D, b_i/D, −b_i·V/D]} with {@code D = 1 + Σ b_i·d_i}. Rows are scaled by the square root of their
+ * code's weight ({@link ReadingWeights}): {@link #predict} and {@link #gradient} are in the weighted fit's
+ * units, {@link #gradientAtCode} is not.
  */
 final class SwitchedLoadFit implements ModelKind {
     private static final int MAX_ITERATIONS = 200;
@@ -28,18 +30,23 @@ final class SwitchedLoadFit implements ModelKind {
     private final int[] codes;
     private final double[] values;
     private final double[][] linearDesign;
+    private final double[] rootWeights;
 
-    SwitchedLoadFit(int bits, int[] codes, double[] values) {
+    /** A fit of {@code values} (already scaled by {@code rootWeights}) at {@code codes}. */
+    SwitchedLoadFit(int bits, int[] codes, double[] values, double[] rootWeights) {
         this.bits = bits;
         this.codes = codes;
         this.values = values;
+        this.rootWeights = rootWeights;
         linearDesign = new double[codes.length][2 * bits + 1];
         for (int r = 0; r < codes.length; r++) {
             double[] x = linearDesign[r];
-            x[0] = 1;
+            double w = rootWeights[r];
+            x[0] = w;
             for (int i = 0; i < bits; i++) {
                 int b = codes[r] >> i & 1;
-                x[1 + i] = b;
+                x[1 + i] = b * w;
+                // values[r] is already scaled by w: the row times w is −b·V·w
                 x[1 + bits + i] = -b * values[r];
             }
         }
@@ -116,6 +123,10 @@ final class SwitchedLoadFit implements ModelKind {
 
     @Override
     public double predict(double[] theta, int i) {
+        return rootWeights[i] * level(theta, i);
+    }
+
+    private double level(double[] theta, int i) {
         double num = theta[0];
         double den = 1;
         int code = codes[i];
@@ -130,7 +141,11 @@ final class SwitchedLoadFit implements ModelKind {
 
     @Override
     public double[] gradient(double[] theta, int i) {
-        return gradientAtCode(theta, codes[i]);
+        double[] g = gradientAtCode(theta, codes[i]);
+        for (int j = 0; j < g.length; j++) {
+            g[j] *= rootWeights[i];
+        }
+        return g;
     }
 
     @Override

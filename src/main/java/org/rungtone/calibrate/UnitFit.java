@@ -2,11 +2,14 @@ package org.rungtone.calibrate;
 
 import java.nio.file.Path;
 import java.time.LocalDate;
+import java.util.Locale;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import org.rungtone.internal.FileNames;
 import org.rungtone.internal.InputError;
+import org.rungtone.internal.Setting;
+import org.rungtone.internal.Units;
 import org.rungtone.ladder.LadderSpec;
 
 /**
@@ -52,13 +55,17 @@ public final class UnitFit {
     /**
      * Reads, fits and makes the profile.
      *
-     * @throws InputError when the readings cannot be read or fitted, their profile would be flat or falling
+     * @throws InputError when the resolution is not a positive voltage below 10 V, the readings cannot be read
+     *     or fitted, a reading shows finer digits than the resolution, their profile would be flat or falling
      *     ({@link UsableLevels}), or the board name is empty
      */
     public static Result run(Request r) {
+        r.resolutionVolts().ifPresent(q -> Setting.RESOLUTION.check(q > 0 && q < 10, "must be a positive voltage"
+                + " below 10 V, e.g. 1mV: %s", q));
         Optional<LadderSpec> ladder = r.ladder();
         int bitsOrZero = r.bits() != 0 ? r.bits() : ladder.map(LadderSpec::bits).orElse(0);
         Measurements m = MeasurementCsv.read(r.measurements(), bitsOrZero);
+        r.resolutionVolts().ifPresent(q -> checkDigits(m, q));
         BoardFit.Settings settings = new BoardFit.Settings(r.resolutionVolts().orElse(0),
                 ladder.map(s -> s.buffer().outMinVolts()).orElse(Double.NaN),
                 ladder.map(s -> s.buffer().outMaxVolts()).orElse(Double.NaN));
@@ -72,5 +79,22 @@ public final class UnitFit {
         }
         UnitProfile profile = UnitProfile.of(fit, board, r.date(), ladder.map(LadderSpec::describe).orElse(""));
         return new Result(r, fit, profile);
+    }
+
+    /**
+     * Refuses a reading written with finer digits than the resolution given for the whole file: a meter shows
+     * no digit below its step, so one of the two is wrong. Coarser digits are fine (a trailing zero left off).
+     */
+    private static void checkDigits(Measurements m, double resolutionVolts) {
+        for (Reading x : m.readings()) {
+            if (x.stepVolts() > 0 && x.stepVolts() < 0.99 * resolutionVolts) {
+                int decimals = Math.max(0, (int) Math.round(-Math.log10(x.stepVolts())));
+                throw Setting.RESOLUTION.problem("%s:%d: the reading %s V shows %s digits, finer than %s %s; leave"
+                        + " %s out to weight each reading by its own digits, or correct it", m.source(), x.line(),
+                        String.format(Locale.ROOT, "%." + decimals + "f", x.volts()), Units.format(x.stepVolts(),
+                                "V"), Setting.RESOLUTION.ref(), Units.format(resolutionVolts, "V"),
+                        Setting.RESOLUTION.ref());
+            }
+        }
     }
 }

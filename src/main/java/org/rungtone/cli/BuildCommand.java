@@ -1,12 +1,14 @@
 package org.rungtone.cli;
 
 import java.nio.file.Path;
-import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
 import java.util.concurrent.Callable;
 import org.rungtone.calibrate.OutputSpan;
+import org.rungtone.cli.shell.Heading;
+import org.rungtone.cli.shell.ProgressMeter;
+import org.rungtone.cli.shell.Section;
 import org.rungtone.firmware.CNames;
 import org.rungtone.internal.FileNames;
 import org.rungtone.internal.InputError;
@@ -51,23 +53,28 @@ public final class BuildCommand implements Callable<Integer> {
             description = "A .wav file, a .rung script, or a project file (.toml) describing a board and its sounds.")
     Path source;
 
+    @Section(Heading.QUANTIZING)
     @Option(names = "--bits", paramLabel = "<n>",
             description = "DAC bit depth, 1..16 (default: the ladder's, else 8).")
     Integer bits;
 
+    @Section(Heading.CONDITIONING)
     @Option(names = "--rate", paramLabel = "<hz>", converter = Converters.Hertz.class,
             description = "Target sample rate, e.g. 16k, 8000 (default: the script's own rate, else 16 kHz).")
     Double rateHz;
 
+    @Section(Heading.QUANTIZING)
     @Option(names = "--dither", paramLabel = "none|rpdf|tpdf", defaultValue = "tpdf",
             description = "Dither before quantizing (default ${DEFAULT-VALUE}).")
     Dither dither;
 
+    @Section(Heading.QUANTIZING)
     @Option(names = "--shaping", paramLabel = "none|first|second", defaultValue = "none",
             description = "Error-feedback noise shaping: pushes quantization noise towards high frequencies"
                     + " (default ${DEFAULT-VALUE}).")
     ErrorFilter shaping;
 
+    @Section(Heading.QUANTIZING)
     @Option(names = "--seed", paramLabel = "<n>", defaultValue = "1",
             description = "Seed for dither; the same inputs and seed give identical outputs"
                     + " (default ${DEFAULT-VALUE}).")
@@ -80,6 +87,10 @@ public final class BuildCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "<dir>", description = "Output folder (default ./rungtone-out/NAME).")
     Path out;
 
+    @Option(names = "--c-out", paramLabel = "<dir>", description = "Folder of the C files (default: the --out folder).")
+    Optional<Path> cOut = Optional.empty();
+
+    @Section(Heading.INPUT)
     @Option(names = "--channel", paramLabel = "<n>", defaultValue = "0",
             description = "0 mixes all channels down (default); 1..8 picks one.")
     int channel;
@@ -87,10 +98,12 @@ public final class BuildCommand implements Callable<Integer> {
     @Mixin
     ConditioningOptions conditioning;
 
+    @Section(Heading.LADDER)
     @Option(names = "--full-scale", paramLabel = "<volts>", converter = Converters.Volts.class,
             defaultValue = "5V", description = "Reference voltage of the ideal ladder (default ${DEFAULT-VALUE}).")
     double fullScale;
 
+    @Section(Heading.FIRMWARE)
     @Option(names = "--flash-attr", paramLabel = "<text>", defaultValue = "",
             description = "Attribute that keeps the sample array in flash, e.g. PROGMEM (default none).")
     String flashAttr;
@@ -98,6 +111,7 @@ public final class BuildCommand implements Callable<Integer> {
     @Mixin
     LadderOptions ladder;
 
+    @Section(Heading.QUANTIZING)
     @Option(names = "--compensation", paramLabel = "on|off", defaultValue = "on",
             description = "With a ladder or unit profile: quantize onto the board's real levels (on, default) or"
                     + " emit plain binary codes (off).")
@@ -106,6 +120,7 @@ public final class BuildCommand implements Callable<Integer> {
     @Mixin
     UnitOptions unit;
 
+    @Section(Heading.QUANTIZING)
     @Option(names = "--span", paramLabel = "full|nominal", defaultValue = "full",
             description = "With compensation: map full scale onto everything the board reaches (full, default)"
                     + " or onto the ideal ladder's span, for the same amplitude in volts on every board.")
@@ -123,8 +138,7 @@ public final class BuildCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         LadderOptions.bitsOrZero(bits);
-        if (source.getFileName() != null && source.getFileName().toString().toLowerCase(Locale.ROOT)
-                .endsWith(".toml")) {
+        if (ProjectFile.isProjectFile(source)) {
             return buildProject();
         }
         Boards.Board board = unit.resolve(bits, ladder, false);
@@ -132,13 +146,10 @@ public final class BuildCommand implements Callable<Integer> {
         if (!common.quiet) {
             board.warnings().forEach(w -> spec.commandLine().getErr().println("rungtone: warning: " + w));
         }
-        ProgressLine line = ProgressLine.forTerminal(spec.commandLine().getErr(), common);
         BuildSummary summary;
-        try {
-            summary = new Build(Version.get(), span, stage -> line.show("building " + plan.symbol() + ": "
-                    + stage + " done")).run(plan);
-        } finally {
-            line.clear();
+        try (ProgressMeter meter = ProgressMeter.onStandardError(spec.commandLine().getErr(), common.quiet)) {
+            summary = new Build(Version.get(), span, (step, done) -> meter.show("building " + plan.symbol(), step,
+                    done)).run(plan);
         }
         common.print(spec, json, () -> Json.toJson(BuildReport.json(summary)), () -> BuildReport.text(summary));
         if (common.verbose) {
@@ -172,16 +183,13 @@ public final class BuildCommand implements Callable<Integer> {
                 pr.hasMatchedOption("--dither") ? Optional.of(dither) : Optional.empty(),
                 pr.hasMatchedOption("--shaping") ? Optional.of(shaping) : Optional.empty(),
                 pr.hasMatchedOption("--seed") ? Optional.of(seed) : Optional.empty(), Optional.ofNullable(out),
-                pr.hasMatchedOption("--compensation") ? Optional.of(compensation) : Optional.empty(),
+                cOut, pr.hasMatchedOption("--compensation") ? Optional.of(compensation) : Optional.empty(),
                 unit.path(), ladder, firmware::applyGiven, firmware.wantsPlayer());
-        ProgressLine line = ProgressLine.forTerminal(spec.commandLine().getErr(), common);
         ProjectBuild.Result r;
-        try {
-            OutputSpan outputSpan = pr.hasMatchedOption("--span") ? span
-                    : project.quantize().span().orElse(OutputSpan.FULL);
-            r = new ProjectBuild(Version.get(), outputSpan, line::show).run(project, o);
-        } finally {
-            line.clear();
+        OutputSpan chosen = pr.hasMatchedOption("--span") ? span : project.quantize().span().orElse(OutputSpan.FULL);
+        try (ProgressMeter meter = ProgressMeter.onStandardError(spec.commandLine().getErr(), common.quiet)) {
+            r = new ProjectBuild(Version.get(), chosen, (step, done) -> meter.show("building", step, done))
+                    .run(project, o);
         }
         ProjectReport.Input in = r.report();
         common.print(spec, json, () -> Json.toJson(ProjectReport.json(in)), () -> ProjectReport.text(in));
@@ -198,7 +206,7 @@ public final class BuildCommand implements Callable<Integer> {
                 .gainDb(conditioning.gainDb()).normalizeDbfs(conditioning.normalizeDbfs())
                 .fades(conditioning.fadeIn, conditioning.fadeOut).resampler(conditioning.resampler())
                 .fullScaleVolts(fullScale).flashQualifier(flashAttr).player(firmware.request())
-                .loop(firmware.loopSpan()).flashBudgetBytes(firmware.flashBudgetBytes())
+                .loop(firmware.loopSpan()).flashBudgetBytes(firmware.flashBudgetBytes()).cOutDir(cOut)
                 .preview(preview.filter(), preview.previewRateHz).previewSeconds(preview.previewSeconds());
         board.levels().ifPresent(levels -> plan.board(levels, compensation));
         return plan.build();

@@ -1,16 +1,11 @@
 package org.rungtone.cli;
 
-import java.io.PrintWriter;
-import java.nio.file.Path;
-import java.util.List;
 import java.util.concurrent.Callable;
 import org.rungtone.calibrate.BoardSimulation;
-import org.rungtone.calibrate.SimulatedBoard;
-import org.rungtone.internal.AtomicFiles;
-import org.rungtone.internal.InputError;
-import org.rungtone.internal.OutputFolder;
-import org.rungtone.ladder.LadderSpec;
-import org.rungtone.report.CalibrationFiles;
+import org.rungtone.calibrate.SimulatedBoard.Meter;
+import org.rungtone.cli.shell.Heading;
+import org.rungtone.cli.shell.Section;
+import org.rungtone.project.CalibrationRuns;
 import org.rungtone.report.CalibrationReport;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -22,9 +17,10 @@ import picocli.CommandLine.Spec;
 @Command(name = "calibrate", mixinStandardHelpOptions = true,
         description = {"Measure a built ladder and fit a profile of it.",
             "'plan' says what to measure and writes a sweep program; 'fit' turns the readings into a unit"
-                + " profile that 'build --unit' quantizes onto; 'simulate' makes readings of a drawn board to try"
-                + " it out."},
-        subcommands = {CalibratePlanCommand.class, CalibrateFitCommand.class, CalibrateCommand.Simulate.class},
+                + " profile that 'build --unit' quantizes onto; 'listen' does so from a sound card's recording of"
+                + " the sweep of 'plan --recording'; 'simulate' makes readings of a drawn board to try it out."},
+        subcommands = {CalibratePlanCommand.class, CalibrateFitCommand.class, CalibrateListenCommand.class,
+            CalibrateCommand.Simulate.class},
         footerHeading = "%nExample, the whole loop:%n",
         footer = {"  rungtone calibrate plan --ladder board.toml --target avr --pins PD2-PD7 \\",
             "      --cpu-clock 16MHz --button PB0",
@@ -63,19 +59,23 @@ public final class CalibrateCommand implements Runnable {
         @Mixin
         PlanOptions codes;
 
-        @Option(names = "--seed", paramLabel = "N", defaultValue = "1",
+        @Section(Heading.MEASURING)
+    @Option(names = "--seed", paramLabel = "N", defaultValue = "1",
                 description = "Seed of the board and the meter noise (default ${DEFAULT-VALUE}).")
         long seed;
 
-        @Option(names = "--noise", paramLabel = "<volts>", converter = Converters.Volts.class,
+        @Section(Heading.MEASURING)
+    @Option(names = "--noise", paramLabel = "<volts>", converter = Converters.Volts.class,
                 defaultValue = "0.2mV", description = "The meter's rms noise (default ${DEFAULT-VALUE}).")
         double noise;
 
-        @Option(names = "--resolution", paramLabel = "<volts>", converter = Converters.Volts.class,
+        @Section(Heading.MEASURING)
+    @Option(names = "--resolution", paramLabel = "<volts>", converter = Converters.Volts.class,
                 defaultValue = "1mV", description = "The meter's step (default ${DEFAULT-VALUE}).")
         double resolution;
 
-        @Option(names = "--repeat", paramLabel = "R", defaultValue = "1",
+        @Section(Heading.MEASURING)
+    @Option(names = "--repeat", paramLabel = "R", defaultValue = "1",
                 description = "Readings per code (default ${DEFAULT-VALUE}).")
         int repeat;
 
@@ -84,26 +84,10 @@ public final class CalibrateCommand implements Runnable {
 
         @Override
         public Integer call() {
-            codes.check();
-            if (!(resolution >= 0 && resolution < 10)) {
-                throw new InputError("--resolution must be 0 (exact) or a positive voltage below 10 V: "
-                        + resolution);
-            }
-            SimulatedBoard.Meter meter = new SimulatedBoard.Meter(noise, resolution, repeat);
-            AtomicFiles.checkFolderUsable(output.out);
-            LadderSpec ladder = codes.spec();
-            BoardSimulation.Result r = BoardSimulation.run(new BoardSimulation.Request(ladder, codes.choice(),
-                    meter, seed));
-            List<Path> files;
-            try (OutputFolder folder = OutputFolder.open(output.out, "simulate")) {
-                files = CalibrationFiles.writeSimulation(r, output.out);
-                folder.commit();
-            }
-            PrintWriter o = spec.commandLine().getOut();
-            if (!common.quiet) {
-                o.print(CalibrationReport.simulationText(r, files));
-            }
-            o.flush();
+            CalibrationRuns.Written<BoardSimulation.Result> w = CalibrationRuns.simulate(new BoardSimulation.Request(
+                    codes.spec(), codes.choice(), new Meter(noise, resolution, repeat), seed), output.out);
+            common.print(spec, output.json, () -> CalibrationReport.simulationJson(w.result(), w.files(), output.out,
+                    Version.get()), () -> CalibrationReport.simulationText(w.result(), w.files()));
             return 0;
         }
     }

@@ -1,18 +1,14 @@
 package org.rungtone.cli;
 
 import java.nio.file.Path;
-import java.time.LocalDate;
-import java.time.format.DateTimeParseException;
-import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 import org.rungtone.calibrate.UnitFit;
-import org.rungtone.internal.AtomicFiles;
-import org.rungtone.internal.InputError;
-import org.rungtone.internal.OutputFolder;
+import org.rungtone.cli.shell.Heading;
+import org.rungtone.cli.shell.Section;
 import org.rungtone.ladder.LadderSpec;
-import org.rungtone.report.CalibrationFiles;
+import org.rungtone.project.CalibrationRuns;
 import org.rungtone.report.Json;
 import org.rungtone.report.UnitFitReport;
 import picocli.CommandLine.Command;
@@ -45,60 +41,34 @@ public final class CalibrateFitCommand implements Callable<Integer> {
             + " its measured column filled in, or rows of code, volts.")
     Path measurements;
 
-    @Option(names = "--bits", paramLabel = "N",
-            description = "Bit depth (default: the ladder's, else the width of the file's binary column).")
+    @Section(Heading.LADDER)
+    @Option(names = "--bits", paramLabel = "N", description = "Bit depth (default: the ladder's, else the width of"
+            + " the file's binary column).")
     Integer bits;
 
     @Mixin
     LadderOptions ladder;
 
-    @Option(names = "--board", paramLabel = "NAME",
-            description = "The board's name in the profile and its file name (default: the readings' file name).")
-    String board;
+    @Mixin
+    BoardOptions board;
 
-    @Option(names = "--date", paramLabel = "YYYY-MM-DD",
-            description = "Date of the readings (default: today).")
-    String date;
-
+    @Section(Heading.MEASURING)
     @Option(names = "--resolution", paramLabel = "<volts>", converter = Converters.Volts.class,
-            description = "The meter's step, e.g. 1mV (default: from the readings' last digits).")
+            description = "The meter's step for every reading, e.g. 1mV (default: each reading's own last digit).")
     Double resolution;
 
     @Mixin
     CalibrationFolder output;
 
-    @Option(names = "--json", description = "Print JSON instead of text.")
-    boolean json;
-
     @Override
     public Integer call() {
-        LocalDate day = day();
-        if (resolution != null && !(resolution > 0 && resolution < 10)) {
-            throw new InputError("--resolution must be a positive voltage below 10 V, e.g. 1mV: " + resolution);
-        }
         int bitsOrZero = LadderOptions.bitsOrZero(bits);
-        AtomicFiles.checkFolderUsable(output.out);
         Optional<LadderSpec> ladderSpec = ladder.given() ? Optional.of(ladder.spec(bitsOrZero)) : Optional.empty();
-        UnitFit.Result r = UnitFit.run(new UnitFit.Request(measurements, bitsOrZero, ladderSpec,
-                Optional.ofNullable(board),
-                day, resolution == null ? OptionalDouble.empty() : OptionalDouble.of(resolution)));
-        List<Path> files;
-        try (OutputFolder folder = OutputFolder.open(output.out, "fit")) {
-            files = CalibrationFiles.writeProfile(r, output.out);
-            folder.commit();
-        }
-        common.print(spec, json, () -> Json.toJson(UnitFitReport.json(r, files)), () -> UnitFitReport.text(r, files));
+        CalibrationRuns.Written<UnitFit.Result> w = CalibrationRuns.fit(new UnitFit.Request(measurements, bitsOrZero,
+                ladderSpec, Optional.ofNullable(board.board), CalibrationRuns.day(Optional.ofNullable(board.date)),
+                resolution == null ? OptionalDouble.empty() : OptionalDouble.of(resolution)), output.out);
+        common.print(spec, output.json, () -> Json.toJson(UnitFitReport.json(w.result(), w.files(), output.out,
+                Version.get())), () -> UnitFitReport.text(w.result(), w.files()));
         return 0;
-    }
-
-    private LocalDate day() {
-        if (date == null) {
-            return LocalDate.now();
-        }
-        try {
-            return LocalDate.parse(date.trim());
-        } catch (DateTimeParseException e) {
-            throw new InputError("--date must look like 2026-05-01: " + date, e);
-        }
     }
 }

@@ -1,18 +1,11 @@
 package org.rungtone.cli;
 
-import java.nio.file.Path;
-import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.Callable;
-import org.rungtone.calibrate.CodeChoice;
-import org.rungtone.firmware.FirmwareRequest;
-import org.rungtone.firmware.PlaybackEngine;
-import org.rungtone.internal.AtomicFiles;
-import org.rungtone.internal.InputError;
-import org.rungtone.internal.OutputFolder;
-import org.rungtone.ladder.LadderSpec;
+import org.rungtone.cli.shell.Heading;
+import org.rungtone.cli.shell.Section;
 import org.rungtone.project.CalibrationPlan;
-import org.rungtone.report.CalibrationFiles;
+import org.rungtone.project.CalibrationRuns;
 import org.rungtone.report.CalibrationReport;
 import org.rungtone.report.Json;
 import picocli.CommandLine.Command;
@@ -44,58 +37,42 @@ public final class CalibratePlanCommand implements Callable<Integer> {
     @Mixin
     PlanOptions codes;
 
-    @Option(names = "--hold", paramLabel = "<time>", converter = Converters.Seconds.class, defaultValue = "2s",
-            description = "How long the sweep holds each code (default ${DEFAULT-VALUE}).")
-    double holdSeconds;
+    @Section(Heading.FIRMWARE)
+    @Option(names = "--hold", paramLabel = "<time>", converter = Converters.Seconds.class,
+            description = "How long the sweep holds each code (default 2s; 40ms with --recording).")
+    Double holdSeconds;
 
-    @Option(names = "--button", paramLabel = "PIN",
-            description = "Step to the next code on each press of a button on this pin (to ground) instead,"
-                    + " e.g. PB0.")
+    @Section(Heading.FIRMWARE)
+    @Option(names = "--recording", description = "Make the sweep for a sound card's recording (see 'calibrate"
+            + " listen'): every code up to 10 bits, held briefly, between two patterns the fit finds.")
+    boolean recording;
+
+    @Section(Heading.FIRMWARE)
+    @Option(names = "--button", paramLabel = "PIN", description = "Step to the next code on each press of a button"
+            + " on this pin (to ground) instead, e.g. PB0.")
     String button;
 
     @Mixin
     FirmwareOptions firmware;
 
-    @Option(names = "--name", paramLabel = "<symbol>", defaultValue = "sweep",
-            description = "C symbol prefix of the sweep program (default ${DEFAULT-VALUE}).")
+    @Section(Heading.FIRMWARE)
+    @Option(names = "--name", paramLabel = "<symbol>", defaultValue = "sweep", description = "C symbol prefix of"
+            + " the sweep program (default ${DEFAULT-VALUE}).")
     String name;
 
     @Mixin
     CalibrationFolder output;
 
-    @Option(names = "--json", description = "Print JSON instead of text.")
-    boolean json;
-
     @Override
     public Integer call() {
-        codes.check();
-        if (firmware.engine != null && firmware.engine != PlaybackEngine.SWEEP) {
-            throw new InputError("--engine " + firmware.engine.name().toLowerCase(java.util.Locale.ROOT)
-                    + ": a measurement plan always emits the sweep"
-                    + " program; leave --engine out");
-        }
-        if (firmware.loop != null || firmware.ddsFrequencyHz != null) {
-            throw new InputError("--loop and --dds-frequency do not apply to the sweep program; leave them out");
-        }
-        AtomicFiles.checkFolderUsable(output.out);
-        LadderSpec ladderSpec = codes.spec();
-        CodeChoice choice = codes.choice();
-        CalibrationReport.Plan plan;
-        List<Path> files;
-        try (OutputFolder folder = OutputFolder.open(output.out, "plan")) {
-            plan = CalibrationPlan.run(new CalibrationPlan.Request(ladderSpec, choice, sweepTarget(), name,
-                    Version.get(), holdSeconds, Optional.ofNullable(button), output.out));
-            files = CalibrationFiles.writePlan(plan, output.out);
-            folder.commit();
-        }
-        common.print(spec, json, () -> Json.toJson(CalibrationReport.planJson(plan, files)),
-                () -> CalibrationReport.planText(plan, files));
+        CalibrationPlan.checkSweepOptions(Optional.ofNullable(firmware.engine), firmware.loop != null
+                || firmware.ddsFrequencyHz != null);
+        double hold = holdSeconds != null ? holdSeconds : CalibrationPlan.defaultHoldSeconds(recording);
+        CalibrationRuns.Written<CalibrationReport.Plan> w = CalibrationRuns.plan(new CalibrationPlan.Request(
+                codes.spec(), codes.choice(), firmware.request(), name, Version.get(), hold,
+                Optional.ofNullable(button), output.out, recording));
+        common.print(spec, output.json, () -> Json.toJson(CalibrationReport.planJson(w.result(), w.files(), output.out,
+                Version.get())), () -> CalibrationReport.planText(w.result(), w.files()));
         return 0;
-    }
-
-    /** The sweep program's target settings; a button alone asks for the generic program. */
-    private Optional<FirmwareRequest> sweepTarget() {
-        Optional<FirmwareRequest> given = firmware.request();
-        return given.isEmpty() && button != null ? Optional.of(FirmwareRequest.builder().build()) : given;
     }
 }

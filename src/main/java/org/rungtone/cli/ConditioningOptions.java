@@ -1,6 +1,8 @@
 package org.rungtone.cli;
 
 import java.util.OptionalDouble;
+import org.rungtone.cli.shell.Heading;
+import org.rungtone.cli.shell.Section;
 import org.rungtone.condition.ResamplerKind;
 import org.rungtone.project.ConditioningSettings;
 import org.rungtone.project.Defaults;
@@ -11,6 +13,7 @@ import picocli.CommandLine.Option;
  * The conditioning options that {@code build} and {@code survey} share: level (--gain or --normalize),
  * --keep-dc, --trim, --fade-in, --fade-out and --resampler.
  */
+@Section(Heading.CONDITIONING)
 public final class ConditioningOptions {
     /** Peak level when neither --gain nor --normalize is given, in dBFS. */
 

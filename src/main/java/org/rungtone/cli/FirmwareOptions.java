@@ -3,6 +3,9 @@ package org.rungtone.cli;
 import java.nio.file.Path;
 import java.util.Optional;
 import java.util.OptionalLong;
+import org.rungtone.cli.shell.Choices;
+import org.rungtone.cli.shell.Heading;
+import org.rungtone.cli.shell.Section;
 import org.rungtone.firmware.DdsSpec;
 import org.rungtone.firmware.FirmwareRequest;
 import org.rungtone.firmware.PinStrategy;
@@ -18,8 +21,9 @@ import picocli.CommandLine.Option;
  * The firmware options shared by build and calibrate: target family, clock, timer, pins, storage, engine,
  * flash budget. Without --target, --pins or --engine only the sample array is emitted.
  */
+@Section(Heading.FIRMWARE)
 public final class FirmwareOptions {
-    @Option(names = "--target", paramLabel = "generic|avr|cortexm|rp2040",
+    @Option(names = "--target", paramLabel = "generic|avr|cortexm|rp2040", completionCandidates = Choices.Targets.class,
             description = "Emit a complete player for this target family (default: only the sample array,"
                     + " or 'generic' when --pins is given).")
     String target;
@@ -51,8 +55,8 @@ public final class FirmwareOptions {
             description = "How codes become port values (default auto: shift when the pins allow it).")
     PinStrategy pinStrategy;
 
-    @Option(names = "--storage", paramLabel = "unpacked|packed",
-            description = "Samples one per byte/word, or bit-packed (default unpacked).")
+    @Option(names = "--storage", paramLabel = "unpacked|packed|tread2|tread3|tread4",
+            description = "Samples one per byte/word, bit-packed, or Tread codes of 2-4 bits (default unpacked).")
     SampleStorage storage;
 
     @Option(names = "--engine", paramLabel = "clip|loop|dds|sweep",

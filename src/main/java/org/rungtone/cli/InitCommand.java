@@ -4,6 +4,7 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Optional;
 import java.util.concurrent.Callable;
+import org.rungtone.cli.shell.Choices;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.project.StarterProject;
 import picocli.CommandLine.Command;
@@ -15,10 +16,11 @@ import picocli.CommandLine.Spec;
 /** {@code rungtone init}: writes a commented starter project file. */
 @Command(name = "init",
         header = "Write a commented starter project file.", mixinStandardHelpOptions = true,
-        description = {"Write a commented starter project file for a target family and ladder. It asks nothing:",
-            "every choice is an option, and the file explains each key so you can edit it."},
+        description = {"Write a commented starter project file for a target family and ladder. It asks nothing:"
+            + " every choice is an option, and the file explains each key so you can edit it."},
         footerHeading = "%nExample:%n",
-        footer = {"  rungtone init doorbell.toml --target avr --topology r2r --bits 6 --name doorbell",
+        footer = {"  rungtone init doorbell.toml --target avr --topology r2r --bits 6 \\",
+            "      --name doorbell",
             "  rungtone build doorbell.toml"})
 public final class InitCommand implements Callable<Integer> {
     @Spec
@@ -32,10 +34,11 @@ public final class InitCommand implements Callable<Integer> {
     Path file;
 
     @Option(names = "--target", paramLabel = "generic|avr|cortexm|rp2040", defaultValue = "generic",
-            description = "Target family (default ${DEFAULT-VALUE}).")
+            completionCandidates = Choices.Targets.class, description = "Target family (default ${DEFAULT-VALUE}).")
     String target;
 
     @Option(names = "--topology", paramLabel = "weighted|r2r", defaultValue = "r2r",
+            completionCandidates = Choices.StarterTopologies.class,
             description = "Ladder topology (default ${DEFAULT-VALUE}).")
     String topology;
 

@@ -6,6 +6,9 @@ import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.rungtone.calibrate.UnitProfile;
+import org.rungtone.cli.shell.Heading;
+import org.rungtone.cli.shell.ProgressMeter;
+import org.rungtone.cli.shell.Section;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.OutputFolder;
@@ -58,30 +61,37 @@ public final class LadderCommand implements Callable<Integer> {
     @Mixin
     UnitOptions unit;
 
+    @Section(Heading.LADDER)
     @Option(names = "--bits", paramLabel = "N", description = "Bit depth 1..16 (default: the ladder's, else 8).")
     Integer bits;
 
+    @Section(Heading.LADDER)
     @Option(names = "--pin-names", split = ",", paramLabel = "NAME",
-            description = "Names of the pins driving bits 0.. for the wiring table, e.g. PB0,PB1 (default D0..).")
+            description = "Names of the pins driving bits 0.. for the wiring table, e.g. PB0,PB1 (default pin0..).")
     List<String> pinNames;
 
     @Option(names = "--all-levels", description = "Print every code's level (default: all up to 64 codes).")
     boolean allLevels;
 
+    @Section(Heading.MONTE_CARLO)
     @Option(names = "--monte-carlo", paramLabel = "K",
             description = "Simulate K boards with resistor values drawn within tolerance.")
     Integer boards;
 
+    @Section(Heading.MONTE_CARLO)
     @Option(names = "--seed", paramLabel = "N", description = "Seed of the Monte Carlo draws (default 1).")
     long seed = 1;
 
+    @Section(Heading.MONTE_CARLO)
     @Option(names = "--gaussian-sigma", paramLabel = "<percent>",
             description = "Draw values from a Gaussian of this relative sigma instead of uniform within tolerance.")
     String gaussianSigma;
 
+    @Section(Heading.LADDER)
     @Option(names = "--design", description = "Propose values from --series (default E24) that minimise worst INL.")
     boolean design;
 
+    @Section(Heading.LADDER)
     @Option(names = "--pin-limit", paramLabel = "<amps>",
             description = "Warn when a pin sources or sinks more than this, such as 20mA; see the part's datasheet.")
     String pinLimit;
@@ -118,8 +128,10 @@ public final class LadderCommand implements Callable<Integer> {
                 limit, board.profile().map(UnitProfile::levels),
                 Optional.ofNullable(boards).map(k -> new MonteCarlo(k, seed, spread)), design);
         PrintWriter err = spec.commandLine().getErr();
-        ProgressLine progress = ProgressLine.forTerminal(err, common).onlyIf(!json && request.isSlow());
-        LadderStudy study = request.run(done -> progress.showPercent("Monte Carlo", done, boards, "boards"));
+        LadderStudy study;
+        try (ProgressMeter meter = ProgressMeter.onStandardError(err, common.quiet)) {
+            study = request.run(done -> meter.show("Monte Carlo", boards + " boards", done / (double) boards));
+        }
         if (!common.quiet) {
             board.warnings().forEach(w -> err.println("rungtone: warning: " + w));
         }
@@ -128,7 +140,7 @@ public final class LadderCommand implements Callable<Integer> {
             files = LadderFiles.write(out, study);
             folder.commit();
         }
-        common.print(spec, json, () -> LadderReport.json(study, files),
+        common.print(spec, json, () -> LadderReport.json(study, files, out, Version.get()),
                 () -> LadderReport.text(study, allLevels, files));
         return 0;
     }

@@ -5,6 +5,9 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import org.rungtone.cli.shell.Choices;
+import org.rungtone.cli.shell.Heading;
+import org.rungtone.cli.shell.Section;
 import org.rungtone.internal.InputError;
 import org.rungtone.ladder.LadderDescription;
 import org.rungtone.ladder.LadderOverrides;
@@ -17,13 +20,14 @@ import picocli.CommandLine.Option;
  * table) and one option per key of that table, which overrides the file. The bit depth is the core option
  * {@code --bits} of each command, passed in. Shared by every command that models a ladder.
  */
+@Section(Heading.LADDER)
 public final class LadderOptions implements LadderDescription {
     @Option(names = "--ladder", paramLabel = "FILE",
             description = "Read the ladder from the [ladder] table of this TOML file; the options below"
                     + " override its keys.")
     Path ladderFile;
 
-    @Option(names = "--topology", paramLabel = "weighted|r2r|custom",
+    @Option(names = "--topology", paramLabel = "weighted|r2r|custom", completionCandidates = Choices.Topologies.class,
             description = "Network: binary-weighted summing, R-2R, or your own per-bit values (default weighted).")
     String topology;
 
@@ -35,7 +39,7 @@ public final class LadderOptions implements LadderDescription {
             description = "MSB resistor of a derived weighted ladder, or R of an R-2R ladder (default 10k).")
     String baseR;
 
-    @Option(names = "--series", paramLabel = "E6..E192",
+    @Option(names = "--series", paramLabel = "E6..E192", completionCandidates = Choices.Series.class,
             description = "Preferred-value series to snap derived values to and to propose values from.")
     String series;
 

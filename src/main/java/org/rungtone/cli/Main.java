@@ -2,6 +2,9 @@ package org.rungtone.cli;
 
 import java.io.PrintWriter;
 import java.util.List;
+import org.rungtone.cli.shell.HelpSections;
+import org.rungtone.cli.shell.Mistyped;
+import org.rungtone.cli.shell.Terminal;
 import org.rungtone.internal.InputError;
 import org.rungtone.report.PlotWarmUp;
 import picocli.CommandLine;
@@ -52,7 +55,9 @@ public final class Main implements Runnable {
         }
         int code;
         try {
-            code = newCommandLine(args).execute(args);
+            CommandLine cl = newCommandLine(args);
+            Terminal.fitHelp(cl, System.getenv());
+            code = cl.execute(args);
         } catch (OutOfMemoryError e) {
             System.err.println("rungtone: error: out of memory for this input; give Java more with"
                     + " RUNGTONE_JAVA_OPTS=-Xmx4g (or shorten the sound)");
@@ -109,6 +114,7 @@ public final class Main implements Runnable {
                 : t instanceof InputError ? EXIT_INPUT : EXIT_INTERNAL);
         cl.setCaseInsensitiveEnumValuesAllowed(true);
         Converters.registerChoices(cl);
+        HelpSections.install(cl);
         return cl;
     }
 
@@ -144,8 +150,8 @@ public final class Main implements Runnable {
     private static int handleUsage(CommandLine.ParameterException e, String[] args) {
         CommandLine cl = e.getCommandLine();
         PrintWriter err = cl.getErr();
-        err.println("rungtone: error: " + e.getMessage());
-        CommandLine.UnmatchedArgumentException.printSuggestions(e, err);
+        err.println("rungtone: error: " + (e instanceof CommandLine.UnmatchedArgumentException u
+                ? Mistyped.message(u).orElse(e.getMessage()) : e.getMessage()));
         err.println("Try '" + cl.getCommandSpec().qualifiedName() + " --help' for the options.");
         err.flush();
         return EXIT_USAGE;

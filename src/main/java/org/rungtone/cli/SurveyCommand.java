@@ -6,6 +6,10 @@ import java.util.OptionalLong;
 import java.util.concurrent.Callable;
 import org.rungtone.analysis.ReconstructionFilter;
 import org.rungtone.analysis.SurveyTarget;
+import org.rungtone.cli.shell.Choices;
+import org.rungtone.cli.shell.Heading;
+import org.rungtone.cli.shell.ProgressMeter;
+import org.rungtone.cli.shell.Section;
 import org.rungtone.firmware.CNames;
 import org.rungtone.internal.FileNames;
 import org.rungtone.internal.Setting;
@@ -29,11 +33,11 @@ import picocli.CommandLine.Spec;
 @Command(name = "survey",
         header = "Tabulate quality and flash cost over bit depths x sample rates.", mixinStandardHelpOptions = true,
         description = {"Tabulate quality and flash cost over bit depths x sample rates.",
-            "Quantizes a sound at every setting and measures SINAD, in-band and A-weighted",
-            "SNR, ENOB and what the listener hears; marks the setting with the fewest flash",
-            "bytes whose heard figures reach a target within a flash budget. Writes survey.txt,",
-            "survey.json, two plots (against bit depth and against flash bytes) and, with",
-            "--previews, a 44.1 kHz WAV per cell to listen to."},
+            "Quantizes a sound at every setting and measures SINAD, in-band and A-weighted"
+                + " SNR, ENOB and what the listener hears; marks the setting with the fewest flash"
+                + " bytes whose heard figures reach a target within a flash budget. Writes survey.txt,"
+                + " survey.json, two plots (against bit depth and against flash bytes) and, with"
+                + " --previews, a 44.1 kHz WAV per cell to listen to."},
         sortOptions = false,
         footerHeading = "%nExample:%n",
         footer = {"  rungtone survey door-chime.wav --bits-list 4..10 --rates 8k,16k \\",
@@ -51,29 +55,35 @@ public final class SurveyCommand implements Callable<Integer> {
             + " the highest surveyed rate).")
     Path source;
 
+    @Section(Heading.QUANTIZING)
     @Option(names = "--bits-list", paramLabel = "<list>", defaultValue = "1..12",
             converter = Converters.BitDepths.class,
             description = "Bit depths: ranges and single depths, comma separated, e.g. 4..10 or 4,6,8"
                     + " (default ${DEFAULT-VALUE}).")
     SurveyLists.BitList bitList;
 
+    @Section(Heading.CONDITIONING)
     @Option(names = "--rates", paramLabel = "<list>", defaultValue = "8k,11.025k,16k,22.05k",
             converter = Converters.Rates.class,
             description = "Sample rates, a comma list (default ${DEFAULT-VALUE}).")
     SurveyLists.RateList rateList;
 
+    @Section(Heading.QUANTIZING)
     @Option(names = "--dither", paramLabel = "none|rpdf|tpdf", defaultValue = "tpdf",
             description = "Dither before quantizing (default ${DEFAULT-VALUE}).")
     Dither dither;
 
+    @Section(Heading.QUANTIZING)
     @Option(names = "--shaping", paramLabel = "none|first|second", defaultValue = "none",
             description = "Error-feedback noise shaping (default ${DEFAULT-VALUE}).")
     ErrorFilter shaping;
 
+    @Section(Heading.QUANTIZING)
     @Option(names = "--seed", paramLabel = "<n>", defaultValue = "1",
             description = "Seed for dither; every cell uses it (default ${DEFAULT-VALUE}).")
     long seed;
 
+    @Section(Heading.INPUT)
     @Option(names = "--channel", paramLabel = "<n>", defaultValue = "0",
             description = "0 mixes all channels down (default); 1..8 picks one.")
     int channel;
@@ -87,20 +97,29 @@ public final class SurveyCommand implements Callable<Integer> {
     @Mixin
     UnitOptions unit;
 
+    @Section(Heading.CHOICE)
     @Option(names = "--flash-budget", paramLabel = "<bytes>", converter = Converters.Bytes.class,
             description = "Flash available for the samples, e.g. 32000 or 32k.")
     Long flashBudget;
 
+    @Section(Heading.CHOICE)
     @Option(names = "--target-sinad", paramLabel = "<dB>", converter = Converters.Decibels.class,
             description = "Least acceptable full-band SINAD in dB, e.g. 40.")
     Double targetSinadDb;
 
+    @Section(Heading.CHOICE)
     @Option(names = "--target-enob", paramLabel = "<bits>",
             description = "Least acceptable effective number of bits, e.g. 6.5 (instead of --target-sinad).")
     Double targetEnobBits;
 
+    @Section(Heading.CHOICE)
     @Option(names = "--packed", description = "Judge the budget and the choice by bit-packed bytes.")
     boolean packed;
+
+    @Option(names = "--storage", paramLabel = "<list>", split = ",", completionCandidates = Choices.TreadStores.class,
+            description = "Survey these Tread stores too,"
+            + " e.g. tread2,tread3,tread4 (packed here counts the plain codes bit-packed, as --packed does).")
+    java.util.List<org.rungtone.firmware.SampleStorage> storages = new java.util.ArrayList<>();
 
     @Option(names = "--previews", description = "Write a 16-bit preview WAV per cell into OUT/previews/.")
     boolean previews;
@@ -125,20 +144,16 @@ public final class SurveyCommand implements Callable<Integer> {
                 : Path.of("rungtone-out", "survey-" + CNames.symbol(FileNames.stem(source, "sound")));
         SurveyRequest request = new SurveyRequest(source, channel, cells, conditioning.settings(),
                 Boards.perDepth(unit.path(), ladder, Defaults.FULL_SCALE_VOLTS),
-                new SurveyRequest.Choice(flashBudget == null ? OptionalLong.empty()
-                        : OptionalLong.of(flashBudget), target(), packed), filter,
-                new SurveyRequest.Output(folder, previews, Version.get()));
-        ProgressLine line = ProgressLine.forTerminal(spec.commandLine().getErr(), common);
+                SurveyRequest.Choice.of(flashBudget == null ? OptionalLong.empty() : OptionalLong.of(flashBudget),
+                        target(), packed, storages), filter, new SurveyRequest.Output(folder, previews, Version.get()));
         SurveyRun.Result result;
-        try {
-            result = new SurveyRun(line::show).run(request);
-        } finally {
-            line.clear();
+        try (ProgressMeter meter = ProgressMeter.onStandardError(spec.commandLine().getErr(), common.quiet)) {
+            result = new SurveyRun((step, done, total) -> meter.show(step, "", total == 0 ? Double.NaN
+                    : done / (double) total)).run(request);
         }
         common.print(spec, json, () -> result.json(), () -> result.text());
         if (common.verbose) {
             spec.commandLine().getErr().println(SurveyReport.timings(result.stageMillis()));
-            spec.commandLine().getErr().flush();
         }
         return 0;
     }
@@ -149,9 +164,7 @@ public final class SurveyCommand implements Callable<Integer> {
             throw new SettingError(Setting.TARGET_SINAD, "give one target, " + Setting.TARGET_SINAD.ref() + " or "
                     + Setting.TARGET_ENOB.ref() + ", not both", null);
         }
-        if (targetSinadDb != null) {
-            return Optional.of(SurveyTarget.sinadDb(targetSinadDb));
-        }
-        return targetEnobBits == null ? Optional.empty() : Optional.of(SurveyTarget.enobBits(targetEnobBits));
+        return Optional.ofNullable(targetSinadDb).map(SurveyTarget::sinadDb)
+                .or(() -> Optional.ofNullable(targetEnobBits).map(SurveyTarget::enobBits));
     }
 }

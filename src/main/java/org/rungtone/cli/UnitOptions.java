@@ -3,6 +3,8 @@ package org.rungtone.cli;
 import java.nio.file.Path;
 import java.util.Optional;
 import java.util.OptionalInt;
+import org.rungtone.cli.shell.Heading;
+import org.rungtone.cli.shell.Section;
 import org.rungtone.project.Boards;
 import picocli.CommandLine.Option;
 
@@ -12,6 +14,7 @@ import picocli.CommandLine.Option;
  * the profile gives the levels and the description the rest (wiring, pin currents); their bit depths must
  * agree.
  */
+@Section(Heading.LADDER)
 public final class UnitOptions {
     @Option(names = "--unit", paramLabel = "PROFILE",
             description = "Use the measured levels of your board: a unit profile written by 'rungtone calibrate"

@@ -137,7 +137,7 @@ final class AvrFastTick {
     }
 
     /** The port's value, {@code (code & m) << d} of its one shift group, into {@code to}. */
-    private static void shift(Asm a, EmitPlan p, String port, String to, boolean inPlace) {
+    static void shift(Asm a, EmitPlan p, String port, String to, boolean inPlace) {
         Map.Entry<Integer, Long> g = p.pins.shiftGroups(port).entrySet().iterator().next();
         int d = g.getKey();
         long m = g.getValue();
@@ -164,7 +164,7 @@ final class AvrFastTick {
         return i == last ? "r24" : VALUE_REGISTERS[i];
     }
 
-    private static String lower(String port) {
+    static String lower(String port) {
         return port.toLowerCase(Locale.ROOT);
     }
 

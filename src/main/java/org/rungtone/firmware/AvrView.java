@@ -15,8 +15,8 @@ import java.util.List;
  * @param clockSelect the CSn2:0 bits of the prescaler, e.g. {@code (_BV(CS11) | _BV(CS10))}
  * @param vector the compare-match interrupt vector, e.g. {@code TIMER1_COMPA_vect}
  * @param reads the flash reads of the tables
- * @param isr the whole timer interrupt in assembler ({@link AvrFastTick}), or null (its section is false) when
- *     the interrupt is the compiled C tick
+ * @param isr the whole timer interrupt in assembler ({@link AvrFastTick}, {@link AvrTreadTick}), or null (its
+ *     section is false) when the interrupt is the compiled C tick
  */
 record AvrView(long cpuClockHz, String cpuClockText, boolean timer0, boolean timer1, boolean timer2,
         String clockSelect, String vector, Reads reads, String isr) {
@@ -42,7 +42,7 @@ record AvrView(long cpuClockHz, String cpuClockText, boolean timer0, boolean tim
         return new AvrView(Math.round(p.request.cpuClockHz()), Fmt.hz(p.request.cpuClockHz()),
                 k == TimerKind.AVR_TIMER0, k == TimerKind.AVR_TIMER1, k == TimerKind.AVR_TIMER2,
                 clockSelect(k, t.prescaler()), "TIMER" + timerNumber(k) + "_COMPA_vect", reads,
-                AvrFastTick.isr(p).orElse(null));
+                AvrFastTick.isr(p).or(() -> AvrTreadTick.isr(p)).orElse(null));
     }
 
     /**

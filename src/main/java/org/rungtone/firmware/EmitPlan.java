@@ -39,6 +39,8 @@ final class EmitPlan {
     final int[] samples;
     final long[] soundStarts;
     final SampleStorage storage;
+    /** The Tread part of a Tread store (clip and loop engines), else null. */
+    final TreadPlan tread;
     final boolean wideIndex;
     final long sampleBytes;
     /** True when the sample table is too big for an avr-gcc array and is defined in assembler. */
@@ -87,6 +89,8 @@ final class EmitPlan {
         samples = concat();
         soundStarts = starts();
         storage = r.storage();
+        tread = storage.codec().filter(f -> engine != PlaybackEngine.SWEEP)
+                .map(f -> TreadPlan.of(f, engine, sounds, bits)).orElse(null);
         long total = samples.length;
         Checks.checkInput(total * bits < (1L << 32), "%d samples of %d bits are more than the player can"
                 + " address (2^32 bits); shorten the sounds", total, bits);
@@ -117,7 +121,12 @@ final class EmitPlan {
     }
 
     long totalBytes() {
-        return sampleBytes + soundTableBytes + pinTableBytes + sweepBytes;
+        return sampleBytes + soundTableBytes + pinTableBytes + sweepBytes + decoderBytes();
+    }
+
+    /** Flash bytes of the Tread decoder's tables and reset points (0 for the other stores). */
+    long decoderBytes() {
+        return tread == null ? 0 : tread.tableBytes();
     }
 
     /** Table bits k of the DDS wavetable. */
@@ -320,7 +329,7 @@ final class EmitPlan {
         long total = totalBytes();
         if (total > family.maxTableBytes()) {
             // the first fix the message proposes is the setting it is about
-            boolean packed = storage == SampleStorage.PACKED;
+            boolean packed = storage != SampleStorage.UNPACKED;
             throw Refusal.of(packed ? Setting.RATE : Setting.STORAGE, "target %s: the tables need %s bytes, more"
                     + " than the %s bytes that pgm_read_byte can reach; use %sa lower %s, fewer %s or a shorter"
                     + " sound", family.folder(), Fmt.bytes(total), Fmt.bytes(family.maxTableBytes()),
@@ -332,7 +341,7 @@ final class EmitPlan {
                 Fmt.bytes(AssemblerTable.MAX_C_OBJECT_BYTES));
         long budget = request.flashBudgetBytes();
         if (budget > 0) {
-            long fixed = soundTableBytes + pinTableBytes + sweepBytes;
+            long fixed = soundTableBytes + pinTableBytes + sweepBytes + decoderBytes();
             List<FlashBudget.Candidate> candidates = isClip() ? FlashBudget.alternatives(samples.length,
                     requestedRateHz, bits, storage, fixed) : List.of();
             FlashBudget.check(total, budget, candidates);

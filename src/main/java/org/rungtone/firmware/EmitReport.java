@@ -103,7 +103,8 @@ final class EmitReport {
                 + " (%s clock); rates up to %s keep it under %.0f %%; measured in simulation (ATmega328P,"
                 + " avr-gcc -Os)", c.worstCycles(), 100 * c.cpuShare(clock, p.tickRateHz), Fmt.hz(p.tickRateHz, 4),
                 Fmt.hz(clock), Fmt.hz(c.maxRateHz(clock, CPU_SHARE_LIMIT), 3), 100 * CPU_SHARE_LIMIT);
-        String how = AvrFastTick.applies(p) ? "; the interrupt is written in assembler" : "";
+        boolean assembler = AvrFastTick.applies(p) || AvrTreadTick.applies(p);
+        String how = assembler ? "; the interrupt is written in assembler" : "";
         return Optional.of((c.idleOff() ? line + "; the timer interrupt is off while nothing plays" : line) + how);
     }
 
@@ -178,9 +179,19 @@ final class EmitReport {
 
     private static String storage(EmitPlan p) {
         SampleStorage other = p.storage == SampleStorage.PACKED ? SampleStorage.UNPACKED : SampleStorage.PACKED;
+        long otherBytes = other.bytes(p.samples.length, p.bits);
+        if (p.tread != null) {
+            double seconds = p.samples.length / p.requestedRateHz;
+            long bytes = p.sampleBytes + p.decoderBytes();
+            return String.format(Locale.ROOT, "storage: %s: %s bytes of stream + %s bytes of decoder tables and %s"
+                    + " for %s samples (%.2f s): %.3f s per kilobyte (%s: %s bytes, %.3f s per kilobyte)",
+                    p.storage.describe(p.bits), Fmt.bytes(p.sampleBytes), Fmt.bytes(p.decoderBytes()),
+                    count(p.tread.resets().size(), "reset point"), Fmt.bytes(p.samples.length), seconds,
+                    1000 * seconds / bytes, other.describe(p.bits), Fmt.bytes(otherBytes), 1000 * seconds / otherBytes);
+        }
         return "storage: " + p.storage.describe(p.bits) + ", " + Fmt.bytes(p.sampleBytes) + " bytes for "
                 + Fmt.bytes(p.samples.length) + " samples (" + other.describe(p.bits) + ": "
-                + Fmt.bytes(other.bytes(p.samples.length, p.bits)) + " bytes)";
+                + Fmt.bytes(otherBytes) + " bytes)";
     }
 
     private static String flash(EmitPlan p) {
@@ -197,6 +208,9 @@ final class EmitReport {
         }
         if (p.sweepBytes > 0) {
             parts.add("sweep codes " + Fmt.bytes(p.sweepBytes));
+        }
+        if (p.decoderBytes() > 0) {
+            parts.add("decoder tables " + Fmt.bytes(p.decoderBytes()));
         }
         b.append(String.join(" + ", parts)).append(" = ").append(Fmt.bytes(p.totalBytes())).append(" bytes");
         long budget = p.request.flashBudgetBytes();
@@ -232,9 +246,12 @@ final class EmitReport {
         SweepSpec s = p.request.sweep().orElseThrow();
         String mode = p.button.isPresent() ? "advancing on each press of " + p.button.get().name()
                 + " (active low, pull-up, " + SweepSpec.DEBOUNCE_MILLIS + " ms debounce)"
-                : "each held " + Fmt.plain(s.holdMillis(), 3) + " ms (" + s.holdTicks() + " ticks)";
-        return "sweep: " + count(s.codes().length, "code") + " at " + Fmt.hz(SweepSpec.TICK_HZ) + " ticks, "
-                + mode;
+                : "each held " + Fmt.plain(s.holdMillis(), 3) + " ms (" + s.holdTicks() + " ticks)"
+                        + (s.patternSteps() > 0 ? ", between a start and an end pattern of " + s.patternSteps()
+                                + " steps of " + s.patternTicks() + " ticks for a recording" : "");
+        String what = s.patternSteps() > 0 ? "step" : "code";
+        return "sweep: " + count(s.codes().length - 2 * s.patternSteps(), what) + " at "
+                + Fmt.hz(SweepSpec.TICK_HZ) + " ticks, " + mode;
     }
 
     private static String count(int n, String what) {

@@ -15,9 +15,10 @@ import java.util.Optional;
  * @param pinStrategy the strategy used for the pins
  * @param warnings problems that do not stop the build
  * @param tickCost the measured worst-case cost of one tick and the glitch window, where the family has figures
+ * @param facts the report's facts as values, for machine-readable reports
  */
 public record EmitResult(List<Path> files, List<String> report, long flashBytes, Optional<TimerSetting> timer,
-        PinStrategy pinStrategy, List<String> warnings, Optional<TickCost> tickCost) {
+        PinStrategy pinStrategy, List<String> warnings, Optional<TickCost> tickCost, FirmwareFacts facts) {
     /** Copies the lists. */
     public EmitResult {
         files = List.copyOf(files);

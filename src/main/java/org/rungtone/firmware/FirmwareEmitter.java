@@ -63,7 +63,7 @@ public final class FirmwareEmitter {
         files.put(d, t.prepare(plan.folder, "data.c.mustache", view.forFile(d, "ladder-DAC player tables", false),
                 view.streams()));
         EmitResult result = new EmitResult(List.of(), report, plan.totalBytes(), plan.timer, plan.strategy,
-                plan.warnings, TickCost.of(plan));
+                plan.warnings, TickCost.of(plan), FirmwareFacts.of(plan));
         return new Rendered(files, result);
     }
 
@@ -93,6 +93,6 @@ public final class FirmwareEmitter {
         }
         EmitResult e = r.result();
         return new EmitResult(written, e.report(), e.flashBytes(), e.timer(), e.pinStrategy(), e.warnings(),
-                e.tickCost());
+                e.tickCost(), e.facts());
     }
 }

@@ -3,6 +3,7 @@ package org.rungtone.firmware;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import org.rungtone.codec.TreadFormat;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.Setting;
 
@@ -57,7 +58,8 @@ public final class FlashBudget {
 
     /**
      * Proposals for a sound of {@code samples} codes at {@code rateHz} and {@code bits} bits: packed storage
-     * at the same or up to four fewer bits, at the same rate or a common lower one; largest first (so the
+     * at the same or up to four fewer bits, at the same rate or a common lower one; for a Tread store, Tread
+     * formats of as many or fewer bits per sample at the same or a lower rate instead; largest first (so the
      * first that fits keeps the most), ties broken by more bits. The current setting is left out.
      *
      * @param fixedBytes bytes that do not depend on the setting (sound tables, pin tables)
@@ -72,21 +74,30 @@ public final class FlashBudget {
                 rates.add(r);
             }
         }
+        int stored = current.codec().map(TreadFormat::codeBits).orElse(0);
         for (double r : rates) {
+            long n = (long) Math.ceil(samples * r / rateHz - 1e-9);
             for (int b = bits; b >= Math.max(1, bits - MAX_BITS_DROPPED); b--) {
-                if (r == rateHz && b == bits && current == SampleStorage.PACKED) {
+                if (r == rateHz && b == bits && current == SampleStorage.PACKED || stored > 0) {
                     continue;
                 }
-                long n = (long) Math.ceil(samples * r / rateHz - 1e-9);
-                grid.add(new double[] {r, b, SampleStorage.PACKED.bytes(n, b) + fixedBytes});
+                grid.add(new double[] {r, b, SampleStorage.PACKED.bytes(n, b) + fixedBytes, 0});
+            }
+            // a Tread store: the same ladder with fewer bits per sample, or the same store at a lower rate
+            for (TreadFormat f : TreadFormat.values()) {
+                if (f.codeBits() <= stored && (r != rateHz || f.codeBits() < stored)) {
+                    grid.add(new double[] {r, bits, f.streamBytes(n) + fixedBytes, f.codeBits()});
+                }
             }
         }
         grid.sort(Comparator.comparingDouble((double[] g) -> -g[2]).thenComparingDouble(g -> -g[1]));
         List<Candidate> out = new ArrayList<>(grid.size());
         for (double[] g : grid) {
             int b = (int) g[1];
-            // 8- and 16-bit codes fill whole bytes: packing changes nothing, so do not call it packed
-            out.add(new Candidate(b + "-bit" + (b % 8 == 0 ? "" : " packed") + " at " + Fmt.hz(g[0]), (long) g[2]));
+            String label = g[3] > 0 ? "tread" + (int) g[3]
+                    // 8- and 16-bit codes fill whole bytes: packing changes nothing, so do not call it packed
+                    : b + "-bit" + (b % 8 == 0 ? "" : " packed");
+            out.add(new Candidate(label + " at " + Fmt.hz(g[0]), (long) g[2]));
         }
         return out;
     }

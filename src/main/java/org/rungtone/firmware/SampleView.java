@@ -27,19 +27,26 @@ import java.util.List;
  * @param assembler true when the table is too big for an avr-gcc array and is defined in assembler
  * @param shiftUp true when the narrow reader finds its leftover bits by shifting its window up by 8 − N
  *     (N of 5 to 7), rather than by shifting its two bytes apart
+ * @param width the C name of the bits per stored code: N packed, b for a Tread stream
+ * @param mask the C name of the mask of one stored code
+ * @param tread the Tread decoder's values, or null for the other stores
+ * @param sentinel true for a Tread stream of 2 or 4 bits per code, read a byte at a time with a marker bit
  */
 record SampleView(boolean packed, long count, long bytes, Templates.Stream data, List<String> ranges,
         boolean secondByte, boolean thirdByte, String wordType, boolean stepwise, String element, int perCode,
         String placeOf, String readAt, boolean narrow, boolean wide, boolean shiftUp, String extent,
-        boolean assembler) {
+        boolean assembler, String width, String mask, TreadView tread, boolean sentinel) {
     private static final int PER_LINE = 16;
 
     /** The values of the plan's samples. */
     static SampleView of(EmitPlan p) {
-        boolean packed = p.storage == SampleStorage.PACKED;
-        int g = gcd(p.bits, 8);
-        boolean second = 8 - g + p.bits > 8;
-        boolean third = 8 - g + p.bits > 16;
+        boolean coded = p.tread != null;
+        boolean packed = p.storage == SampleStorage.PACKED || coded;
+        // bits per stored code: N packed, b in a Tread stream
+        int w = coded ? p.tread.format().codeBits() : p.bits;
+        int g = gcd(w, 8);
+        boolean second = 8 - g + w > 8;
+        boolean third = 8 - g + w > 16;
         List<String> ranges = new ArrayList<>();
         if (p.isClip()) {
             for (int i = 0; i < p.sounds.size(); i++) {
@@ -50,25 +57,30 @@ record SampleView(boolean packed, long count, long bytes, Templates.Stream data,
         // Streamed to the file: a long sound's array is never one string.
         Templates.Stream data = Templates.stream(out -> {
             if (p.samplesInAssembler) {
-                AssemblerTable.write(p.symbol + "_samples", AssemblerTable.bytes(p.samples, p.bits, packed), out);
+                AssemblerTable.write(p.symbol + "_samples", coded ? p.tread.streamBytes()
+                        : AssemblerTable.bytes(p.samples, p.bits, packed), out);
+            } else if (coded) {
+                CLiterals.writeArrayBody(p.tread.streamBytes(), PER_LINE, "    ", out);
             } else if (packed) {
                 CLiterals.writeArrayBody(SamplePacking.pack(p.samples, p.bits), PER_LINE, "    ", out);
             } else {
                 CLiterals.writeArrayBody(p.samples, CLiterals.hexDigits(p.bits), PER_LINE, "    ", out);
             }
         });
-        boolean stepwise = !packed || p.bits % 8 == 0;
-        boolean pairs = packed && p.bits == 16;
+        boolean stepwise = !packed || w % 8 == 0;
+        boolean pairs = packed && w == 16;
         String element = packed || p.bits <= 8 ? "uint8_t" : "uint16_t";
         String table = p.symbol + "_samples";
         String readAt = pairs ? "(" + p.macro + "_READ_U8(at) | (" + p.macro + "_READ_U8(at + 1) << 8))"
                 : p.macro + (packed ? "_READ_U8(at)" : "_READ_SAMPLE(at)");
         return new SampleView(packed, p.samples.length, p.sampleBytes, data, List.copyOf(ranges), second, third,
                 third ? "uint32_t" : "uint16_t", stepwise, element, pairs ? 2 : 1,
-                "&" + table + "[" + (pairs ? "index * 2u" : "index") + "]", readAt, packed && p.bits < 8,
-                packed && p.bits > 8 && p.bits < 16, packed && p.bits >= 5 && p.bits < 8,
+                "&" + table + "[" + (pairs ? "index * 2u" : "index") + "]", readAt, packed && w < 8,
+                packed && w > 8 && w < 16, packed && w >= 5 && w < 8,
                 p.samplesInAssembler ? "" : p.macro + (packed ? "_SAMPLE_BYTES" : "_SAMPLE_COUNT"),
-                p.samplesInAssembler);
+                p.samplesInAssembler, p.macro + (coded ? "_CODE_BITS" : "_BITS"),
+                p.macro + (coded ? "_CODE_MASK" : "_MAX_CODE"), coded ? TreadView.of(p.tread, p.bits) : null,
+                coded && 8 % w == 0);
     }
 
     private static int gcd(int a, int b) {

@@ -8,7 +8,8 @@ import org.rungtone.internal.Setting;
 /**
  * The measurement sweep: put each code on the ladder in turn, holding it for {@code holdMillis} or until
  * the next press of a button (active low, internal pull-up, debounced for {@value #DEBOUNCE_MILLIS} ms).
- * The sweep ticks at {@value #TICK_HZ} Hz.
+ * The sweep ticks at {@value #TICK_HZ} Hz. A sweep for a recording is framed by a pattern of
+ * {@link #patternSteps()} steps at each end, each held {@link #patternTicks()} ticks instead.
  */
 public final class SweepSpec {
     /** Tick rate of the sweep program. */
@@ -20,8 +21,15 @@ public final class SweepSpec {
     private final int[] codes;
     private final double holdMillis;
     private final Optional<String> buttonPin;
+    private final int patternSteps;
+    private final int patternTicks;
 
     private SweepSpec(int bits, int[] codes, double holdMillis, Optional<String> buttonPin) {
+        this(bits, codes, holdMillis, buttonPin, 0, 0);
+    }
+
+    private SweepSpec(int bits, int[] codes, double holdMillis, Optional<String> buttonPin, int patternSteps,
+            int patternTicks) {
         Checks.checkBits(bits);
         Checks.checkInput(codes.length >= 1 && codes.length <= 65535, "a sweep needs 1..65535 codes: %d",
                 codes.length);
@@ -34,6 +42,26 @@ public final class SweepSpec {
         this.codes = codes.clone();
         this.holdMillis = holdMillis;
         this.buttonPin = buttonPin;
+        this.patternSteps = patternSteps;
+        this.patternTicks = patternTicks;
+    }
+
+    /**
+     * A sweep for a recording: {@code patternSteps} steps of {@code patternTicks} ticks, then the codes between
+     * held {@code holdMillis} each, then {@code patternSteps} steps of {@code patternTicks} ticks again;
+     * {@code codes} holds all of them in order.
+     *
+     * @throws org.rungtone.internal.InputError when a code does not fit, the hold is not positive, or the
+     *     patterns leave no code between them
+     */
+    public static SweepSpec recording(int bits, int[] codes, double holdMillis, int patternSteps,
+            int patternTicks) {
+        Setting.HOLD.check(Double.isFinite(holdMillis) && holdMillis > 0, "must be a positive time: %s ms",
+                holdMillis);
+        Checks.checkArgument(patternSteps >= 1 && patternTicks >= 1 && codes.length > 2 * patternSteps,
+                "a recording sweep needs codes between its two patterns of %d steps: %d codes", patternSteps,
+                codes.length);
+        return new SweepSpec(bits, codes, holdMillis, Optional.empty(), patternSteps, patternTicks);
     }
 
     /**
@@ -89,6 +117,22 @@ public final class SweepSpec {
         return Math.max(1, Math.round(holdMillis * TICK_HZ / 1000));
     }
 
+    /** Steps of each pattern of a sweep for a recording; 0 for a plain sweep. */
+    public int patternSteps() {
+        return patternSteps;
+    }
+
+    /** Ticks each pattern step is held; 0 for a plain sweep. */
+    public int patternTicks() {
+        return patternTicks;
+    }
+
+    /** Ticks step {@code i} is held: a pattern step's or {@link #holdTicks()}. */
+    public long ticksOf(int step) {
+        boolean pattern = step < patternSteps || step >= codes.length - patternSteps;
+        return pattern && patternSteps > 0 ? patternTicks : holdTicks();
+    }
+
     /** The button pin as written, when the sweep advances on a button. */
     public Optional<String> buttonPin() {
         return buttonPin;
@@ -102,7 +146,8 @@ public final class SweepSpec {
     @Override
     public boolean equals(Object o) {
         return o instanceof SweepSpec s && s.bits == bits && Arrays.equals(s.codes, codes)
-                && s.holdMillis == holdMillis && s.buttonPin.equals(buttonPin);
+                && s.holdMillis == holdMillis && s.buttonPin.equals(buttonPin) && s.patternSteps == patternSteps
+                && s.patternTicks == patternTicks;
     }
 
     @Override
@@ -113,6 +158,6 @@ public final class SweepSpec {
     @Override
     public String toString() {
         return "SweepSpec[" + codes.length + " codes, " + (buttonPin.isPresent() ? "button " + buttonPin.get()
-                : "hold " + holdMillis + " ms") + "]";
+                : "hold " + holdMillis + " ms") + (patternSteps > 0 ? ", patterns of " + patternSteps : "") + "]";
     }
 }

@@ -11,6 +11,8 @@ public enum Setting {
     NAME("sound.name"),
     /** The output folder. */
     OUT("project.out"),
+    /** The folder of the emitted C files, when apart from the output folder. */
+    C_OUT("project.c_out"),
     /** Seed of every random process. */
     SEED("project.seed"),
     /** A measured unit profile. */
@@ -94,7 +96,21 @@ public enum Setting {
     /** The sweep program's step button. */
     BUTTON("sweep.button"),
     /** The sweep program's hold time per code. */
-    HOLD("sweep.hold");
+    HOLD("sweep.hold"),
+    /** The sweep program is for a sound card's recording: framed by patterns a fit can find. */
+    RECORDING("sweep.recording"),
+    /** The meter's step for every reading of a measurements file. */
+    RESOLUTION("fit.resolution"),
+    /** The day a board was measured or recorded. */
+    DATE("fit.date"),
+    /** The counts of the meter a plan chooses its codes for. */
+    METER_COUNTS("plan.meter_counts"),
+    /** Check codes a plan measures on top of the basis. */
+    VERIFY("plan.verify"),
+    /** A plan measures every code. */
+    EVERY_CODE("plan.every_code"),
+    /** A meter reading of the all-ones code that scales a recording's relative levels to volts. */
+    FULL_SCALE_READING("listen.full_scale_reading");
 
     private final String key;
 

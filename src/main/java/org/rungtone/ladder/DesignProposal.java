@@ -1,5 +1,6 @@
 package org.rungtone.ladder;
 
+import java.util.ArrayList;
 import java.util.List;
 
 /**
@@ -22,6 +23,19 @@ public record DesignProposal(ESeries series, List<Double> idealOhms, List<PartCh
         idealOhms = List.copyOf(idealOhms);
         naive = List.copyOf(naive);
         proposed = List.copyOf(proposed);
+    }
+
+    /**
+     * The ladder built from the proposal: {@code original} with every part's proposed value as its own
+     * ({@code resistors}, an r2r ladder's rungs and termination included) and this series. Its levels are
+     * those of {@link #proposedLadder()}.
+     */
+    public LadderSpec spec(LadderSpec original) {
+        List<Double> ohms = new ArrayList<>();
+        for (PartChoice c : proposed) {
+            ohms.add(c.ohms());
+        }
+        return original.toBuilder().resistors(ohms).series(series).build();
     }
 
     /** Number of resistors the proposal needs. */

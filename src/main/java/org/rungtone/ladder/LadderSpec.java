@@ -129,15 +129,17 @@ public final class LadderSpec {
             }
             return list;
         }
+        // every part's own value when given (legs, rungs, termination), else R and 2R from base_r
+        boolean own = !resistors.isEmpty();
         double r = snap(baseROhms);
         double r2 = snap(2 * baseROhms);
         for (int i = 0; i < bits; i++) {
-            list.add(new Part(Part.Role.LEG, i, r2));
+            list.add(new Part(Part.Role.LEG, i, own ? resistors.get(i) : r2));
         }
         for (int i = 0; i + 1 < bits; i++) {
-            list.add(new Part(Part.Role.RUNG, i, r));
+            list.add(new Part(Part.Role.RUNG, i, own ? resistors.get(bits + i) : r));
         }
-        list.add(new Part(Part.Role.TERMINATION, 0, r2));
+        list.add(new Part(Part.Role.TERMINATION, 0, own ? resistors.get(2 * bits - 1) : r2));
         return list;
     }
 
@@ -163,7 +165,10 @@ public final class LadderSpec {
         return bits;
     }
 
-    /** The per-bit resistors as the user gave them, bit 0 first; empty when derived from base_r. */
+    /**
+     * The resistors as the user gave them: one per bit, bit 0 first (weighted, custom), or every part in the
+     * order of {@link #parts()} (r2r); empty when derived from base_r.
+     */
     public List<Double> resistors() {
         return resistors;
     }

@@ -21,9 +21,6 @@ public record LadderStudy(LadderAnalysis analysis, List<String> pinNames, Option
     /** The most boards one study simulates. */
     public static final int MAX_BOARDS = 2_000_000;
 
-    /** Level evaluations (boards times codes) from which a Monte Carlo run takes about a second or more. */
-    private static final long SLOW_EVALUATIONS = 1L << 26;
-
     /** Copies the list and checks there is one pin name per bit. */
     public LadderStudy {
         pinNames = List.copyOf(pinNames);
@@ -66,11 +63,6 @@ public record LadderStudy(LadderAnalysis analysis, List<String> pinNames, Option
                     "at most %d boards", MAX_BOARDS);
         }
 
-        /** True when the Monte Carlo run is long enough (about a second or more) to be worth a progress line. */
-        public boolean isSlow() {
-            return monteCarlo.map(m -> ((long) m.boards() << spec.bits()) >= SLOW_EVALUATIONS).orElse(false);
-        }
-
         /**
          * Analyses the ladder, then runs Monte Carlo and the design proposal when asked for.
          *
@@ -93,11 +85,11 @@ public record LadderStudy(LadderAnalysis analysis, List<String> pinNames, Option
         }
     }
 
-    /** D0, D1, ...: the pins by bit number when the user gave no names. */
+    /** pin0, pin1, ...: the pins by bit number when the user gave no names (no part's or board's names). */
     static List<String> defaultPinNames(int bits) {
         List<String> names = new ArrayList<>();
         for (int i = 0; i < bits; i++) {
-            names.add("D" + i);
+            names.add("pin" + i);
         }
         return names;
     }

@@ -6,8 +6,10 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalLong;
 import org.rungtone.analysis.ReconstructionFilter;
+import org.rungtone.codec.TreadFormat;
 import org.rungtone.condition.ResamplerKind;
 import org.rungtone.firmware.FirmwareRequest;
+import org.rungtone.firmware.PlaybackEngine;
 import org.rungtone.ladder.LadderSpec;
 import org.rungtone.ladder.LevelTable;
 import org.rungtone.quantize.Compensation;
@@ -75,10 +77,12 @@ public record BuildPlan(String symbol, Path outDir, SourceSettings source, Condi
         private double previewSeconds = Defaults.PREVIEW_SECONDS;
         private double fullScaleVolts = Defaults.FULL_SCALE_VOLTS;
         private Optional<FirmwareRequest> player = Optional.empty();
+        private Optional<TreadFormat> codec = Optional.empty();
         private Optional<LoopSpan> loop = Optional.empty();
         private OptionalLong flashBudgetBytes = OptionalLong.empty();
         private String flashQualifier = "";
         private String name;
+        private Optional<Path> cOutDir = Optional.empty();
 
         private Builder(Path source, String symbol, Path outDir) {
             this.source = source;
@@ -197,6 +201,15 @@ public record BuildPlan(String symbol, Path outDir, SourceSettings source, Condi
             return this;
         }
 
+        /**
+         * The Tread format the codes are stored in (default: the player's storage, when it is a Tread one
+         * and the player stores samples).
+         */
+        public Builder codec(Optional<TreadFormat> value) {
+            codec = value;
+            return this;
+        }
+
         /** Loop points (default none). */
         public Builder loop(Optional<LoopSpan> value) {
             loop = value;
@@ -215,6 +228,12 @@ public record BuildPlan(String symbol, Path outDir, SourceSettings source, Condi
             return this;
         }
 
+        /** The folder of the C files (default: the output folder). */
+        public Builder cOutDir(Optional<Path> value) {
+            cOutDir = value;
+            return this;
+        }
+
         /**
          * The validated plan.
          *
@@ -224,9 +243,10 @@ public record BuildPlan(String symbol, Path outDir, SourceSettings source, Condi
             return new BuildPlan(symbol, outDir, new SourceSettings(source, channel, name == null ? symbol : name),
                     new ConditioningSettings(rateHz, removeDc, trimDbfs, gainDb, normalizeDbfs, fadeInSeconds,
                             fadeOutSeconds, resampler),
-                    new QuantizeSettings(bits, dither, shaping, seed, board, compensation),
+                    new QuantizeSettings(bits, dither, shaping, seed, board, compensation, codec.or(() -> player
+                            .filter(p -> p.engine() != PlaybackEngine.SWEEP).flatMap(p -> p.storage().codec()))),
                     new PreviewSettings(filter, previewRateHz, previewSeconds, fullScaleVolts),
-                    new FirmwareSettings(player, loop, flashBudgetBytes, flashQualifier));
+                    new FirmwareSettings(player, loop, flashBudgetBytes, flashQualifier, cOutDir));
         }
     }
 }

@@ -1,5 +1,6 @@
 package org.rungtone.project;
 
+import java.nio.file.Path;
 import java.util.Optional;
 import java.util.OptionalLong;
 import org.rungtone.firmware.FirmwareRequest;
@@ -13,9 +14,10 @@ import org.rungtone.internal.Setting;
  * @param loop loop points of a looped sound
  * @param flashBudgetBytes the most flash the samples may take, when limited
  * @param flashQualifier attribute that keeps a bare sample array in flash
+ * @param cOutDir the folder of the C files, when apart from the output folder
  */
 public record FirmwareSettings(Optional<FirmwareRequest> player, Optional<LoopSpan> loop, OptionalLong flashBudgetBytes,
-        String flashQualifier) {
+        String flashQualifier, Optional<Path> cOutDir) {
     /**
      * Validates the budget and the attribute ({@link FlashAttribute}), which is kept trimmed.
      *

@@ -25,6 +25,7 @@ import org.rungtone.quantize.ErrorFilter;
  * @param file the project file
  * @param name project name: the C symbol prefix of the shared code
  * @param outDir output folder, resolved against the file's folder
+ * @param cOutDir folder of the C files, resolved against the file's folder, when apart from the output folder
  * @param seed random seed
  * @param unitProfile measured unit profile, resolved against the file's folder
  * @param compensation quantize onto the board's real levels
@@ -34,7 +35,8 @@ import org.rungtone.quantize.ErrorFilter;
  * @param preview preview settings
  * @param sounds the sounds, in file order
  */
-public record Project(Path file, String name, Optional<Path> outDir, Optional<Long> seed, Optional<Path> unitProfile,
+public record Project(Path file, String name, Optional<Path> outDir, Optional<Path> cOutDir, Optional<Long> seed,
+        Optional<Path> unitProfile,
         Optional<Compensation> compensation, Target target, Optional<LadderTable> ladder, Quantize quantize,
         Preview preview, List<Sound> sounds) {
 
@@ -52,7 +54,7 @@ public record Project(Path file, String name, Optional<Path> outDir, Optional<Lo
      * @param pins pin list
      * @param portWidth port width for generic
      * @param pinStrategy auto, shift, table, scatter
-     * @param storage unpacked or packed
+     * @param storage unpacked, packed or a Tread store
      * @param engine clip, loop, dds
      * @param rateTolerancePpm allowed rate error
      * @param flashBudgetBytes flash budget

@@ -10,14 +10,15 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
 import java.util.OptionalLong;
-import java.util.concurrent.CompletableFuture;
 import java.util.function.UnaryOperator;
 import org.rungtone.calibrate.OutputSpan;
+import org.rungtone.codec.TreadFormat;
 import org.rungtone.condition.ResamplerKind;
 import org.rungtone.firmware.CNames;
 import org.rungtone.firmware.DdsSpec;
 import org.rungtone.firmware.EmitResult;
 import org.rungtone.firmware.FirmwareEmitter;
+import org.rungtone.firmware.FirmwareFacts;
 import org.rungtone.firmware.FirmwareRequest;
 import org.rungtone.firmware.FlashBudget;
 import org.rungtone.firmware.PlaybackEngine;
@@ -37,35 +38,36 @@ import org.rungtone.quantize.ErrorFilter;
 import org.rungtone.report.BuildSummary;
 import org.rungtone.report.HtmlReport;
 import org.rungtone.report.Json;
-import org.rungtone.report.PlotWarmUp;
 import org.rungtone.report.ProjectReport;
+import org.rungtone.report.ProjectSetting;
+import org.rungtone.report.ProjectSetting.Origin;
 import org.rungtone.report.SoundPlots;
 
 /**
- * Builds every sound of a {@link Project} into one coherent set of outputs: one header exposing all sounds,
- * shared player code and one pin map (or one sample array per sound without a player), each sound's preview
- * and plots in a folder of its own, and one report covering all sounds and their total flash. Command-line
- * overrides win over file values, which win over defaults; the report lists the effective settings and where
- * each came from.
+ * Builds every sound of a {@link Project} into one set of outputs: one header for all sounds, shared player
+ * code and one pin map (or a sample array per sound without a player), each sound's preview and plots in a
+ * folder of its own, one report of all sounds and their flash. The command line wins over the file, the file
+ * over defaults; the report lists each effective setting and where it came from.
  */
 public final class ProjectBuild {
-    /** The setting naming the output folder: in the report, never in the C files (they must not depend on it). */
+    /** The settings naming the output folder and the C files' own: in the report, never in the C files. */
     private static final String OUT_SETTING = "out";
+    private static final String C_OUT_SETTING = "c_out";
 
     private final String toolVersion;
     private final OutputSpan span;
-    private final java.util.function.Consumer<String> progress;
+    private final BuildProgress progress;
 
     /** A project build stamping {@code toolVersion} into its outputs. */
     public ProjectBuild(String toolVersion) {
-        this(toolVersion, OutputSpan.FULL, line -> { });
+        this(toolVersion, OutputSpan.FULL, BuildProgress.NONE);
     }
 
     /**
-     * A project build with the output span of compensated sounds that reports "sound 2/3 door_chime:
-     * decode done" style lines to {@code progress}.
+     * A project build with the output span of compensated sounds that tells {@code progress} how far it has
+     * got: "sound 2/3 door_chime: condition done" and the share of the whole project (every sound counts alike).
      */
-    public ProjectBuild(String toolVersion, OutputSpan span, java.util.function.Consumer<String> progress) {
+    public ProjectBuild(String toolVersion, OutputSpan span, BuildProgress progress) {
         this.toolVersion = toolVersion;
         this.span = span;
         this.progress = progress;
@@ -80,6 +82,7 @@ public final class ProjectBuild {
      * @param shaping --shaping
      * @param seed --seed
      * @param outDir --out
+     * @param cOutDir --c-out
      * @param compensation --compensation
      * @param unit --unit, a measured unit profile that replaces the project's board
      * @param ladder the command line's ladder description, on top of the project's [ladder] table
@@ -87,7 +90,7 @@ public final class ProjectBuild {
      * @param wantsPlayer the command line asked for a player
      */
     public record Overrides(OptionalInt bits, OptionalDouble rateHz, Optional<Dither> dither,
-            Optional<ErrorFilter> shaping, Optional<Long> seed, Optional<Path> outDir,
+            Optional<ErrorFilter> shaping, Optional<Long> seed, Optional<Path> outDir, Optional<Path> cOutDir,
             Optional<Compensation> compensation, Optional<Path> unit, LadderDescription ladder,
             UnaryOperator<FirmwareRequest.Builder> firmware, boolean wantsPlayer) {
         /**
@@ -108,6 +111,8 @@ public final class ProjectBuild {
                     return seed.isPresent();
                 case OUT:
                     return outDir.isPresent();
+                case C_OUT:
+                    return cOutDir.isPresent();
                 case COMPENSATION:
                     return compensation.isPresent();
                 case UNIT:
@@ -120,8 +125,8 @@ public final class ProjectBuild {
         /** No overrides: the project as written. */
         public static Overrides none() {
             return new Overrides(OptionalInt.empty(), OptionalDouble.empty(), Optional.empty(), Optional.empty(),
-                    Optional.empty(), Optional.empty(), Optional.empty(), Optional.empty(), LadderDescription.none(),
-                    b -> b, false);
+                    Optional.empty(), Optional.empty(), Optional.empty(), Optional.empty(), Optional.empty(),
+                    LadderDescription.none(), b -> b, false);
         }
     }
 
@@ -162,35 +167,41 @@ public final class ProjectBuild {
      * The settings every sound of the project shares, with command-line overrides applied, and each one's
      * value and origin for the reports.
      */
-    private record Shared(Path outDir, int bits, Dither dither, ErrorFilter shaping, long seed,
-            Compensation compensation, Optional<LevelTable> board, OptionalDouble rateHz,
-            Map<String, String> settings) {
+    private record Shared(Path outDir, Optional<Path> cOutDir, int bits, Dither dither, ErrorFilter shaping,
+            long seed, Compensation compensation, Optional<LevelTable> board, OptionalDouble rateHz,
+            Map<String, ProjectSetting> settings) {
     }
 
     /** What emission wrote and said. */
-    private record Emitted(List<Path> files, List<String> firmwareLines, List<String> warnings, long flashBytes) {
+    private record Emitted(List<Path> files, List<String> firmwareLines, List<String> warnings, long flashBytes,
+            Optional<FirmwareFacts> facts) {
     }
 
     private Result build(Project project, Overrides o) {
         Shared shared = settle(project, o);
-        try (OutputFolder folder = OutputFolder.open(shared.outDir())) {
-            Result r = build(project, o, shared);
+        try (OutputFolder folder = OutputFolder.open(shared.outDir());
+                CFolder c = CFolder.open(shared.outDir(), shared.cOutDir())) {
+            Result r = build(project, o, shared, c.dir());
+            c.commit();
             folder.commit();
             return r;
         }
     }
 
-    private Result build(Project project, Overrides o, Shared shared) {
+    private Result build(Project project, Overrides o, Shared shared, Path cDir) {
         Optional<FirmwareRequest> player = player(project, o, shared.settings());
         if (player.isPresent()) {
             checkOneRate(project, o, shared.rateHz());
         }
-        CompletableFuture<Void> plotsReady = PlotWarmUp.start();
+        java.util.concurrent.CompletableFuture<Void> plotsReady =
+                java.util.concurrent.CompletableFuture.runAsync(org.rungtone.report.Plots::warmUp);
         // every sound's settings are checked before the first sound is rendered
         List<BuildPlan> plans = new ArrayList<>();
+        Optional<TreadFormat> codec = player.filter(p -> p.engine() != PlaybackEngine.SWEEP)
+                .flatMap(p -> p.storage().codec());
         for (Project.Sound s : project.sounds()) {
             try {
-                plans.add(plan(project, s, o, shared));
+                plans.add(plan(project, s, o, shared, codec));
             } catch (SettingError e) {
                 throw located(project, s, o, e);
             }
@@ -200,72 +211,73 @@ public final class ProjectBuild {
             Project.Sound s = project.sounds().get(i);
             String label = String.format(Locale.ROOT, "sound %d/%d %s", s.index(), project.sounds().size(),
                     s.name());
+            double before = i;
+            BuildProgress sound = (step, share) -> progress.update(label + ": " + step,
+                    (before + share / BuildStage.rendered()) / plans.size() * BuildStage.rendered());
             try {
-                rendered.add(new SoundRenderer(span, stage -> progress.accept(label + ": " + stage + " done"))
-                        .render(plans.get(i)));
+                rendered.add(new SoundRenderer(span, sound).render(plans.get(i)));
             } catch (SettingError e) {
                 throw located(project, s, o, e);
             }
         }
-        progress.accept("writing firmware, previews and reports");
-        // comparable plots of all sounds share their y ranges; the previews and plots are written on another
-        // core while the firmware is
-        SoundPlots.Scales scales = SoundPlots.Scales.of(rendered.stream().map(Build::plotData).toList());
-        CompletableFuture<List<List<Path>>> assets = plotsReady.thenApplyAsync(loaded -> rendered.stream()
-                .map(r -> Build.writeAssets(r, r.plan().outDir(), scales)).toList());
-        Emitted emitted;
-        try {
-            emitted = emit(project, player, shared, rendered);
-        } catch (RuntimeException e) {
-            // the staging folder goes once the assets are done with it
-            assets.handle((done, failed) -> null).join();
-            throw e;
-        }
+        progress.update("writing firmware, previews and reports", BuildStage.rendered());
+        Emitted emitted = emit(project, player, shared, rendered, cDir);
+        Jobs.join(plotsReady);
         Build build = new Build(toolVersion);
         List<Path> files = new ArrayList<>(emitted.files());
         List<BuildSummary> summaries = new ArrayList<>();
-        for (int i = 0; i < rendered.size(); i++) {
-            SoundRenderer.Rendered r = rendered.get(i);
-            List<Path> soundAssets = Jobs.join(assets).get(i);
-            files.addAll(soundAssets);
+        // comparable plots of all sounds share their y ranges
+        SoundPlots.Scales scales = SoundPlots.Scales.of(rendered.stream().map(Build::plotData).toList());
+        for (SoundRenderer.Rendered r : rendered) {
+            List<Path> assets = Build.writeAssets(r, r.plan().outDir(), scales);
+            files.addAll(assets);
             SampleStorage storage = player.map(FirmwareRequest::storage).orElse(SampleStorage.UNPACKED);
             long soundBytes = storage.bytes(r.emitted().length(), r.plan().bits());
-            summaries.add(build.summary(r, List.of(), soundBytes, soundAssets, r.warnings(), r.stageMillis()));
+            summaries.add(build.summary(r, List.of(), Optional.empty(), soundBytes, assets, r.warnings(),
+                    r.stageMillis()));
         }
         return writeReports(project, shared, summaries, emitted, files);
     }
 
     /** Decides the shared settings: command line over project file over defaults. */
     private Shared settle(Project project, Overrides o) {
-        Map<String, String> settings = new LinkedHashMap<>();
+        Map<String, ProjectSetting> settings = new LinkedHashMap<>();
         Path outDir = o.outDir().or(project::outDir)
                 .orElse(project.file().toAbsolutePath().getParent().resolve("rungtone-out").resolve(project.name()))
                 .toAbsolutePath().normalize();
-        settings.put(OUT_SETTING, outDir + origin(o.outDir().isPresent(), project.outDir().isPresent()));
+        settings.put(OUT_SETTING, ProjectSetting.shown(outDir, outDir.toString(), Origin.of(o.outDir().isPresent(),
+                project.outDir().isPresent())));
         AtomicFiles.checkFolderUsable(outDir);
+        Optional<Path> cOut = o.cOutDir().or(project::cOutDir).map(p -> p.toAbsolutePath().normalize());
+        cOut.ifPresent(p -> settings.put(C_OUT_SETTING, ProjectSetting.shown(p, p.toString(),
+                Origin.of(o.cOutDir().isPresent(), true))));
         Project.Quantize q = project.quantize();
         int fixedBits = o.bits().isPresent() ? o.bits().getAsInt() : q.bits().map(Long::intValue).orElse(0);
         Optional<LevelTable> board = Boards.ofProject(project, o.unit(), o.ladder(), fixedBits);
         int bits = fixedBits != 0 ? fixedBits : board.map(LevelTable::bits).orElse(LadderSpec.DEFAULT_BITS);
-        settings.put("bits", bits + (fixedBits == 0 && board.isPresent() ? "  (board)"
-                : origin(o.bits().isPresent(), q.bits().isPresent())));
+        settings.put("bits", ProjectSetting.shown(bits, Integer.toString(bits), fixedBits == 0 && board.isPresent()
+                ? Origin.BOARD : Origin.of(o.bits().isPresent(), q.bits().isPresent())));
         Dither dither = o.dither().or(q::dither).orElse(Defaults.DITHER);
-        settings.put("dither", dither.label() + origin(o.dither().isPresent(), q.dither().isPresent()));
+        settings.put("dither", shown(dither.label(), Origin.of(o.dither().isPresent(), q.dither().isPresent())));
         ErrorFilter shaping = o.shaping().or(q::shaping).orElse(Defaults.SHAPING);
-        settings.put("shaping", shaping.name() + origin(o.shaping().isPresent(), q.shaping().isPresent()));
+        settings.put("shaping", shown(shaping.name(), Origin.of(o.shaping().isPresent(), q.shaping().isPresent())));
         long seed = o.seed().or(project::seed).orElse(Defaults.SEED);
-        settings.put("seed", seed + origin(o.seed().isPresent(), project.seed().isPresent()));
+        settings.put("seed", ProjectSetting.shown(seed, Long.toString(seed), Origin.of(o.seed().isPresent(),
+                project.seed().isPresent())));
         Compensation compensation = o.compensation().or(project::compensation).orElse(Defaults.COMPENSATION);
-        settings.put("levels", board.map(LevelTable::origin).orElse("ideal ladder"));
+        String levels = board.map(LevelTable::origin).orElse("ideal ladder");
+        settings.put("levels", ProjectSetting.plain(levels, levels, board.isEmpty() ? Origin.DEFAULT
+                : Origin.of(o.unit().isPresent() || o.ladder().given(), true)));
         if (board.isPresent() && span != OutputSpan.FULL) {
-            settings.put("span", span.key());
+            settings.put("span", ProjectSetting.plain(span.key(), span.key(),
+                    Origin.of(project.quantize().span().filter(span::equals).isEmpty(), true)));
         }
         if (board.isPresent()) {
-            settings.put("compensation", compensation.key()
-                    + origin(o.compensation().isPresent(), project.compensation().isPresent()));
+            settings.put("compensation", shown(compensation.key(), Origin.of(o.compensation().isPresent(),
+                    project.compensation().isPresent())));
         }
         OptionalDouble rate = o.rateHz().isPresent() ? o.rateHz() : q.rateHz();
-        return new Shared(outDir, bits, dither, shaping, seed, compensation, board, rate, settings);
+        return new Shared(outDir, cOut, bits, dither, shaping, seed, compensation, board, rate, settings);
     }
 
     /**
@@ -280,7 +292,8 @@ public final class ProjectBuild {
     }
 
     /** The build plan of one sound. */
-    private static BuildPlan plan(Project project, Project.Sound s, Overrides o, Shared shared) {
+    private static BuildPlan plan(Project project, Project.Sound s, Overrides o, Shared shared,
+            Optional<TreadFormat> codec) {
         OptionalDouble rate = o.rateHz().isPresent() ? o.rateHz() : s.rateHz().isPresent() ? s.rateHz()
                 : shared.rateHz();
         String symbol = CNames.symbol(project.name()) + "_" + CNames.symbol(s.name());
@@ -296,19 +309,19 @@ public final class ProjectBuild {
                 .resampler(s.resampler().orElse(ResamplerKind.KAISER))
                 .flashQualifier(project.target().flashAttr().orElse(""))
                 .preview(pv.filter().orElse(Defaults.filter()), pv.rateHz().orElse(Defaults.PREVIEW_RATE_HZ))
-                .loop(s.loop());
+                .loop(s.loop()).codec(codec);
         shared.board().ifPresent(levels -> plan.board(levels, shared.compensation()));
         return plan.build();
     }
 
     /** Emits one player for every sound, or each sound's bare sample array. */
     private Emitted emit(Project project, Optional<FirmwareRequest> player, Shared shared,
-            List<SoundRenderer.Rendered> rendered) {
+            List<SoundRenderer.Rendered> rendered, Path cDir) {
         String prefix = CNames.symbol(project.name());
         if (player.isPresent()) {
             FirmwareRequest.Builder fb = player.get().toBuilder().name(prefix).toolVersion(toolVersion);
-            for (Map.Entry<String, String> e : shared.settings().entrySet()) {
-                if (!e.getKey().equals(OUT_SETTING)) {
+            for (Map.Entry<String, String> e : ProjectSetting.texts(shared.settings()).entrySet()) {
+                if (!e.getKey().equals(OUT_SETTING) && !e.getKey().equals(C_OUT_SETTING)) {
                     fb.setting(e.getKey() + ": " + e.getValue());
                 }
             }
@@ -320,8 +333,8 @@ public final class ProjectBuild {
                     throw located(project, s, Overrides.none(), e);
                 }
             }
-            EmitResult er = FirmwareEmitter.emit(fb.build(), shared.outDir());
-            return new Emitted(er.files(), er.report(), er.warnings(), er.flashBytes());
+            EmitResult er = FirmwareEmitter.emit(fb.build(), cDir);
+            return new Emitted(er.files(), er.report(), er.warnings(), er.flashBytes(), Optional.of(er.facts()));
         }
         long flash = 0;
         for (SoundRenderer.Rendered r : rendered) {
@@ -336,9 +349,9 @@ public final class ProjectBuild {
         List<Path> files = new ArrayList<>();
         Build build = new Build(toolVersion);
         for (SoundRenderer.Rendered r : rendered) {
-            files.addAll(build.emitArray(r.plan().symbol(), r, shared.outDir()));
+            files.addAll(build.emitArray(r.plan().symbol(), r, cDir));
         }
-        return new Emitted(files, List.of(), List.of(), flash);
+        return new Emitted(files, List.of(), List.of(), flash, Optional.empty());
     }
 
     /** Writes report.txt, report.json and report.html of the whole project. */
@@ -354,22 +367,21 @@ public final class ProjectBuild {
         long budget = (long) project.target().flashBudgetBytes().orElse(0);
         List<String> warnings = emitted.warnings();
         ProjectReport.Input in = new ProjectReport.Input(toolVersion, project.file(), project.name(),
-                shared.settings(), summaries, emitted.firmwareLines(), emitted.flashBytes(), budget, files, warnings);
+                shared.settings(), summaries, emitted.firmwareLines(), emitted.flashBytes(), budget, files, warnings,
+                emitted.facts(), outDir);
         Result result = new Result(outDir, summaries, emitted.firmwareLines(), emitted.flashBytes(),
-                shared.settings(), files, warnings, in);
-        // the page (with its embedded plots) is written on another core while the text and JSON reports are
-        Jobs.alongside(() -> {
-            AtomicFiles.writeString(txt, ProjectReport.text(in));
-            Json.write(json, ProjectReport.json(in));
-        }, () -> HtmlReport.write(html, new HtmlReport.Page(project.name() + " (" + project.file().getFileName()
-                + ")", toolVersion, HtmlReport.Setting.of(shared.settings()), summaries, List.of(),
-                emitted.flashBytes(), budget > 0 ? OptionalLong.of(budget) : OptionalLong.empty(),
-                ProjectReport.warningsOf(in), Optional.empty(), files)));
+                ProjectSetting.texts(shared.settings()), files, warnings, in);
+        AtomicFiles.writeString(txt, ProjectReport.text(in));
+        Json.write(json, ProjectReport.json(in));
+        HtmlReport.write(html, new HtmlReport.Page(project.name() + " (" + project.file().getFileName() + ")",
+                toolVersion, HtmlReport.Setting.of(result.settings()), summaries, List.of(), emitted.flashBytes(),
+                budget > 0 ? OptionalLong.of(budget) : OptionalLong.empty(), ProjectReport.warningsOf(in),
+                Optional.empty(), files));
         return result;
     }
 
-    private static String origin(boolean cli, boolean file) {
-        return cli ? "  (command line)" : file ? "  (project file)" : "  (default)";
+    private static ProjectSetting shown(String value, Origin origin) {
+        return ProjectSetting.shown(value, value, origin);
     }
 
     private static void checkOneRate(Project p, Overrides o, OptionalDouble projectRate) {
@@ -393,12 +405,14 @@ public final class ProjectBuild {
         }
     }
 
-    private static Optional<FirmwareRequest> player(Project p, Overrides o, Map<String, String> settings) {
+    private static Optional<FirmwareRequest> player(Project p, Overrides o, Map<String, ProjectSetting> settings) {
         Project.Target t = p.target();
         boolean fileWants = t.family().isPresent() || t.pins().isPresent();
         if (!fileWants && !o.wantsPlayer()) {
             if (t.flashBudgetBytes().isPresent()) {
-                settings.put("flash budget", Units.format(t.flashBudgetBytes().getAsDouble(), "B"));
+                double budget = t.flashBudgetBytes().getAsDouble();
+                settings.put("flash budget", ProjectSetting.plain((long) budget, Units.format(budget, "B"),
+                        Origin.PROJECT_FILE));
             }
             return Optional.empty();
         }
@@ -419,8 +433,18 @@ public final class ProjectBuild {
         }
         t.flashBudgetBytes().ifPresent(x -> b.flashBudgetBytes((long) x));
         FirmwareRequest r = o.firmware().apply(b).build();
-        settings.put("target", r.family() + (r.pins().map(x -> ", pins " + x).orElse("")));
-        settings.put("engine", r.engine().name().toLowerCase(Locale.ROOT));
+        settings.put("target", ProjectSetting.plain(r.family(), r.family() + r.pins().map(x -> ", pins " + x)
+                .orElse(""), origin(t.family(), "generic", r.family())));
+        settings.put("pins", ProjectSetting.jsonOnly(r.pins().orElse(null), origin(t.pins(), null,
+                r.pins().orElse(null))));
+        String engineKey = r.engine().name().toLowerCase(Locale.ROOT);
+        settings.put("engine", ProjectSetting.plain(engineKey, engineKey, origin(t.engine(), engine, r.engine())));
         return Optional.of(r);
+    }
+
+    /** Where a target setting came from: the command line when it changed the file's value or the default. */
+    private static <T> Origin origin(Optional<T> inFile, T byDefault, T used) {
+        return !java.util.Objects.equals(inFile.orElse(byDefault), used) ? Origin.COMMAND_LINE
+                : Origin.of(false, inFile.isPresent());
     }
 }

@@ -41,6 +41,12 @@ public final class ProjectFile {
     private ProjectFile() {
     }
 
+    /** True when {@code source} names a project file (.toml) rather than one sound. */
+    public static boolean isProjectFile(Path source) {
+        return source.getFileName() != null && source.getFileName().toString().toLowerCase(Locale.ROOT)
+                .endsWith(".toml");
+    }
+
     /**
      * Reads and checks a project file.
      *
@@ -79,6 +85,7 @@ public final class ProjectFile {
             throw project.error("name", e.render(setting -> "the name"));
         }
         Optional<Path> out = project.string("out").map(base::resolve);
+        Optional<Path> cOut = project.string("c_out").map(base::resolve);
         Optional<Long> seed = project.integer("seed", Long.MIN_VALUE, Long.MAX_VALUE);
         Optional<Path> unit = project.string("unit").map(base::resolve);
         Optional<Compensation> compensation = project.bool("compensation").map(Compensation::of);
@@ -111,7 +118,7 @@ public final class ProjectFile {
             sounds.add(s);
         }
         root.rejectUnknown();
-        return new Project(file, name, out, seed, unit, compensation, target, ladder, quantize, preview, sounds);
+        return new Project(file, name, out, cOut, seed, unit, compensation, target, ladder, quantize, preview, sounds);
     }
 
     private static InputError notToml(Path file, TomlParseError e) {
@@ -139,7 +146,7 @@ public final class ProjectFile {
                 f.quantity("cpu_clock", "Hz"), f.parsed("timer", TimerKind::parse), f.string("pins"),
                 f.integer("port_width", 8, 32),
                 f.choice("pin_strategy", "auto", "shift", "table", "scatter").map(PinStrategy::parse),
-                f.choice("storage", "unpacked", "packed").map(SampleStorage::parse),
+                f.choice("storage", "unpacked", "packed", "tread2", "tread3", "tread4").map(SampleStorage::parse),
                 f.choice("engine", "clip", "loop", "dds").map(PlaybackEngine::parse),
                 f.quantity("rate_tolerance", ""), bytes(f, "flash_budget"),
                 f.parsed("flash_attr", FlashAttribute::check),

@@ -35,22 +35,27 @@ final class SoundFigures {
      * constant one (silence has no error to speak of).
      */
     static Figures of(BuildPlan plan, boolean wavetable, Signal reference, SoundRenderer.Cases cases, double cutoff,
-            List<String> warnings) {
+            List<String> warnings, Coding coding) {
         if (constant(reference)) {
             warnings.add("the sound is silent (one constant level) after conditioning: it builds as that level,"
                     + " and there are no quality figures to measure against it");
-            return unmeasured(plan, reference, cases, cutoff);
+            return unmeasured(plan, reference, cases, cutoff, tag(coding));
         }
         if (wavetable) {
             int times = (int) Math.max(1, Math.ceil((double) CYCLE_MEASURED / reference.length()));
-            return measure(plan, repeated(reference, times), cases, cutoff, c -> repeated(c, times));
+            return measure(plan, repeated(reference, times), cases, cutoff, c -> repeated(c, times), coding);
         }
         if (reference.length() < MIN_MEASURED) {
             warnings.add(String.format(Locale.ROOT, "quality figures need at least %d samples and this sound has"
                     + " %d: they are left out", MIN_MEASURED, reference.length()));
-            return unmeasured(plan, reference, cases, cutoff);
+            return unmeasured(plan, reference, cases, cutoff, tag(coding));
         }
-        return measure(plan, reference, cases, cutoff, c -> c);
+        return measure(plan, reference, cases, cutoff, c -> c, coding);
+    }
+
+    /** What a case's label says of a Tread store (its cases are what the decoder puts out). */
+    private static String tag(Coding coding) {
+        return coding.codec().map(f -> ", " + f.optionName()).orElse("");
     }
 
     private static boolean constant(Signal s) {
@@ -64,16 +69,17 @@ final class SoundFigures {
     }
 
     /** Every ladder case with its code use and no figures (NaN). */
-    private static Figures unmeasured(BuildPlan plan, Signal reference, SoundRenderer.Cases cases, double cutoff) {
+    private static Figures unmeasured(BuildPlan plan, Signal reference, SoundRenderer.Cases cases, double cutoff,
+            String tag) {
         List<QualityReport> quality = new ArrayList<>();
         double rate = reference.sampleRateHz();
         int n = reference.length();
-        quality.add(QualityReport.unmeasured("ideal ladder", rate, n, cutoff).withCodeUse(cases.idealUse()));
+        quality.add(QualityReport.unmeasured("ideal ladder" + tag, rate, n, cutoff).withCodeUse(cases.idealUse()));
         if (plan.quantize().board().isPresent()) {
-            quality.add(QualityReport.unmeasured("board, plain codes", rate, n, cutoff)
+            quality.add(QualityReport.unmeasured("board, plain codes" + tag, rate, n, cutoff)
                     .withCodeUse(cases.idealUse()));
-            cases.compensatedUse().ifPresent(u -> quality.add(QualityReport.unmeasured("board, compensated", rate,
-                    n, cutoff).withCodeUse(u)));
+            cases.compensatedUse().ifPresent(u -> quality.add(QualityReport.unmeasured("board, compensated" + tag,
+                    rate, n, cutoff).withCodeUse(u)));
         }
         return new Figures(quality, null, Optional.empty());
     }
@@ -101,24 +107,25 @@ final class SoundFigures {
      * codes pass through {@code codes} first (the repeat of a wavetable's cycle).
      */
     private static Figures measure(BuildPlan plan, Signal reference, SoundRenderer.Cases cases, double cutoff,
-            UnaryOperator<Codes> codes) {
+            UnaryOperator<Codes> codes, Coding coding) {
         AudioMetrics metrics = AudioMetrics.of(reference, cutoff);
+        String tag = tag(coding);
         List<QualityReport> quality = new ArrayList<>();
         Codes idealCodes = codes.apply(cases.ideal().codes());
         LevelTable played = cases.played();
         Spectrum errorSpectrum;
         CodeUse idealUse = cases.idealUse();
         if (plan.quantize().board().isEmpty()) {
-            AudioMetrics.Measured m = metrics.measureWithSpectrum("ideal ladder", idealCodes, cases.idealTable());
+            AudioMetrics.Measured m = metrics.measureWithSpectrum("ideal ladder" + tag, idealCodes, cases.idealTable());
             quality.add(m.report().withCodeUse(idealUse));
             errorSpectrum = m.errorSpectrum();
         } else {
-            quality.add(metrics.measure("ideal ladder", idealCodes, cases.idealTable()).withCodeUse(idealUse));
-            AudioMetrics.Measured plain = metrics.measureWithSpectrum("board, plain codes", idealCodes, played);
+            quality.add(metrics.measure("ideal ladder" + tag, idealCodes, cases.idealTable()).withCodeUse(idealUse));
+            AudioMetrics.Measured plain = metrics.measureWithSpectrum("board, plain codes" + tag, idealCodes, played);
             quality.add(plain.report().withCodeUse(idealUse));
             errorSpectrum = plain.errorSpectrum();
             if (cases.compensated().isPresent()) {
-                AudioMetrics.Measured comp = metrics.measureWithSpectrum("board, compensated",
+                AudioMetrics.Measured comp = metrics.measureWithSpectrum("board, compensated" + tag,
                         codes.apply(cases.compensated().get()), played);
                 quality.add(comp.report().withCodeUse(cases.compensatedUse().orElseThrow()));
                 errorSpectrum = comp.errorSpectrum();
@@ -129,7 +136,8 @@ final class SoundFigures {
         if (q.shaping().order() > 0) {
             double[] range = cases.range();
             Quantizer flat = new Quantizer(played, range[0], range[1], q.dither(), ErrorFilter.NONE, q.seed());
-            double flatInBand = metrics.measure("flat", flat.apply(reference).codes(), played).inBandSnrDb();
+            double flatInBand = metrics.measure("flat", coding.apply(flat, reference).quantized().codes(), played)
+                    .inBandSnrDb();
             shapingGain = Optional.of(quality.get(quality.size() - 1).inBandSnrDb() - flatInBand);
         }
         return new Figures(quality, errorSpectrum, shapingGain);

@@ -7,7 +7,6 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.CompletableFuture;
-import java.util.function.Consumer;
 import org.rungtone.analysis.AnalogModel;
 import org.rungtone.analysis.CodeUse;
 import org.rungtone.analysis.ListenerMetrics;
@@ -19,16 +18,18 @@ import org.rungtone.analysis.Spectrum;
 import org.rungtone.analysis.ToneAnalysis;
 import org.rungtone.analysis.ToneReport;
 import org.rungtone.calibrate.OutputSpan;
+import org.rungtone.codec.TreadStream;
 import org.rungtone.condition.Conditioner;
 import org.rungtone.condition.Conditioning;
 import org.rungtone.condition.KaiserResampler;
 import org.rungtone.firmware.CNames;
+import org.rungtone.internal.FileNames;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.Units;
 import org.rungtone.ladder.LevelTable;
 import org.rungtone.quantize.Codes;
 import org.rungtone.quantize.Quantizer;
-import org.rungtone.report.SoundPlots;
+import org.rungtone.report.SourceFacts;
 import org.rungtone.source.Signal;
 
 /**
@@ -56,49 +57,16 @@ public final class SoundRenderer {
 
 
     private final OutputSpan span;
-    private final Consumer<String> progress;
-    private final Early early;
+    private final BuildProgress progress;
 
     /**
      * A renderer whose compensated quantization maps full scale onto {@code span} of the board's levels, and
-     * that tells {@code progress} the name of every stage it finishes ("open", "condition", ...).
+     * that tells {@code progress} every stage it finishes ("open done", "condition done", ...) and, while it
+     * reads the source, how much of it it has read.
      */
-    public SoundRenderer(OutputSpan span, Consumer<String> progress) {
-        this(span, progress, new Early() { });
-    }
-
-    /** The same, handing {@code early} what the outputs hold as soon as it is known (the figures may be busy). */
-    SoundRenderer(OutputSpan span, Consumer<String> progress, Early early) {
+    public SoundRenderer(OutputSpan span, BuildProgress progress) {
         this.span = span;
         this.progress = progress;
-        this.early = early;
-    }
-
-    /**
-     * Told what a sound's outputs hold as soon as it is known, while the rest of the sound renders, so that
-     * they can be written on another core meanwhile.
-     */
-    interface Early {
-        /** The codes to store, known before any figure of them. */
-        default void coded(Coded coded) {
-        }
-
-        /** What the plots draw, known while the preview and the listener figures still render. */
-        default void analysed(SoundPlots.Data data) {
-        }
-    }
-
-    /**
-     * What the firmware of one sound holds.
-     *
-     * @param plan the plan it came from
-     * @param rateHz the target rate
-     * @param emitted the codes the firmware holds
-     * @param settings "key: value" lines for the C header comment
-     * @param autoLoop the loop found in the sound, when its loop is auto (the codes hold its crossfades)
-     */
-    record Coded(BuildPlan plan, double rateHz, Codes emitted, List<String> settings,
-            Optional<SeamlessLoop> autoLoop) {
     }
 
     /**
@@ -107,6 +75,7 @@ public final class SoundRenderer {
      *
      * @param plan the plan it came from
      * @param layout the source's description
+     * @param source what was read, as values
      * @param rateHz the target rate
      * @param conditioned what conditioning did
      * @param emitted the codes the firmware holds
@@ -123,23 +92,20 @@ public final class SoundRenderer {
      * @param warnings what the user should know
      * @param stageMillis timings so far
      * @param autoLoop the loop found in the sound, when its loop is auto (the codes hold its crossfades)
+     * @param stream the Tread stream the emitted codes decode from, for a Tread store
      */
-    public record Rendered(BuildPlan plan, String layout, double rateHz, Conditioner.Conditioned conditioned,
-            Codes emitted, LevelTable played, List<QualityReport> quality, Optional<Double> shapingGainDb,
-            Optional<ToneReport> tone, AnalogModel.Preview preview, Spectrum errorSpectrum,
-            Optional<Spectrum> toneSpectrum, double inBandCutoffHz, long clippedSamples, List<String> settings,
-            List<String> warnings, Map<String, Double> stageMillis, Optional<SeamlessLoop> autoLoop) {
-
-        /** What the sound's firmware holds. */
-        Coded coded() {
-            return new Coded(plan, rateHz, emitted, settings, autoLoop);
-        }
+    public record Rendered(BuildPlan plan, String layout, SourceFacts source, double rateHz,
+            Conditioner.Conditioned conditioned, Codes emitted, LevelTable played, List<QualityReport> quality,
+            Optional<Double> shapingGainDb, Optional<ToneReport> tone, AnalogModel.Preview preview,
+            Spectrum errorSpectrum, Optional<Spectrum> toneSpectrum, double inBandCutoffHz, long clippedSamples,
+            List<String> settings, List<String> warnings, Map<String, Double> stageMillis,
+            Optional<SeamlessLoop> autoLoop, Optional<TreadStream> stream) {
     }
 
     /** The codes of every ladder case and how they use the range. */
     record Cases(Quantizer.Quantized ideal, LevelTable idealTable, Codes emitted, LevelTable played,
             long clipped, Optional<Codes> compensated, double[] range, CodeUse idealUse,
-            Optional<CodeUse> compensatedUse) {
+            Optional<CodeUse> compensatedUse, Optional<TreadStream> stream) {
 
         /** How the emitted codes use the range. */
         CodeUse emittedUse() {
@@ -168,11 +134,18 @@ public final class SoundRenderer {
         Optional<AutoLoop.Placed> loop = AutoLoop.place(plan, reference);
         loop.flatMap(AutoLoop.Placed::shortened).ifPresent(w -> warnings.add(w.text()));
         reference = loop.map(AutoLoop.Placed::signal).orElse(reference);
-        Cases cases = quantize(plan, reference);
-        watch.lap("quantize");
-        warnings.addAll(codeWarnings(cases));
-        List<String> settings = settings(plan, prepared.layout(), conditioned, cases.played(), rate, cases.range());
-        early.coded(new Coded(plan, rate, cases.emitted(), settings, loop.map(AutoLoop.Placed::loop)));
+        Coding coding = Coding.of(plan, rate, model.inBandTopHz(rate));
+        Cases cases = quantize(plan, reference, coding);
+        watch.lap(BuildStage.QUANTIZE);
+        if (cases.clipped() > 0) {
+            warnings.add(cases.clipped() + " samples were beyond full scale and clipped");
+        }
+        CodeUse use = cases.emittedUse();
+        if (use.shapingOverloads()) {
+            warnings.add(String.format(Locale.ROOT, "noise shaping overloaded the quantizer on %.2f %% of the"
+                    + " samples (its input went past the end levels), which adds distortion; lower the level",
+                    100 * use.overloadFraction()));
+        }
         // The preview is independent of the figures: render it on another core meanwhile. With an automatic
         // loop it plays the loop several times, so the listener figures render the stored codes on their own.
         CompletableFuture<AnalogModel.Preview> previewJob = startPreview(plan, AutoLoop.previewed(cases.emitted(),
@@ -185,7 +158,7 @@ public final class SoundRenderer {
         // and at 20 kHz: the one definition the survey uses too
         double cutoff = model.inBandTopHz(rate);
         SoundFigures.Figures figures = SoundFigures.of(plan, prepared.wavetable(), reference, cases, cutoff,
-                warnings);
+                warnings, coding);
         Optional<ToneReport> tone = Optional.empty();
         Optional<Spectrum> toneSpectrum = Optional.empty();
         if (isTone(reference)) {
@@ -193,66 +166,48 @@ public final class SoundRenderer {
             toneSpectrum = Optional.of(ToneAnalysis.spectrum(out));
             tone = Optional.of(ToneAnalysis.analyze(out, toneSpectrum.get()));
         }
-        watch.lap("analyze");
-        early.analysed(plotData(plan, Optional.ofNullable(figures.errorSpectrum()), cutoff, toneSpectrum, tone));
+        watch.lap(BuildStage.ANALYZE);
         AnalogModel.Preview preview = Jobs.join(previewJob);
-        watch.lap("preview");
+        watch.lap(BuildStage.PREVIEW);
         List<QualityReport> quality = figures.quality();
         Optional<ListenerReport> heard = Jobs.join(listenerJob);
         if (heard.isPresent()) {
             quality = new ArrayList<>(quality);
             int last = quality.size() - 1;
             quality.set(last, quality.get(last).withListener(heard.get()));
-            watch.lap("listener");
+            watch.lap(BuildStage.LISTENER);
         }
-        return new Rendered(plan, prepared.layout(), rate, conditioned, cases.emitted(), cases.played(),
-                quality, figures.shapingGainDb(), tone, preview, figures.errorSpectrum(), toneSpectrum,
-                cutoff, cases.clipped(), settings, warnings, watch.laps(), loop.map(AutoLoop.Placed::loop));
+        return new Rendered(plan, prepared.layout(), prepared.source(), rate, conditioned, cases.emitted(),
+                cases.played(), quality, figures.shapingGainDb(), tone, preview, figures.errorSpectrum(), toneSpectrum,
+                cutoff, cases.clipped(), settings(plan, prepared.layout(), conditioned, cases.played(), rate,
+                        cases.range()), warnings, watch.laps(), loop.map(AutoLoop.Placed::loop), cases.stream());
     }
 
-    /** What the user should know about how the emitted codes came out. */
-    private static List<String> codeWarnings(Cases cases) {
-        List<String> warnings = new ArrayList<>();
-        if (cases.clipped() > 0) {
-            warnings.add(cases.clipped() + " samples were beyond full scale and clipped");
-        }
-        CodeUse use = cases.emittedUse();
-        if (use.shapingOverloads()) {
-            warnings.add(String.format(Locale.ROOT, "noise shaping overloaded the quantizer on %.2f %% of the"
-                    + " samples (its input went past the end levels), which adds distortion; lower the level",
-                    100 * use.overloadFraction()));
-        }
-        return warnings;
-    }
-
-    /** What the plots of a sound draw. */
-    static SoundPlots.Data plotData(BuildPlan plan, Optional<Spectrum> errorSpectrum, double inBandCutoffHz,
-            Optional<Spectrum> toneSpectrum, Optional<ToneReport> tone) {
-        return new SoundPlots.Data(plan.symbol(), plan.bits(), plan.quantize().dither(),
-                plan.quantize().shaping().order() > 0, errorSpectrum, inBandCutoffHz, toneSpectrum, tone);
-    }
-
-    /** Quantizes onto the ideal ladder and, with a board, onto its real levels when compensating. */
-    private Cases quantize(BuildPlan plan, Signal reference) {
+    /**
+     * Quantizes (or, for a Tread store, encodes) onto the ideal ladder and, with a board, onto its real levels
+     * when compensating.
+     */
+    private Cases quantize(BuildPlan plan, Signal reference, Coding coding) {
         QuantizeSettings q = plan.quantize();
         LevelTable ideal = LevelTable.ideal(plan.bits(), plan.preview().fullScaleVolts());
-        Quantizer idealQuantizer = quantizer(ideal, plan);
-        Quantizer.Quantized idealQ = idealQuantizer.apply(reference);
-        CodeUse idealUse = CodeUse.of(idealQuantizer, idealQ);
+        Coding.Coded idealC = coding.apply(quantizer(ideal, plan), reference);
+        Quantizer.Quantized idealQ = idealC.quantized();
+        CodeUse idealUse = idealC.use();
         if (q.board().isEmpty()) {
             return new Cases(idealQ, ideal, idealQ.codes(), ideal, idealQ.clippedSamples(), Optional.empty(),
-                    new double[] {ideal.minVolts(), ideal.maxVolts()}, idealUse, Optional.empty());
+                    new double[] {ideal.minVolts(), ideal.maxVolts()}, idealUse, Optional.empty(), idealC.stream());
         }
         LevelTable board = q.board().get();
         if (!q.compensate()) {
             return new Cases(idealQ, ideal, idealQ.codes(), board, idealQ.clippedSamples(), Optional.empty(),
-                    new double[] {board.minVolts(), board.maxVolts()}, idealUse, Optional.empty());
+                    new double[] {board.minVolts(), board.maxVolts()}, idealUse, Optional.empty(), idealC.stream());
         }
         double[] range = span.volts(board, ideal);
-        Quantizer compensating = new Quantizer(board, range[0], range[1], q.dither(), q.shaping(), q.seed());
-        Quantizer.Quantized c = compensating.apply(reference);
+        Coding.Coded comp = coding.apply(new Quantizer(board, range[0], range[1], q.dither(), q.shaping(),
+                q.seed()), reference);
+        Quantizer.Quantized c = comp.quantized();
         return new Cases(idealQ, ideal, c.codes(), board, c.clippedSamples(), Optional.of(c.codes()), range,
-                idealUse, Optional.of(CodeUse.of(compensating, c)));
+                idealUse, Optional.of(comp.use()), comp.stream());
     }
 
     /** Starts rendering the preview of the emitted codes (its first seconds) on another core. */
@@ -280,8 +235,9 @@ public final class SoundRenderer {
      * The source's description, the conditioned reference, the target rate and the source as supplied for
      * the listener figures (none for a wavetable, which has no rate of its own).
      */
-    private record Prepared(String layout, List<String> warnings, Conditioner.Conditioned conditioned,
-            double rateHz, Optional<ListenerMetrics> listener, boolean wavetable) {
+    private record Prepared(String layout, SourceFacts source, List<String> warnings,
+            Conditioner.Conditioned conditioned, double rateHz, Optional<ListenerMetrics> listener,
+            boolean wavetable) {
     }
 
     /**
@@ -292,7 +248,7 @@ public final class SoundRenderer {
         ConditioningSettings cs = plan.conditioning();
         try (Sources.Opened opened = Sources.open(plan.source().file(), plan.source().channel(),
                 cs.rateHz().orElse(Double.NaN), plan.quantize().seed())) {
-            watch.lap("open");
+            watch.lap(BuildStage.OPEN);
             double rate = cs.rateHz().orElse(Double.isNaN(opened.preferredRateHz()) ? Defaults.RATE_HZ
                     : opened.preferredRateHz());
             Conditioner.Conditioned conditioned;
@@ -310,11 +266,12 @@ public final class SoundRenderer {
                         cs.normalizeDbfs(), 0, 0);
                 conditioned = new Conditioner(KaiserResampler.forBits(plan.bits())).apply(table, c);
             } else {
-                conditioned = new Conditioner(cs.resampler().create(plan.bits())).apply(opened.samples(), cs.at(rate));
+                conditioned = new Conditioner(cs.resampler().create(plan.bits())).apply(new ReadShare(opened.samples(),
+                        watch.within(BuildStage.CONDITION, "reading")), cs.at(rate));
                 listener = listener(opened.samples(), conditioned, cs, model);
             }
-            watch.lap("condition");
-            return new Prepared(opened.layout(), opened.warnings(), conditioned, rate, listener,
+            watch.lap(BuildStage.CONDITION);
+            return new Prepared(opened.layout(), opened.facts(), opened.warnings(), conditioned, rate, listener,
                     opened.wavetable());
         }
     }
@@ -343,7 +300,7 @@ public final class SoundRenderer {
         QuantizeSettings q = plan.quantize();
         return List.of(
                 "name: " + plan.symbol(),
-                "source: " + plan.source().file().getFileName() + " (" + layout + ")",
+                "source: " + FileNames.display(plan.source().file()) + " (" + layout + ")",
                 "conditioning: " + describe(plan, c),
                 "target: " + plan.bits() + " bits at " + Units.format(rate, "Hz"),
                 "dither: " + q.dither().label() + ", shaping: " + q.shaping().name() + ", seed: " + q.seed(),

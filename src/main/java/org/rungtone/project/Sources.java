@@ -3,9 +3,11 @@ package org.rungtone.project;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
+import org.rungtone.internal.FileNames;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.OutputFolder;
 import org.rungtone.internal.Units;
+import org.rungtone.report.SourceFacts;
 import org.rungtone.script.RungScript;
 import org.rungtone.source.SampleSource;
 import org.rungtone.source.Signal;
@@ -25,9 +27,10 @@ public final class Sources {
      * @param warnings non-fatal problems
      * @param preferredRateHz the rate the source asks to be played at (a script's declared rate), NaN if none
      * @param wavetable true for a single-cycle wavetable: no resampling, trimming or fades apply
+     * @param facts what was read, as values for machine-readable reports
      */
     public record Opened(SampleSource samples, String layout, List<String> warnings, double preferredRateHz,
-            boolean wavetable) implements AutoCloseable {
+            boolean wavetable, SourceFacts facts) implements AutoCloseable {
         /** Copies the warnings. */
         public Opened {
             warnings = List.copyOf(warnings);
@@ -40,18 +43,20 @@ public final class Sources {
     }
 
     /**
-     * Opens a .wav file for reading by range (mixed down, or one channel), or renders a .rung script (at
-     * {@code scriptRateHz}, or its own declared rate when that is NaN).
+     * Opens a .wav file for reading by range (mixed down, or one channel), a WAV file on standard input for
+     * the path {@code -}, or renders a .rung script (at {@code scriptRateHz}, or its own declared rate when
+     * that is NaN).
      *
      * @throws InputError naming the file for anything unreadable
      */
     public static Opened open(Path source, int channel, double scriptRateHz, long seed) {
         String name = source.getFileName() == null ? "" : source.getFileName().toString().toLowerCase(Locale.ROOT);
-        if (name.endsWith(".wav") || name.endsWith(".wave")) {
-            WavReader.Stream w = WavReader.open(OutputFolder.staged(source), channel);
+        boolean stdin = FileNames.isStandardInput(source);
+        if (stdin || name.endsWith(".wav") || name.endsWith(".wave")) {
+            WavReader.Stream w = WavReader.open(stdin ? source : OutputFolder.staged(source), channel);
             String layout = w.format().describe() + (w.format().channels() > 1
                     ? (channel == 0 ? ", mixed down" : ", channel " + channel) : "");
-            return new Opened(w, layout, w.warnings(), Double.NaN, false);
+            return new Opened(w, layout, w.warnings(), Double.NaN, false, SourceFacts.wav(source, w.format(), channel));
         }
         if (name.endsWith(".rung")) {
             RungScript script = RungScript.load(OutputFolder.staged(source));
@@ -60,8 +65,9 @@ public final class Sources {
                     ? String.format(Locale.ROOT, "rung script, clip of %.3f s rendered at %s", script.durationSeconds(),
                             Units.format(s.sampleRateHz(), "Hz"))
                     : "rung script, single-cycle wavetable of " + script.tableLength() + " samples";
+            boolean wavetable = script.kind() == RungScript.Kind.WAVETABLE;
             return new Opened(SampleSource.of(s), layout, List.of(), script.declaredRateHz().orElse(Double.NaN),
-                    script.kind() == RungScript.Kind.WAVETABLE);
+                    wavetable, SourceFacts.script(source, wavetable, s.sampleRateHz(), s.length()));
         }
         throw InputError.inFile(source, "is not a source Rungtone reads; give a .wav file or a .rung script");
     }

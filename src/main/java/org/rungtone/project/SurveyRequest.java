@@ -1,6 +1,7 @@
 package org.rungtone.project;
 
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
@@ -8,6 +9,8 @@ import java.util.OptionalLong;
 import java.util.function.IntFunction;
 import org.rungtone.analysis.ReconstructionFilter;
 import org.rungtone.analysis.SurveyTarget;
+import org.rungtone.codec.TreadFormat;
+import org.rungtone.firmware.SampleStorage;
 import org.rungtone.internal.Setting;
 import org.rungtone.ladder.LevelTable;
 import org.rungtone.quantize.Dither;
@@ -73,8 +76,10 @@ public record SurveyRequest(Path source, int channel, Cells cells, ConditioningS
      * @param flashBudgetBytes flash available for the samples, if limited
      * @param target the least acceptable quality, if any (without one nothing is recommended)
      * @param packed judge the budget and the choice by bit-packed bytes instead of unpacked ones
+     * @param codecs the Tread stores surveyed besides the plain codes
      */
-    public record Choice(OptionalLong flashBudgetBytes, Optional<SurveyTarget> target, boolean packed) {
+    public record Choice(OptionalLong flashBudgetBytes, Optional<SurveyTarget> target, boolean packed,
+            List<TreadFormat> codecs) {
         /**
          * Checks the budget.
          *
@@ -83,6 +88,23 @@ public record SurveyRequest(Path source, int channel, Cells cells, ConditioningS
         public Choice {
             flashBudgetBytes.ifPresent(b -> Setting.FLASH_BUDGET.check(b >= 0, "must not be negative: %d", b));
             Objects.requireNonNull(target, "target");
+            codecs = List.copyOf(codecs);
+        }
+
+        /** A choice among the plain codes alone. */
+        public Choice(OptionalLong flashBudgetBytes, Optional<SurveyTarget> target, boolean packed) {
+            this(flashBudgetBytes, target, packed, List.of());
+        }
+
+        /**
+         * The choice among the given storages: the Tread ones are surveyed as well; {@code packed}, or packed
+         * among them, counts the plain codes bit-packed.
+         */
+        public static Choice of(OptionalLong flashBudgetBytes, Optional<SurveyTarget> target, boolean packed,
+                List<SampleStorage> storages) {
+            List<TreadFormat> codecs = new ArrayList<>();
+            storages.forEach(s -> s.codec().filter(f -> !codecs.contains(f)).ifPresent(codecs::add));
+            return new Choice(flashBudgetBytes, target, packed || storages.contains(SampleStorage.PACKED), codecs);
         }
     }
 

@@ -28,9 +28,12 @@ import org.rungtone.internal.SettingError;
 import org.rungtone.internal.Units;
 import org.rungtone.ladder.LevelTable;
 import org.rungtone.quantize.Codes;
+import org.rungtone.report.ConditioningFacts;
 import org.rungtone.report.Json;
+import org.rungtone.report.SourceFacts;
 import org.rungtone.report.SurveyFiles;
 import org.rungtone.report.SurveyReport;
+import org.rungtone.source.SampleSource;
 import org.rungtone.source.Signal;
 
 /**
@@ -44,6 +47,8 @@ public final class SurveyRun {
     static final double PREVIEW_RATE_HZ = 44_100;
     /** Fewest samples a cell needs for its quality figures. */
     static final int MIN_SAMPLES = 16;
+    /** The first decode's progress is told in thousandths of the source. */
+    private static final int PER_MILLE = 1000;
 
     private final Progress progress;
 
@@ -56,9 +61,10 @@ public final class SurveyRun {
         /**
          * Called as work finishes, from worker threads but never concurrently.
          *
-         * @param label what is being done: "survey" (the cells), then "previews"
+         * @param label what is being done: "reading" (the first decode of the source, in thousandths of it),
+         *     "survey" (the cells), "previews", then "writing reports" (told once, with no count)
          * @param done items finished so far
-         * @param total items of that kind
+         * @param total items of that kind; 0 when not counted
          */
         void update(String label, int done, int total);
     }
@@ -88,7 +94,7 @@ public final class SurveyRun {
     }
 
     /** The source, the survey and the conditioned reference at every rate. */
-    private record Surveyed(String layout, List<String> sourceWarnings, SurveyResult result,
+    private record Surveyed(String layout, SourceFacts source, List<String> sourceWarnings, SurveyResult result,
             Map<Double, Conditioner.Conditioned> references) {
     }
 
@@ -149,7 +155,10 @@ public final class SurveyRun {
         SurveyReport.Context context = new SurveyReport.Context(request.output().toolVersion(), request.source(),
                 s.layout(), request.conditioning().describe(), resampler.name(), describeLevels(tables),
                 cells.dither().label(), cells.shaping().name(), cells.seed(), request.filter().describe(),
-                request.output().previews(), files, new ArrayList<>(warnings));
+                request.output().previews(), files, new ArrayList<>(warnings), new SurveyReport.Facts(s.source(),
+                ConditioningFacts.of(request.conditioning().at(cells.ratesHz().get(0))),
+                request.conditioning().resampler(), tables.lastEntry().getValue(), request.filter(), folder));
+        tell("writing reports", 0, 0);
         SurveyFiles.write(folder, s.result(), context);
         long done = System.nanoTime();
         Map<String, Double> laps = new LinkedHashMap<>();
@@ -164,7 +173,7 @@ public final class SurveyRun {
         SurveyRequest.Choice choice = request.choice();
         SurveySpec.Builder b = SurveySpec.builder().bitDepths(cells.bitDepths()).ratesHz(cells.ratesHz())
                 .dither(cells.dither()).shaping(cells.shaping()).seed(cells.seed()).tables(tables::get)
-                .inBandCutoffHz(model::inBandTopHz).packed(choice.packed());
+                .inBandCutoffHz(model::inBandTopHz).packed(choice.packed()).codecs(choice.codecs());
         choice.flashBudgetBytes().ifPresent(b::flashBudgetBytes);
         choice.target().ifPresent(b::target);
         return b.build();
@@ -179,21 +188,22 @@ public final class SurveyRun {
         double maxRate = spec.ratesHz().stream().max(Double::compare).orElseThrow();
         Map<Double, Conditioner.Conditioned> references = new ConcurrentHashMap<>();
         try (Sources.Opened loaded = Sources.open(request.source(), request.channel(), maxRate, spec.seed())) {
-            tell("survey", 0, spec.bitDepths().size() * spec.ratesHz().size());
             // The highest rate first: its trim tells which stretch of the source the listener figures compare.
-            Conditioner.Conditioned top = conditioned(request, conditioner, loaded, conditionings, maxRate);
+            Conditioner.Conditioned top = conditioned(request, conditioner, new ReadShare(loaded.samples(),
+                    share -> tell("reading", (int) Math.round(share * PER_MILLE), PER_MILLE)), conditionings, maxRate);
+            tell("survey", 0, Survey.cellCount(spec));
             references.put(maxRate, top);
             ListenerMetrics listener = listener(request, loaded, top, model);
             SurveyResult result = Survey.run(spec, rate -> references.computeIfAbsent(rate,
-                    r -> conditioned(request, conditioner, loaded, conditionings, r)).signal(), listener,
+                    r -> conditioned(request, conditioner, loaded.samples(), conditionings, r)).signal(), listener,
                     (done, total) -> tell("survey", done, total));
-            return new Surveyed(loaded.layout(), loaded.warnings(), result, references);
+            return new Surveyed(loaded.layout(), loaded.facts(), loaded.warnings(), result, references);
         }
     }
 
     private static Conditioner.Conditioned conditioned(SurveyRequest request, Conditioner conditioner,
-            Sources.Opened loaded, Map<Double, Conditioning> conditionings, double rate) {
-        Conditioner.Conditioned c = conditioner.apply(loaded.samples(), conditionings.get(rate));
+            SampleSource samples, Map<Double, Conditioning> conditionings, double rate) {
+        Conditioner.Conditioned c = conditioner.apply(samples, conditionings.get(rate));
         if (c.signal().length() < MIN_SAMPLES) {
             throw tooShort(request.source(), c.signal().length(), rate);
         }
@@ -233,7 +243,7 @@ public final class SurveyRun {
         return s.result().rows().parallelStream().mapToDouble(row -> {
             LevelTable table = tables.get(row.bits());
             Signal reference = s.references().get(row.rateHz()).signal();
-            Codes codes = Survey.quantize(spec, reference, table).codes();
+            Codes codes = Survey.codes(spec, reference, table, row.codec()).codes();
             AnalogModel.Preview p = model.render(codes, table);
             SurveyFiles.writePreview(folder, row, p.signal());
             tell("previews", done.incrementAndGet(), total);

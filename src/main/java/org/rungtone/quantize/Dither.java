@@ -19,8 +19,8 @@ public enum Dither {
     /** Triangular PDF, 2 LSB peak to peak. */
     TPDF;
 
-    /** One dither value in LSBs. */
-    double next(SplittableRandom random) {
+    /** One dither value in LSBs, drawn from {@code random}. */
+    public double next(SplittableRandom random) {
         switch (this) {
             case RPDF:
                 return random.nextDouble() - 0.5;

@@ -156,6 +156,11 @@ public final class Quantizer {
         return shaping;
     }
 
+    /** Seed of the dither. */
+    public long seed() {
+        return seed;
+    }
+
     /** Headroom policy. */
     public Headroom headroom() {
         return headroom;

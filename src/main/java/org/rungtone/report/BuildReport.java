@@ -1,7 +1,6 @@
 package org.rungtone.report;
 
 import java.nio.file.Path;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -106,90 +105,11 @@ public final class BuildReport {
         return b.toString();
     }
 
-    static Map<String, Object> quality(QualityReport r) {
-        Map<String, Object> m = new LinkedHashMap<>();
-        m.put("case", r.label());
-        m.put("sinad_db", r.sinadDb());
-        m.put("in_band_snr_db", r.inBandSnrDb());
-        m.put("in_band_cutoff_hz", r.inBandCutoffHz());
-        m.put("a_weighted_snr_db", r.aWeightedSnrDb());
-        m.put("enob_full_scale_bits", r.enobFullScaleBits());
-        m.put("enob_signal_bits", r.enobSignalBits());
-        m.put("error_rms_dbfs", r.errorRmsDbfs());
-        m.put("reference_rms_dbfs", r.referenceRmsDbfs());
-        r.codeUse().ifPresent(u -> {
-            Map<String, Object> um = new LinkedHashMap<>();
-            um.put("end_code_samples", u.endCodeSamples());
-            um.put("end_code_fraction", u.endCodeFraction());
-            um.put("overload_samples", u.overloadSamples());
-            um.put("headroom_gain_db", u.headroomGainDb());
-            um.put("headroom_kept", u.headroomKept());
-            um.put("feedback_excursion_lsb", u.feedbackExcursionLsb());
-            m.put("code_use", um);
-        });
-        r.listener().ifPresent(l -> {
-            Map<String, Object> lm = new LinkedHashMap<>();
-            lm.put("snr_db", l.snrDb());
-            lm.put("a_weighted_snr_db", l.aWeightedSnrDb());
-            lm.put("band_low_hz", l.bandLowHz());
-            lm.put("band_top_hz", l.bandTopHz());
-            lm.put("analysis_rate_hz", l.analysisRateHz());
-            lm.put("analysed_s", l.analysedSeconds());
-            lm.put("delay_s", l.delaySeconds());
-            m.put("listener", lm);
-        });
-        return m;
-    }
-
-    /** The JSON report, with the stable field names documented in the README. */
+    /**
+     * The JSON report ({@code docs/json.md}, {@code docs/schema/build.schema.json}); paths are relative to the
+     * build's output folder.
+     */
     public static Map<String, Object> json(BuildSummary s) {
-        Map<String, Object> m = new LinkedHashMap<>();
-        m.put("tool", "rungtone");
-        m.put("version", s.toolVersion());
-        m.put("symbol", s.symbol());
-        m.put("source", s.source().toString());
-        m.put("source_layout", s.sourceLayout());
-        m.put("bits", s.bits());
-        m.put("rate_hz", s.rateHz());
-        m.put("samples", s.samples());
-        m.put("duration_s", s.durationSeconds());
-        m.put("dither", s.dither());
-        m.put("shaping", s.shaping());
-        m.put("seed", s.seed());
-        m.put("conditioning", s.conditioning());
-        m.put("resampler", s.resampler());
-        m.put("ladder", s.ladder());
-        m.put("emitted_case", s.emittedCase());
-        m.put("clipped_samples", s.clippedSamples());
-        m.put("snr_db", s.emitted().sinadDb());
-        m.put("quality", s.quality().stream().map(BuildReport::quality).toList());
-        s.shapingGainDb().ifPresent(g -> m.put("shaping_in_band_gain_db", g));
-        s.autoLoop().ifPresent(l -> m.put("auto_loop", LoopFigures.json(l, s.rateHz())));
-        s.tone().ifPresent(t -> {
-            Map<String, Object> tm = new LinkedHashMap<>();
-            tm.put("fundamental_hz", t.fundamentalHz());
-            tm.put("sinad_db", t.sinadDb());
-            tm.put("snr_db", t.snrDb());
-            tm.put("thd_db", t.thdDb());
-            tm.put("thd_below_noise", t.thdBelowNoise());
-            tm.put("sfdr_db", t.sfdrDb());
-            tm.put("sfdr_limited_by_noise", t.sfdrLimitedByNoise());
-            tm.put("enob_full_scale_bits", t.enobFullScaleBits());
-            tm.put("enob_signal_bits", t.enobSignalBits());
-            m.put("tone", tm);
-        });
-        Map<String, Object> pm = new LinkedHashMap<>();
-        pm.put("filter", s.preview().filter());
-        pm.put("rate_hz", s.preview().rateHz());
-        pm.put("zoh_droop_db", s.preview().zohDroopDb());
-        pm.put("droop_at_hz", s.preview().passbandTopHz());
-        pm.put("peak", s.preview().peak());
-        m.put("preview", pm);
-        m.put("firmware", s.firmware());
-        m.put("flash_bytes", s.flashBytes());
-        m.put("files", s.files().stream().map(Path::toString).toList());
-        m.put("warnings", List.copyOf(s.warnings()));
-        m.put("stage_ms", s.stageMillis());
-        return m;
+        return BuildJson.of(s);
     }
 }

@@ -39,13 +39,14 @@ import org.rungtone.analysis.ToneReport;
  * @param warnings what the user should know
  * @param stageMillis wall-clock milliseconds per stage, in pipeline order
  * @param autoLoop the loop found in the sound ({@code loop = "auto"}), when there is one
+ * @param facts what the report states beyond its figures, as values for the JSON report
  */
 public record BuildSummary(String toolVersion, Path source, String sourceLayout, String symbol, int bits,
         double rateHz, int samples, double durationSeconds, String dither, String shaping, long seed,
         String conditioning, String resampler, String ladder, long clippedSamples, List<QualityReport> quality,
         String emittedCase, Optional<Double> shapingGainDb, Optional<ToneReport> tone, PreviewInfo preview,
         List<String> firmware, long flashBytes, List<Path> files, List<String> warnings,
-        Map<String, Double> stageMillis, Optional<SeamlessLoop> autoLoop) {
+        Map<String, Double> stageMillis, Optional<SeamlessLoop> autoLoop, BuildFacts facts) {
 
     /** Copies the collections. */
     public BuildSummary {

@@ -11,8 +11,10 @@ import org.rungtone.calibrate.BoardSimulation;
 import org.rungtone.calibrate.CodeResidual;
 import org.rungtone.calibrate.FitReport;
 import org.rungtone.calibrate.MeasurementPlan;
+import org.rungtone.calibrate.RecordingCalibration;
 import org.rungtone.calibrate.SimulatedBoard;
 import org.rungtone.calibrate.UnitFit;
+import org.rungtone.calibrate.UnitProfile;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.internal.Setting;
 import org.rungtone.internal.Units;
@@ -20,8 +22,8 @@ import org.rungtone.ladder.LevelTable;
 
 /**
  * The files of the calibrate commands, written atomically into the output folder: the plan's CSV to fill in,
- * a simulated board's readings and true levels, and a fitted board's unit profile and residuals (CSV with a
- * header row and {@code \n} records).
+ * a simulated board's readings and true levels, a fitted board's unit profile and residuals (CSV with a
+ * header row and {@code \n} records), and a recording's steps and plot.
  */
 public final class CalibrationFiles {
     /** The plan to fill in. */
@@ -32,6 +34,10 @@ public final class CalibrationFiles {
     public static final String TRUE_LEVELS_CSV = "true-levels.csv";
     /** Every code's residual of a fit. */
     public static final String RESIDUALS_CSV = "fit-residuals.csv";
+    /** Every step of a recorded sweep: where it is, its level and its residual. */
+    public static final String RECORDING_STEPS_CSV = "recording-steps.csv";
+    /** The recording with the fitted model. */
+    public static final String RECORDING_PNG = "recording.png";
 
     private CalibrationFiles() {
     }
@@ -71,11 +77,32 @@ public final class CalibrationFiles {
 
     /** Writes a fitted board's unit profile and its residuals; returns them in that order. */
     public static List<Path> writeProfile(UnitFit.Result r, Path out) {
-        Path profile = out.resolve(profileFileName(r.profile().board()));
+        return writeProfile(r.fit(), r.profile(), out);
+    }
+
+    /** Writes a unit profile and the residuals of its fit; returns them in that order. */
+    static List<Path> writeProfile(FitReport fit, UnitProfile unit, Path out) {
+        Path profile = out.resolve(profileFileName(unit.board()));
         Path residuals = out.resolve(RESIDUALS_CSV);
-        AtomicFiles.writeString(profile, r.profile().toToml());
-        AtomicFiles.writeString(residuals, residualCsv(r.fit()));
+        AtomicFiles.writeString(profile, unit.toToml());
+        AtomicFiles.writeString(residuals, residualCsv(fit));
         return List.of(profile, residuals);
+    }
+
+    /**
+     * Writes what a recording's fit made: the unit profile, the residuals of its board fit, every step of the
+     * recording ({@value #RECORDING_STEPS_CSV}) and the plot of the recording with the fit
+     * ({@value #RECORDING_PNG}); returns them in that order.
+     */
+    public static List<Path> writeRecording(RecordingCalibration.Result r, Path out) {
+        List<Path> files = new ArrayList<>(writeProfile(r.fit(), r.profile(), out));
+        Path steps = out.resolve(RECORDING_STEPS_CSV);
+        Path png = out.resolve(RECORDING_PNG);
+        AtomicFiles.writeString(steps, RecordingReport.stepsCsv(r.recording()));
+        Plots.write(png, RecordingReport.chart(r.recording()));
+        files.add(steps);
+        files.add(png);
+        return files;
     }
 
     /** The profile's file name: the board name with letters, digits, '.', '-' and '_' kept, anything else a '-'. */

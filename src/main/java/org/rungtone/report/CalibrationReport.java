@@ -3,8 +3,6 @@ package org.rungtone.report;
 import static org.rungtone.report.TextLines.line;
 
 import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -13,7 +11,9 @@ import java.util.Optional;
 import org.rungtone.calibrate.BoardSimulation;
 import org.rungtone.calibrate.MeasurementPlan;
 import org.rungtone.calibrate.MeterAdvice;
+import org.rungtone.calibrate.MeterRanges;
 import org.rungtone.calibrate.PlannedCode;
+import org.rungtone.calibrate.RecordingSweep;
 import org.rungtone.firmware.EmitResult;
 import org.rungtone.internal.Units;
 import org.rungtone.ladder.LadderSpec;
@@ -38,9 +38,12 @@ public final class CalibrationReport {
      * @param sweep the sweep program written, when one was asked for
      * @param holdSeconds how long the sweep holds each code (unless it steps on a button)
      * @param buttonPin the pin of the button that steps the sweep, when given
+     * @param meter the meter the codes were chosen for, when given
+     * @param recording the sweep for a sound card's recording, when the plan is for one
      */
     public record Plan(LadderSpec ladder, MeasurementPlan plan, double lsbVolts, List<MeterAdvice> meters,
-            Optional<EmitResult> sweep, double holdSeconds, Optional<String> buttonPin) {
+            Optional<EmitResult> sweep, double holdSeconds, Optional<String> buttonPin, Optional<MeterRanges> meter,
+            Optional<RecordingSweep> recording) {
         /** Copies the list. */
         public Plan {
             Objects.requireNonNull(ladder, "ladder");
@@ -48,6 +51,14 @@ public final class CalibrationReport {
             meters = List.copyOf(meters);
             Objects.requireNonNull(sweep, "sweep");
             Objects.requireNonNull(buttonPin, "buttonPin");
+            Objects.requireNonNull(meter, "meter");
+            Objects.requireNonNull(recording, "recording");
+        }
+
+        /** A plan for a meter of no known count. */
+        public Plan(LadderSpec ladder, MeasurementPlan plan, double lsbVolts, List<MeterAdvice> meters,
+                Optional<EmitResult> sweep, double holdSeconds, Optional<String> buttonPin) {
+            this(ladder, plan, lsbVolts, meters, sweep, holdSeconds, buttonPin, Optional.empty(), Optional.empty());
         }
     }
 
@@ -56,6 +67,21 @@ public final class CalibrationReport {
         StringBuilder b = new StringBuilder();
         MeasurementPlan plan = p.plan();
         LevelTable model = plan.expected();
+        if (p.recording().isPresent()) {
+            line(b, "Calibration plan for a recording: %s, %d codes%s", p.ladder().describe(), plan.codes().size(),
+                    plan.everyCode() ? " (every code: the recorded levels will be the profile)" : "");
+            line(b, "  the model expects %s .. %s, an average step (LSB) of %s", v(model.minVolts()),
+                    v(model.maxVolts()), v(p.lsbVolts()));
+            line(b, "");
+            RecordingChecklist.text(b, p.recording().get(), plan);
+            sweep(b, p);
+            line(b, "");
+            line(b, "Wrote %s", CalibrationFiles.joined(files));
+            line(b, "Next: record the sweep, then run");
+            line(b, "  rungtone calibrate listen RECORDING.wav --board NAME (with the same ladder, code and --hold"
+                    + " options)");
+            return b.toString();
+        }
         line(b, "Calibration plan: %s, %d codes to measure%s", p.ladder().describe(), plan.codes().size(),
                 plan.everyCode() ? " (every code: the readings will be the profile)" : "");
         line(b, "  the model expects %s .. %s, an average step (LSB) of %s", v(model.minVolts()),
@@ -70,6 +96,7 @@ public final class CalibrationReport {
         }
         b.append(t.render("  "));
         line(b, "");
+        p.meter().ifPresent(m -> RecordingChecklist.meterLine(b, m, p.plan()));
         meter(b, p);
         line(b, "");
         safety(b);
@@ -135,38 +162,20 @@ public final class CalibrationReport {
         return s >= 120 ? String.format(Locale.ROOT, "%.1f min", s / 60) : Units.format(s, "s");
     }
 
-    /** The JSON report of a plan. */
-    public static Map<String, Object> planJson(Plan p, List<Path> files) {
-        MeasurementPlan plan = p.plan();
-        Map<String, Object> root = new LinkedHashMap<>();
-        root.put("ladder", p.ladder().describe());
-        root.put("bits", plan.bits());
-        root.put("every_code", plan.everyCode());
-        root.put("lsb_v", p.lsbVolts());
-        List<Map<String, Object>> codes = new ArrayList<>();
-        for (PlannedCode c : plan.codes()) {
-            Map<String, Object> m = new LinkedHashMap<>();
-            m.put("code", c.code());
-            m.put("binary", MeasurementPlan.binary(c.code(), plan.bits()));
-            m.put("expected_v", c.expectedVolts());
-            m.put("role", c.role().name().toLowerCase(Locale.ROOT));
-            codes.add(m);
-        }
-        root.put("codes", codes);
-        List<Map<String, Object>> meters = new ArrayList<>();
-        for (MeterAdvice a : p.meters()) {
-            Map<String, Object> m = new LinkedHashMap<>();
-            m.put("counts", a.counts());
-            m.put("range_v", a.rangeVolts());
-            m.put("step_v", a.stepVolts());
-            m.put("steps_per_lsb", a.stepsPerLsb());
-            meters.add(m);
-        }
-        root.put("meters", meters);
-        root.put("sweep", p.sweep().map(EmitResult::report).orElse(List.of()));
-        root.put("warnings", p.sweep().map(EmitResult::warnings).orElse(List.of()));
-        root.put("files", CalibrationFiles.names(files));
-        return root;
+    /**
+     * The JSON report of a plan ({@code docs/schema/calibrate-plan.schema.json}); paths are relative to
+     * {@code outDir}.
+     */
+    public static Map<String, Object> planJson(Plan p, List<Path> files, Path outDir, String toolVersion) {
+        return CalibrationJson.plan(p, files, outDir, toolVersion);
+    }
+
+    /**
+     * The JSON report of a simulated board ({@code docs/schema/calibrate-simulate.schema.json}); paths are
+     * relative to {@code outDir}.
+     */
+    public static String simulationJson(BoardSimulation.Result r, List<Path> files, Path outDir, String toolVersion) {
+        return Json.toJson(CalibrationJson.simulation(r, files, outDir, toolVersion));
     }
 
     /**

@@ -18,6 +18,7 @@ import java.util.Set;
 import org.rungtone.analysis.QualityReport;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.internal.Checks;
+import org.rungtone.internal.FileNames;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.Units;
 
@@ -224,7 +225,7 @@ public final class HtmlReport {
             Map<String, Object> m = new LinkedHashMap<>();
             m.put("anchor", anchor("sound-" + s.symbol()));
             m.put("symbol", s.symbol());
-            m.put("sourceName", String.valueOf(s.source().getFileName()));
+            m.put("sourceName", FileNames.display(s.source()));
             m.put("sourceLayout", s.sourceLayout());
             m.put("bits", Integer.toString(s.bits()));
             m.put("rate", Units.format(s.rateHz(), "Hz"));

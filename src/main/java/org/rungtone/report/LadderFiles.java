@@ -12,7 +12,10 @@ import org.rungtone.ladder.LadderAnalysis;
 import org.rungtone.ladder.LadderStudy;
 import org.rungtone.ladder.Linearity;
 
-/** The ladder report's files: every code's level in {@code levels.csv}, and the PNG charts. */
+/**
+ * The ladder report's files: every code's level in {@code levels.csv}, the PNG charts and, with a design
+ * proposal, its ladder file and parts list ({@link DesignFiles}).
+ */
 public final class LadderFiles {
     private LadderFiles() {
     }
@@ -33,6 +36,8 @@ public final class LadderFiles {
             Plots.write(png, figure.chart());
             files.add(png.toString());
         }
+        study.design().ifPresent(d -> files.addAll(DesignFiles.write(folder, study.analysis().spec(),
+                d.proposal())));
         return files;
     }
 

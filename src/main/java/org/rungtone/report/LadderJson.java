@@ -1,8 +1,10 @@
 package org.rungtone.report;
 
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import org.rungtone.internal.Warning;
 import org.rungtone.ladder.DesignProposal;
@@ -12,19 +14,24 @@ import org.rungtone.ladder.LadderStudy;
 import org.rungtone.ladder.Linearity;
 import org.rungtone.ladder.MonteCarloResult;
 import org.rungtone.ladder.Part;
+import org.rungtone.ladder.PartChoice;
 import org.rungtone.ladder.PinCurrent;
+import org.rungtone.ladder.Spread;
 import org.rungtone.ladder.Stats;
 
-/** The ladder report for machines: insertion-ordered maps with units in the key names. */
+/**
+ * The ladder report for machines ({@code docs/schema/ladder.schema.json}): insertion-ordered maps with units
+ * in the key names; paths relative to the output folder.
+ */
 final class LadderJson {
     private LadderJson() {
     }
 
     /** The whole report: the ladder, wiring, levels, linearity, pin currents, and what else was studied. */
-    static Map<String, Object> of(LadderStudy study, List<String> files) {
+    static Map<String, Object> of(LadderStudy study, List<String> files, Path outDir, String toolVersion) {
         LadderAnalysis a = study.analysis();
         List<String> pins = study.pinNames();
-        Map<String, Object> root = new LinkedHashMap<>();
+        Map<String, Object> root = Json.header("ladder", toolVersion);
         root.put("ladder", description(a.spec()));
         List<Map<String, Object>> wiring = new ArrayList<>();
         for (Part p : a.ladder().parts()) {
@@ -32,7 +39,7 @@ final class LadderJson {
             m.put("part", p.label());
             m.put("bit", p.bit());
             m.put("pin", p.role() == Part.Role.LEG ? pins.get(p.bit()) : null);
-            m.put("ohm", p.ohms());
+            m.put("resistance_ohm", p.ohms());
             wiring.add(m);
         }
         root.put("wiring", wiring);
@@ -42,22 +49,23 @@ final class LadderJson {
         Map<String, Object> outOhm = new LinkedHashMap<>();
         outOhm.put("min", a.minOutputOhms());
         outOhm.put("max", a.maxOutputOhms());
-        root.put("output_ohm", outOhm);
+        root.put("output_resistance_ohm", outOhm);
         root.put("pin_limit_a", a.pinLimitAmps());
         root.put("pin_currents", pinCurrents(a.pinCurrents(), pins));
-        study.monteCarlo().ifPresent(mc -> root.put("monte_carlo", monteCarlo(mc)));
-        study.design().ifPresent(d -> root.put("design", design(a.spec(), d.proposal(), d.analysis())));
+        root.put("monte_carlo", study.monteCarlo().map(LadderJson::monteCarlo).orElse(null));
+        root.put("design", study.design().map(d -> design(a.spec(), d.proposal(), d.analysis())).orElse(null));
         root.put("warnings", Warning.texts(a.warnings()));
-        root.put("files", files);
+        root.put("files", files.stream().map(f -> Json.path(Path.of(f), outDir)).toList());
         return root;
     }
 
-    private static Map<String, Object> description(LadderSpec s) {
+    /** A ladder description as the ladder TOML states it; a load of none (open circuit) is null. */
+    static Map<String, Object> description(LadderSpec s) {
         Map<String, Object> desc = new LinkedHashMap<>();
         desc.put("topology", s.topology().key());
         desc.put("bits", s.bits());
-        desc.put("series", s.series().map(Enum::name).orElse("none"));
-        desc.put("tolerance", s.tolerance());
+        desc.put("series", s.series().map(Enum::name).orElse(null));
+        desc.put("tolerance_fraction", s.tolerance());
         desc.put("logic_high_v", s.logicHighVolts());
         desc.put("logic_low_v", s.logicLowVolts());
         desc.put("pin_r_high_ohm", s.pinROhmsHigh());
@@ -97,10 +105,10 @@ final class LadderJson {
             Map<String, Object> m = new LinkedHashMap<>();
             m.put("bit", p.bit());
             m.put("pin", names.get(p.bit()));
-            m.put("source_a", p.sourceAmps());
-            m.put("source_code", p.sourceCode());
-            m.put("sink_a", p.sinkAmps());
-            m.put("sink_code", p.sinkCode());
+            m.put("peak_source_current_a", p.sourceAmps());
+            m.put("peak_source_code", p.sourceCode());
+            m.put("peak_sink_current_a", p.sinkAmps());
+            m.put("peak_sink_code", p.sinkCode());
             out.add(m);
         }
         return out;
@@ -110,12 +118,17 @@ final class LadderJson {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("boards", mc.boards());
         m.put("seed", mc.seed());
-        m.put("spread", mc.spread().describe(mc.tolerance()));
+        Map<String, Object> spread = new LinkedHashMap<>();
+        spread.put("distribution", mc.spread().kind().name().toLowerCase(Locale.ROOT));
+        spread.put("tolerance_fraction", mc.tolerance());
+        spread.put("sigma_fraction", mc.spread().kind() == Spread.Kind.GAUSSIAN ? mc.spread().sigma() : null);
+        spread.put("description", mc.spread().describe(mc.tolerance()));
+        m.put("spread", spread);
         m.put("worst_dnl_lsb", stats(mc.worstDnlStats()));
         m.put("worst_inl_lsb", stats(mc.worstInlStats()));
         m.put("worst_inl_best_fit_lsb", stats(mc.worstInlBestFitStats()));
         m.put("sinad_db", stats(mc.sinadStats()));
-        m.put("enob_bits", stats(mc.enobStats()));
+        m.put("enob_full_scale_bits", stats(mc.enobStats()));
         m.put("monotonic_fraction", mc.monotonicFraction());
         m.put("monotonic_interval_95", mc.monotonicInterval95());
         m.put("nominal_sinad_db", mc.nominalSinadDb());
@@ -145,9 +158,8 @@ final class LadderJson {
             Map<String, Object> p = new LinkedHashMap<>();
             p.put("part", s.parts().get(i).label());
             p.put("ideal_ohm", d.idealOhms().get(i));
-            p.put("nearest", d.naive().get(i).describe());
-            p.put("proposal", d.proposed().get(i).describe());
-            p.put("proposal_ohm", d.proposed().get(i).ohms());
+            p.put("nearest", choice(d.naive().get(i)));
+            p.put("proposal", choice(d.proposed().get(i)));
             parts.add(p);
         }
         m.put("parts", parts);
@@ -158,6 +170,17 @@ final class LadderJson {
         m.put("proposal_monotonic", d.proposedLinearity().isMonotonic());
         m.put("proposal_resistors", d.partCount());
         m.put("proposal_warnings", Warning.texts(proposed.warnings()));
+        return m;
+    }
+
+    /** A part choice: how its resistors are joined, their values and the resulting resistance. */
+    private static Map<String, Object> choice(PartChoice c) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("wiring", c.kind().name().toLowerCase(Locale.ROOT));
+        m.put("resistors_ohm", c.kind() == PartChoice.Kind.SINGLE ? List.of(c.first())
+                : List.of(c.first(), c.second()));
+        m.put("resistance_ohm", c.ohms());
+        m.put("description", c.describe());
         return m;
     }
 }

@@ -1,5 +1,6 @@
 package org.rungtone.report;
 
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -60,13 +61,16 @@ public final class LadderReport {
     }
 
     /**
-     * The JSON report: insertion-ordered maps with units in the key names.
+     * The JSON report ({@code docs/schema/ladder.schema.json}): insertion-ordered maps with units in the key
+     * names.
      *
      * @param study what to report
      * @param files the files written
+     * @param outDir the output folder, which the report's paths are relative to
+     * @param toolVersion the Rungtone version
      */
-    public static String json(LadderStudy study, List<String> files) {
-        return Json.toJson(LadderJson.of(study, files));
+    public static String json(LadderStudy study, List<String> files, Path outDir, String toolVersion) {
+        return Json.toJson(LadderJson.of(study, files, outDir, toolVersion));
     }
 
     /** A code as binary digits, the highest bit first. */

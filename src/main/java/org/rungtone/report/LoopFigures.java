@@ -26,9 +26,9 @@ final class LoopFigures {
     /** The JSON object: points and length in samples and seconds, period, seam level (dB, negative), crossfade. */
     static Map<String, Object> json(SeamlessLoop l, double rateHz) {
         Map<String, Object> m = new LinkedHashMap<>();
-        m.put("start", l.start());
-        m.put("end", l.end());
-        m.put("length", l.lengthSamples());
+        m.put("start_sample", l.start());
+        m.put("end_sample", l.end());
+        m.put("length_samples", l.lengthSamples());
         m.put("start_s", l.start() / rateHz);
         m.put("length_s", l.lengthSamples() / rateHz);
         m.put("period_samples", l.periodSamples());
@@ -36,7 +36,7 @@ final class LoopFigures {
         m.put("periods", l.periods());
         m.put("seam_db", l.seamLevelDb());
         m.put("crossfade_samples", l.crossfadeSamples());
-        m.put("crossfade", "linear");
+        m.put("crossfade_shape", "linear");
         m.put("preview_passes", SeamlessLoop.PREVIEW_PASSES);
         return m;
     }

@@ -2,11 +2,13 @@ package org.rungtone.report;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Optional;
 import org.rungtone.analysis.QualityReport;
+import org.rungtone.firmware.FirmwareFacts;
+import org.rungtone.internal.FileNames;
 
 /** The report of a whole project: effective settings, every sound's figures, firmware and total flash. */
 public final class ProjectReport {
@@ -26,10 +28,12 @@ public final class ProjectReport {
      * @param flashBudgetBytes budget, 0 for none
      * @param files every file written
      * @param warnings project-level warnings
+     * @param firmwareFacts the player's facts, when one player was emitted for all sounds
+     * @param outDir the project's output folder, which the JSON report's paths are relative to
      */
-    public record Input(String toolVersion, Path file, String name, Map<String, String> settings,
+    public record Input(String toolVersion, Path file, String name, Map<String, ProjectSetting> settings,
             List<BuildSummary> sounds, List<String> firmware, long flashBytes, long flashBudgetBytes,
-            List<Path> files, List<String> warnings) {
+            List<Path> files, List<String> warnings, Optional<FirmwareFacts> firmwareFacts, Path outDir) {
     }
 
     private static String f1(double v) {
@@ -42,14 +46,14 @@ public final class ProjectReport {
         b.append("Rungtone ").append(in.toolVersion()).append(" project report: ").append(in.name())
                 .append("  (").append(in.file().getFileName()).append(")\n\nEffective settings:\n");
         TextTable s = new TextTable("setting", "value");
-        in.settings().forEach(s::row);
+        ProjectSetting.texts(in.settings()).forEach(s::row);
         b.append(s.render("  "));
         b.append("\nSounds (quantization-only figures of the case the C files hold, and what the listener gets):\n");
         TextTable t = new TextTable("sound", "source", "rate", "samples", "seconds", "case", "SINAD dB",
                 "A-wtd SNR dB", FigureText.ENOB_FULL_SCALE, FigureText.LISTENER_SNR + " dB");
         for (BuildSummary x : in.sounds()) {
             QualityReport q = x.emitted();
-            t.row(x.symbol(), x.source().getFileName(), String.format(Locale.ROOT, "%.0f", x.rateHz()),
+            t.row(x.symbol(), FileNames.display(x.source()), String.format(Locale.ROOT, "%.0f", x.rateHz()),
                     x.samples(), String.format(Locale.ROOT, "%.3f", x.durationSeconds()), q.label(),
                     f1(q.sinadDb()), f1(q.aWeightedSnrDb()), FigureText.f2(q.enobFullScaleBits()),
                     q.listener().map(l -> f1(l.snrDb())).orElse("-"));
@@ -114,22 +118,11 @@ public final class ProjectReport {
         return w;
     }
 
-    /** The JSON report: the project fields plus each sound's build JSON under "sounds". */
+    /**
+     * The JSON report ({@code docs/schema/project.schema.json}): the project's fields, each setting's value and
+     * origin, and each sound's build fields under "sounds"; paths are relative to the project's output folder.
+     */
     public static Map<String, Object> json(Input in) {
-        Map<String, Object> m = new LinkedHashMap<>();
-        m.put("tool", "rungtone");
-        m.put("version", in.toolVersion());
-        m.put("project", in.name());
-        m.put("file", in.file().toString());
-        m.put("settings", in.settings());
-        m.put("sounds", in.sounds().stream().map(BuildReport::json).toList());
-        m.put("firmware", in.firmware());
-        m.put("flash_bytes", in.flashBytes());
-        if (in.flashBudgetBytes() > 0) {
-            m.put("flash_budget_bytes", in.flashBudgetBytes());
-        }
-        m.put("files", in.files().stream().map(Path::toString).toList());
-        m.put("warnings", warnings(in));
-        return m;
+        return ProjectJson.of(in);
     }
 }

@@ -7,6 +7,7 @@ import java.util.Locale;
 import java.util.Map;
 import org.rungtone.analysis.QualityReport;
 import org.rungtone.analysis.ToneReport;
+import org.rungtone.internal.FileNames;
 import org.rungtone.internal.Units;
 import org.rungtone.report.HtmlReport.Setting;
 
@@ -23,7 +24,7 @@ final class SoundTables {
     /** How the sound was built, as every report shows it; {@code gap} goes before each bracket. */
     static List<Setting> settings(BuildSummary s, String gap) {
         List<Setting> rows = new ArrayList<>();
-        rows.add(new Setting("source", s.source().getFileName() + gap + "(" + s.sourceLayout() + ")"));
+        rows.add(new Setting("source", FileNames.display(s.source()) + gap + "(" + s.sourceLayout() + ")"));
         rows.add(new Setting("conditioning", s.conditioning()));
         rows.add(new Setting("resampler", s.resampler()));
         rows.add(new Setting("target", s.bits() + " bits at " + Units.format(s.rateHz(), "Hz") + ", "

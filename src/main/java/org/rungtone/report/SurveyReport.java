@@ -5,14 +5,17 @@ import java.math.MathContext;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Comparator;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
+import org.rungtone.analysis.ReconstructionFilter;
 import org.rungtone.analysis.SurveyResult;
 import org.rungtone.analysis.SurveyRow;
 import org.rungtone.analysis.SurveyTarget;
+import org.rungtone.condition.ResamplerKind;
+import org.rungtone.internal.FileNames;
+import org.rungtone.ladder.LevelTable;
 
 /**
  * Renders a {@link SurveyResult} as a text table for people and as JSON for machines (stable field names,
@@ -41,10 +44,11 @@ public final class SurveyReport {
      * @param previews whether a preview WAV was written per cell (named by {@link #previewFileName})
      * @param files files written, in order
      * @param warnings what the user should know
+     * @param facts what the reports state beyond the figures, as values for the JSON report
      */
     public record Context(String toolVersion, Path source, String sourceLayout, String conditioning,
             String resampler, String levels, String dither, String shaping, long seed, String filter,
-            boolean previews, List<Path> files, List<String> warnings) {
+            boolean previews, List<Path> files, List<String> warnings, Facts facts) {
         /** Copies the lists. */
         public Context {
             files = List.copyOf(files);
@@ -52,18 +56,33 @@ public final class SurveyReport {
         }
     }
 
+    /**
+     * What a survey report states beyond its figures, as values.
+     *
+     * @param source what was read
+     * @param conditioning the conditioning settings
+     * @param resampler the resampler design
+     * @param deepestLevels the level table of the deepest bit depth surveyed
+     * @param filter the previews' reconstruction filter
+     * @param outDir the output folder, which the JSON report's paths are relative to
+     */
+    public record Facts(SourceFacts source, ConditioningFacts conditioning, ResamplerKind resampler,
+            LevelTable deepestLevels, ReconstructionFilter filter, Path outDir) {
+    }
+
     /** The preview file of a cell, e.g. {@code b06-r16000.wav} (rate in hertz, without trailing zeros). */
     public static String previewFileName(SurveyRow row) {
-        return String.format(Locale.ROOT, "b%02d-r%s.wav", row.bits(), plain(row.rateHz()));
+        return String.format(Locale.ROOT, "b%02d-r%s%s.wav", row.bits(), plain(row.rateHz()),
+                row.codec().map(f -> "-" + f.optionName()).orElse(""));
     }
 
     /** The whole text report: settings, the table, the recommendation, files and warnings. */
     public static String text(SurveyResult result, Context c) {
         StringBuilder b = new StringBuilder();
-        b.append("Rungtone ").append(c.toolVersion()).append(" survey: ").append(fileName(c.source()))
+        b.append("Rungtone ").append(c.toolVersion()).append(" survey: ").append(FileNames.display(c.source()))
                 .append("\n\n");
         TextTable t = new TextTable("item", "value");
-        t.row("source", fileName(c.source()) + "  (" + c.sourceLayout() + ")");
+        t.row("source", FileNames.display(c.source()) + "  (" + c.sourceLayout() + ")");
         t.row("conditioning", c.conditioning());
         t.row("resampler", c.resampler());
         t.row("levels", c.levels());
@@ -105,6 +124,11 @@ public final class SurveyReport {
     public static String table(SurveyResult result) {
         List<String> header = new ArrayList<>(List.of("bits", "rate", "SINAD dB", "in-band SNR dB",
                 "A-wtd SNR dB", "ENOB re FS", "flash bytes", "packed bytes", "fits"));
+        // a survey of Tread stores names each row's store; its bytes fill both byte columns
+        boolean stores = result.rows().stream().anyMatch(r -> r.codec().isPresent());
+        if (stores) {
+            header.add(2, "storage");
+        }
         boolean hasTarget = result.target() != null;
         boolean hasChoice = result.chosen().isPresent();
         boolean heard = result.rows().stream().anyMatch(r -> !Double.isNaN(r.listenerSnrDb()));
@@ -128,6 +152,9 @@ public final class SurveyReport {
                 cells.add(fixed(r.listenerSnrDb(), 1));
                 cells.add(fixed(r.listenerAWeightedSnrDb(), 1));
             }
+            if (stores) {
+                cells.add(2, storage(r));
+            }
             if (hasTarget) {
                 cells.add(yesNo(r.reachesTarget()));
             }
@@ -150,10 +177,10 @@ public final class SurveyReport {
             SurveyRow c = chosen.get();
             String heard = Double.isNaN(c.listenerSnrDb()) ? "" : "heard SNR " + fixed(c.listenerSnrDb(), 1)
                     + " dB, ";
-            return String.format(Locale.ROOT, "Recommended: %d bits at %s (%sSINAD %s dB, ENOB re full scale %s"
-                    + " bits, %s).",
-                    c.bits(), khz(c.rateHz()), heard, fixed(c.sinadDb(), 1), fixed(c.enobFullScaleBits(), 2),
-                    bytes(result.packed() ? c.flashBytesPacked() : c.flashBytesUnpacked(), result.packed()));
+            return String.format(Locale.ROOT, "Recommended: %d bits at %s%s (%sSINAD %s dB, ENOB re full scale %s"
+                    + " bits, %s).", c.bits(), khz(c.rateHz()), c.codec().map(f -> " stored as " + f.optionName())
+                    .orElse(""), heard, fixed(c.sinadDb(), 1), fixed(c.enobFullScaleBits(), 2),
+                    bytes(c, result.packed()));
         }
         if (target == null) {
             return "No target given, so nothing is recommended; give a SINAD or ENOB target.";
@@ -163,9 +190,9 @@ public final class SurveyReport {
         if (reaching.isPresent() && result.flashBudgetBytes() != null) {
             SurveyRow r = reaching.get();
             return String.format(Locale.ROOT, "Nothing reaches %s within the %s budget; the smallest setting"
-                    + " that reaches it, %d bits at %s, needs %s.", target.describe(),
+                    + " that reaches it, %d bits at %s%s, needs %s.", target.describe(),
                     bytes(result.flashBudgetBytes(), result.packed()), r.bits(), khz(r.rateHz()),
-                    bytes(counted(r, result.packed()), result.packed()));
+                    r.codec().map(f -> " as " + f.optionName()).orElse(""), bytes(r, result.packed()));
         }
         boolean heard = result.rows().stream().anyMatch(r -> !Double.isNaN(r.listenerSnrDb()));
         SurveyRow best = result.rows().stream().max(Comparator.comparingDouble(r -> heard ? r.listenerSnrDb()
@@ -189,62 +216,12 @@ public final class SurveyReport {
         return b.toString();
     }
 
-    /** The JSON report, with the stable field names documented in the README. */
+    /**
+     * The JSON report ({@code docs/schema/survey.schema.json}); paths are relative to the survey's output
+     * folder.
+     */
     public static Map<String, Object> json(SurveyResult result, Context c) {
-        Map<String, Object> m = new LinkedHashMap<>();
-        m.put("tool", "rungtone");
-        m.put("version", c.toolVersion());
-        m.put("source", c.source().toString());
-        m.put("source_layout", c.sourceLayout());
-        m.put("conditioning", c.conditioning());
-        m.put("resampler", c.resampler());
-        m.put("levels", c.levels());
-        m.put("dither", c.dither());
-        m.put("shaping", c.shaping());
-        m.put("seed", c.seed());
-        m.put("filter", c.filter());
-        if (result.target() != null) {
-            Map<String, Object> target = new LinkedHashMap<>();
-            target.put("figure", result.target().kind() == SurveyTarget.Kind.SINAD_DB ? "sinad_db"
-                    : "enob_full_scale_bits");
-            target.put("value", result.target().value());
-            m.put("target", target);
-        }
-        if (result.flashBudgetBytes() != null) {
-            m.put("flash_budget_bytes", result.flashBudgetBytes());
-        }
-        m.put("packed", result.packed());
-        m.put("rows", result.rows().stream().map(r -> row(r, c.previews())).toList());
-        result.chosen().ifPresent(r -> m.put("chosen", row(r, c.previews())));
-        m.put("recommendation", recommendation(result));
-        m.put("files", c.files().stream().map(Path::toString).toList());
-        m.put("warnings", c.warnings());
-        return m;
-    }
-
-    private static Map<String, Object> row(SurveyRow r, boolean previews) {
-        Map<String, Object> m = new LinkedHashMap<>();
-        m.put("bits", r.bits());
-        m.put("rate_hz", r.rateHz());
-        m.put("samples", r.samples());
-        m.put("sinad_db", r.sinadDb());
-        m.put("in_band_snr_db", r.inBandSnrDb());
-        m.put("a_weighted_snr_db", r.aWeightedSnrDb());
-        m.put("enob_full_scale_bits", r.enobFullScaleBits());
-        if (!Double.isNaN(r.listenerSnrDb())) {
-            m.put("heard_snr_db", r.listenerSnrDb());
-            m.put("heard_a_weighted_snr_db", r.listenerAWeightedSnrDb());
-        }
-        m.put("clipped_samples", r.clippedSamples());
-        m.put("flash_bytes_unpacked", r.flashBytesUnpacked());
-        m.put("flash_bytes_packed", r.flashBytesPacked());
-        m.put("fits", r.fits());
-        m.put("reaches_target", r.reachesTarget());
-        m.put("chosen", r.chosen());
-        if (previews) {
-            m.put("preview", "previews/" + previewFileName(r));
-        }
-        return m;
+        return SurveyJson.of(result, c);
     }
 
     private static long counted(SurveyRow r, boolean packed) {
@@ -253,6 +230,16 @@ public final class SurveyReport {
 
     private static String bytes(long n, boolean packed) {
         return String.format(Locale.ROOT, "%,d bytes %s", n, packed ? "bit-packed" : "unpacked");
+    }
+
+    /** A row's counted bytes in words: bit-packed or unpacked for the plain codes, else its Tread store's. */
+    private static String bytes(SurveyRow r, boolean packed) {
+        return r.codec().isEmpty() ? bytes(counted(r, packed), packed)
+                : String.format(Locale.ROOT, "%,d bytes as %s", r.flashBytesPacked(), r.codec().get().optionName());
+    }
+
+    private static String storage(SurveyRow r) {
+        return r.codec().map(f -> f.optionName()).orElse("plain");
     }
 
     private static String yesNo(boolean b) {
@@ -277,9 +264,5 @@ public final class SurveyReport {
 
     private static String plain(double v) {
         return BigDecimal.valueOf(v).round(new MathContext(9)).stripTrailingZeros().toPlainString();
-    }
-
-    private static String fileName(Path p) {
-        return p.getFileName() == null ? p.toString() : p.getFileName().toString();
     }
 }

@@ -5,7 +5,6 @@ import static org.rungtone.report.TextLines.wrap;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -45,6 +44,13 @@ public final class UnitFitReport {
                 : "unknown", r.request().resolutionVolts().isPresent() ? "given" : "from the readings' last digits",
                 fit.repeatSpreadVolts() > 0 ? mv(fit.repeatSpreadVolts()) + " rms" : "none (no code read twice)");
         line(b, "  so the readings resolve nothing below %s rms", mv(fit.floorVolts()));
+        sections(b, fit, s, r.profile(), files);
+        return b.toString();
+    }
+
+    /** The sections after the readings' summary: models, bits, residuals, profile, warnings, files. */
+    static void sections(StringBuilder b, FitReport fit, Optional<LadderSpec> s, UnitProfile profile,
+            List<Path> files) {
         line(b, "");
         models(b, fit);
         line(b, "");
@@ -52,7 +58,7 @@ public final class UnitFitReport {
         line(b, "");
         residuals(b, fit);
         line(b, "");
-        profile(b, fit, r.profile());
+        profile(b, fit, profile);
         if (!fit.warnings().isEmpty()) {
             line(b, "");
             line(b, "Warnings");
@@ -63,7 +69,6 @@ public final class UnitFitReport {
         line(b, "");
         line(b, "Wrote %s", CalibrationFiles.joined(files));
         line(b, "Next: rungtone build SOURCE --unit %s", files.get(0));
-        return b.toString();
     }
 
     private static void models(StringBuilder b, FitReport fit) {
@@ -146,65 +151,12 @@ public final class UnitFitReport {
                 fit.levelSigmas().get(worst) / lsb, worst);
     }
 
-    /** The JSON report of a fit; {@code files} are the profile, then the residuals. */
-    public static Map<String, Object> json(UnitFit.Result r, List<Path> files) {
-        FitReport fit = r.fit();
-        Map<String, Object> root = new LinkedHashMap<>();
-        root.put("source", fit.source());
-        root.put("bits", fit.bits());
-        root.put("readings", fit.readingCount());
-        root.put("codes_measured", fit.codesMeasured());
-        root.put("unmeasured_codes", fit.unmeasuredCodes());
-        root.put("resolution_v", fit.resolutionVolts());
-        root.put("repeat_spread_v", fit.repeatSpreadVolts());
-        root.put("floor_v", fit.floorVolts());
-        List<Map<String, Object>> models = new ArrayList<>();
-        for (ModelSummary m : List.of(fit.superposition(), fit.switchedLoad())) {
-            Map<String, Object> e = new LinkedHashMap<>();
-            e.put("model", m.key());
-            e.put("fitted", m.fitted());
-            e.put("parameters", m.model().map(x -> x.parameters()).orElse(new double[0]));
-            e.put("codes_kept", m.keptReadings());
-            e.put("rms_residual_v", Double.isNaN(m.rmsVolts()) ? null : m.rmsVolts());
-            e.put("largest_residual_v", m.fitted() ? m.maxAbsVolts() : null);
-            e.put("outlier_codes", m.outlierCodes());
-            e.put("note", m.note());
-            models.add(e);
-        }
-        root.put("models", models);
-        root.put("chosen", fit.chosen().key());
-        root.put("reason", fit.reason());
-        root.put("parameter_sigmas", fit.parameterSigmas());
-        root.put("residuals", residualsJson(fit));
-        root.put("outlier_codes", fit.outlierCodes());
-        UnitProfile p = r.profile();
-        Map<String, Object> prof = new LinkedHashMap<>();
-        prof.put("board", p.board());
-        prof.put("date", p.date().toString());
-        prof.put("table", p.tableSource().key());
-        prof.put("levels_v", p.levels().levels());
-        prof.put("level_sigmas_v", fit.levelSigmas());
-        root.put("profile", prof);
-        root.put("warnings", fit.warnings());
-        root.put("files", CalibrationFiles.names(files));
-        return root;
-    }
-
-    private static List<Map<String, Object>> residualsJson(FitReport fit) {
-        List<Map<String, Object>> res = new ArrayList<>();
-        for (CodeResidual r : fit.residuals()) {
-            Map<String, Object> e = new LinkedHashMap<>();
-            e.put("code", r.code());
-            e.put("readings", r.readings());
-            e.put("mean_v", r.meanVolts());
-            e.put("spread_v", r.spreadVolts());
-            e.put("model_v", r.modelVolts());
-            e.put("residual_v", r.residualVolts());
-            e.put("score", r.score());
-            e.put("verdict", r.status().word());
-            res.add(e);
-        }
-        return res;
+    /**
+     * The JSON report of a fit ({@code docs/schema/calibrate-fit.schema.json}); {@code files} are the profile,
+     * then the residuals; paths are relative to {@code outDir}.
+     */
+    public static Map<String, Object> json(UnitFit.Result r, List<Path> files, Path outDir, String toolVersion) {
+        return CalibrationJson.fit(r, files, outDir, toolVersion);
     }
 
     private static String codes(List<Integer> codes) {

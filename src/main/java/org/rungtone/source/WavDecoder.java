@@ -1,17 +1,14 @@
 package org.rungtone.source;
 
-import java.io.EOFException;
 import java.io.IOException;
 import java.nio.ByteBuffer;
 import java.nio.ByteOrder;
-import java.nio.channels.FileChannel;
-import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.rungtone.internal.InputError;
 
-/** Header parsing and block decoding for one WAV file (RIFF chunks, PCM, IEEE float, extensible). */
+/** Header parsing and block decoding for one WAV file (RIFF chunks, PCM, IEEE float, G.711, extensible). */
 final class WavDecoder {
     private static final long UNKNOWN_SIZE = 0xFFFF_FFFFL;
     /**
@@ -23,20 +20,21 @@ final class WavDecoder {
     private static final byte[] GUID_TAIL = {0x00, 0x00, 0x00, 0x00, 0x10, 0x00, (byte) 0x80, 0x00, 0x00,
         (byte) 0xAA, 0x00, 0x38, (byte) 0x9B, 0x71};
 
-    final Path file;
+    final WavBytes bytes;
     final List<String> warnings = new ArrayList<>();
     WavFormat format;
     long dataOffset;
 
-    WavDecoder(Path file) {
-        this.file = file;
+    WavDecoder(WavBytes bytes) {
+        this.bytes = bytes;
     }
 
     private InputError bad(String message) {
-        return InputError.inFile(file, message);
+        return new InputError(bytes.name + ": " + message);
     }
 
-    void parse(FileChannel ch) throws IOException {
+    void parse() throws IOException {
+        WavBytes ch = bytes;
         long size = ch.size();
         if (size < 12) {
             throw bad("is too short to be a WAV file (" + size + " bytes; a RIFF header needs 12)");
@@ -76,7 +74,7 @@ final class WavDecoder {
                 long available = size - body;
                 if (chunkSize == UNKNOWN_SIZE || chunkSize > available) {
                     warnings.add(String.format(Locale.ROOT, "%s: data chunk says %d bytes but %d remain;"
-                            + " reading to the end of the file", file.getFileName(), chunkSize, available));
+                            + " reading to the end of the file", bytes.shortName, chunkSize, available));
                     dataSize = available;
                 } else {
                     dataSize = chunkSize;
@@ -137,7 +135,7 @@ final class WavDecoder {
         }
         long frames = dataSize / blockAlign;
         if (dataSize % blockAlign != 0) {
-            warnings.add(file.getFileName() + ": data ends with a partial frame; it was dropped");
+            warnings.add(bytes.shortName + ": data ends with a partial frame; it was dropped");
         }
         if (frames == 0) {
             throw bad("has no audio samples (empty data chunk)");
@@ -149,8 +147,7 @@ final class WavDecoder {
     }
 
     /** Decodes frames {@code first .. first + count - 1} into {@code out[off ..]}, checking every sample. */
-    void decodeRange(FileChannel ch, int channel, long first, int count, double[] out, int off)
-            throws IOException {
+    void decodeRange(int channel, long first, int count, double[] out, int off) throws IOException {
         int channels = format.channels();
         int frameBytes = format.blockAlign();
         int framesPerBlock = Math.max(1, Math.min(count, WavReader.BLOCK_BYTES / frameBytes));
@@ -166,13 +163,7 @@ final class WavDecoder {
         while (frame < end) {
             int n = (int) Math.min(framesPerBlock, end - frame);
             buf.clear().limit(n * frameBytes);
-            long at = dataOffset + frame * frameBytes;
-            while (buf.hasRemaining()) {
-                int r = ch.read(buf, at + buf.position());
-                if (r < 0) {
-                    throw new EOFException();
-                }
-            }
+            bytes.readFully(buf, dataOffset + frame * frameBytes);
             int o = off + (int) (frame - first);
             samples(buf, n * channels, raw);
             for (int i = 0; i < n; i++) {
@@ -201,6 +192,16 @@ final class WavDecoder {
             case PCM_U8:
                 for (int i = 0; i < count; i++) {
                     dst[i] = ((b.get(i) & 0xFF) - 128) * (1.0 / 128);
+                }
+                break;
+            case MU_LAW:
+                for (int i = 0; i < count; i++) {
+                    dst[i] = G711.muLaw(b.get(i));
+                }
+                break;
+            case A_LAW:
+                for (int i = 0; i < count; i++) {
+                    dst[i] = G711.aLaw(b.get(i));
                 }
                 break;
             case PCM_S16: {
@@ -248,13 +249,9 @@ final class WavDecoder {
                 idx / (double) format.sampleRateHz(), what));
     }
 
-    private static ByteBuffer readAt(FileChannel ch, long pos, int len) throws IOException {
+    private static ByteBuffer readAt(WavBytes ch, long pos, int len) throws IOException {
         ByteBuffer b = ByteBuffer.allocate(len).order(ByteOrder.LITTLE_ENDIAN);
-        while (b.hasRemaining()) {
-            if (ch.read(b, pos + b.position()) < 0) {
-                throw new EOFException();
-            }
-        }
+        ch.readFully(b, pos);
         return b.flip();
     }
 
@@ -275,11 +272,11 @@ final class WavDecoder {
         return switch (tag) {
             case 1 -> "PCM with " + bits + " bits per sample is not supported (8, 16, 24, 32)";
             case 3 -> "float with " + bits + " bits per sample is not supported (32, 64)";
+            case 6, 7 -> (tag == 6 ? "A-law" : "mu-law") + " with " + bits + " bits per sample is not supported (8)";
             default -> String.format(Locale.ROOT, "uses format tag 0x%04X (%s); Rungtone reads PCM (1), IEEE"
-                    + " float (3) and extensible (0xFFFE); convert it to 16-bit PCM", tag, switch (tag) {
+                    + " float (3), A-law (6), mu-law (7) and extensible (0xFFFE); convert it to 16-bit PCM", tag,
+                    switch (tag) {
                         case 2 -> "Microsoft ADPCM";
-                        case 6 -> "A-law";
-                        case 7 -> "mu-law";
                         case 0x11 -> "IMA ADPCM";
                         case 0x55 -> "MPEG layer 3";
                         default -> "compressed or unknown";

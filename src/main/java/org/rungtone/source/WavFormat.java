@@ -5,7 +5,7 @@ import java.util.Locale;
 /**
  * The layout of a WAV file's audio data, as read from its fmt chunk.
  *
- * @param formatTag 1 (PCM), 3 (IEEE float) or 0xFFFE (extensible)
+ * @param formatTag 1 (PCM), 3 (IEEE float), 6 (A-law), 7 (µ-law) or 0xFFFE (extensible)
  * @param encoding the effective sample encoding after resolving the extensible sub-format
  * @param channels 1..8
  * @param sampleRateHz samples per second per channel
@@ -30,10 +30,20 @@ public record WavFormat(int formatTag, Encoding encoding, int channels, int samp
         /** IEEE 754 single precision. */
         FLOAT32,
         /** IEEE 754 double precision. */
-        FLOAT64;
+        FLOAT64,
+        /** 8-bit A-law code words, ITU-T G.711. */
+        A_LAW,
+        /** 8-bit µ-law code words, ITU-T G.711. */
+        MU_LAW;
 
-        /** The encoding of a format tag (1 PCM, 3 IEEE float) and sample width, or null when there is none. */
+        /**
+         * The encoding of a format tag (1 PCM, 3 IEEE float, 6 A-law, 7 µ-law) and sample width, or null when
+         * there is none.
+         */
         static Encoding of(int tag, int bits) {
+            if (tag == 6 || tag == 7) {
+                return bits != 8 ? null : tag == 6 ? A_LAW : MU_LAW;
+            }
             if (tag == 1) {
                 return bits == 8 ? PCM_U8 : bits == 16 ? PCM_S16 : bits == 24 ? PCM_S24 : bits == 32 ? PCM_S32 : null;
             }
@@ -59,6 +69,12 @@ public record WavFormat(int formatTag, Encoding encoding, int channels, int samp
                 break;
             case PCM_U8:
                 kind = "PCM 8-bit unsigned";
+                break;
+            case A_LAW:
+                kind = "A-law 8-bit";
+                break;
+            case MU_LAW:
+                kind = "mu-law 8-bit";
                 break;
             default:
                 kind = "PCM " + bitsPerSample + "-bit";

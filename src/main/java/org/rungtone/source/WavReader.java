@@ -9,15 +9,18 @@ import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
 import java.util.List;
+import org.rungtone.internal.FileNames;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.Setting;
 
 /**
  * Decodes WAV files (RIFF; Microsoft/IBM "Multimedia Programming Interface and Data Specifications 1.0",
  * 1991, and Microsoft "Multiple Channel Audio Data and WAVE Files" for WAVE_FORMAT_EXTENSIBLE): PCM 8-bit
- * unsigned, 16/24/32-bit signed, IEEE float 32/64, extensible with PCM or float sub-format, 1..8 channels,
- * 1 Hz..384 kHz. Unknown chunks are skipped, odd-sized chunks padded; a data size of 0xFFFFFFFF or one
- * past the end of the file is read "to the end of the file" with a warning.
+ * unsigned, 16/24/32-bit signed, IEEE float 32/64, 8-bit A-law and µ-law (ITU-T G.711, {@link G711}),
+ * extensible with any of these as sub-format, 1..8 channels, 1 Hz..384 kHz. Unknown chunks are skipped,
+ * odd-sized chunks padded; a data size of 0xFFFFFFFF or one past the end of the file is read "to the end of
+ * the file" with a warning. The path {@code -} ({@link FileNames#isStandardInput}) reads standard input,
+ * held in memory ({@link StandardInput}).
  *
  * <p>The data is streamed in blocks straight into the mono result (mix-down or one channel), so the raw
  * bytes are never held whole. The JDK's {@code javax.sound.sampled} reader is not used: it refuses
@@ -89,47 +92,38 @@ public final class WavReader {
      * @throws InputError naming the file and the problem for anything that is not a readable WAV file
      */
     public static Stream open(Path file, int channel) {
-        WavDecoder d = new WavDecoder(file);
-        FileChannel ch = open(file);
+        WavBytes bytes = FileNames.isStandardInput(file)
+                ? WavBytes.of(StandardInput.bytes(), FileNames.STANDARD_INPUT_NAME) : open(file);
+        WavDecoder d = new WavDecoder(bytes);
         try {
-            d.parse(ch);
+            d.parse();
             if (channel < 0 || channel > d.format.channels()) {
-                throw Setting.CHANNEL.problem("%s: has %d channel(s); %s must be 0 (mix down) or 1..%d: %d", file,
-                        d.format.channels(), Setting.CHANNEL.ref(), d.format.channels(), channel);
+                throw Setting.CHANNEL.problem("%s: has %d channel(s); %s must be 0 (mix down) or 1..%d: %d",
+                        bytes.name, d.format.channels(), Setting.CHANNEL.ref(), d.format.channels(), channel);
             }
-            return new Stream(d, ch, channel);
+            return new Stream(d, channel);
         } catch (IOException e) {
-            closeQuietly(ch);
-            throw readError(file, e);
+            bytes.close();
+            throw readError(bytes, e);
         } catch (RuntimeException e) {
-            closeQuietly(ch);
+            bytes.close();
             throw e;
         }
     }
 
     /** A failed read as the user's error: a file that ends early, or one the system cannot read. */
-    private static InputError readError(Path file, IOException e) {
-        return e instanceof EOFException ? InputError.inFile(file, "ends early (truncated file)", e)
-                : InputError.inFile(file, "cannot be read (" + e.getMessage() + ")", e);
-    }
-
-    private static void closeQuietly(FileChannel ch) {
-        try {
-            ch.close();
-        } catch (IOException ignored) {
-            // nothing was written; the read error that led here is the one to report
-        }
+    private static InputError readError(WavBytes bytes, IOException e) {
+        return e instanceof EOFException ? new InputError(bytes.name + ": ends early (truncated file)", e)
+                : new InputError(bytes.name + ": cannot be read (" + e.getMessage() + ")", e);
     }
 
     /** An open WAV file read by range: its layout, its warnings and its mono samples on demand. */
     public static final class Stream implements SampleSource {
         private final WavDecoder decoder;
-        private final FileChannel channel;
         private final int pick;
 
-        private Stream(WavDecoder decoder, FileChannel channel, int pick) {
+        private Stream(WavDecoder decoder, int pick) {
             this.decoder = decoder;
-            this.channel = channel;
             this.pick = pick;
         }
 
@@ -158,24 +152,25 @@ public final class WavReader {
             org.rungtone.internal.Checks.checkArgument(from >= 0 && count >= 0 && from + count <= length(),
                     "range %d+%d outside 0..%d", from, count, length());
             try {
-                decoder.decodeRange(channel, pick, from, count, dst, offset);
+                decoder.decodeRange(pick, from, count, dst, offset);
             } catch (IOException e) {
-                throw readError(decoder.file, e);
+                throw readError(decoder.bytes, e);
             }
         }
 
         @Override
         public void close() {
-            closeQuietly(channel);
+            decoder.bytes.close();
         }
     }
 
-    private static FileChannel open(Path file) {
+    private static WavBytes open(Path file) {
         try {
             if (Files.isDirectory(file)) {
                 throw InputError.inFile(file, "is a folder, not a WAV file");
             }
-            return FileChannel.open(file, StandardOpenOption.READ);
+            String shortName = file.getFileName() == null ? file.toString() : file.getFileName().toString();
+            return WavBytes.of(FileChannel.open(file, StandardOpenOption.READ), file.toString(), shortName);
         } catch (NoSuchFileException e) {
             throw InputError.inFile(file, "no such file", e);
         } catch (AccessDeniedException e) {

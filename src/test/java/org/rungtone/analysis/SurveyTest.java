@@ -9,6 +9,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.function.DoubleFunction;
 import org.junit.jupiter.api.Test;
+import org.rungtone.codec.TreadFormat;
 import org.rungtone.source.Signal;
 
 class SurveyTest {
@@ -60,6 +61,30 @@ class SurveyTest {
         assertTrue(tight.chosen().isEmpty());
         assertFalse(tight.rows().get(1).fits());
         assertEquals(3999L, tight.flashBudgetBytes());
+    }
+
+    @Test
+    void treadStoresAreRowsOfTheirOwnAndCanBeChosen() {
+        // a 300 Hz tone at 8 kHz is what an adaptive differential code is for: tread3 to 8 bits reaches ENOB 6
+        // for under half the bytes of 6-bit packed codes, which reach it too
+        SurveySpec spec = small().bitDepths(List.of(4, 6, 8)).ratesHz(List.of(8000.0)).packed(true)
+                .codecs(List.of(TreadFormat.TREAD3)).target(SurveyTarget.enobBits(5)).build();
+        SurveyResult result = Survey.run(spec, TONE);
+        // tread3 decodes to 4 bits and more: a row of it beside each depth
+        assertEquals(6, result.rows().size());
+        assertEquals(6, Survey.cellCount(spec));
+        List<SurveyRow> tread = result.rows().stream().filter(r -> r.codec().isPresent()).toList();
+        assertEquals(List.of(4, 6, 8), tread.stream().map(SurveyRow::bits).toList());
+        for (SurveyRow r : tread) {
+            // the stream, the decoder's byte table and one reset point
+            long bytes = (4000L * 3 + 7) / 8 + 2L * 4 * (4 * r.bits() - 8 + 1) + 3;
+            assertEquals(bytes, r.flashBytesPacked());
+            assertEquals(bytes, r.flashBytesUnpacked());
+        }
+        SurveyRow chosen = result.chosen().orElseThrow();
+        assertEquals(TreadFormat.TREAD3, chosen.codec().orElseThrow());
+        assertTrue(chosen.flashBytesPacked() < result.rows().stream().filter(r -> r.codec().isEmpty()
+                && r.reachesTarget()).mapToLong(SurveyRow::flashBytesPacked).min().orElseThrow());
     }
 
     @Test

@@ -42,8 +42,7 @@ class CodeChoiceTest {
 
     @Test
     void rejectsEveryCodeWithACount() {
-        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> new CodeChoice(true, OptionalInt.of(2)));
-        assertEquals("every code and a verification count exclude each other", e.getMessage());
+        InputError e = assertThrows(InputError.class, () -> new CodeChoice(true, OptionalInt.of(2)));
+        assertEquals("plan.every_code and plan.verify exclude each other; give one", e.getMessage());
     }
 }

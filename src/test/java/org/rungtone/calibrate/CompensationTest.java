@@ -51,7 +51,7 @@ class CompensationTest {
         return n % 2 == 1 ? s[n / 2] : 0.5 * (s[n / 2 - 1] + s[n / 2]);
     }
 
-    private static int[] nearest(LevelTable table, Signal s) {
+    static int[] nearest(LevelTable table, Signal s) {
         return new Quantizer(table, Dither.NONE, 0).apply(s).codes().codes();
     }
 
@@ -128,7 +128,7 @@ class CompensationTest {
         assertTrue(Math.abs(loss) <= 0.2, "median ENOB loss " + loss + " bit");
     }
 
-    private static double enob(double sinadDb) {
+    static double enob(double sinadDb) {
         return (sinadDb - 1.76) / 6.02;
     }
 }

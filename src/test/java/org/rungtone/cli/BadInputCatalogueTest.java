@@ -71,6 +71,7 @@ class BadInputCatalogueTest {
         outputCases(c);
         projectCases(c);
         optionCases(c);
+        CalibrationCatalogue.add(c);
         return c.stream();
     }
 
@@ -97,8 +98,10 @@ class BadInputCatalogueTest {
                 d -> survey(d, write(d, "rate4g.wav", wav16().rate(4_000_000_000L).bytes()))));
         c.add(bad("build: 7-bit PCM", "PCM with 7 bits per sample is not supported",
                 d -> build(d, write(d, "seven.wav", wav16().tag(1).bytes7()))));
-        c.add(bad("build: A-law encoded WAV", "uses format tag 0x0006 (A-law)",
-                d -> build(d, write(d, "alaw.wav", wav16().tag(6).bytes()))));
+        c.add(bad("build: IMA ADPCM encoded WAV", "uses format tag 0x0011 (IMA ADPCM)",
+                d -> build(d, write(d, "adpcm.wav", wav16().tag(0x11).bytes()))));
+        c.add(bad("build: 16-bit A-law WAV", "A-law with 16 bits per sample is not supported (8)",
+                d -> build(d, write(d, "alaw16.wav", wav16().tag(6).bytes()))));
         c.add(bad("build: data chunk of 0 bytes", "has no audio samples (empty data chunk)",
                 d -> build(d, write(d, "empty.wav", WavFixtures.wav().layout(Layout.S16, 1, 8000, new double[0])
                         .bytes()))));
@@ -229,6 +232,30 @@ class BadInputCatalogueTest {
         c.add(bad("build: samples over the flash budget", "1,590 bytes over the 10-byte flash budget"
                 + " (--flash-budget); no smaller bit depth or rate fits either",
                 d -> build(d, wavFile(d), "--flash-budget", "10")));
+        treadCases(c);
+    }
+
+    private static void treadCases(List<Case> c) {
+        c.add(bad("build: Tread on a sound shorter than its block", "--storage tread3 needs at least one block of"
+                + " 8 samples; the sound has 5; use a longer sound, or --storage packed",
+                d -> build(d, write(d, "blip.wav", WavFixtures.sine16(16_000, 5 / 16_000.0, 440, 0.5)), "--target",
+                        "generic", "--pins", "PB0-PB5", "--bits", "6", "--rate", "16k", "--storage", "tread3")));
+        c.add(bad("build: Tread to a ladder above its 12 bits", "--bits 14 is above the 12-bit limit of tread3"
+                + " storage; use at most 12 bits, or --storage packed", d -> build(d, wavFile(d), "--target",
+                        "generic", "--pins", "PB0-PB7,PC0-PC5", "--bits", "14", "--storage", "tread3")));
+        c.add(bad("build: Tread to a ladder no wider than its codes", "--bits 4 is too few for tread4 storage,"
+                + " which stores 4 bits per sample itself; use at least 5 bits, or --storage packed",
+                d -> build(d, wavFile(d), "--target", "generic", "--pins", "PB0-PB3", "--bits", "4", "--storage",
+                        "tread4")));
+        c.add(bad("build: Tread for the dds engine", "the dds engine reads its wavetable at any phase, but a Tread"
+                + " stream (--storage tread2) decodes only forwards; use --storage unpacked or packed",
+                d -> build(d, script(d, "organ.rung", "wavetable 256 samples\nout sine(1Hz)\n"), "--target",
+                        "generic", "--pins", "PB0-PB5", "--bits", "6", "--engine", "dds", "--storage", "tread2")));
+        c.add(bad("project: Tread above its ladder limit", "p.toml:10: quantize.bits: 13 is above the 12-bit limit of"
+                + " tread2 storage; use at most 12 bits, or target.storage packed", d -> project(d,
+                        "[project]\nname = \"bench\"\nout = \"out\"\n\n[target]\npins = \"PB0-PB7,PC0-PC4\"\n"
+                        + "storage = \"tread2\"\n\n[quantize]\nbits = 13\n\n"
+                        + "[[sound]]\nname = \"tone\"\nsource = \"tone.wav\"\n")));
     }
 
     private static void outputCases(List<Case> c) {

@@ -3,59 +3,42 @@ package org.rungtone.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import org.junit.jupiter.api.Test;
-import picocli.CommandLine;
+import org.rungtone.testing.Cli;
 
+/** The completion command prints a script for the shell named; the scripts are tried in CompletionInShellsTest. */
 class CompletionCommandTest {
-    private record Run(int exit, String out, String err) {
-    }
-
-    private static Run run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        CommandLine cl = Main.newCommandLine();
-        cl.setOut(new PrintWriter(out));
-        cl.setErr(new PrintWriter(err));
-        int exit = cl.execute(args);
-        return new Run(exit, out.toString(), err.toString());
-    }
-
     @Test
-    void printsABashScriptCoveringTheCommandModel() {
-        Run r = run("completion");
-        assertEquals(0, r.exit(), r.err());
+    void printsABashScriptByDefault() {
+        Cli.Run r = Cli.run("completion");
+        assertEquals(0, r.exitCode(), r.err());
         assertEquals("", r.err());
-        String script = r.out();
-        assertTrue(script.startsWith("#!/usr/bin/env bash"), script.substring(0, 40));
-        // the function is registered for the tool's own name
-        assertTrue(script.contains("complete -F _complete_rungtone"), "no complete -F line");
-        for (String command : new String[] {"build", "ladder", "demo", "completion"}) {
-            assertTrue(script.contains(command), command);
-        }
-        for (String option : new String[] {"--bits", "--rate", "--dither", "--out", "--shell"}) {
-            assertTrue(script.contains(option), option);
-        }
+        assertTrue(r.out().startsWith("# bash completion for rungtone, written by 'rungtone completion bash'"),
+                r.out().substring(0, 80));
+        assertTrue(r.out().endsWith("complete -F _rungtone rungtone\n"));
+        assertEquals(r.out(), Cli.run("completion", "bash").out());
     }
 
     @Test
-    void setsZshUpThroughBashcompinit() {
-        Run r = run("completion", "--shell", "zsh");
-        assertEquals(0, r.exit(), r.err());
-        assertTrue(r.out().contains("bashcompinit"));
-        assertEquals(run("completion").out(), r.out());
+    void printsAScriptForEachShellItsOwnWay() {
+        String zsh = Cli.run("completion", "zsh").out();
+        assertTrue(zsh.startsWith("#compdef rungtone\n"), zsh.substring(0, 40));
+        assertTrue(zsh.contains("'--dither=[Dither before quantizing (default tpdf).]:dither:(none rpdf tpdf)'"));
+        String fish = Cli.run("completion", "FISH").out();
+        assertTrue(fish.contains("complete -c rungtone -n '__rungtone_at 'build'' -l dither -x -a 'none rpdf tpdf'"
+                .replace("'build''", "\\'build\\''")), fish);
     }
 
     @Test
     void scriptIsTheSameOnEveryRunAndEvenWhenQuiet() {
-        assertEquals(run("completion").out(), run("completion", "--quiet").out());
+        assertEquals(Cli.run("completion", "zsh").out(), Cli.run("completion", "zsh", "--quiet").out());
     }
 
     @Test
     void rejectsAnUnknownShellAsUsage() {
-        Run r = run("completion", "--shell", "fish");
-        assertEquals(2, r.exit());
-        assertTrue(r.err().startsWith("rungtone: error: Invalid value for option '--shell'"), r.err());
+        Cli.Run r = Cli.run("completion", "tcsh");
+        assertEquals(2, r.exitCode());
+        assertTrue(r.err().startsWith("rungtone: error: Invalid value for positional parameter at index 0 (SHELL)"),
+                r.err());
     }
 }

@@ -171,7 +171,10 @@ class LadderCommandTest {
         Run r = run("--bits", "6", "--monte-carlo", "50", "--gaussian-sigma", "1.5%", "--json");
         assertEquals(0, r.exit(), r.err());
         JsonObject mc = JsonParser.parseString(r.out()).getAsJsonObject().getAsJsonObject("monte_carlo");
-        assertEquals("gaussian, sigma 1.5%", mc.get("spread").getAsString());
+        JsonObject spread = mc.getAsJsonObject("spread");
+        assertEquals("gaussian", spread.get("distribution").getAsString());
+        assertEquals(0.015, spread.get("sigma_fraction").getAsDouble(), 1e-12);
+        assertEquals("gaussian, sigma 1.5%", spread.get("description").getAsString());
         assertBadInput("--gaussian-sigma: write it as a percentage, e.g. 1.7%", "--monte-carlo", "5",
                 "--gaussian-sigma", "0.02");
     }

@@ -100,8 +100,8 @@ class SurveyCommandTest {
             assertEquals((long) samples * (bits <= 8 ? 1 : 2), row.get("flash_bytes_unpacked").getAsLong());
             assertEquals(((long) samples * bits + 7) / 8, row.get("flash_bytes_packed").getAsLong());
             // the target is checked against what the listener gets, not the at-rate SINAD
-            assertEquals(row.get("heard_snr_db").getAsDouble() >= 30, row.get("reaches_target").getAsBoolean(),
-                    row.toString());
+            assertEquals(row.get("heard_signal_to_error_db").getAsDouble() >= 30,
+                    row.get("reaches_target").getAsBoolean(), row.toString());
         }
         JsonObject expected = rows.asList().stream().map(JsonElement::getAsJsonObject)
                 .filter(x -> x.get("fits").getAsBoolean() && x.get("reaches_target").getAsBoolean())
@@ -131,7 +131,11 @@ class SurveyCommandTest {
         Cli.Run r = survey(out, "--bits-list", "8", "--rates", "8k", "--gain", "-6", "--json");
         assertEquals(0, r.exitCode(), r.err());
         JsonObject o = JsonParser.parseString(r.out()).getAsJsonObject();
-        assertEquals("DC removed, gain -6.0 dB", o.get("conditioning").getAsString());
+        JsonObject conditioning = o.getAsJsonObject("conditioning");
+        assertEquals("DC removed, gain -6.0 dB", conditioning.get("description").getAsString());
+        assertEquals(-6, conditioning.get("gain_db").getAsDouble(), 0);
+        assertTrue(conditioning.get("normalize_dbfs").isJsonNull());
+        assertTrue(conditioning.get("dc_removed").getAsBoolean());
         // The fixture's 0.5 sine at -6 dB: amplitude 0.5·10^(-6/20); TPDF error power LSB²/4 as above.
         double amplitude = 0.5 * Math.pow(10, -6 / 20.0);
         double lsb = 2 / 255.0;
@@ -147,9 +151,9 @@ class SurveyCommandTest {
                 "--packed", "--filter", "lp2:3k", "--json");
         assertEquals(0, r.exitCode(), r.err());
         JsonObject o = JsonParser.parseString(r.out()).getAsJsonObject();
-        for (String f : List.of("tool", "version", "source", "source_layout", "conditioning", "resampler", "levels",
-                "dither", "shaping", "seed", "filter", "target", "flash_budget_bytes", "packed", "rows", "chosen",
-                "recommendation", "files", "warnings")) {
+        for (String f : List.of("schema_version", "report", "tool", "version", "source", "conditioning", "resampler",
+                "levels", "dither", "shaping", "seed", "filter", "target", "flash_budget_bytes", "packed", "rows",
+                "chosen", "recommendation", "files", "warnings")) {
             assertTrue(o.has(f), f);
         }
         assertEquals(32_000, o.get("flash_budget_bytes").getAsLong());
@@ -157,10 +161,9 @@ class SurveyCommandTest {
         assertEquals("enob_full_scale_bits", o.getAsJsonObject("target").get("figure").getAsString());
         JsonObject row = o.getAsJsonArray("rows").get(0).getAsJsonObject();
         assertEquals(List.of("bits", "rate_hz", "samples", "sinad_db", "in_band_snr_db", "a_weighted_snr_db",
-                "enob_full_scale_bits", "heard_snr_db", "heard_a_weighted_snr_db", "clipped_samples",
-                "flash_bytes_unpacked",
-                "flash_bytes_packed", "fits", "reaches_target",
-                "chosen"), new ArrayList<>(row.keySet()));
+                "enob_full_scale_bits", "heard_signal_to_error_db", "heard_a_weighted_signal_to_error_db",
+                "clipped_samples", "flash_bytes_unpacked", "flash_bytes_packed", "fits", "reaches_target", "chosen",
+                "storage", "preview"), new ArrayList<>(row.keySet()));
     }
 
     @Test
@@ -174,7 +177,7 @@ class SurveyCommandTest {
         assertFalse(r.out().contains("<- chosen"), r.out());
         assertTrue(r.out().contains("Nothing reaches SINAD >= 25.00 dB within the 3,500 bytes unpacked budget;"
                 + " the smallest setting that reaches it, 6 bits at 8 kHz, needs 4,000 bytes unpacked."), r.out());
-        assertFalse(json(out.resolve("survey.json")).has("chosen"));
+        assertTrue(json(out.resolve("survey.json")).get("chosen").isJsonNull());
 
         Cli.Run packed = survey(dir.resolve("packed"), "--bits-list", "6,8", "--rates", "8k", "--target-sinad", "25",
                 "--flash-budget", "3500", "--packed", "--filter", "lp2:3k");
@@ -199,7 +202,10 @@ class SurveyCommandTest {
         JsonObject o = json(out.resolve("survey.json"));
         assertEquals("previews/b06-r8000.wav",
                 o.getAsJsonArray("rows").get(1).getAsJsonObject().get("preview").getAsString());
-        assertTrue(o.get("filter").getAsString().startsWith("2nd order 3400 Hz"), o.get("filter").getAsString());
+        JsonObject filter = o.getAsJsonObject("filter");
+        assertEquals("second_order", filter.get("kind").getAsString());
+        assertEquals(3400, filter.get("cutoff_hz").getAsDouble(), 0);
+        assertTrue(filter.get("description").getAsString().startsWith("2nd order 3400 Hz"), filter.toString());
     }
 
     static Stream<Arguments> badInputs() {

@@ -21,6 +21,9 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
+import org.rungtone.codec.TreadFormat;
+import org.rungtone.codec.TreadState;
+import org.rungtone.codec.TreadStream;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.quantize.Codes;
 import org.rungtone.testing.AvrSimulator;
@@ -53,9 +56,22 @@ class AvrSimulatorTest {
     private static final int LOOP_END = 160;
     private static final int LOOP_TICKS = 400;
     private static final int TICKS_AFTER_END = 12;
+    /** Ticks main() waits before it releases a loop: in the second pass of the loop. */
+    private static final int RELEASE_AFTER_TICKS = 250;
+    /** Codes of the other sound of a {@link Variant#WIDE} build: more than 16-bit indices reach. */
+    private static final int WIDE_OTHER_SAMPLES = 66_000;
     private static final int COST_ONLY_TICKS = 300;
     /** Twelve bits, one per pin, taking turns over ports D, B and C: four scatter terms per port. */
     private static final String SCATTERED_12 = "PD2,PB0,PC0,PD3,PB1,PC1,PD4,PB2,PC2,PD5,PB3,PC3";
+    /**
+     * main()'s release of a loop: after {@link #RELEASE_AFTER_TICKS} timer periods (each seen as TCNT1
+     * passing half its period), a third into a period, far from any interrupt, between markers 4 and 5.
+     */
+    private static final String RELEASE = String.join("\n    ",
+            "for (uint16_t n = 0u; n < " + RELEASE_AFTER_TICKS + "u; n++) {",
+            "    while (TCNT1 < 500u) {", "    }", "    while (TCNT1 >= 500u) {", "    }", "}",
+            "while (TCNT1 < 300u) {", "}", "GPIOR0 = 4u;", "player_release();", "GPIOR0 = 5u");
+
     private static final Map<String, String> TABLE = Collections.synchronizedMap(new LinkedHashMap<>());
     private static final Map<Build, CompletableFuture<Run>> RUNS = new HashMap<>();
     private static ExecutorService pool;
@@ -63,12 +79,36 @@ class AvrSimulatorTest {
     @TempDir
     static Path root;
 
-    /** One AVR build: pins, storage, engine, sample rate and timer. */
-    record Build(String pins, SampleStorage storage, PlaybackEngine engine, int rateHz, TimerKind timer) {
+    /** What a build varies: nothing, its sounds' length, how main() plays it, the pin strategy, the sweep. */
+    enum Variant {
+        /** main() plays sound 1 (or loops it) and idles. */
+        PLAIN,
+        /** The pins are written by scatter terms even where a shift would do. */
+        SCATTER,
+        /** The other sound is long enough for 32-bit sample indices. */
+        WIDE,
+        /** main() loops sound 1 and releases it after some {@link #RELEASE_AFTER_TICKS} ticks. */
+        RELEASED,
+        /** A sweep for a sound card's recording (its longer branch: which hold comes next). */
+        RECORDING
+    }
+
+    /** One AVR build: pins, storage, engine, sample rate, timer and how main() plays it. */
+    record Build(String pins, SampleStorage storage, PlaybackEngine engine, int rateHz, TimerKind timer,
+            Variant variant) {
+        Build(String pins, SampleStorage storage, PlaybackEngine engine, int rateHz, TimerKind timer) {
+            this(pins, storage, engine, rateHz, timer, Variant.PLAIN);
+        }
+
         @Override
         public String toString() {
-            return String.format(Locale.ROOT, "%-48s %-8s %-5s %5d Hz %s", pins, storage.optionName(),
-                    engine.optionName(), rateHz, timer.optionName());
+            return String.format(Locale.ROOT, "%-48s %-8s %-5s %5d Hz %s", pins
+                    + (variant == Variant.PLAIN ? "" : " (" + variant.name().toLowerCase(Locale.ROOT) + ")"),
+                    storage.optionName(), engine.optionName(), rateHz, timer.optionName());
+        }
+
+        boolean recording() {
+            return variant == Variant.RECORDING;
         }
 
         boolean isClip() {
@@ -93,7 +133,8 @@ class AvrSimulatorTest {
         for (String pins : List.of("PD2-PD7", "PD2,PD7,PC0,PC1,PB2,PB1")) {
             for (SampleStorage storage : SampleStorage.values()) {
                 for (PlaybackEngine engine : List.of(PlaybackEngine.CLIP, PlaybackEngine.LOOP)) {
-                    for (int rate : new int[] {8000, 22050}) {
+                    // the Tread stores at the rate of the compression goals only
+                    for (int rate : storage.codec().isPresent() ? new int[] {16000} : new int[] {8000, 22050}) {
                         out.add(new Build(pins, storage, engine, rate, TimerKind.AVR_TIMER1));
                     }
                 }
@@ -120,22 +161,61 @@ class AvrSimulatorTest {
         for (String pins : List.of("PD5-PD7,PB0-PB3", "PD5-PD7,PB0-PB1,PC0-PC1", "PD2,PD7,PD3,PD6,PD4,PD5",
                 "PD2,PD7,PB2,PB1,PD3,PB0")) {
             for (PlaybackEngine engine : List.of(PlaybackEngine.CLIP, PlaybackEngine.LOOP)) {
-                for (SampleStorage storage : SampleStorage.values()) {
+                for (SampleStorage storage : List.of(SampleStorage.UNPACKED, SampleStorage.PACKED)) {
                     out.add(new Build(pins, storage, engine, 16000, TimerKind.AVR_TIMER1));
                 }
             }
         }
+        out.addAll(treadBuilds());
         return out.stream();
+    }
+
+    /**
+     * Tread builds besides the first ones: the assembler tick's cases (one port by table, two ports by shift
+     * and by table, three by shift, 8-bit codes on a whole port; codes of 9 to 12 bits, the 16-bit decoder, by
+     * shift and by table over two and three ports), twelve bits scattered over three ports and the byte decoder
+     * on a scatter map (the compiled tick), wide indices, and released loops.
+     */
+    private static List<Build> treadBuilds() {
+        List<Build> out = new ArrayList<>();
+        List<SampleStorage> tread = List.of(SampleStorage.TREAD2, SampleStorage.TREAD3, SampleStorage.TREAD4);
+        for (String pins : List.of("PD2,PD7,PD3,PD6,PD4,PD5", "PD5-PD7,PB0-PB3", "PD2,PD7,PB2,PB1,PD3,PB0",
+                "PD5-PD7,PB0-PB1,PC0-PC1", "PD0-PD7", "PD2-PD7,PB0-PB4", "PD2-PD7,PB0-PB3,PC0-PC1",
+                "PD2,PD7,PB2,PB1,PD3,PB0,PD4,PB3,PD5,PB4", "PD2,PD7,PB2,PB1,PD3,PB0,PC0,PC1,PC2", SCATTERED_12)) {
+            for (SampleStorage storage : tread) {
+                for (PlaybackEngine engine : List.of(PlaybackEngine.CLIP, PlaybackEngine.LOOP)) {
+                    out.add(new Build(pins, storage, engine, 16000, TimerKind.AVR_TIMER1));
+                }
+            }
+        }
+        for (SampleStorage storage : tread) {
+            // the compiled byte decoder, which scatter maps still use
+            for (PlaybackEngine engine : List.of(PlaybackEngine.CLIP, PlaybackEngine.LOOP)) {
+                out.add(new Build("PD2-PD7", storage, engine, 16000, TimerKind.AVR_TIMER1, Variant.SCATTER));
+            }
+            for (String pins : List.of("PD2-PD7", "PD2,PD7,PC0,PC1,PB2,PB1", "PD2-PD7,PB0-PB4")) {
+                out.add(new Build(pins, storage, PlaybackEngine.LOOP, 16000, TimerKind.AVR_TIMER1,
+                        Variant.RELEASED));
+            }
+        }
+        for (PlaybackEngine engine : List.of(PlaybackEngine.CLIP, PlaybackEngine.LOOP)) {
+            out.add(new Build("PD2-PD7", SampleStorage.TREAD3, engine, 16000, TimerKind.AVR_TIMER1, Variant.WIDE));
+            out.add(new Build("PD2,PD7,PC0,PC1,PB2,PB1", SampleStorage.TREAD2, engine, 16000, TimerKind.AVR_TIMER1,
+                    Variant.WIDE));
+        }
+        return out;
     }
 
     /** Builds of the dds and sweep engines, whose cost is measured (their codes are tested elsewhere). */
     static Stream<Build> costOnlyBuilds() {
         List<Build> out = new ArrayList<>();
         for (String pins : List.of("PB0-PB4", "PD2-PD7,PB0-PB4", "PD2,PD7,PC0,PC1,PB2,PB1", SCATTERED_12)) {
-            for (SampleStorage storage : SampleStorage.values()) {
+            for (SampleStorage storage : List.of(SampleStorage.UNPACKED, SampleStorage.PACKED)) {
                 out.add(new Build(pins, storage, PlaybackEngine.DDS, 8000, TimerKind.AVR_TIMER1));
             }
             out.add(new Build(pins, SampleStorage.UNPACKED, PlaybackEngine.SWEEP, 1000, TimerKind.AVR_TIMER1));
+            out.add(new Build(pins, SampleStorage.UNPACKED, PlaybackEngine.SWEEP, 1000, TimerKind.AVR_TIMER1,
+                    Variant.RECORDING));
         }
         return out.stream();
     }
@@ -149,16 +229,34 @@ class AvrSimulatorTest {
         return c;
     }
 
+    /**
+     * A sound of {@link #codes}: those codes, or for a Tread store a stream of them as b-bit codes from the
+     * mid code, whose decoded codes (the reference decoder's) hit both ends of the ladder and every step index.
+     */
+    static SoundClip clip(String name, Build b, int bits, int length, int offset, int loopStart, int loopEnd) {
+        if (b.storage().codec().isEmpty()) {
+            return new SoundClip(name, Codes.of(bits, b.rateHz(), codes(bits, length, offset)), loopStart, loopEnd);
+        }
+        TreadFormat f = b.storage().codec().get();
+        TreadStream s = TreadStream.of(f, bits, b.rateHz(), new TreadState(1 << (bits - 1), 1 << (bits - 1),
+                offset % (f.maxIndex(bits) + 1)), codes(f.codeBits(), length, offset));
+        return SoundClip.encoded(name, s, loopStart, loopEnd);
+    }
+
     @ParameterizedTest(name = "{0}")
     @MethodSource("builds")
     void playerPutsEverySampleOnThePinsAtTheTimerRate(Build b) {
         Run r = prepared(b);
         PinMap map = PinMap.parse(b.pins(), 8);
-        boolean loop = b.engine() == PlaybackEngine.LOOP;
+        boolean released = b.variant() == Variant.RELEASED;
+        boolean loop = b.engine() == PlaybackEngine.LOOP && !released;
         assertEquals(Math.round(16e6 / b.rateHz()), r.period(), "the timer period is the nearest to the rate");
         AvrTicks t = AvrTicks.of(r.trace(), map);
         assertEquals(1 << (map.bits() - 1), t.initCode, "init parks the ladder mid-range");
-        List<Integer> want = loop ? looped(r.played(), t.codes.size()) : toList(r.played());
+        long release = released ? r.trace().marker("GPIOR0", 4) : 0;
+        List<Integer> want = released ? releasedAt(r.played(), t.playing.stream()
+                .filter(i -> i.entryCycle() < release).count()) : loop ? looped(r.played(), t.codes.size())
+                : toList(r.played());
         if (loop) {
             assertTrue(t.codes.size() >= LOOP_TICKS, "looping for the whole run: " + t.codes.size() + " ticks");
         } else {
@@ -246,7 +344,8 @@ class AvrSimulatorTest {
         boolean loop = b.engine() == PlaybackEngine.LOOP;
         int[] played = codes(bits, loop ? LOOP_SAMPLES : CLIP_SAMPLES, 5);
         FirmwareRequest.Builder request = FirmwareRequest.builder().family("avr").name("player").toolVersion("test")
-                .pins(b.pins()).storage(b.storage()).engine(b.engine()).timer(b.timer()).cpuClockHz(16e6);
+                .pins(b.pins()).storage(b.storage()).engine(b.engine()).timer(b.timer()).cpuClockHz(16e6)
+                .pinStrategy(b.variant() == Variant.SCATTER ? PinStrategy.SCATTER : PinStrategy.AUTO);
         String start = "player_start()";
         long ticks = COST_ONLY_TICKS;
         switch (b.engine()) {
@@ -254,17 +353,23 @@ class AvrSimulatorTest {
                 request.sound("wave", Codes.of(bits, b.rateHz(), codes(bits, 256, 5))).dds(DdsSpec.of(440));
                 break;
             case SWEEP:
-                request.sweep(SweepSpec.holding(bits, codes(bits, 64, 5), 1));
+                // a recording sweep of one-tick steps takes its longer branch (which hold comes next) every tick
+                request.sweep(b.recording() ? SweepSpec.recording(bits, codes(bits, 64, 5), 1, 8, 1)
+                        : SweepSpec.holding(bits, codes(bits, 64, 5), 1));
                 break;
             default:
-                request.sound("other", Codes.of(bits, b.rateHz(), codes(bits, 50, 11)));
-                if (loop) {
-                    request.sound("played", Codes.of(bits, b.rateHz(), played), LOOP_START, LOOP_END);
-                } else {
-                    request.sound("played", Codes.of(bits, b.rateHz(), played));
-                }
+                int other = b.variant() == Variant.WIDE ? WIDE_OTHER_SAMPLES : 50;
+                request.sound(clip("other", b, bits, other, 11, 0, other));
+                SoundClip clip = loop ? clip("played", b, bits, played.length, 5, LOOP_START, LOOP_END)
+                        : clip("played", b, bits, played.length, 5, 0, played.length);
+                request.sound(clip);
+                played = clip.codes().codes();
                 start = (loop ? "player_loop" : "player_play") + "(1u)";
-                ticks = loop ? LOOP_TICKS : played.length + TICKS_AFTER_END;
+                ticks = loop && b.variant() != Variant.RELEASED ? LOOP_TICKS : played.length + TICKS_AFTER_END;
+                if (b.variant() == Variant.RELEASED) {
+                    start += ";\n    " + RELEASE;
+                    ticks += RELEASE_AFTER_TICKS;
+                }
         }
         EmitResult result = FirmwareEmitter.emit(request.build(), dir);
         long period = result.timer().orElseThrow().cyclesPerTick();
@@ -360,6 +465,23 @@ class AvrSimulatorTest {
     private static long firstWriteOffset(AvrTrace trace, Interrupt i) {
         return trace.writes().stream().filter(i::contains).mapToLong(Write::cycle).min().orElseThrow()
                 - i.entryCycle();
+    }
+
+    /**
+     * The loop engine's order with a release after {@code before} codes: looping until then, then on from
+     * where it is to the end of the sound.
+     */
+    private static List<Integer> releasedAt(int[] samples, long before) {
+        List<Integer> out = new ArrayList<>();
+        int pos = 0;
+        for (long i = 0; i < before; i++) {
+            out.add(samples[pos]);
+            pos = pos + 1 == LOOP_END ? LOOP_START : pos + 1;
+        }
+        for (; pos < samples.length; pos++) {
+            out.add(samples[pos]);
+        }
+        return out;
     }
 
     /** The loop engine's order: samples up to the loop end, then the loop again and again. */

@@ -155,7 +155,7 @@ class CompileMatrixTest {
         for (String s : sources) {
             assertTrue(Files.isRegularFile(dir.resolve(s.replace(".c", ".o"))), s + " made no object");
         }
-        assertEquals(0, sources.size() % (2 * TemplateMatrix.CASES_PER_PIN_MAP), "eight engine and storage"
+        assertEquals(0, sources.size() % (2 * TemplateMatrix.CASES_PER_PIN_MAP), "eleven engine and storage"
                 + " combinations per pin case");
     }
 }

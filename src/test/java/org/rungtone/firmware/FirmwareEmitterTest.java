@@ -115,6 +115,17 @@ class FirmwareEmitterTest {
     }
 
     @Test
+    void reportsTheAssemblerTickOfATreadStore() {
+        FirmwareRequest r = FirmwareRequest.builder().family("avr").name("t").toolVersion("test").pins("PD2-PD7")
+                .cpuClockHz(16e6).storage(SampleStorage.TREAD3)
+                .sound(HostReplayTest.chimeClip("s", SampleStorage.TREAD3, 6, 64, 0, 64)).build();
+        List<String> report = FirmwareEmitter.render(r).result().report();
+        // 125 cycles (tread3, clip, one port; AvrSimulatorTest) at 8 kHz of 16 MHz: 6.25 %
+        assertTrue(report.stream().anyMatch(l -> l.startsWith("cpu: at most 125 cycles per tick = 6.3 % of the CPU")
+                && l.endsWith("; the interrupt is written in assembler")), report.toString());
+    }
+
+    @Test
     void reportsTableSizeAndDdsTuning() {
         FirmwareRequest r = FirmwareRequest.builder().name("sweepgen").pins("PA3,PA7,PC0,PC1,PB2,PB1")
                 .engine(PlaybackEngine.DDS).sound("sine", Codes.of(6, 16000, Dds.sineTable(8, 6)))

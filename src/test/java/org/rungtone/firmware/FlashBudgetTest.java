@@ -36,6 +36,17 @@ class FlashBudgetTest {
     }
 
     @Test
+    void proposesSmallerTreadStoresForATreadStore() {
+        // 2 s at 16 kHz as tread4: 16,000 bytes of stream. tread3 at 16 kHz takes 12,000, tread2 8,000; tread4
+        // at 11.025 kHz (22,050 samples) 11,025: with a 12,500-byte budget the largest that fits is tread3
+        // at 16 kHz (plus the 300 bytes of tables that do not depend on the setting)
+        List<FlashBudget.Candidate> c = FlashBudget.alternatives(32000, 16000, 8, SampleStorage.TREAD4, 300);
+        assertEquals("the samples need 16,300 bytes, 3,800 bytes over the 12,500-byte flash budget"
+                + " (target.flash_budget); tread3 at 16 kHz would fit (12,300 bytes)",
+                assertThrows(InputError.class, () -> FlashBudget.check(16300, 12500, c)).getMessage());
+    }
+
+    @Test
     void saysSoWhenNothingFits() {
         List<FlashBudget.Candidate> c = FlashBudget.alternatives(800000, 8000, 8, SampleStorage.PACKED, 0);
         assertEquals("the samples need 800,000 bytes, 799,900 bytes over the 100-byte flash budget"

@@ -13,7 +13,13 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
+import org.junit.jupiter.params.provider.EnumSource;
 import org.junit.jupiter.params.provider.MethodSource;
+import org.rungtone.calibrate.MeasurementPlan;
+import org.rungtone.calibrate.RecordingSweep;
+import org.rungtone.codec.TreadEncoder;
+import org.rungtone.codec.TreadStream;
+import org.rungtone.codec.Weighting;
 import org.rungtone.firmware.MockPortRun.Event;
 import org.rungtone.ladder.LevelTable;
 import org.rungtone.quantize.Codes;
@@ -33,6 +39,11 @@ class HostReplayTest {
 
     /** A door-chime-like decaying two-tone clip, quantized with TPDF dither onto an ideal ladder. */
     static Codes chime(int bits, int samples) {
+        return new Quantizer(LevelTable.ideal(bits, 5.0), Dither.TPDF, 42).apply(chimeSignal(samples)).codes();
+    }
+
+    /** The decaying two-tone clip at 8 kHz. */
+    static Signal chimeSignal(int samples) {
         double rate = 8000;
         double[] x = new double[samples];
         for (int i = 0; i < samples; i++) {
@@ -40,8 +51,22 @@ class HostReplayTest {
             x[i] = Math.exp(-6 * t) * (0.6 * Math.sin(2 * Math.PI * 659.3 * t) + 0.35 * Math.sin(
                     2 * Math.PI * 523.3 * t));
         }
+        return Signal.of(x, rate);
+    }
+
+    /**
+     * The chime as a sound of {@code storage}: its quantized codes, or for a Tread store its stream encoded
+     * onto the ideal ladder (the sound's codes are then what the reference decoder makes of it).
+     */
+    static SoundClip chimeClip(String name, SampleStorage storage, int bits, int samples, int loopStart,
+            int loopEnd) {
+        if (storage.codec().isEmpty()) {
+            return new SoundClip(name, chime(bits, samples), loopStart, loopEnd);
+        }
         Quantizer q = new Quantizer(LevelTable.ideal(bits, 5.0), Dither.TPDF, 42);
-        return q.apply(Signal.of(x, rate)).codes();
+        TreadStream stream = new TreadEncoder(storage.codec().get(), q, Weighting.flat()).encode(
+                chimeSignal(samples)).stream();
+        return SoundClip.encoded(name, stream, loopStart, loopEnd);
     }
 
     static Stream<Arguments> pinMaps() {
@@ -71,8 +96,9 @@ class HostReplayTest {
     @MethodSource("pinMaps")
     void clipReachesThePinsExactly(String pins, int width, SampleStorage storage) {
         int bits = PinMap.parse(pins, width).bits();
-        Codes codes = chime(bits, 700);
-        List<Event> events = MockPortRun.run(base(pins, width, storage).sound("chime", codes).build(), dir,
+        SoundClip clip = chimeClip("chime", storage, bits, 700, 0, 700);
+        Codes codes = clip.codes();
+        List<Event> events = MockPortRun.run(base(pins, width, storage).sound(clip).build(), dir,
                 false, "0", "0", "0");
         assertEquals(1 << (bits - 1), events.get(0).code(), "init parks the ladder at the mid code");
         assertEquals(toList(codes.codes()), MockPortRun.tickCodes(events));
@@ -93,22 +119,28 @@ class HostReplayTest {
         assertEquals(toList(bc), MockPortRun.tickCodes(MockPortRun.run(r, dir, false, "1", "0", "0")));
     }
 
-    @Test
-    void loopRepeatsBetweenLoopPointsThenPlaysTheTailAfterRelease() {
-        Codes codes = chime(6, 100);
+    @ParameterizedTest(name = "{0}")
+    @EnumSource(value = SampleStorage.class, names = {"PACKED", "TREAD2", "TREAD3", "TREAD4"})
+    void loopRepeatsBetweenLoopPointsThenPlaysTheTailAfterRelease(SampleStorage storage) {
         int loopStart = 20;
         int loopEnd = 60;
         int beforeRelease = 250;
-        FirmwareRequest r = base("PA3,PA7,PC0,PC1,PB2,PB1", 8, SampleStorage.PACKED).engine(PlaybackEngine.LOOP)
-                .sound("chime", codes, loopStart, loopEnd).build();
+        SoundClip clip = chimeClip("chime", storage, 6, 100, loopStart, loopEnd);
+        FirmwareRequest r = base("PA3,PA7,PC0,PC1,PB2,PB1", 8, storage).engine(PlaybackEngine.LOOP).sound(clip)
+                .build();
         List<Integer> got = MockPortRun.tickCodes(MockPortRun.run(r, dir, true, "0", "1",
                 Integer.toString(beforeRelease)));
-        // Expected: samples 0..59, then 20..59 again and again; after 250 ticks the loop is released and
-        // playback runs on from where it is to sample 99.
+        assertEquals(looped(clip.codes().codes(), loopStart, loopEnd, beforeRelease), got);
+    }
+
+    /**
+     * The loop engine's order: samples up to the loop end, then the loop again and again; after
+     * {@code beforeRelease} codes the loop is released and playback runs on from where it is to the end.
+     */
+    private static List<Integer> looped(int[] c, int loopStart, int loopEnd, int beforeRelease) {
         List<Integer> want = new ArrayList<>();
         int pos = 0;
         boolean looping = true;
-        int[] c = codes.codes();
         while (pos < c.length) {
             want.add(c[pos]);
             pos++;
@@ -119,7 +151,23 @@ class HostReplayTest {
                 pos = loopStart;
             }
         }
-        assertEquals(want, got);
+        return want;
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @EnumSource(value = SampleStorage.class, names = {"TREAD2", "TREAD3", "TREAD4"})
+    void treadStartsEverySoundAndLoopFromItsResetPoint(SampleStorage storage) {
+        // three sounds, each from its own decoder state; the looped one's loop starts mid-sound, where the
+        // decoder reloads the state the reference decoder has there
+        SoundClip a = chimeClip("door", storage, 8, 300, 0, 300);
+        SoundClip b = chimeClip("bell", storage, 8, 450, 131, 402);
+        SoundClip c = chimeClip("buzz", storage, 8, 200, 7, 190);
+        FirmwareRequest r = base("PB0-PB7", 8, storage).engine(PlaybackEngine.LOOP).sound(a).sound(b).sound(c)
+                .build();
+        assertEquals(looped(b.codes().codes(), 131, 402, 1000), MockPortRun.tickCodes(MockPortRun.run(r, dir,
+                true, "1", "1", "1000")));
+        assertEquals(looped(c.codes().codes(), 7, 190, 500), MockPortRun.tickCodes(MockPortRun.run(r, dir, true,
+                "2", "1", "500")));
     }
 
     static Stream<Arguments> ddsCases() {
@@ -172,6 +220,34 @@ class HostReplayTest {
         assertEquals(600 + debounce, ticks, "the press after the last code ends the sweep");
     }
 
+    static Stream<Arguments> recordingTargets() {
+        return Stream.of(Arguments.of("generic", "PB0,PB1,PD7,PD6,PC0,PC1"), Arguments.of("rp2040", "GPIO2-GPIO7"));
+    }
+
+    @ParameterizedTest(name = "{0} {1}")
+    @MethodSource("recordingTargets")
+    void recordingSweepPutsThePatternsAndThePlanOnThePinsAtTheirTicks(String family, String pins) {
+        // every 6-bit code held 30 ms, with 3 returns to code 0, between the two 31-step patterns of 20 ms
+        RecordingSweep sweep = RecordingSweep.of(MeasurementPlan.everyCode(LevelTable.ideal(6, 5.0)), 0.030);
+        int[] steps = sweep.stepCodes();
+        FirmwareRequest r = FirmwareRequest.builder().family(family).name("mock").toolVersion("test").pins(pins)
+                .portWidth(family.equals("rp2040") ? 32 : 8).storage(SampleStorage.UNPACKED)
+                .sweep(SweepSpec.recording(6, steps, 30, sweep.patternSteps(), RecordingSweep.PATTERN_TICKS))
+                .build();
+        List<Event> events = MockPortRun.run(r, dir, false);
+        assertEquals(steps[0], events.stream().filter(e -> e.kind() == 'S').findFirst().orElseThrow().code());
+        // step i (i >= 1) begins at tick start[i]; it goes out in the tick of that index counted from 1
+        long[] start = sweep.stepStartTicks();
+        List<String> want = new ArrayList<>();
+        for (int i = 1; i < steps.length; i++) {
+            want.add((start[i] - 1) + ":" + steps[i]);
+        }
+        assertEquals(want, format(tickWrites(events)));
+        assertEquals(start[steps.length], events.stream().filter(e -> e.kind() == 'T').count(),
+                "done when the last pattern step has been held");
+        assertEquals(62 * 20 + (64 + 3) * 30, start[steps.length], "two patterns of 31 x 20 ticks, 67 steps x 30");
+    }
+
     static Stream<Arguments> rp2040PinMaps() {
         List<Arguments> out = new ArrayList<>();
         for (String pins : List.of("GPIO2-GPIO7", "GPIO29,GPIO0,GPIO15,GPIO16,GPIO3,GPIO2",
@@ -192,8 +268,9 @@ class HostReplayTest {
     @MethodSource("rp2040PinMaps")
     void rp2040ClipReachesThePinsExactly(String pins, SampleStorage storage) {
         int bits = PinMap.parse(pins, 32).bits();
-        Codes codes = chime(bits, 700);
-        List<Event> events = MockPortRun.run(rp2040(pins, storage).sound("chime", codes).build(), dir, false,
+        SoundClip clip = chimeClip("chime", storage, bits, 700, 0, 700);
+        Codes codes = clip.codes();
+        List<Event> events = MockPortRun.run(rp2040(pins, storage).sound(clip).build(), dir, false,
                 "0", "0", "0");
         assertEquals(1 << (bits - 1), events.get(0).code(), "init parks the ladder at the mid code");
         assertEquals(toList(codes.codes()), MockPortRun.tickCodes(events));

@@ -66,7 +66,7 @@ class TemplateKeysTest {
                 engines.add(c.engine());
                 c.request().timer().ifPresent(timers::add);
             }
-            assertEquals(Set.of("button", "clip", "dds", "loop", "sweep"), engines, f.folder());
+            assertEquals(Set.of("button", "clip", "dds", "loop", "record", "sweep"), engines, f.folder());
             assertTrue(timers.containsAll(f.timers()), f.folder() + " " + timers);
         }
     }

@@ -7,13 +7,14 @@ import org.rungtone.quantize.Codes;
 
 /**
  * The requests that exercise every template of a family: contiguous, scattered, multi-port and wide pin maps
- * (plus forced strategies), packed and unpacked storage, every engine, the sweep with and without a button,
- * and the family's timers in turn. Each request has its own symbol prefix ({@code c000}, {@code c001}, ...),
- * so one family's files can be compiled in one run.
+ * (plus forced strategies), packed and unpacked storage and one Tread store per pin case (tread2, tread3 and
+ * tread4 in turn, clip and loop engines: Tread cannot serve the dds engine), every engine, the sweep with and
+ * without a button and for a recording, and the family's timers in turn. Each request has its own symbol
+ * prefix ({@code c000}, {@code c001}, ...), so one family's files can be compiled in one run.
  */
 final class TemplateMatrix {
-    /** Engine and storage combinations per pin case: three engines twice, plus two sweeps. */
-    static final int CASES_PER_PIN_MAP = 8;
+    /** Engine and storage combinations per pin case: three engines twice, three sweeps, two Tread engines. */
+    static final int CASES_PER_PIN_MAP = 11;
 
     private TemplateMatrix() {
     }
@@ -26,7 +27,8 @@ final class TemplateMatrix {
      * One combination.
      *
      * @param name the symbol prefix
-     * @param engine clip, loop, dds, sweep or button (a sweep advanced by a button)
+     * @param engine clip, loop, dds, sweep, button (a sweep advanced by a button) or record (a sweep for a
+     *     recording)
      */
     record Case(String name, String engine, FirmwareRequest request) {
     }
@@ -83,12 +85,16 @@ final class TemplateMatrix {
         // generic programs no timer; every other case there names one, so the timer hint is rendered too
         List<TimerKind> timers = family.timers().isEmpty() ? List.of(TimerKind.GENERAL16) : family.timers();
         int n = 0;
-        for (PinCase pc : pinCases(family)) {
+        List<PinCase> pinCases = pinCases(family);
+        for (int p = 0; p < pinCases.size(); p++) {
+            PinCase pc = pinCases.get(p);
             int bits = PinMap.parse(pc.pins(), pc.width()).bits();
-            for (SampleStorage storage : SampleStorage.values()) {
+            SampleStorage tread = List.of(SampleStorage.TREAD2, SampleStorage.TREAD3, SampleStorage.TREAD4).get(p % 3);
+            for (SampleStorage storage : List.of(SampleStorage.UNPACKED, SampleStorage.PACKED, tread)) {
                 // the sweep stores no samples: its code does not depend on the storage
                 List<String> engines = storage == SampleStorage.UNPACKED
-                        ? List.of("clip", "loop", "dds", "sweep", "button") : List.of("clip", "loop", "dds");
+                        ? List.of("clip", "loop", "dds", "sweep", "button", "record")
+                        : storage == SampleStorage.PACKED ? List.of("clip", "loop", "dds") : List.of("clip", "loop");
                 for (String engine : engines) {
                     String name = String.format(Locale.ROOT, "c%03d", n);
                     FirmwareRequest.Builder b = FirmwareRequest.builder().family(family.folder()).name(name)
@@ -99,8 +105,8 @@ final class TemplateMatrix {
                     }
                     // rp2040's alarm carries a fraction of a microsecond at 22.05 kHz, not at 8 kHz (125 us)
                     double ddsRate = family == TargetFamily.RP2040 ? 22_050 : 8000;
-                    out.add(new Case(name, engine, withEngine(b, engine, bits, buttonPin(family, pc), ddsRate)
-                            .build()));
+                    out.add(new Case(name, engine, withEngine(b, engine, bits, buttonPin(family, pc), ddsRate,
+                            storage).build()));
                     n++;
                 }
             }
@@ -109,17 +115,22 @@ final class TemplateMatrix {
     }
 
     private static FirmwareRequest.Builder withEngine(FirmwareRequest.Builder b, String engine, int bits,
-            String button, double ddsRate) {
+            String button, double ddsRate, SampleStorage storage) {
         switch (engine) {
             case "clip":
-                return b.sound("door", HostReplayTest.chime(bits, 200)).sound("bell", HostReplayTest.chime(bits, 120));
+                return b.sound(HostReplayTest.chimeClip("door", storage, bits, 200, 0, 200))
+                        .sound(HostReplayTest.chimeClip("bell", storage, bits, 120, 0, 120));
             case "loop":
-                return b.engine(PlaybackEngine.LOOP).sound("warble", HostReplayTest.chime(bits, 300), 50, 250);
+                return b.engine(PlaybackEngine.LOOP).sound(HostReplayTest.chimeClip("warble", storage, bits, 300, 50,
+                        250));
             case "dds":
                 return b.engine(PlaybackEngine.DDS).sound("sine", Codes.of(bits, ddsRate, Dds.sineTable(6, bits)))
                         .dds(DdsSpec.of(440));
             case "sweep":
                 return b.sweep(SweepSpec.holding(bits, new int[] {0, (1 << bits) - 1, 1}, 500));
+            case "record":
+                return b.sweep(SweepSpec.recording(bits, new int[] {0, (1 << bits) - 1, 0, 1, 2, 0, (1 << bits) - 1},
+                        40, 2, 20));
             default:
                 return b.sweep(SweepSpec.onButton(bits, new int[] {0, 3, 1 << (bits - 1)}, button));
         }

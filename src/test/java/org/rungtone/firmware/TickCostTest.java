@@ -4,6 +4,9 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
+import org.rungtone.codec.TreadFormat;
+import org.rungtone.codec.TreadState;
+import org.rungtone.codec.TreadStream;
 import org.rungtone.quantize.Codes;
 
 class TickCostTest {
@@ -28,6 +31,56 @@ class TickCostTest {
                 .build()));
         assertEquals(new TickCost(140, 2, true), cost(avr("PD2,PD7,PC0,PC1,PB2,PB1", 6).engine(PlaybackEngine.LOOP)
                 .storage(SampleStorage.PACKED).build()));
+    }
+
+    @Test
+    void treadFiguresAreThoseOfTheirFormatAndEngine() {
+        // measured by AvrSimulatorTest: the assembler tick, a one-port ladder of up to 8 bits, 16 kHz, ATmega328P
+        assertEquals(new TickCost(115, 0, true), cost(tread(SampleStorage.TREAD2, PlaybackEngine.CLIP, "PD2-PD7")));
+        assertEquals(new TickCost(130, 0, true), cost(tread(SampleStorage.TREAD3, PlaybackEngine.LOOP, "PD2-PD7")));
+        assertEquals(new TickCost(120, 0, true), cost(tread(SampleStorage.TREAD4, PlaybackEngine.LOOP, "PD2-PD7")));
+        // three ports by table
+        assertEquals(new TickCost(150, 2, true), cost(tread(SampleStorage.TREAD3, PlaybackEngine.LOOP,
+                "PD2,PD7,PC0,PC1,PB2,PB1")));
+        // 16 kHz x 115 cycles of 16 MHz: 11.5 % of the CPU
+        assertEquals(0.115, cost(tread(SampleStorage.TREAD4, PlaybackEngine.CLIP, "PD2-PD7")).cpuShare(16e6, 16000),
+                1e-12);
+    }
+
+    @Test
+    void treadCodesPastEightBitsHaveTheirOwnRows() {
+        // the assembler tick with the 16-bit decoder: 11 bits over two ports, 12 over three
+        assertEquals(new TickCost(190, 1, true), cost(wide(SampleStorage.TREAD3, 11, "PD2-PD7,PB0-PB4")));
+        assertEquals(new TickCost(190, 2, true), cost(wide(SampleStorage.TREAD4, 12, "PD2-PD7,PB0-PB3,PC0-PC1")));
+    }
+
+    private static FirmwareRequest wide(SampleStorage storage, int bits, String pins) {
+        SoundClip clip = HostReplayTest.chimeClip("s", storage, bits, 64, 0, 64);
+        return FirmwareRequest.builder().family("avr").name("t").toolVersion("test").pins(pins).cpuClockHz(16e6)
+                .storage(storage).engine(PlaybackEngine.LOOP).sound(clip).build();
+    }
+
+    @Test
+    void treadScatterMapsKeepTheCompiledTick() {
+        FirmwareRequest r = tread(SampleStorage.TREAD3, PlaybackEngine.LOOP, "PD2-PD7").toBuilder()
+                .pinStrategy(PinStrategy.SCATTER).build();
+        assertEquals(new TickCost(180, 0, true), cost(r));
+    }
+
+    @Test
+    void treadWideIndicesAddTheCountsThirdByte() {
+        // more than 65,535 samples in all: 32-bit indices
+        SoundClip longer = SoundClip.encoded("l", TreadStream.of(TreadFormat.TREAD2, 6, 8000,
+                new TreadState(32, 32, 0), new int[70_000]), 0, 70_000);
+        FirmwareRequest r = tread(SampleStorage.TREAD2, PlaybackEngine.CLIP, "PD2-PD7").toBuilder().sound(longer)
+                .build();
+        assertEquals(new TickCost(115 + 5, 0, true), cost(r));
+    }
+
+    private static FirmwareRequest tread(SampleStorage storage, PlaybackEngine engine, String pins) {
+        SoundClip clip = HostReplayTest.chimeClip("s", storage, 6, 64, 0, 64);
+        return FirmwareRequest.builder().family("avr").name("t").toolVersion("test").pins(pins).cpuClockHz(16e6)
+                .storage(storage).engine(engine).sound(clip).build();
     }
 
     @Test

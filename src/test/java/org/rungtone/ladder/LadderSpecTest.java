@@ -130,6 +130,15 @@ class LadderSpecTest {
                 + " the swing"), clipped.warnings());
     }
 
+    /** All pins high with no load puts the top code on the 5 V rail itself: on the swing, not beyond it. */
+    @Test
+    void aLevelOnTheRailIsNotClipped() {
+        // E24 legs of a 4-bit weighted ladder, as ladder --series E24 chooses them
+        LadderSpec spec = LadderSpec.builder().bits(4).resistors(82e3, 39e3, 20e3, 10e3).build();
+        assertEquals(5.0, Ladder.nominal(spec).levels().volts(15), 1e-9);
+        assertEquals(List.of(), spec.warnings());
+    }
+
     @Test
     void readsALadderTable() {
         LadderSpec spec = parse("[ladder]\n"
@@ -172,5 +181,25 @@ class LadderSpecTest {
                 tomlError("[ladder]\ntopology = \"ladder\"\n"));
         assertEquals("board.toml:2: ladder.buffer.offset: unknown key; known keys are gain, out_min, out_max",
                 tomlError("[ladder]\nbuffer = { offset = 1 }\n"));
+    }
+
+    @Test
+    void anR2rLadderTakesEveryPartsOwnValueLegsThenRungsThenTermination() {
+        LadderSpec derived = LadderSpec.builder().topology(Topology.R2R).bits(3).baseROhms(10e3).build();
+        LadderSpec listed = LadderSpec.builder().topology(Topology.R2R).bits(3)
+                .resistors(20e3, 20e3, 20e3, 10e3, 10e3, 20e3).build();
+        assertEquals(derived.parts(), listed.parts());
+        assertEquals(derived.levels(), listed.levels());
+        LadderSpec own = LadderSpec.builder().topology(Topology.R2R).bits(3)
+                .resistors(20e3, 22e3, 24e3, 11e3, 12e3, 27e3).build();
+        assertEquals(List.of("leg b0 20k", "leg b1 22k", "leg b2 24k", "rung b0-b1 11k", "rung b1-b2 12k",
+                "termination 27k"), own.parts().stream().map(Part::toString).toList());
+        assertEquals("ladder.resistors: not used by topology r2r unless it lists all 6 parts of 3 bits (the legs,"
+                + " bit 0 first, then the rungs from bit 0 up, then the termination), got 3; remove it to take the"
+                + " values from base_r, or use topology custom for a summing network of your own values",
+                buildError(LadderSpec.builder().topology(Topology.R2R).bits(3).resistors(1e3, 2e3, 3e3)));
+        assertEquals("ladder.resistors: part 5 needs a positive, finite resistance, got 0",
+                buildError(LadderSpec.builder().topology(Topology.R2R).bits(3).resistors(1e3, 1e3, 1e3, 1e3, 1e3,
+                        0)));
     }
 }

@@ -1,7 +1,6 @@
 package org.rungtone.ladder;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -17,7 +16,7 @@ class LadderStudyTest {
     void analysesOnlyWhenNothingElseIsAsked() {
         LadderStudy s = new LadderStudy.Request(R2R4, List.of(), Double.POSITIVE_INFINITY, Optional.empty(),
                 Optional.empty(), false).run(n -> { });
-        assertEquals(List.of("D0", "D1", "D2", "D3"), s.pinNames());
+        assertEquals(List.of("pin0", "pin1", "pin2", "pin3"), s.pinNames());
         assertEquals(Optional.empty(), s.monteCarlo());
         assertEquals(Optional.empty(), s.design());
         assertEquals(R2R4, s.analysis().spec());
@@ -48,16 +47,6 @@ class LadderStudyTest {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> new LadderStudy.Request(
                 R2R4, List.of("PB0"), 1, Optional.empty(), Optional.empty(), false));
         assertEquals("1 pin names for 4 bits", e.getMessage());
-    }
-
-    @Test
-    void aRunIsSlowFromTwoToTheTwentySixLevelEvaluations() {
-        LadderSpec r2r6 = LadderSpec.builder().topology(Topology.R2R).bits(6).build();
-        // 2^20 boards of 64 codes = 2^26 level evaluations
-        assertTrue(request(r2r6, 1 << 20).isSlow());
-        assertFalse(request(r2r6, (1 << 20) - 1).isSlow());
-        assertFalse(new LadderStudy.Request(r2r6, List.of(), 1, Optional.empty(), Optional.empty(), false)
-                .isSlow());
     }
 
     private static LadderStudy.Request request(LadderSpec spec, int boards) {

@@ -64,7 +64,7 @@ class AutoLoopTest {
 
     @Test
     void aSustainedSoundGetsItsLoopBakedIntoTheCodesAndAFourfoldPreview() {
-        SoundRenderer.Rendered r = new SoundRenderer(OutputSpan.FULL, s -> { }).render(plan(organ()).build());
+        SoundRenderer.Rendered r = new SoundRenderer(OutputSpan.FULL, BuildProgress.NONE).render(plan(organ()).build());
         SeamlessLoop l = r.autoLoop().orElseThrow();
         assertEquals(32_000, r.emitted().length(), "no budget: the whole sound is kept");
         assertTrue(l.seamLevelDb() < -40, l::toString);
@@ -96,7 +96,7 @@ class AutoLoopTest {
         FirmwareRequest player = FirmwareRequest.builder().family("generic").pins("PB0-PB5").portWidth(8)
                 .engine(PlaybackEngine.LOOP).build();
         BuildPlan plan = plan(organ()).player(Optional.of(player)).flashBudgetBytes(OptionalLong.of(12_000)).build();
-        SoundRenderer.Rendered r = new SoundRenderer(OutputSpan.FULL, s -> { }).render(plan);
+        SoundRenderer.Rendered r = new SoundRenderer(OutputSpan.FULL, BuildProgress.NONE).render(plan);
         // samples plus the loop engine's sound table (4 indices, 16 bytes at most) stay within the budget
         assertTrue(r.emitted().length() + 16 <= 12_000, () -> r.emitted().length() + " samples");
         assertTrue(r.warnings().stream().anyMatch(w -> w.contains("attack and one loop")), r.warnings()::toString);
@@ -112,12 +112,13 @@ class AutoLoopTest {
                 .getAsJsonObject("auto_loop");
         double period = loop.get("period_samples").getAsDouble();
         assertEquals(RATE / 440, period, 0.001 * RATE / 440);
-        assertEquals(loop.get("end").getAsInt() - loop.get("start").getAsInt(), loop.get("length").getAsInt());
+        assertEquals(loop.get("end_sample").getAsInt() - loop.get("start_sample").getAsInt(),
+                loop.get("length_samples").getAsInt());
         assertTrue(loop.get("seam_db").getAsDouble() < -40);
         assertEquals(4, loop.get("preview_passes").getAsInt());
         assertTrue(Files.readString(dir.resolve("out/report.html")).contains("loop (found)"));
         Signal preview = WavReader.read(dir.resolve("out/preview.wav")).signal();
-        int length = loop.get("length").getAsInt();
+        int length = loop.get("length_samples").getAsInt();
         assertEquals((32_000 + 3.0 * length) / RATE, preview.durationSeconds(), 1e-3);
     }
 
@@ -125,7 +126,7 @@ class AutoLoopTest {
     void noiseIsRefusedNamingTheFile() {
         Path wav = dir.resolve("fan-noise.wav");
         WavWriter.write(wav, Signal.wrap(SustainedSounds.noise(0.5, RATE, 1, 3), RATE), WavWriter.Format.PCM16);
-        InputError e = assertThrows(InputError.class, () -> new SoundRenderer(OutputSpan.FULL, s -> { })
+        InputError e = assertThrows(InputError.class, () -> new SoundRenderer(OutputSpan.FULL, BuildProgress.NONE)
                 .render(plan(wav).build()));
         assertEquals(wav + ": no repeating section found; give sound.loop START:END", e.getMessage());
     }

@@ -68,8 +68,8 @@ class ProjectBuildTest {
         // blade pass: 4 blades at 25 rev/s = 100 Hz, 120 samples at 12 kHz; the loop inside the steady
         // 0.4 .. 1.8 s and a whole number of blade passes
         assertEquals(120, loop.get("period_samples").getAsDouble(), 0.12);
-        int start = loop.get("start").getAsInt();
-        int end = loop.get("end").getAsInt();
+        int start = loop.get("start_sample").getAsInt();
+        int end = loop.get("end_sample").getAsInt();
         assertTrue(start >= 0.4 * 12_000 && end <= 1.8 * 12_000, loop::toString);
         assertEquals(0, (end - start) % 120, loop::toString);
         assertTrue(loop.get("seam_db").getAsDouble() < -40, loop::toString);
@@ -126,10 +126,22 @@ class ProjectBuildTest {
         Cli.Run r = Cli.run("build", g.resolve("greenhouse.toml").toString(), "--out", out.toString(), "--bits",
                 "5", "--dither", "none", "--target", "generic", "--pins", "PA0-PA4", "--json");
         assertEquals(0, r.exitCode(), r.err());
-        assertTrue(r.out().contains("\"bits\": \"5  (command line)\""), r.out());
-        assertTrue(r.out().contains("\"dither\": \"none  (command line)\""), r.out());
-        assertTrue(r.out().contains("\"seed\": \"1  (project file)\""), r.out());
-        assertTrue(r.out().contains("\"shaping\": \"none  (default)\""), r.out());
+        // each setting's value and origin are fields of their own
+        com.google.gson.JsonObject settings = com.google.gson.JsonParser.parseString(r.out()).getAsJsonObject()
+                .getAsJsonObject("settings");
+        assertEquals(5, settings.getAsJsonObject("bits").get("value").getAsInt());
+        assertEquals("command_line", settings.getAsJsonObject("bits").get("origin").getAsString());
+        assertEquals("none", settings.getAsJsonObject("dither").get("value").getAsString());
+        assertEquals("command_line", settings.getAsJsonObject("dither").get("origin").getAsString());
+        assertEquals(1, settings.getAsJsonObject("seed").get("value").getAsLong());
+        assertEquals("project_file", settings.getAsJsonObject("seed").get("origin").getAsString());
+        assertEquals("none", settings.getAsJsonObject("shaping").get("value").getAsString());
+        assertEquals("default", settings.getAsJsonObject("shaping").get("origin").getAsString());
+        assertEquals("generic", settings.getAsJsonObject("target").get("value").getAsString());
+        assertEquals("command_line", settings.getAsJsonObject("target").get("origin").getAsString());
+        assertEquals("PA0-PA4", settings.getAsJsonObject("pins").get("value").getAsString());
+        assertTrue(Files.readString(out.resolve("report.txt")).matches("(?s).*\\n  bits +5  \\(command line\\)\\n.*"),
+                "the text report keeps its words");
         assertTrue(Files.readString(out.resolve("greenhouse.h")).contains("generic"));
     }
 

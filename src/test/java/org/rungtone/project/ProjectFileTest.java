@@ -38,8 +38,8 @@ class ProjectFileTest {
     static Stream<Arguments> errors() {
         return Stream.of(
                 Arguments.of("unknown key", HEAD + "sed = 1\n" + SOUND,
-                        "board.toml:3: project.sed: unknown key; did you mean 'seed'? (known: name, out, seed,"
-                                + " unit, compensation)"),
+                        "board.toml:3: project.sed: unknown key; did you mean 'seed'? (known: name, out, c_out,"
+                                + " seed, unit, compensation)"),
                 Arguments.of("wrong type", HEAD + "[quantize]\nbits = \"six\"\n" + SOUND,
                         "board.toml:4: quantize.bits: expected a whole number, got the string \"six\""),
                 Arguments.of("out of range", HEAD + "[quantize]\nbits = 20\n" + SOUND,

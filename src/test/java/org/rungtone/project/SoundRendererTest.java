@@ -35,7 +35,7 @@ class SoundRendererTest {
     }
 
     private static SoundRenderer.Rendered render(BuildPlan plan) {
-        return new SoundRenderer(OutputSpan.FULL, stage -> { }).render(plan);
+        return new SoundRenderer(OutputSpan.FULL, BuildProgress.NONE).render(plan);
     }
 
     @Test

@@ -52,12 +52,22 @@ class CalibrationReportTest {
 
     @Test
     void jsonListsTheCodesMetersAndFilesUnderStableKeys() {
-        Map<String, Object> json = CalibrationReport.planJson(plan(2, Optional.empty()), FILES);
-        assertEquals(List.of("ladder", "bits", "every_code", "lsb_v", "codes", "meters", "sweep", "warnings",
+        Map<String, Object> json = CalibrationReport.planJson(plan(2, Optional.empty()), FILES, Path.of("cal"), "9.9");
+        assertEquals(List.of("schema_version", "report", "tool", "version", "ladder", "bits", "every_code", "lsb_v",
+                "min_v", "max_v", "codes", "meters", "hold_s", "button_pin", "sweep", "warnings", "meter", "recording",
                 "files"), List.copyOf(json.keySet()));
+        // a plan read with a meter of unknown count: neither applies
+        assertEquals(null, json.get("meter"));
+        assertEquals(null, json.get("recording"));
+        assertEquals("calibrate-plan", json.get("report"));
         assertEquals(8, json.get("bits"));
         assertEquals(26, ((List<?>) json.get("codes")).size());
-        assertEquals(List.of(Path.of("cal", "plan.csv").toString()), json.get("files"));
+        assertEquals(2.0, json.get("hold_s"));
+        assertEquals(8, ((Map<?, ?>) json.get("ladder")).get("bits"));
+        // paths are relative to the output folder
+        assertEquals(List.of("plan.csv"), json.get("files"));
+        assertEquals(null, CalibrationReport.planJson(plan(2, Optional.of("PD2")), FILES, Path.of("cal"), "9.9")
+                .get("hold_s"), "a button steps the sweep: no hold time");
     }
 
     @Test
@@ -73,5 +83,13 @@ class CalibrationReportTest {
         assertEquals("Wrote readings.csv, true-levels.csv", lines[lines.length - 2]);
         assertEquals("Next: rungtone calibrate fit readings.csv (with the same ladder options)",
                 lines[lines.length - 1]);
+        com.google.gson.JsonObject json = com.google.gson.JsonParser.parseString(CalibrationReport.simulationJson(r,
+                files, Path.of("."), "9.9")).getAsJsonObject();
+        com.google.gson.JsonObject leg = json.getAsJsonArray("parts").get(0).getAsJsonObject();
+        assertEquals(leg.get("drawn_ohm").getAsDouble() / leg.get("nominal_ohm").getAsDouble() - 1,
+                leg.get("deviation_fraction").getAsDouble(), 1e-12);
+        assertEquals(ladder.parts().size(), json.getAsJsonArray("parts").size());
+        assertEquals(16, json.getAsJsonArray("true_levels_v").size());
+        assertEquals(16, json.get("codes_read").getAsInt());
     }
 }

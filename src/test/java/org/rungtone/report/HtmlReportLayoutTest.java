@@ -18,6 +18,7 @@ import org.jsoup.nodes.Element;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.rungtone.analysis.QualityReport;
+import org.rungtone.testing.FactsFixture;
 
 /** How report.html lays itself out for phones and paper, links its files, and rounds like the text report. */
 class HtmlReportLayoutTest {
@@ -34,7 +35,7 @@ class HtmlReportLayoutTest {
                 16_000, 16_000, 1.0, "tpdf", "none", 1, "none", "kaiser", "ideal levels", 0,
                 List.of(quality(37.9)), "ideal", Optional.empty(), Optional.empty(),
                 new BuildSummary.PreviewInfo("none", 44_100, 6_000, -1.3, 0.9), List.of(), 12_000, files,
-                List.of(), Map.of(), Optional.empty());
+                List.of(), Map.of(), Optional.empty(), FactsFixture.of(Path.of(symbol + ".wav"), 16_000, 6, dir));
     }
 
     private static Path touch(Path f) throws IOException {
@@ -126,7 +127,7 @@ class HtmlReportLayoutTest {
         assertTrue(doc.selectFirst("header").text().contains("31,202 bytes of flash (97.5 % of the budget)"),
                 doc.selectFirst("header").text());
         ProjectReport.Input in = new ProjectReport.Input("0.1.0", Path.of("greenhouse.toml"), "greenhouse",
-                Map.of(), List.of(), List.of(), 31_202, 32_000, List.of(), List.of());
+                Map.of(), List.of(), List.of(), 31_202, 32_000, List.of(), List.of(), Optional.empty(), dir);
         assertTrue(ProjectReport.text(in).contains("Flash: 31,202 bytes for all sounds of a 32,000-byte budget"
                 + " (97.5 %)"), ProjectReport.text(in));
         assertEquals("97.5 %", FigureText.budgetShare(31_202, 32_000));

@@ -30,6 +30,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.rungtone.analysis.QualityReport;
 import org.rungtone.analysis.ToneReport;
 import org.rungtone.internal.InputError;
+import org.rungtone.testing.FactsFixture;
 
 class HtmlReportTest {
     private static final byte[] PNG_SIGNATURE = {(byte) 0x89, 'P', 'N', 'G', '\r', '\n', 0x1a, '\n'};
@@ -60,7 +61,8 @@ class HtmlReportTest {
                 24_000, List.of(chimeOut.resolve("door_chime.c"), chimeOut.resolve("preview.wav"), errorPlot,
                         spectrumPlot, chimeOut.resolve("report.txt")),
                 List.of("12 samples clipped before quantization; lower --gain by 0.3 dB"),
-                Map.of("decode", 12.0), Optional.empty());
+                Map.of("decode", 12.0), Optional.empty(),
+                FactsFixture.of(Path.of("sounds/door-chime.wav"), 44_100, 6, chimeOut));
 
         Path alarmOut = dir.resolve("freezer_alarm");
         Path alarmPlot = plot(alarmOut.resolve("error-spectrum.png"), "alarm error");
@@ -69,7 +71,8 @@ class HtmlReportTest {
                 "ideal levels", 0, List.of(quality("ideal", 6, 0.0), quality("shaped", 6, -2.5)), "shaped",
                 Optional.of(3.4), Optional.empty(), new BuildSummary.PreviewInfo("none", 48_000, 3_400, -1.58,
                         1.042), List.of(), 6_400, List.of(alarmPlot), List.of("alarm is louder than the chime"),
-                Map.of(), Optional.empty());
+                Map.of(), Optional.empty(),
+                FactsFixture.of(Path.of("sounds/freezer-alarm.rung"), 8_000, 6, alarmOut));
         transferPng = plot(dir.resolve("ladder/transfer.png"), "transfer");
     }
 
@@ -274,7 +277,8 @@ class HtmlReportTest {
         BuildSummary s = new BuildSummary("0.1.0", Path.of("a.wav"), evil, "snd", 4, 8000, 8, 0.001, "none",
                 "none", 0, evil, "none", "ideal", 0, List.of(quality(evil, 4, 0)), evil, Optional.empty(),
                 Optional.empty(), new BuildSummary.PreviewInfo(evil, 8000, 3400, -1.5, 0.5), List.of(evil), 8,
-                List.of(), List.of(evil), Map.of(), Optional.empty());
+                List.of(), List.of(evil), Map.of(), Optional.empty(),
+                FactsFixture.of(Path.of("a.wav"), 8000, 4, dir));
         HtmlReport.Page p = new HtmlReport.Page(evil, "0.1.0", List.of(new HtmlReport.Setting(evil, evil)),
                 List.of(s), List.of(new HtmlReport.Section(evil, evil)), 8, OptionalLong.empty(), List.of(evil),
                 Optional.of(evil), List.of());

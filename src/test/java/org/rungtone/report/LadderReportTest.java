@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
 import com.google.gson.JsonParser;
+import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
 import java.util.TreeSet;
@@ -29,7 +30,7 @@ class LadderReportTest {
     void textListsWiringLevelsAndWarnings() {
         String text = LadderReport.text(study(SWAPPED, 100e-6, false), false, List.of("out/levels.csv"));
         assertTrue(text.startsWith("Ladder: custom 2-bit, 5% parts\n"), text);
-        assertTrue(text.contains("\n  0    D0       10k\n  1    D1       30k\n"), text);
+        assertTrue(text.contains("\n  0    pin0     10k\n  1    pin1     30k\n"), text);
         assertTrue(text.contains("\n       2  10       1.25000"), text);
         assertTrue(text.contains("\n  monotonic         no, 1 inverted step (first at code 2)\n"), text);
         assertTrue(text.contains("\nWarnings\n  ! not monotonic: 1 inverted step, worst DNL -2.500 LSB at code 2"),
@@ -47,11 +48,12 @@ class LadderReportTest {
     @Test
     void jsonGivesWarningTextsAndTheWiring() {
         JsonObject json = JsonParser.parseString(LadderReport.json(study(SWAPPED, 100e-6, true),
-                List.of("a.csv"))).getAsJsonObject();
+                List.of(Path.of("out", "a.csv").toString()), Path.of("out"), "9.9")).getAsJsonObject();
+        assertEquals("ladder", json.get("report").getAsString());
         JsonArray warnings = json.getAsJsonArray("warnings");
         assertEquals(5, warnings.size());
         assertTrue(warnings.get(0).getAsString().startsWith("not monotonic: 1 inverted step"), warnings.toString());
-        assertEquals("D1", json.getAsJsonArray("wiring").get(1).getAsJsonObject().get("pin").getAsString());
+        assertEquals("pin1", json.getAsJsonArray("wiring").get(1).getAsJsonObject().get("pin").getAsString());
         assertEquals(4, json.getAsJsonObject("design").getAsJsonArray("proposal_warnings").size());
         assertEquals("a.csv", json.getAsJsonArray("files").get(0).getAsString());
     }

@@ -8,6 +8,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Arrays;
 import java.util.List;
+import java.util.Optional;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -16,6 +17,7 @@ import org.rungtone.analysis.SurveyRow;
 import org.rungtone.analysis.SurveyTarget;
 import org.rungtone.source.Signal;
 import org.rungtone.source.WavReader;
+import org.rungtone.testing.FactsFixture;
 
 class SurveyFilesTest {
     @TempDir
@@ -25,7 +27,7 @@ class SurveyFilesTest {
         int n = (int) rate;
         return new SurveyRow(bits, rate, n, sinad, sinad, sinad, (sinad - 1.76) / 6.02, 0,
                 SurveyRow.unpackedBytes(n, bits), SurveyRow.packedBytes(n, bits), true, sinad >= 40, false, Double.NaN,
-                Double.NaN);
+                Double.NaN, Optional.empty());
     }
 
     @Test
@@ -34,7 +36,7 @@ class SurveyFilesTest {
                 SurveyTarget.sinadDb(40), null, false);
         SurveyReport.Context context = new SurveyReport.Context("9.9", Path.of("chime.wav"), "PCM 16-bit",
                 "DC removed", "kaiser", "ideal", "tpdf", "none", 1, "none", false, SurveyFiles.reports(dir, result),
-                List.of());
+                List.of(), FactsFixture.survey(Path.of("chime.wav"), 8, dir));
         SurveyFiles.write(dir, result, context);
         assertEquals(SurveyReport.text(result, context), Files.readString(dir.resolve("survey.txt")));
         assertEquals(Json.toJson(SurveyReport.json(result, context)), Files.readString(dir.resolve("survey.json")));

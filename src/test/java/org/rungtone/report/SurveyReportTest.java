@@ -11,15 +11,18 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import org.junit.jupiter.api.Test;
 import org.rungtone.analysis.SurveyResult;
 import org.rungtone.analysis.SurveyRow;
 import org.rungtone.analysis.SurveyTarget;
+import org.rungtone.testing.FactsFixture;
 
 class SurveyReportTest {
     private static final List<String> ROW_FIELDS = List.of("bits", "rate_hz", "samples", "sinad_db",
-            "in_band_snr_db", "a_weighted_snr_db", "enob_full_scale_bits", "clipped_samples", "flash_bytes_unpacked",
-            "flash_bytes_packed", "fits", "reaches_target", "chosen");
+            "in_band_snr_db", "a_weighted_snr_db", "enob_full_scale_bits", "heard_signal_to_error_db",
+            "heard_a_weighted_signal_to_error_db", "clipped_samples", "flash_bytes_unpacked", "flash_bytes_packed",
+            "fits", "reaches_target", "chosen", "storage", "preview");
 
     /**
      * A cell of a 1 s clip; flash bytes follow from the rate and depth as in SurveyRow, ENOB from SINAD as
@@ -30,13 +33,14 @@ class SurveyReportTest {
         int n = (int) rate;
         return new SurveyRow(bits, rate, n, sinad, sinad + 0.5, sinad - 0.3, (sinad - 1.76) / 6.02, 0,
                 SurveyRow.unpackedBytes(n, bits), SurveyRow.packedBytes(n, bits), fits, reaches, chosen, Double.NaN,
-                Double.NaN);
+                Double.NaN, Optional.empty());
     }
 
     private static SurveyReport.Context context(boolean previews) {
         return new SurveyReport.Context("9.9", Path.of("sounds/chime.wav"), "PCM 16-bit, 1 ch, 44100 Hz, 1.00 s",
                 "DC removed", "kaiser", "ideal", "tpdf", "none", 1, "none", previews,
-                List.of(Path.of("out/survey.txt")), List.of("a warning"));
+                List.of(Path.of("out/survey.txt")), List.of("a warning"),
+                FactsFixture.survey(Path.of("sounds/chime.wav"), 8, Path.of("out")));
     }
 
     private static SurveyResult withChoice() {
@@ -107,33 +111,38 @@ class SurveyReportTest {
     void jsonHasTheDocumentedFieldNames() {
         JsonObject o = JsonParser.parseString(Json.toJson(SurveyReport.json(withChoice(), context(true))))
                 .getAsJsonObject();
-        assertEquals(List.of("tool", "version", "source", "source_layout", "conditioning", "resampler", "levels",
-                "dither", "shaping", "seed", "filter", "target", "flash_budget_bytes", "packed", "rows", "chosen",
-                "recommendation", "files", "warnings"), new ArrayList<>(o.keySet()));
+        assertEquals(List.of("schema_version", "report", "tool", "version", "source", "conditioning", "resampler",
+                "levels", "dither", "shaping", "seed", "filter", "target", "flash_budget_bytes", "packed", "rows",
+                "chosen", "recommendation", "files", "warnings"), new ArrayList<>(o.keySet()));
+        assertEquals(Json.SCHEMA_VERSION, o.get("schema_version").getAsInt());
+        assertEquals("survey", o.get("report").getAsString());
+        assertEquals("../sounds/chime.wav", o.getAsJsonObject("source").get("path").getAsString());
+        assertEquals(44_100, o.getAsJsonObject("source").get("rate_hz").getAsDouble(), 0);
+        assertEquals(List.of("survey.txt"), List.of(o.getAsJsonArray("files").get(0).getAsString()));
         assertEquals("sinad_db", o.getAsJsonObject("target").get("figure").getAsString());
         assertEquals(40, o.getAsJsonObject("target").get("value").getAsDouble(), 0);
         assertEquals(10_000, o.get("flash_budget_bytes").getAsLong());
         JsonObject first = o.getAsJsonArray("rows").get(0).getAsJsonObject();
-        List<String> withPreview = new ArrayList<>(ROW_FIELDS);
-        withPreview.add("preview");
-        assertEquals(withPreview, new ArrayList<>(first.keySet()));
+        assertEquals(ROW_FIELDS, new ArrayList<>(first.keySet()));
         assertEquals("previews/b04-r8000.wav", first.get("preview").getAsString());
         assertEquals(8, o.getAsJsonObject("chosen").get("bits").getAsInt());
         assertEquals(4, o.getAsJsonArray("rows").size());
     }
 
     @Test
-    void jsonLeavesOutWhatWasNotGiven() {
+    void jsonGivesNullForWhatWasNotGiven() {
         SurveyResult r = new SurveyResult(List.of(row(6, 16000, Double.POSITIVE_INFINITY, true, false, false)),
                 null, null, false);
         JsonObject o = JsonParser.parseString(Json.toJson(SurveyReport.json(r, context(false))))
                 .getAsJsonObject();
-        assertFalse(o.has("target"));
-        assertFalse(o.has("flash_budget_bytes"));
-        assertFalse(o.has("chosen"));
+        assertTrue(o.get("target").isJsonNull());
+        assertTrue(o.get("flash_budget_bytes").isJsonNull());
+        assertTrue(o.get("chosen").isJsonNull());
         JsonObject first = o.getAsJsonArray("rows").get(0).getAsJsonObject();
         assertEquals(ROW_FIELDS, new ArrayList<>(first.keySet()));
-        assertEquals("inf", first.get("sinad_db").getAsString());
+        assertTrue(first.get("preview").isJsonNull(), "no previews written");
+        // an infinite SINAD (no error at all) is not a JSON number: null
+        assertTrue(first.get("sinad_db").isJsonNull());
     }
 
     @Test

@@ -76,11 +76,14 @@ class UnitFitReportTest {
     @Test
     void jsonKeepsItsKeysInOrder() throws IOException {
         Map<String, Object> json = UnitFitReport.json(fit(READINGS, Optional.empty(), OptionalDouble.empty()),
-                files());
-        assertEquals(List.of("source", "bits", "readings", "codes_measured", "unmeasured_codes", "resolution_v",
-                "repeat_spread_v", "floor_v", "models", "chosen", "reason", "parameter_sigmas", "residuals",
-                "outlier_codes", "profile", "warnings", "files"), List.copyOf(json.keySet()));
+                files(), files().get(0).toAbsolutePath().getParent(), "9.9");
+        assertEquals(List.of("schema_version", "report", "tool", "version", "source", "ladder", "bits", "readings",
+                "codes_measured", "unmeasured_codes", "meter_step_v", "meter_step_given", "repeat_spread_rms_v",
+                "floor_rms_v", "models", "chosen", "reason", "parameter_sigmas", "residuals", "outlier_codes",
+                "profile", "warnings", "files"), List.copyOf(json.keySet()));
         assertEquals(List.of(3), json.get("unmeasured_codes"));
-        assertEquals(List.of(files().get(0).toString(), files().get(1).toString()), json.get("files"));
+        // paths are relative to the output folder
+        assertEquals(List.of(files().get(0).getFileName().toString(), files().get(1).getFileName().toString()),
+                json.get("files"));
     }
 }

@@ -84,6 +84,16 @@ public final class WavFixtures {
             return this;
         }
 
+        /** Raw sample bytes of any format tag and width, e.g. G.711 code words (tag 6 or 7, 8 bits). */
+        public Builder raw(int formatTag, int bitsPerSample, int channelCount, long rateHz, byte[] sampleBytes) {
+            this.tag = formatTag;
+            this.bits = bitsPerSample;
+            this.channels = channelCount;
+            this.rate = rateHz;
+            this.data = sampleBytes.clone();
+            return this;
+        }
+
         /** Overrides the format tag. */
         public Builder tag(int t) {
             this.tag = t;
