@@ -12,7 +12,8 @@ if not exist "%RUNGTONE_JAR%" (
 )
 set "RUNGTONE_JAVA=java"
 if defined JAVA_HOME if exist "%JAVA_HOME%\bin\java.exe" set "RUNGTONE_JAVA=%JAVA_HOME%\bin\java.exe"
-rem The same settings as the POSIX launcher: serial collector, small initial heap, the quick compiler only;
-rem RUNGTONE_JAVA_OPTS comes last and wins.
-"%RUNGTONE_JAVA%" -XX:+UseSerialGC -Xms32m -XX:TieredStopAtLevel=1 %RUNGTONE_JAVA_OPTS% -jar "%RUNGTONE_JAR%" %*
+rem The same heap and compiler settings as the POSIX launcher: serial collector, sample buffers straight to the
+rem old generation, a 24 MB young generation, 256 MB reserved at start, the quick compiler only, no
+rem performance-data file, plots drawn without a display; RUNGTONE_JAVA_OPTS comes last and wins.
+"%RUNGTONE_JAVA%" -XX:+UseSerialGC -Xms256m -Xmn24m -XX:PretenureSizeThreshold=512k -XX:TieredStopAtLevel=1 -XX:-UsePerfData -Djava.awt.headless=true %RUNGTONE_JAVA_OPTS% -jar "%RUNGTONE_JAR%" %*
 exit /b %ERRORLEVEL%

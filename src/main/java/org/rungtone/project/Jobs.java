@@ -2,6 +2,7 @@ package org.rungtone.project;
 
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CompletionException;
+import java.util.function.Supplier;
 
 /** Waiting for work started on another core. */
 final class Jobs {
@@ -14,13 +15,23 @@ final class Jobs {
      * thread's failure first.
      */
     static void alongside(Runnable here, Runnable elsewhere) {
-        CompletableFuture<Void> other = CompletableFuture.runAsync(elsewhere);
-        try {
+        alongside(() -> {
             here.run();
+            return null;
+        }, elsewhere);
+    }
+
+    /** {@link #alongside(Runnable, Runnable)} for a {@code here} that gives a result, which is returned. */
+    static <T> T alongside(Supplier<T> here, Runnable elsewhere) {
+        CompletableFuture<Void> other = CompletableFuture.runAsync(elsewhere);
+        T result;
+        try {
+            result = here.get();
         } finally {
             other.handle((done, failed) -> null).join();
         }
         join(other);
+        return result;
     }
 
     /** Waits for a job, passing on the user's input errors and programming errors unwrapped. */
