@@ -21,20 +21,19 @@ import org.rungtone.firmware.Templates;
 import org.rungtone.internal.AtomicFiles;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.OutputFolder;
-import org.rungtone.quantize.Codes;
 import org.rungtone.report.BuildFacts;
 import org.rungtone.report.BuildReport;
 import org.rungtone.report.BuildSummary;
 import org.rungtone.report.ConditioningFacts;
 import org.rungtone.report.HtmlReport;
 import org.rungtone.report.Json;
+import org.rungtone.report.PlotWarmUp;
 import org.rungtone.report.SoundPlots;
 import org.rungtone.source.WavWriter;
 
 /**
- * Runs one {@link BuildPlan}: renders the sound ({@link SoundRenderer}), emits C and writes the preview, plots
- * and reports; the C files and plots on other cores as soon as the sound's codes and figures are known
- * ({@link EarlyOutputs}). Each stage is a pure function; only the firmware and report writers touch files.
+ * Runs one {@link BuildPlan}: renders the sound ({@link SoundRenderer}), then emits C and writes the preview,
+ * plots and reports. Each stage is a pure function; only the firmware and report writers touch files.
  */
 public final class Build {
     private final String toolVersion;
@@ -74,33 +73,38 @@ public final class Build {
     }
 
     private BuildSummary write(BuildPlan plan, Path cDir) {
-        // The C files and the plots are written on other cores as soon as what they hold is known, while the
-        // figures, the preview and the listener figures still render.
-        EarlyOutputs early = new EarlyOutputs(plan.outDir(), coded -> emit(coded, cDir));
-        try {
-            return write(plan, early, new SoundRenderer(span, progress, early).render(plan));
-        } catch (RuntimeException e) {
-            // the staging folders go once the other cores are done with them
-            early.settle();
-            throw e;
-        }
-    }
-
-    private BuildSummary write(BuildPlan plan, EarlyOutputs early, SoundRenderer.Rendered r) {
+        CompletableFuture<Void> plotsReady = PlotWarmUp.start(); // the run's one warm-up, often started by Main
+        SoundRenderer.Rendered r = new SoundRenderer(span, progress).render(plan);
         Stopwatch watch = new Stopwatch(progress);
-        // the preview is written on another core while the C files are finished
-        CompletableFuture<Path> preview = CompletableFuture.supplyAsync(() -> writePreview(r, plan.outDir()));
-        Emitted emitted;
+        List<Path> files = new ArrayList<>();
+        List<String> firmwareLines = new ArrayList<>();
+        Optional<FirmwareFacts> firmwareFacts = Optional.empty();
+        List<String> warnings = new ArrayList<>(r.warnings());
+        // Every check that can refuse the build runs before the first file is written.
+        FirmwareEmitter.Rendered firmware = plan.firmware().player().isPresent() ? player(plan, r) : null;
+        long flash = firmware != null ? firmware.result().flashBytes() : checkedArrayBytes(plan, r);
+        // The preview and plots are written on another core while the C files are.
+        CompletableFuture<List<Path>> assets = CompletableFuture.supplyAsync(() -> {
+            Jobs.join(plotsReady);
+            return writeAssets(r, plan.outDir(), SoundPlots.Scales.none());
+        });
         try {
-            emitted = early.firmware();
+            if (firmware != null) {
+                EmitResult er = FirmwareEmitter.write(firmware, cDir);
+                files.addAll(er.files());
+                firmwareLines.addAll(er.report());
+                firmwareFacts = Optional.of(er.facts());
+                warnings.addAll(er.warnings());
+            } else {
+                files.addAll(emitArray(plan.symbol(), r, cDir));
+            }
         } catch (RuntimeException e) {
-            preview.handle((done, failed) -> null).join();
+            // the staging folder goes once the assets are done with it
+            assets.handle((done, failed) -> null).join();
             throw e;
         }
         watch.lap(BuildStage.EMIT);
-        List<Path> files = new ArrayList<>(emitted.files());
-        files.add(Jobs.join(preview));
-        files.addAll(early.plots());
+        files.addAll(Jobs.join(assets));
         watch.lap(BuildStage.PLOTS);
         Path txt = plan.outDir().resolve("report.txt");
         Path json = plan.outDir().resolve("report.json");
@@ -110,10 +114,7 @@ public final class Build {
         files.add(html);
         Map<String, Double> laps = new LinkedHashMap<>(r.stageMillis());
         laps.putAll(watch.laps());
-        List<String> warnings = new ArrayList<>(r.warnings());
-        warnings.addAll(emitted.warnings());
-        long flash = emitted.flashBytes();
-        BuildSummary summary = summary(r, emitted.lines(), emitted.facts(), flash, files, warnings, laps);
+        BuildSummary summary = summary(r, firmwareLines, firmwareFacts, flash, files, warnings, laps);
         // the page (with its embedded plots) is written on another core while the text and JSON reports are
         Jobs.alongside(() -> {
             AtomicFiles.writeString(txt, BuildReport.text(summary));
@@ -123,51 +124,20 @@ public final class Build {
         return summary;
     }
 
-    /**
-     * What writing a sound's C files gave.
-     *
-     * @param files the files written
-     * @param lines the player's report lines (none for a bare sample array)
-     * @param facts the player's facts, when one was emitted
-     * @param warnings what the user should know about the firmware
-     * @param flashBytes flash the sound's firmware takes
-     */
-    record Emitted(List<Path> files, List<String> lines, Optional<FirmwareFacts> facts, List<String> warnings,
-            long flashBytes) {
-    }
-
-    /**
-     * Writes the C files of a sound's codes into {@code cDir}: its player or its bare sample array. Every
-     * check that can refuse the build runs before the first of them is written.
-     */
-    private Emitted emit(SoundRenderer.Coded c, Path cDir) {
-        BuildPlan plan = c.plan();
-        if (plan.firmware().player().isPresent()) {
-            FirmwareEmitter.Rendered firmware = player(c);
-            EmitResult er = FirmwareEmitter.write(firmware, cDir);
-            return new Emitted(er.files(), er.report(), Optional.of(er.facts()), er.warnings(),
-                    firmware.result().flashBytes());
-        }
-        long flash = checkedArrayBytes(c);
-        return new Emitted(emitArray(plan.symbol(), c, cDir), List.of(), Optional.empty(), List.of(), flash);
-    }
-
-    /** The player of a sound, rendered but not written. */
-    private FirmwareEmitter.Rendered player(SoundRenderer.Coded c) {
-        BuildPlan plan = c.plan();
+    /** The player of a rendered sound, rendered but not written. */
+    private FirmwareEmitter.Rendered player(BuildPlan plan, SoundRenderer.Rendered r) {
         FirmwareRequest.Builder fb = plan.firmware().player().get().toBuilder().name(plan.symbol())
-                .toolVersion(toolVersion).settings(c.settings());
-        fb.sound(clip(plan.symbol(), c));
+                .toolVersion(toolVersion).settings(r.settings());
+        fb.sound(clip(plan.symbol(), r));
         return FirmwareEmitter.render(fb.build());
     }
 
-    /** Flash bytes of a sound's bare sample array, checked against the budget. */
-    private static long checkedArrayBytes(SoundRenderer.Coded c) {
-        BuildPlan plan = c.plan();
-        long flash = arrayBytes(plan, c.emitted());
+    /** Flash bytes of a rendered sound's bare sample array, checked against the budget. */
+    private static long checkedArrayBytes(BuildPlan plan, SoundRenderer.Rendered r) {
+        long flash = arrayBytes(r);
         OptionalLong budget = plan.firmware().flashBudgetBytes();
         if (budget.isPresent()) {
-            FlashBudget.check(flash, budget.getAsLong(), FlashBudget.alternatives(c.emitted().length(), c.rateHz(),
+            FlashBudget.check(flash, budget.getAsLong(), FlashBudget.alternatives(r.emitted().length(), r.rateHz(),
                     plan.bits(), SampleStorage.UNPACKED, 0));
         }
         return flash;
@@ -175,37 +145,25 @@ public final class Build {
 
     /** The firmware clip of a rendered sound, with its loop points. */
     public static SoundClip clip(String name, SoundRenderer.Rendered r) {
-        return clip(name, r.coded());
-    }
-
-    private static SoundClip clip(String name, SoundRenderer.Coded c) {
-        if (c.autoLoop().isPresent()) {
-            return new SoundClip(name, c.emitted(), c.autoLoop().get().start(), c.autoLoop().get().end());
+        if (r.autoLoop().isPresent()) {
+            return new SoundClip(name, r.emitted(), r.autoLoop().get().start(), r.autoLoop().get().end());
         }
-        if (c.plan().firmware().loop().isPresent()) {
-            int[] lp = c.plan().firmware().loop().get().samples(c.rateHz(), c.emitted().length());
-            return new SoundClip(name, c.emitted(), lp[0], lp[1], c.stream());
+        if (r.plan().firmware().loop().isPresent()) {
+            int[] lp = r.plan().firmware().loop().get().samples(r.rateHz(), r.emitted().length());
+            return new SoundClip(name, r.emitted(), lp[0], lp[1], r.stream());
         }
-        return new SoundClip(name, c.emitted(), 0, c.emitted().length(), c.stream());
+        return new SoundClip(name, r.emitted(), 0, r.emitted().length(), r.stream());
     }
 
     /** Flash bytes of a plain sample array. */
     public static long arrayBytes(SoundRenderer.Rendered r) {
-        return arrayBytes(r.plan(), r.emitted());
-    }
-
-    private static long arrayBytes(BuildPlan plan, Codes emitted) {
-        return (long) emitted.length() * (plan.bits() <= 8 ? 1 : 2);
+        return (long) r.emitted().length() * (r.plan().bits() <= 8 ? 1 : 2);
     }
 
     /** Emits the plain sample array of a rendered sound. */
     public List<Path> emitArray(String symbol, SoundRenderer.Rendered r, Path dir) {
-        return emitArray(symbol, r.coded(), dir);
-    }
-
-    private List<Path> emitArray(String symbol, SoundRenderer.Coded c, Path dir) {
         return new SampleArrayEmitter(Templates.bundled()).emit(new SampleArrayEmitter.Request(symbol,
-                c.emitted(), c.plan().firmware().flashQualifier(), toolVersion, c.settings()), dir);
+                r.emitted(), r.plan().firmware().flashQualifier(), toolVersion, r.settings()), dir);
     }
 
     /** The summary of a rendered sound with what emission added (the player's facts, when one was emitted). */
@@ -231,20 +189,18 @@ public final class Build {
     /** Writes preview.wav and the plots of a rendered sound into {@code dir}, the plots on {@code scales}. */
     public static List<Path> writeAssets(SoundRenderer.Rendered r, Path dir, SoundPlots.Scales scales) {
         List<Path> files = new ArrayList<>();
-        files.add(writePreview(r, dir));
+        Path previewFile = dir.resolve("preview.wav");
+        WavWriter.write(previewFile, r.preview().signal(), WavWriter.Format.PCM16);
+        files.add(previewFile);
         files.addAll(SoundPlots.write(dir, plotData(r), scales));
         return files;
     }
 
-    private static Path writePreview(SoundRenderer.Rendered r, Path dir) {
-        Path previewFile = dir.resolve("preview.wav");
-        WavWriter.write(previewFile, r.preview().signal(), WavWriter.Format.PCM16);
-        return previewFile;
-    }
-
     /** What the plots of a rendered sound draw. */
     public static SoundPlots.Data plotData(SoundRenderer.Rendered r) {
-        return SoundRenderer.plotData(r.plan(), Optional.ofNullable(r.errorSpectrum()), r.inBandCutoffHz(),
+        BuildPlan plan = r.plan();
+        return new SoundPlots.Data(plan.symbol(), plan.bits(), plan.quantize().dither(),
+                plan.quantize().shaping().order() > 0, Optional.ofNullable(r.errorSpectrum()), r.inBandCutoffHz(),
                 r.toneSpectrum(), r.tone());
     }
 }

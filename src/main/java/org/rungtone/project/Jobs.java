@@ -2,7 +2,6 @@ package org.rungtone.project;
 
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CompletionException;
-import java.util.function.Supplier;
 
 /** Waiting for work started on another core. */
 final class Jobs {
@@ -15,23 +14,13 @@ final class Jobs {
      * thread's failure first.
      */
     static void alongside(Runnable here, Runnable elsewhere) {
-        alongside(() -> {
-            here.run();
-            return null;
-        }, elsewhere);
-    }
-
-    /** {@link #alongside(Runnable, Runnable)} for a {@code here} that gives a result, which is returned. */
-    static <T> T alongside(Supplier<T> here, Runnable elsewhere) {
         CompletableFuture<Void> other = CompletableFuture.runAsync(elsewhere);
-        T result;
         try {
-            result = here.get();
+            here.run();
         } finally {
             other.handle((done, failed) -> null).join();
         }
         join(other);
-        return result;
     }
 
     /** Waits for a job, passing on the user's input errors and programming errors unwrapped. */

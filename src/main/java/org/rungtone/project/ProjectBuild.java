@@ -193,7 +193,7 @@ public final class ProjectBuild {
         if (player.isPresent()) {
             checkOneRate(project, o, shared.rateHz());
         }
-        org.rungtone.report.PlotWarmUp.start(); // on another core, before the plots need it
+        java.util.concurrent.CompletableFuture<Void> plotsReady = org.rungtone.report.PlotWarmUp.start();
         // every sound's settings are checked before the first sound is rendered
         List<BuildPlan> plans = new ArrayList<>();
         Optional<TreadFormat> codec = player.filter(p -> p.engine() != PlaybackEngine.SWEEP)
@@ -220,20 +220,19 @@ public final class ProjectBuild {
             }
         }
         progress.update("writing firmware, previews and reports", BuildStage.rendered());
-        // the previews and plots (on y ranges all sounds share) are written on another core while the firmware is
-        SoundPlots.Scales scales = SoundPlots.Scales.of(rendered.stream().map(Build::plotData).toList());
-        List<List<Path>> assets = new ArrayList<>();
-        Emitted emitted = Jobs.alongside(() -> emit(project, player, shared, rendered, cDir), () -> rendered.forEach(
-                r -> assets.add(Build.writeAssets(r, r.plan().outDir(), scales))));
+        Emitted emitted = emit(project, player, shared, rendered, cDir);
+        Jobs.join(plotsReady);
         Build build = new Build(toolVersion);
         List<Path> files = new ArrayList<>(emitted.files());
         List<BuildSummary> summaries = new ArrayList<>();
+        // comparable plots of all sounds share their y ranges
+        SoundPlots.Scales scales = SoundPlots.Scales.of(rendered.stream().map(Build::plotData).toList());
         for (SoundRenderer.Rendered r : rendered) {
-            List<Path> soundAssets = assets.get(summaries.size());
-            files.addAll(soundAssets);
+            List<Path> assets = Build.writeAssets(r, r.plan().outDir(), scales);
+            files.addAll(assets);
             SampleStorage storage = player.map(FirmwareRequest::storage).orElse(SampleStorage.UNPACKED);
             long soundBytes = storage.bytes(r.emitted().length(), r.plan().bits());
-            summaries.add(build.summary(r, List.of(), Optional.empty(), soundBytes, soundAssets, r.warnings(),
+            summaries.add(build.summary(r, List.of(), Optional.empty(), soundBytes, assets, r.warnings(),
                     r.stageMillis()));
         }
         return writeReports(project, shared, summaries, emitted, files);

@@ -29,7 +29,6 @@ import org.rungtone.internal.Units;
 import org.rungtone.ladder.LevelTable;
 import org.rungtone.quantize.Codes;
 import org.rungtone.quantize.Quantizer;
-import org.rungtone.report.SoundPlots;
 import org.rungtone.report.SourceFacts;
 import org.rungtone.source.Signal;
 
@@ -59,7 +58,6 @@ public final class SoundRenderer {
 
     private final OutputSpan span;
     private final BuildProgress progress;
-    private final Early early;
 
     /**
      * A renderer whose compensated quantization maps full scale onto {@code span} of the board's levels, and
@@ -67,42 +65,8 @@ public final class SoundRenderer {
      * reads the source, how much of it it has read.
      */
     public SoundRenderer(OutputSpan span, BuildProgress progress) {
-        this(span, progress, new Early() { });
-    }
-
-    /** The same, handing {@code early} what the outputs hold as soon as it is known (the figures may be busy). */
-    SoundRenderer(OutputSpan span, BuildProgress progress, Early early) {
         this.span = span;
         this.progress = progress;
-        this.early = early;
-    }
-
-    /**
-     * Told what a sound's outputs hold as soon as it is known, while the rest of the sound renders, so that
-     * they can be written on another core meanwhile.
-     */
-    interface Early {
-        /** The codes to store, known before any figure of them. */
-        default void coded(Coded coded) {
-        }
-
-        /** What the plots draw, known while the preview and the listener figures still render. */
-        default void analysed(SoundPlots.Data data) {
-        }
-    }
-
-    /**
-     * What the firmware of one sound holds.
-     *
-     * @param plan the plan it came from
-     * @param rateHz the target rate
-     * @param emitted the codes the firmware holds
-     * @param settings "key: value" lines for the C header comment
-     * @param autoLoop the loop found in the sound, when its loop is auto (the codes hold its crossfades)
-     * @param stream the Tread stream the emitted codes decode from, for a Tread store
-     */
-    record Coded(BuildPlan plan, double rateHz, Codes emitted, List<String> settings,
-            Optional<SeamlessLoop> autoLoop, Optional<TreadStream> stream) {
     }
 
     /**
@@ -136,11 +100,6 @@ public final class SoundRenderer {
             Spectrum errorSpectrum, Optional<Spectrum> toneSpectrum, double inBandCutoffHz, long clippedSamples,
             List<String> settings, List<String> warnings, Map<String, Double> stageMillis,
             Optional<SeamlessLoop> autoLoop, Optional<TreadStream> stream) {
-
-        /** What the sound's firmware holds. */
-        Coded coded() {
-            return new Coded(plan, rateHz, emitted, settings, autoLoop, stream);
-        }
     }
 
     /** The codes of every ladder case and how they use the range. */
@@ -178,10 +137,15 @@ public final class SoundRenderer {
         Coding coding = Coding.of(plan, rate, model.inBandTopHz(rate));
         Cases cases = quantize(plan, reference, coding);
         watch.lap(BuildStage.QUANTIZE);
-        warnings.addAll(codeWarnings(cases));
-        List<String> settings = settings(plan, prepared.layout(), conditioned, cases.played(), rate, cases.range());
-        Optional<SeamlessLoop> autoLoop = loop.map(AutoLoop.Placed::loop);
-        early.coded(new Coded(plan, rate, cases.emitted(), settings, autoLoop, cases.stream()));
+        if (cases.clipped() > 0) {
+            warnings.add(cases.clipped() + " samples were beyond full scale and clipped");
+        }
+        CodeUse use = cases.emittedUse();
+        if (use.shapingOverloads()) {
+            warnings.add(String.format(Locale.ROOT, "noise shaping overloaded the quantizer on %.2f %% of the"
+                    + " samples (its input went past the end levels), which adds distortion; lower the level",
+                    100 * use.overloadFraction()));
+        }
         // The preview is independent of the figures: render it on another core meanwhile. With an automatic
         // loop it plays the loop several times, so the listener figures render the stored codes on their own.
         CompletableFuture<AnalogModel.Preview> previewJob = startPreview(plan, AutoLoop.previewed(cases.emitted(),
@@ -203,7 +167,6 @@ public final class SoundRenderer {
             tone = Optional.of(ToneAnalysis.analyze(out, toneSpectrum.get()));
         }
         watch.lap(BuildStage.ANALYZE);
-        early.analysed(plotData(plan, Optional.ofNullable(figures.errorSpectrum()), cutoff, toneSpectrum, tone));
         AnalogModel.Preview preview = Jobs.join(previewJob);
         watch.lap(BuildStage.PREVIEW);
         List<QualityReport> quality = figures.quality();
@@ -216,29 +179,8 @@ public final class SoundRenderer {
         }
         return new Rendered(plan, prepared.layout(), prepared.source(), rate, conditioned, cases.emitted(),
                 cases.played(), quality, figures.shapingGainDb(), tone, preview, figures.errorSpectrum(), toneSpectrum,
-                cutoff, cases.clipped(), settings, warnings, watch.laps(), autoLoop, cases.stream());
-    }
-
-    /** What the user should know about how the emitted codes came out. */
-    private static List<String> codeWarnings(Cases cases) {
-        List<String> warnings = new ArrayList<>();
-        if (cases.clipped() > 0) {
-            warnings.add(cases.clipped() + " samples were beyond full scale and clipped");
-        }
-        CodeUse use = cases.emittedUse();
-        if (use.shapingOverloads()) {
-            warnings.add(String.format(Locale.ROOT, "noise shaping overloaded the quantizer on %.2f %% of the"
-                    + " samples (its input went past the end levels), which adds distortion; lower the level",
-                    100 * use.overloadFraction()));
-        }
-        return warnings;
-    }
-
-    /** What the plots of a sound draw. */
-    static SoundPlots.Data plotData(BuildPlan plan, Optional<Spectrum> errorSpectrum, double inBandCutoffHz,
-            Optional<Spectrum> toneSpectrum, Optional<ToneReport> tone) {
-        return new SoundPlots.Data(plan.symbol(), plan.bits(), plan.quantize().dither(),
-                plan.quantize().shaping().order() > 0, errorSpectrum, inBandCutoffHz, toneSpectrum, tone);
+                cutoff, cases.clipped(), settings(plan, prepared.layout(), conditioned, cases.played(), rate,
+                        cases.range()), warnings, watch.laps(), loop.map(AutoLoop.Placed::loop), cases.stream());
     }
 
     /**
