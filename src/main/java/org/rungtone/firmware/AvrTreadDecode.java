@@ -64,14 +64,7 @@ final class AvrTreadDecode {
         a.label("6");
         a.op("sub r30, r25").op("brcc 7f").op("ldi r30, 0");
         store(a, p, "r30");
-        a.label("2");
-        a.comment("the prediction is below the ladder: y is the difference, or 0");
-        a.op("brts 6f");
-        a.op("sts %[next], r25");
-        AvrTreadTick.exit(a, p);
-        a.label("6");
-        a.op("ldi r30, 0").op("sts %[next], r30");
-        AvrTreadTick.exit(a, p);
+        belowLadder(a, p);
     }
 
     /** 8-bit codes: the same, with the doubling's carry (2·y1 ≥ 256) and the addition's carry as the top. */
@@ -87,6 +80,11 @@ final class AvrTreadDecode {
         a.label("1");
         a.comment("2·y1 is 256 or more: q is on the ladder when y2 borrows, else above it");
         a.op("sub r30, r31").op("brcs 5b").op("ldi r30, 255").op("rjmp 5b");
+        belowLadder(a, p);
+    }
+
+    /** Label 2: the prediction is below the ladder, so the code is the difference (or 0 when it borrows). */
+    private static void belowLadder(AvrFastTick.Asm a, EmitPlan p) {
         a.label("2");
         a.comment("the prediction is below the ladder: y is the difference, or 0");
         a.op("brts 6f");
@@ -103,5 +101,4 @@ final class AvrTreadDecode {
         a.op("sts %[next], " + register);
         AvrTreadTick.exit(a, p);
     }
-
 }

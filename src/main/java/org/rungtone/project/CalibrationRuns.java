@@ -5,6 +5,7 @@ import java.time.LocalDate;
 import java.time.format.DateTimeParseException;
 import java.util.List;
 import java.util.Optional;
+import java.util.function.Supplier;
 import org.rungtone.calibrate.BoardSimulation;
 import org.rungtone.calibrate.RecordingCalibration;
 import org.rungtone.calibrate.UnitFit;
@@ -52,30 +53,27 @@ public final class CalibrationRuns {
     public static Written<BoardSimulation.Result> simulate(BoardSimulation.Request r, Path out) {
         AtomicFiles.checkFolderUsable(out);
         BoardSimulation.Result result = BoardSimulation.run(r);
-        try (OutputFolder folder = OutputFolder.open(out, "simulate")) {
-            List<Path> files = CalibrationFiles.writeSimulation(result, out);
-            folder.commit();
-            return new Written<>(result, files);
-        }
+        return written(out, "simulate", result, () -> CalibrationFiles.writeSimulation(result, out));
     }
 
     /** {@code calibrate fit}: a board's unit profile from readings, and their residuals. */
     public static Written<UnitFit.Result> fit(UnitFit.Request r, Path out) {
         AtomicFiles.checkFolderUsable(out);
         UnitFit.Result result = UnitFit.run(r);
-        try (OutputFolder folder = OutputFolder.open(out, "fit")) {
-            List<Path> files = CalibrationFiles.writeProfile(result, out);
-            folder.commit();
-            return new Written<>(result, files);
-        }
+        return written(out, "fit", result, () -> CalibrationFiles.writeProfile(result, out));
     }
 
     /** {@code calibrate listen}: a board's unit profile from a recorded sweep, its steps and a plot. */
     public static Written<RecordingCalibration.Result> listen(RecordingCalibration.Request r, Path out) {
         AtomicFiles.checkFolderUsable(out);
         RecordingCalibration.Result result = RecordingCalibration.run(r);
-        try (OutputFolder folder = OutputFolder.open(out, "listen")) {
-            List<Path> files = CalibrationFiles.writeRecording(result, out);
+        return written(out, "listen", result, () -> CalibrationFiles.writeRecording(result, out));
+    }
+
+    /** {@code result} with the files {@code write} puts into {@code out}, which is replaced as a whole. */
+    private static <T> Written<T> written(Path out, String what, T result, Supplier<List<Path>> write) {
+        try (OutputFolder folder = OutputFolder.open(out, what)) {
+            List<Path> files = write.get();
             folder.commit();
             return new Written<>(result, files);
         }

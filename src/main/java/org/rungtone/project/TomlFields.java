@@ -8,6 +8,7 @@ import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
+import org.rungtone.internal.EditDistance;
 import org.rungtone.internal.InputError;
 import org.rungtone.internal.Units;
 import org.tomlj.TomlArray;
@@ -206,7 +207,7 @@ final class TomlFields {
         String best = null;
         int bestD = Integer.MAX_VALUE;
         for (String k : known) {
-            int d = org.rungtone.script.ast.Suggestions.distance(key, k);
+            int d = EditDistance.of(key, k);
             if (d < bestD) {
                 bestD = d;
                 best = k;

@@ -24,8 +24,7 @@ final class BashScript {
         String tool = root.name();
         String fn = "_" + Words.identifier(tool);
         StringBuilder b = new StringBuilder();
-        b.append("# bash completion for ").append(tool).append(", written by '").append(tool)
-                .append(" completion bash' (version ").append(version).append(").\n")
+        b.append(Words.scriptHeader("bash", tool, version))
                 .append("# Load it with: source <(").append(tool).append(" completion bash)\n\n");
         lookups(b, root, fn);
         b.append(OFFER.replace("_T", fn)).append('\n').append(MAIN.replace("_T", fn))

@@ -23,8 +23,7 @@ final class FishScript {
         String tool = root.name();
         String fn = "__" + Words.identifier(tool);
         StringBuilder b = new StringBuilder();
-        b.append("# fish completion for ").append(tool).append(", written by '").append(tool)
-                .append(" completion fish' (version ").append(version).append(").\n")
+        b.append(Words.scriptHeader("fish", tool, version))
                 .append("# Save it as ~/.config/fish/completions/").append(tool).append(".fish, or load it with: ")
                 .append(tool).append(" completion fish | source\n\n");
         lookups(b, root, fn);

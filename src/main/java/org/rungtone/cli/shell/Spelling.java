@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Collection;
 import java.util.List;
 import java.util.Locale;
+import org.rungtone.internal.EditDistance;
 
 /**
  * The known words nearest a mistyped one: by edit distance (a letter inserted, left out, changed, or two
@@ -25,7 +26,7 @@ final class Spelling {
         int best = limit + 1;
         List<String> found = new ArrayList<>();
         for (String word : known) {
-            int d = distance(t, bare(word));
+            int d = EditDistance.of(t, bare(word));
             if (d < best) {
                 best = d;
                 found.clear();
@@ -43,27 +44,6 @@ final class Spelling {
             return found.size() == 1 ? found : List.of();
         }
         return found;
-    }
-
-    /** Optimal string alignment distance: insertions, deletions, substitutions and adjacent swaps. */
-    static int distance(String a, String b) {
-        int[][] d = new int[a.length() + 1][b.length() + 1];
-        for (int i = 0; i <= a.length(); i++) {
-            d[i][0] = i;
-        }
-        for (int j = 0; j <= b.length(); j++) {
-            d[0][j] = j;
-        }
-        for (int i = 1; i <= a.length(); i++) {
-            for (int j = 1; j <= b.length(); j++) {
-                int cost = a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1;
-                d[i][j] = Math.min(Math.min(d[i - 1][j] + 1, d[i][j - 1] + 1), d[i - 1][j - 1] + cost);
-                if (i > 1 && j > 1 && a.charAt(i - 1) == b.charAt(j - 2) && a.charAt(i - 2) == b.charAt(j - 1)) {
-                    d[i][j] = Math.min(d[i][j], d[i - 2][j - 2] + 1);
-                }
-            }
-        }
-        return d[a.length()][b.length()];
     }
 
     private static String bare(String word) {

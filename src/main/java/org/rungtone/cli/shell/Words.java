@@ -39,4 +39,10 @@ final class Words {
     static String singleQuoted(String text) {
         return "'" + text.replace("'", "'\\''") + "'";
     }
+
+    /** The first line of a completion script for {@code shell}: what it completes and the version that wrote it. */
+    static String scriptHeader(String shell, String tool, String version) {
+        return "# " + shell + " completion for " + tool + ", written by '" + tool + " completion " + shell
+                + "' (version " + version + ").\n";
+    }
 }

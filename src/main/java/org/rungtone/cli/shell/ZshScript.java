@@ -23,8 +23,7 @@ final class ZshScript {
         String tool = root.name();
         StringBuilder b = new StringBuilder();
         b.append("#compdef ").append(tool).append('\n')
-                .append("# zsh completion for ").append(tool).append(", written by '").append(tool)
-                .append(" completion zsh' (version ").append(version).append(").\n")
+                .append(Words.scriptHeader("zsh", tool, version))
                 .append("# Save it as _").append(tool).append(" in a folder on $fpath, or load it with: source <(")
                 .append(tool).append(" completion zsh)\n\n");
         for (CompletionTree c : root.all()) {

@@ -10,16 +10,6 @@ class SpellingTest {
             "--pin-r-low", "--templates", "--tolerance", "-q", "--quiet");
 
     @Test
-    void countsInsertionsDeletionsChangesAndSwaps() {
-        assertEquals(0, Spelling.distance("bits", "bits"));
-        assertEquals(1, Spelling.distance("bitz", "bits"));
-        assertEquals(1, Spelling.distance("bit", "bits"));
-        assertEquals(1, Spelling.distance("bitss", "bits"));
-        assertEquals(1, Spelling.distance("ditehr", "dither"));
-        assertEquals(3, Spelling.distance("", "abc"));
-    }
-
-    @Test
     void suggestsTheNearestOptionIgnoringDashesAndCase() {
         assertEquals(List.of("--bits"), Spelling.nearest("--bitz", OPTIONS));
         assertEquals(List.of("--bits"), Spelling.nearest("-bits", OPTIONS));
