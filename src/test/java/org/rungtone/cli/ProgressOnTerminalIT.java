@@ -23,6 +23,8 @@ import org.rungtone.testing.CToolchain;
 class ProgressOnTerminalIT {
     /** A Monte Carlo run of some 2^27 level evaluations, two seconds or more: long enough for the estimate. */
     private static final String LADDER = "ladder --topology r2r --bits 12 --monte-carlo 40000 --seed 3 --out out";
+    /** Long enough (several seconds on 2 cores) that the line shows an estimate of the time left. */
+    private static final String LONG_LADDER = LADDER.replace("40000", "100000");
 
     @TempDir
     Path dir;
@@ -45,11 +47,11 @@ class ProgressOnTerminalIT {
 
     @Test
     void aTerminalSeesTheLineAndNothingElseChanges() throws IOException {
-        String shown = inTerminal(dir.resolve("terminal"), java() + " " + LADDER);
-        assertTrue(shown.matches("(?s)\rMonte Carlo: 40000 boards  \\d+%  0:\\d\\d elapsed.*"), shown);
+        String shown = inTerminal(dir.resolve("terminal"), java() + " " + LONG_LADDER);
+        assertTrue(shown.matches("(?s)\rMonte Carlo: 100000 boards  \\d+%  0:\\d\\d elapsed.*"), shown);
         assertTrue(shown.contains(" left"), shown);
         Path plain = Files.createDirectories(dir.resolve("plain"));
-        String printed = CToolchain.run(plain, List.of("sh", "-c", java() + " " + LADDER + " 2>/dev/null"));
+        String printed = CToolchain.run(plain, List.of("sh", "-c", java() + " " + LONG_LADDER + " 2>/dev/null"));
         // the line is drawn after carriage returns and blanked before the report
         String withoutLine = shown.replaceAll("\r[^\r\n]*elapsed[^\r\n]*", "").replaceAll("^\r *\r", "");
         assertEquals(printed, withoutLine);
