@@ -16,6 +16,8 @@ import org.rungtone.internal.Checks;
  */
 final class SincResampler {
     private static final int PHASES = 512;
+    /** Longest period (in outputs) of a whole ratio of code and output rates that is tabulated. */
+    private static final int MAX_PERIOD = 4096;
 
     /** Sequential input. */
     interface Source {
@@ -174,32 +176,109 @@ final class SincResampler {
      * Computes outputs {@code from} to {@code to} (exclusive) into {@code out} from a zero-order-held input:
      * fine sample {@code s} holds {@code level[codes[floor(s / factor)]]}, and 0 outside the codes. Output j
      * is taken at fine position {@code j·ratio + offset}, as in {@link #resampleInto}.
+     *
+     * <p>When the code rate and the output rate are in a small whole ratio (16 kHz to 44.1 kHz is 160 codes
+     * per 441 outputs), output j and output j + q (q outputs a period) sit at the same place between codes,
+     * so the kernel interpolated between its two nearest phases is the same for both: it is made once per
+     * place in the period, and every output is one dot product over the codes, with its position taken
+     * from whole numbers instead of a growing product j·ratio.
      */
     void resampleHeld(Held held, int[] codes, double[] level, int from, int to, double offset, double[] out) {
-        int factor = held.factor;
+        int q = period(held.factor);
+        if (q == 0 || q > Math.max(1, to - from)) {
+            resampleHeldEach(held, codes, level, from, to, offset, out);
+            return;
+        }
+        int width = held.width;
+        long codesPerPeriod = Math.round(q * ratio / held.factor);
+        double[] rows = new double[q * width];
+        long[] firstCode = new long[q];
+        for (int t = 0; t < q; t++) {
+            Place at = place(held, t, offset);
+            firstCode[t] = at.code - held.dMin;
+            for (int dd = 0; dd < width; dd++) {
+                double g0 = held.g[at.row0 + dd];
+                rows[t * width + dd] = g0 + at.weight * (held.g[at.row0 + width + dd] - g0);
+            }
+        }
+        int n = codes.length;
+        for (int j = from; j < to; j++) {
+            int t = j % q;
+            long top = firstCode[t] + (long) (j / q) * codesPerPeriod;
+            int row = t * width;
+            double acc0 = 0;
+            double acc1 = 0;
+            if (top - (width - 1) >= 0 && top < n) {
+                int k = (int) top;
+                int dd = 0;
+                for (; dd + 1 < width; dd += 2) {
+                    acc0 += level[codes[k - dd]] * rows[row + dd];
+                    acc1 += level[codes[k - dd - 1]] * rows[row + dd + 1];
+                }
+                if (dd < width) {
+                    acc0 += level[codes[k - dd]] * rows[row + dd];
+                }
+            } else {
+                for (int dd = 0; dd < width; dd++) {
+                    long k = top - dd;
+                    if (k >= 0 && k < n) {
+                        acc0 += level[codes[(int) k]] * rows[row + dd];
+                    }
+                }
+            }
+            out[j] = acc0 + acc1;
+        }
+    }
+
+    /**
+     * The fewest outputs after which the output grid and the code grid line up again (a whole number of codes
+     * per that many outputs), up to {@value #MAX_PERIOD}; 0 when there is no such period.
+     */
+    private int period(int factor) {
+        double codesPerOutput = ratio / factor;
+        for (int q = 1; q <= MAX_PERIOD; q++) {
+            double codes = q * codesPerOutput;
+            if (Math.abs(codes - Math.rint(codes)) <= 1e-9 * Math.max(1, codes)) {
+                return q;
+            }
+        }
+        return 0;
+    }
+
+    /** Where output j falls: the code it starts from, the summed kernel's first phase row and the weight. */
+    private record Place(long code, int row0, double weight) {
+    }
+
+    private Place place(Held held, long j, double offset) {
+        double c = j * ratio + offset;
+        long i0 = (long) Math.floor(c);
+        double frac = c - i0;
+        long a = Math.floorDiv(i0, held.factor);
+        int r = (int) Math.floorMod(i0, (long) held.factor);
+        double pos = frac * PHASES;
+        int p = (int) pos;
+        return new Place(a, (r * (PHASES + 1) + p) * held.width, pos - p);
+    }
+
+    /** {@link #resampleHeld} output by output, for rates in no small whole ratio. */
+    private void resampleHeldEach(Held held, int[] codes, double[] level, int from, int to, double offset,
+            double[] out) {
         int width = held.width;
         int dMin = held.dMin;
         double[] g = held.g;
         int n = codes.length;
         for (int j = from; j < to; j++) {
-            double c = j * ratio + offset;
-            long i0 = (long) Math.floor(c);
-            double frac = c - i0;
-            long a = Math.floorDiv(i0, factor);
-            int r = (int) Math.floorMod(i0, (long) factor);
-            double pos = frac * PHASES;
-            int p = (int) pos;
-            double w = pos - p;
-            int row0 = (r * (PHASES + 1) + p) * width;
+            Place at = place(held, j, offset);
+            int row0 = at.row0;
             int row1 = row0 + width;
             double acc0 = 0;
             double acc1 = 0;
-            long top = a - dMin;
-            long bottom = a - (dMin + width - 1);
+            long top = at.code - dMin;
+            long bottom = at.code - (dMin + width - 1);
             if (bottom >= 0 && top < n) {
-                int at = (int) top;
+                int k = (int) top;
                 for (int dd = 0; dd < width; dd++) {
-                    double x = level[codes[at - dd]];
+                    double x = level[codes[k - dd]];
                     acc0 += x * g[row0 + dd];
                     acc1 += x * g[row1 + dd];
                 }
@@ -211,7 +290,7 @@ final class SincResampler {
                     acc1 += x * g[row1 + dd];
                 }
             }
-            out[j] = acc0 + w * (acc1 - acc0);
+            out[j] = acc0 + at.weight * (acc1 - acc0);
         }
     }
 }

@@ -6,10 +6,15 @@ import java.util.SplittableRandom;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
-/** The held-input shortcut gives what resampling the held staircase sample by sample gives. */
+/**
+ * The held-input shortcut gives what resampling the held staircase sample by sample gives, both where the
+ * rates repeat their alignment within a short period (16 kHz to 44.1 kHz: 160 codes per 441 outputs) and
+ * where they do not (16.001 kHz to 44.1 kHz, output by output).
+ */
 class SincResamplerTest {
     @ParameterizedTest
-    @CsvSource({"8000, 8, 48000", "16000, 8, 48000", "22050, 8, 44100", "11025, 9, 44100"})
+    @CsvSource({"8000, 8, 48000", "16000, 8, 48000", "22050, 8, 44100", "11025, 9, 44100",
+        "16000, 8, 44100", "12000, 8, 44100", "16001, 8, 44100"})
     void summingTheKernelOverEachHoldChangesNothingButRounding(double codeRate, int factor, double outRate) {
         double fine = factor * codeRate;
         double pass = Math.min(20000, 0.4535 * outRate);
@@ -37,8 +42,10 @@ class SincResamplerTest {
         r.resampleInto(held, -r.half() - 1, 0, outLength, -0.5, direct);
         double[] fast = new double[outLength];
         r.resampleHeld(r.new Held(factor), codes, level, 0, outLength, -0.5, fast);
+        // 1e-11: sample by sample, output j sits at j·ratio in floating point, whose rounding grows with j
+        // (about 1e-12 of a fine sample here); the periodic shortcut places it from whole numbers
         for (int j = 0; j < outLength; j++) {
-            assertEquals(direct[j], fast[j], 1e-12, "output " + j);
+            assertEquals(direct[j], fast[j], 1e-11, "output " + j);
         }
     }
 }
