@@ -100,6 +100,7 @@ public final class Build {
             }
             watch.lap(BuildStage.EMIT);
             files.add(writePreview(r, plan.outDir()));
+            HtmlReport.prepare();
         } catch (RuntimeException e) {
             // the staging folder goes once the plots are done with it
             plots.handle((done, failed) -> null).join();
