@@ -6,7 +6,7 @@ import java.util.Locale;
 
 /** Number formatting for C source: fixed-width hex, decimal, and arrays wrapped a fixed count per line. */
 public final class CLiterals {
-    private static final char[] HEX = "0123456789ABCDEF".toCharArray();
+    private static final byte[] HEX = "0123456789ABCDEF".getBytes(java.nio.charset.StandardCharsets.US_ASCII);
 
     private CLiterals() {
     }
@@ -57,35 +57,48 @@ public final class CLiterals {
     public static void writeArrayBody(int[] values, int digits, int perLine, String indent,
             java.io.OutputStream out) throws java.io.IOException {
         byte[] in = indent.getBytes(java.nio.charset.StandardCharsets.US_ASCII);
-        byte[] buf = new byte[1 << 16];
+        // a line at most: newline, indent, and per value a space, "0x", up to 8 digits (or more when asked) and ","
+        int lineBytes = 1 + in.length + perLine * (4 + Math.max(digits, 8));
+        byte[] buf = new byte[Math.max(1 << 16, 2 * lineBytes)];
         int n = 0;
-        int worst = in.length + 24;
-        for (int i = 0; i < values.length; i++) {
-            if (n > buf.length - worst) {
+        int last = values.length - 1;
+        for (int start = 0; start < values.length; start += perLine) {
+            if (n > buf.length - lineBytes) {
                 out.write(buf, 0, n);
                 n = 0;
             }
-            if (i % perLine == 0) {
-                if (i > 0) {
-                    buf[n++] = '\n';
+            if (start > 0) {
+                buf[n++] = '\n';
+            }
+            System.arraycopy(in, 0, buf, n, in.length);
+            n += in.length;
+            int end = Math.min(values.length, start + perLine);
+            for (int i = start; i < end; i++) {
+                if (i > start) {
+                    buf[n++] = ' ';
                 }
-                System.arraycopy(in, 0, buf, n, in.length);
-                n += in.length;
-            } else {
-                buf[n++] = ' ';
-            }
-            long value = values[i] & 0xFFFFFFFFL;
-            buf[n++] = '0';
-            buf[n++] = 'x';
-            int shown = Math.max(digits, (64 - Long.numberOfLeadingZeros(value) + 3) / 4);
-            for (int d = shown - 1; d >= 0; d--) {
-                buf[n++] = (byte) HEX[(int) (value >>> (4 * d)) & 0xF];
-            }
-            if (i < values.length - 1) {
-                buf[n++] = ',';
+                n = putHex(values[i] & 0xFFFFFFFFL, digits, buf, n);
+                if (i < last) {
+                    buf[n++] = ',';
+                }
             }
         }
         out.write(buf, 0, n);
+    }
+
+    /** Writes {@code 0x} and the value's hex digits, at least {@code digits}, at {@code n}; returns the end. */
+    private static int putHex(long value, int digits, byte[] buf, int n) {
+        buf[n] = '0';
+        buf[n + 1] = 'x';
+        int shown = digits >= 8 || value >>> (4 * digits) == 0 ? digits
+                : (64 - Long.numberOfLeadingZeros(value) + 3) / 4;
+        int at = n + 2 + shown;
+        long v = value;
+        for (int d = at - 1; d >= n + 2; d--) {
+            buf[d] = HEX[(int) v & 0xF];
+            v >>>= 4;
+        }
+        return at;
     }
 
     /** {@link #arrayBody} for bytes, two hex digits each, taken as unsigned. */

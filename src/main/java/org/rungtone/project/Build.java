@@ -83,10 +83,10 @@ public final class Build {
         // Every check that can refuse the build runs before the first file is written.
         FirmwareEmitter.Rendered firmware = plan.firmware().player().isPresent() ? player(plan, r) : null;
         long flash = firmware != null ? firmware.result().flashBytes() : checkedArrayBytes(plan, r);
-        // The preview and plots are written on another core while the C files are.
-        CompletableFuture<List<Path>> assets = CompletableFuture.supplyAsync(() -> {
+        // The plots are drawn on another core while the C files and then the preview are written.
+        CompletableFuture<List<Path>> plots = CompletableFuture.supplyAsync(() -> {
             Jobs.join(plotsReady);
-            return writeAssets(r, plan.outDir(), SoundPlots.Scales.none());
+            return SoundPlots.write(plan.outDir(), plotData(r), SoundPlots.Scales.none());
         });
         try {
             if (firmware != null) {
@@ -98,13 +98,15 @@ public final class Build {
             } else {
                 files.addAll(emitArray(plan.symbol(), r, cDir));
             }
+            watch.lap(BuildStage.EMIT);
+            files.add(writePreview(r, plan.outDir()));
+            HtmlReport.prepare();
         } catch (RuntimeException e) {
-            // the staging folder goes once the assets are done with it
-            assets.handle((done, failed) -> null).join();
+            // the staging folder goes once the plots are done with it
+            plots.handle((done, failed) -> null).join();
             throw e;
         }
-        watch.lap(BuildStage.EMIT);
-        files.addAll(Jobs.join(assets));
+        files.addAll(Jobs.join(plots));
         watch.lap(BuildStage.PLOTS);
         Path txt = plan.outDir().resolve("report.txt");
         Path json = plan.outDir().resolve("report.json");
@@ -189,11 +191,16 @@ public final class Build {
     /** Writes preview.wav and the plots of a rendered sound into {@code dir}, the plots on {@code scales}. */
     public static List<Path> writeAssets(SoundRenderer.Rendered r, Path dir, SoundPlots.Scales scales) {
         List<Path> files = new ArrayList<>();
-        Path previewFile = dir.resolve("preview.wav");
-        WavWriter.write(previewFile, r.preview().signal(), WavWriter.Format.PCM16);
-        files.add(previewFile);
+        files.add(writePreview(r, dir));
         files.addAll(SoundPlots.write(dir, plotData(r), scales));
         return files;
+    }
+
+    /** Writes preview.wav of a rendered sound into {@code dir}. */
+    private static Path writePreview(SoundRenderer.Rendered r, Path dir) {
+        Path previewFile = dir.resolve("preview.wav");
+        WavWriter.write(previewFile, r.preview().signal(), WavWriter.Format.PCM16);
+        return previewFile;
     }
 
     /** What the plots of a rendered sound draw. */

@@ -8,10 +8,7 @@ import java.awt.Graphics2D;
 import java.awt.RenderingHints;
 import java.awt.geom.Line2D;
 import java.awt.image.BufferedImage;
-import java.io.ByteArrayOutputStream;
-import java.io.IOException;
 import java.util.Map;
-import javax.imageio.ImageIO;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYChartBuilder;
 import org.knowm.xchart.XYSeries;
@@ -51,8 +48,8 @@ final class ChartRenderer {
     private ChartRenderer() {
     }
 
-    /** The chart as PNG bytes, 800 × 480. */
-    static byte[] png(Plots.Chart chart) {
+    /** The chart drawn at 800 × 480, RGB. */
+    static BufferedImage image(Plots.Chart chart) {
         XYChart c = xchart(chart);
         // XChart paints on a transparent layer; painting lays the chart out, so that data values map to
         // pixels for the grid, which goes under the layer
@@ -71,13 +68,7 @@ final class ChartRenderer {
         g.drawImage(layer, 0, 0, null);
         drawTicks(g, f, chart, c.getStyler().getAxisTickLabelsFont());
         g.dispose();
-        try {
-            ByteArrayOutputStream out = new ByteArrayOutputStream();
-            ImageIO.write(image, "png", out);
-            return out.toByteArray();
-        } catch (IOException e) {
-            throw new IllegalStateException("PNG encoding failed", e);
-        }
+        return image;
     }
 
     /**

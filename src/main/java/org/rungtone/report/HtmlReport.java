@@ -142,6 +142,14 @@ public final class HtmlReport {
         AtomicFiles.writeString(file, render(page, Optional.ofNullable(folder)));
     }
 
+    /**
+     * Compiles the page's template now, unless it is compiled: a build calls this while its plots are drawn on
+     * the other core, so that writing the page later does not wait for it.
+     */
+    public static void prepare() {
+        java.util.Objects.requireNonNull(Layout.TEMPLATE);
+    }
+
     private static String render(Page page, Optional<Path> base) {
         return Layout.TEMPLATE.execute(new Context(base).page(page));
     }

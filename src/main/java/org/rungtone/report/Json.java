@@ -31,24 +31,38 @@ public final class Json {
      */
     public static final int SCHEMA_VERSION = 2;
 
-    private static final Gson GSON = new GsonBuilder()
-            .setPrettyPrinting()
-            .disableHtmlEscaping()
-            .serializeNulls()
-            .registerTypeAdapter(Double.class, (JsonSerializer<Double>) (v, t, c) -> number(v))
-            .registerTypeAdapter(double.class, (JsonSerializer<Double>) (v, t, c) -> number(v))
-            .create();
-
     private Json() {
     }
 
-    private static JsonElement number(Double v) {
-        return Double.isFinite(v) ? new JsonPrimitive(v) : JsonNull.INSTANCE;
+    /**
+     * Serialises a value (records, maps, lists, numbers, strings). A tree of maps, lists, strings and numbers
+     * is printed by {@link JsonText}, in Gson's layout without Gson's start-up; anything else by Gson.
+     */
+    public static String toJson(Object value) {
+        if (JsonText.writable(value)) {
+            return JsonText.of(value) + "\n";
+        }
+        return viaGson(value);
     }
 
-    /** Serialises a value (records, maps, lists, numbers, strings). */
-    public static String toJson(Object value) {
-        return GSON.toJson(value) + "\n";
+    /** Serialises a value through Gson, whatever it is. */
+    static String viaGson(Object value) {
+        return Reflective.GSON.toJson(value) + "\n";
+    }
+
+    /** Gson, set up on first use. */
+    private static final class Reflective {
+        static final Gson GSON = new GsonBuilder()
+                .setPrettyPrinting()
+                .disableHtmlEscaping()
+                .serializeNulls()
+                .registerTypeAdapter(Double.class, (JsonSerializer<Double>) (v, t, c) -> number(v))
+                .registerTypeAdapter(double.class, (JsonSerializer<Double>) (v, t, c) -> number(v))
+                .create();
+
+        private static JsonElement number(Double v) {
+            return Double.isFinite(v) ? new JsonPrimitive(v) : JsonNull.INSTANCE;
+        }
     }
 
     /** Writes a value as JSON atomically. */

@@ -173,7 +173,7 @@ public final class Plots {
 
     /** Renders a chart to PNG bytes (800 x 480), its description in the file (see {@link PngText}). */
     public static byte[] png(Chart chart) {
-        return PngText.withDescription(ChartRenderer.png(chart), chart.description());
+        return PngEncoder.encode(ChartRenderer.image(chart), chart.description());
     }
 
     /** Renders a chart and writes it atomically to {@code file}. */

@@ -25,12 +25,7 @@ final class PngText {
     /** The PNG with {@code description} added as an iTXt chunk after IHDR. */
     static byte[] withDescription(byte[] png, String description) {
         int afterHeader = SIGNATURE_BYTES + CHUNK_OVERHEAD + ByteBuffer.wrap(png, SIGNATURE_BYTES, 4).getInt();
-        ByteArrayOutputStream data = new ByteArrayOutputStream();
-        data.writeBytes(KEYWORD.getBytes(StandardCharsets.ISO_8859_1));
-        // keyword end, compression flag and method (none), empty language tag and translated keyword
-        data.writeBytes(new byte[] {0, 0, 0, 0, 0});
-        data.writeBytes(description.getBytes(StandardCharsets.UTF_8));
-        byte[] body = data.toByteArray();
+        byte[] body = chunkData(description);
         ByteBuffer chunk = ByteBuffer.allocate(CHUNK_OVERHEAD + body.length);
         chunk.putInt(body.length).put("iTXt".getBytes(StandardCharsets.US_ASCII)).put(body);
         CRC32 crc = new CRC32();
@@ -41,6 +36,16 @@ final class PngText {
         out.writeBytes(chunk.array());
         out.write(png, afterHeader, png.length - afterHeader);
         return out.toByteArray();
+    }
+
+    /** The data of the iTXt chunk that carries {@code description}. */
+    static byte[] chunkData(String description) {
+        ByteArrayOutputStream data = new ByteArrayOutputStream();
+        data.writeBytes(KEYWORD.getBytes(StandardCharsets.ISO_8859_1));
+        // keyword end, compression flag and method (none), empty language tag and translated keyword
+        data.writeBytes(new byte[] {0, 0, 0, 0, 0});
+        data.writeBytes(description.getBytes(StandardCharsets.UTF_8));
+        return data.toByteArray();
     }
 
     /** The text of the first uncompressed {@code iTXt Description} chunk, if there is one. */

@@ -62,31 +62,51 @@ public final class WavWriter {
         out.writeBytes("data");
         le32(out, dataBytes);
         double[] s = signal.unsafeSamples();
-        byte[] buf = new byte[8192];
-        int pos = 0;
-        for (double v : s) {
+        byte[] buf = new byte[1 << 15];
+        int perBlock = buf.length / bytesPer;
+        for (int from = 0; from < s.length; from += perBlock) {
+            int to = Math.min(s.length, from + perBlock);
             if (isFloat) {
-                int bits = Float.floatToIntBits((float) v);
-                buf[pos++] = (byte) bits;
-                buf[pos++] = (byte) (bits >>> 8);
-                buf[pos++] = (byte) (bits >>> 16);
-                buf[pos++] = (byte) (bits >>> 24);
+                floats(s, from, to, buf);
             } else {
-                long q = Math.round(v * 32768.0);
-                int i16 = (int) Math.max(-32768, Math.min(32767, q));
-                buf[pos++] = (byte) i16;
-                buf[pos++] = (byte) (i16 >>> 8);
+                pcm16(s, from, to, buf);
             }
-            if (pos == buf.length) {
-                out.write(buf, 0, pos);
-                pos = 0;
-            }
+            out.write(buf, 0, (to - from) * bytesPer);
         }
-        out.write(buf, 0, pos);
         if ((dataBytes & 1) != 0) {
             out.write(0);
         }
         out.flush();
+    }
+
+    /** Samples {@code from .. to} as little-endian 32-bit floats into {@code buf}. */
+    private static void floats(double[] s, int from, int to, byte[] buf) {
+        int pos = 0;
+        for (int i = from; i < to; i++) {
+            int bits = Float.floatToIntBits((float) s[i]);
+            buf[pos] = (byte) bits;
+            buf[pos + 1] = (byte) (bits >>> 8);
+            buf[pos + 2] = (byte) (bits >>> 16);
+            buf[pos + 3] = (byte) (bits >>> 24);
+            pos += 4;
+        }
+    }
+
+    /** Samples {@code from .. to} as little-endian 16-bit PCM into {@code buf}. */
+    private static void pcm16(double[] s, int from, int to, byte[] buf) {
+        int pos = 0;
+        for (int i = from; i < to; i++) {
+            int i16 = pcm16(s[i]);
+            buf[pos] = (byte) i16;
+            buf[pos + 1] = (byte) (i16 >>> 8);
+            pos += 2;
+        }
+    }
+
+    /** {@code v × 32768} rounded to the nearest whole number (halves upwards) and clipped to [-32768, 32767]. */
+    static int pcm16(double v) {
+        long q = Math.round(v * 32768.0);
+        return q < -32768 ? -32768 : q > 32767 ? 32767 : (int) q;
     }
 
     private static void le16(DataOutputStream out, int v) throws IOException {
