@@ -202,9 +202,15 @@ final class SincResampler {
             }
         }
         int n = codes.length;
-        for (int j = from; j < to; j++) {
-            int t = j % q;
-            long top = firstCode[t] + (long) (j / q) * codesPerPeriod;
+        // output j is place t = j mod q of period j / q, both stepped along instead of divided out
+        int t = from % q;
+        long periodStart = (long) (from / q) * codesPerPeriod;
+        for (int j = from; j < to; j++, t++) {
+            if (t == q) {
+                t = 0;
+                periodStart += codesPerPeriod;
+            }
+            long top = firstCode[t] + periodStart;
             int row = t * width;
             double acc0 = 0;
             double acc1 = 0;
@@ -268,13 +274,20 @@ final class SincResampler {
         double[] g = held.g;
         int n = codes.length;
         for (int j = from; j < to; j++) {
-            Place at = place(held, j, offset);
-            int row0 = at.row0;
+            // as place(), written out: a record per output would be an allocation in this loop
+            double c = j * ratio + offset;
+            long i0 = (long) Math.floor(c);
+            long a = Math.floorDiv(i0, held.factor);
+            int r = (int) Math.floorMod(i0, (long) held.factor);
+            double pos = (c - i0) * PHASES;
+            int p = (int) pos;
+            double weight = pos - p;
+            int row0 = (r * (PHASES + 1) + p) * width;
             int row1 = row0 + width;
             double acc0 = 0;
             double acc1 = 0;
-            long top = at.code - dMin;
-            long bottom = at.code - (dMin + width - 1);
+            long top = a - dMin;
+            long bottom = a - (dMin + width - 1);
             if (bottom >= 0 && top < n) {
                 int k = (int) top;
                 for (int dd = 0; dd < width; dd++) {
@@ -290,7 +303,7 @@ final class SincResampler {
                     acc1 += x * g[row1 + dd];
                 }
             }
-            out[j] = acc0 + at.weight * (acc1 - acc0);
+            out[j] = acc0 + weight * (acc1 - acc0);
         }
     }
 }
