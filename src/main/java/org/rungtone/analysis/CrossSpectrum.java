@@ -1,9 +1,6 @@
 package org.rungtone.analysis;
 
 import java.util.stream.IntStream;
-import org.apache.commons.math3.transform.DftNormalization;
-import org.apache.commons.math3.transform.FastFourierTransformer;
-import org.apache.commons.math3.transform.TransformType;
 import org.rungtone.internal.Checks;
 
 /**
@@ -84,7 +81,7 @@ final class CrossSpectrum {
     }
 
     private static void accumulate(double[][] z, double[][] acc) {
-        FastFourierTransformer.transformInPlace(z, DftNormalization.STANDARD, TransformType.FORWARD);
+        Fft.forward(z[0], z[1]);
         int m = z[0].length;
         for (int k = 0; k <= m / 2; k++) {
             int mk = k == 0 ? 0 : m - k;
@@ -150,7 +147,7 @@ final class CrossSpectrum {
                 c[1][m - k] = -scale * sim[k];
             }
         }
-        FastFourierTransformer.transformInPlace(c, DftNormalization.STANDARD, TransformType.INVERSE);
+        Fft.inverse(c[0], c[1]);
         int best = 0;
         int span = half * UPSAMPLE;
         for (int j = -span + 1; j < span; j++) {

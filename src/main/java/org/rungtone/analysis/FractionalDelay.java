@@ -11,8 +11,8 @@ import org.rungtone.internal.Checks;
  * {@code (A − 8)/(2.285·Δω)/2}, {@code β = 0.1102·(A − 8.7)}). The sinc's cutoff is half the rate and its
  * transition is centred there, so the delay is exact to A dB up to the pass edge, and only the band above
  * it, which the caller does not use, is shaped. Samples outside the input are zero. The same kernel serves
- * every output, so this costs one short FIR per sample; outputs are computed in fixed chunks in parallel
- * (the result does not depend on the number of cores).
+ * every output; outputs are computed in fixed chunks in parallel (the result does not depend on the number
+ * of cores).
  */
 final class FractionalDelay {
     private static final int CHUNK = 1 << 16;
@@ -49,46 +49,72 @@ final class FractionalDelay {
         first = (int) (whole - half + 1);
     }
 
-    /** The first {@code length} samples of {@code x} delayed. */
+    /** The kernel's taps: output n is {@code Σ_k kernel[k]·x[n − first − k]}. */
+    double[] kernel() {
+        return kernel.clone();
+    }
+
+    /** The offset of the kernel's first tap, see {@link #kernel()}. */
+    int first() {
+        return first;
+    }
+
+    /**
+     * The first {@code length} samples of {@code x} delayed. The FIR is applied by fast convolution
+     * (overlap-save: A. V. Oppenheim and R. W. Schafer, Discrete-Time Signal Processing, 3rd ed., sec. 8.7.3):
+     * blocks of L input samples are transformed, multiplied by the kernel's spectrum and transformed back,
+     * and the last L − taps + 1 outputs of each block are the linear convolution's. Two real blocks share
+     * one complex transform (the kernel is real, so the real and imaginary parts stay apart). With 70 taps
+     * (a 20 kHz pass edge at 44.1 kHz) and L = 1024 that is about a fifth of the multiplications of the
+     * direct sum; the results agree with it to rounding.
+     */
     double[] apply(double[] x, int length) {
         double[] y = new double[length];
-        // taps reversed, so that output n reads x[n − first − (taps − 1) ..] forwards
         int taps = kernel.length;
-        double[] reversed = new double[taps];
-        for (int j = 0; j < taps; j++) {
-            reversed[j] = kernel[taps - 1 - j];
-        }
+        int size = Math.max(64, Integer.highestOneBit(8 * taps - 1) << 1);
+        int block = size - taps + 1;
+        double[] hr = new double[size];
+        double[] hi = new double[size];
+        System.arraycopy(kernel, 0, hr, 0, taps);
+        Fft.forward(hr, hi);
         int chunks = (length + CHUNK - 1) / CHUNK;
         IntStream.range(0, chunks).parallel().forEach(c -> {
+            double[] re = new double[size];
+            double[] im = new double[size];
             int to = Math.min(length, (c + 1) * CHUNK);
-            for (int n = c * CHUNK; n < to; n++) {
-                int base = n - first - (taps - 1);
-                if (base >= 0 && base + taps <= x.length) {
-                    y[n] = dot(reversed, x, base);
+            for (int n0 = c * CHUNK; n0 < to; n0 += 2 * block) {
+                int n1 = n0 + block;
+                fill(x, n0 - first - (taps - 1), re);
+                if (n1 < to) {
+                    fill(x, n1 - first - (taps - 1), im);
                 } else {
-                    double acc = 0;
-                    for (int j = Math.max(0, -base); j < taps && base + j < x.length; j++) {
-                        acc += reversed[j] * x[base + j];
-                    }
-                    y[n] = acc;
+                    java.util.Arrays.fill(im, 0);
+                }
+                Fft.forward(re, im);
+                for (int k = 0; k < size; k++) {
+                    double a = re[k];
+                    double b = im[k];
+                    re[k] = a * hr[k] - b * hi[k];
+                    im[k] = a * hi[k] + b * hr[k];
+                }
+                Fft.inverse(re, im);
+                System.arraycopy(re, taps - 1, y, n0, Math.min(block, to - n0));
+                if (n1 < to) {
+                    System.arraycopy(im, taps - 1, y, n1, Math.min(block, to - n1));
                 }
             }
         });
         return y;
     }
 
-    /** {@code Σ k[j]·x[base + j]} with two partial sums (independent additions overlap in the CPU). */
-    private static double dot(double[] k, double[] x, int base) {
-        double a0 = 0;
-        double a1 = 0;
-        int j = 0;
-        for (; j + 1 < k.length; j += 2) {
-            a0 += k[j] * x[base + j];
-            a1 += k[j + 1] * x[base + j + 1];
+    /** {@code dst[i] = x[from + i]}, zero where that lies outside x. */
+    private static void fill(double[] x, int from, double[] dst) {
+        int lo = Math.max(0, -from);
+        int hi = Math.max(lo, Math.min(dst.length, x.length - from));
+        java.util.Arrays.fill(dst, 0, lo, 0);
+        if (hi > lo) {
+            System.arraycopy(x, from + lo, dst, lo, hi - lo);
         }
-        if (j < k.length) {
-            a0 += k[j] * x[base + j];
-        }
-        return a0 + a1;
+        java.util.Arrays.fill(dst, hi, dst.length, 0);
     }
 }

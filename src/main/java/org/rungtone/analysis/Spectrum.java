@@ -1,9 +1,6 @@
 package org.rungtone.analysis;
 
 import java.util.function.DoubleUnaryOperator;
-import org.apache.commons.math3.transform.DftNormalization;
-import org.apache.commons.math3.transform.FastFourierTransformer;
-import org.apache.commons.math3.transform.TransformType;
 import org.rungtone.internal.Checks;
 
 /**
@@ -17,7 +14,7 @@ import org.rungtone.internal.Checks;
  * noise-calibrated form: sums over bins give band powers. A pure tone's peak bin reads lower by the
  * window's equivalent noise bandwidth {@code ENBW = M·Σw²/(Σw)²} bins; {@link #toneDbfs} adds it back for
  * tone-calibrated displays. Welch's method averages such spectra over half-overlapping segments (P. D.
- * Welch, IEEE Trans. Audio Electroacoust. 15(2), 1967). Transforms use Commons Math's in-place radix-2 FFT.
+ * Welch, IEEE Trans. Audio Electroacoust. 15(2), 1967). Transforms are {@link Fft}'s.
  */
 public final class Spectrum {
     private static final double FULL_SCALE_SINE_POWER = 0.5;
@@ -176,7 +173,7 @@ public final class Spectrum {
 
     /** Transforms two real segments packed as re/im and adds both their single-sided powers into {@code p}. */
     private static void accumulatePair(double[][] ri, double[] p, double scale) {
-        FastFourierTransformer.transformInPlace(ri, DftNormalization.STANDARD, TransformType.FORWARD);
+        Fft.forward(ri[0], ri[1]);
         int m = ri[0].length;
         int half = m / 2;
         double toFullScale = scale / FULL_SCALE_SINE_POWER;
@@ -199,7 +196,7 @@ public final class Spectrum {
 
     /** Transforms {@code ri} in place and adds its scaled single-sided power into {@code p}. */
     private static void accumulate(double[][] ri, double[] p, double scale) {
-        FastFourierTransformer.transformInPlace(ri, DftNormalization.STANDARD, TransformType.FORWARD);
+        Fft.forward(ri[0], ri[1]);
         int m = ri[0].length;
         int half = m / 2;
         double toFullScale = scale / FULL_SCALE_SINE_POWER;

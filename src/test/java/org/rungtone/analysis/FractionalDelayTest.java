@@ -2,6 +2,7 @@ package org.rungtone.analysis;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
+import java.util.SplittableRandom;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
@@ -24,6 +25,35 @@ class FractionalDelayTest {
         // away from the ends, where the kernel reaches past the samples
         for (int i = 200; i < n - 200; i++) {
             assertEquals(Math.sin(w * (i - delay) + 0.3), y[i], 2e-5, "sample " + i);
+        }
+    }
+
+    /**
+     * The fast convolution gives the direct sum {@code y[n] = Σ_k h[k]·x[n − first − k]} (zero outside x) at
+     * every output, the ends included, over lengths shorter and longer than one block and one chunk.
+     */
+    @ParameterizedTest
+    @CsvSource({"0.37, 100, 100", "-2.61, 3000, 2900", "3.5, 70000, 70000", "12.25, 131073, 140000",
+        "-40.5, 2000, 2000"})
+    void fastConvolutionIsTheDirectSum(double delay, int inputLength, int length) {
+        SplittableRandom rnd = new SplittableRandom(11);
+        double[] x = new double[inputLength];
+        for (int i = 0; i < x.length; i++) {
+            x[i] = rnd.nextDouble(-1, 1);
+        }
+        FractionalDelay d = new FractionalDelay(delay, 44_100, 20_000, 100);
+        double[] y = d.apply(x, length);
+        double[] h = d.kernel();
+        for (int n = 0; n < length; n++) {
+            double direct = 0;
+            for (int k = 0; k < h.length; k++) {
+                long m = (long) n - d.first() - k;
+                if (m >= 0 && m < x.length) {
+                    direct += h[k] * x[(int) m];
+                }
+            }
+            // rounding of a 1024-point transform and back on values of order 1 (common practice, no source)
+            assertEquals(direct, y[n], 1e-12, "output " + n);
         }
     }
 }
