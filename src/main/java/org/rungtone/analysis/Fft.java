@@ -36,15 +36,24 @@ final class Fft {
         }
     }
 
+    private static void checkLengths(int n, int m) {
+        Checks.checkArgument(m == n && n >= 1 && Integer.bitCount(n) == 1,
+                "a transform needs two arrays of one power-of-two length: %d and %d", n, m);
+    }
+
     private static void transform(double[] re, double[] im, boolean inverse) {
+        checkLengths(re.length, im.length);
+        Twiddles t = twiddles(Integer.numberOfTrailingZeros(re.length));
+        reverseBits(re, im, t.swaps);
+        stages(re, im, t, inverse);
+    }
+
+    /** The butterflies, on input in bit-reversed order. */
+    private static void stages(double[] re, double[] im, Twiddles t, boolean inverse) {
         int n = re.length;
-        Checks.checkArgument(im.length == n && n >= 1 && Integer.bitCount(n) == 1,
-                "a transform needs two arrays of one power-of-two length: %d and %d", n, im.length);
         if (n == 1) {
             return;
         }
-        reverseBits(re, im);
-        Twiddles t = twiddles(Integer.numberOfTrailingZeros(n));
         // the sine's sign: e^(∓iθ) = cos θ ∓ i·sin θ
         double sign = inverse ? 1 : -1;
         int stages = Integer.numberOfTrailingZeros(n);
@@ -159,24 +168,17 @@ final class Fft {
         }
     }
 
-    /** Puts element i at the place whose index is i's bits reversed. */
-    private static void reverseBits(double[] re, double[] im) {
-        int n = re.length;
-        for (int i = 0, j = 0; i < n; i++) {
-            if (i < j) {
-                double t = re[i];
-                re[i] = re[j];
-                re[j] = t;
-                t = im[i];
-                im[i] = im[j];
-                im[j] = t;
-            }
-            int bit = n >> 1;
-            while ((j & bit) != 0) {
-                j ^= bit;
-                bit >>= 1;
-            }
-            j |= bit;
+    /** Puts element i at the place whose index is i's bits reversed: the swaps listed in the table. */
+    private static void reverseBits(double[] re, double[] im, int[] swaps) {
+        for (int s = 0; s < swaps.length; s += 2) {
+            int i = swaps[s];
+            int j = swaps[s + 1];
+            double t = re[i];
+            re[i] = re[j];
+            re[j] = t;
+            t = im[i];
+            im[i] = im[j];
+            im[j] = t;
         }
     }
 
@@ -190,10 +192,14 @@ final class Fft {
         return t;
     }
 
-    /** cos and sin of {@code πj/h} at {@code [h + j]} for every half-width h = 1, 2, 4 .. N/2 and j < h. */
+    /**
+     * cos and sin of {@code πj/h} at {@code [h + j]} for every half-width h = 1, 2, 4 .. N/2 and j < h, and
+     * the bit-reversal permutation as pairs (i, j), i < j, to swap.
+     */
     private static final class Twiddles {
         final double[] cos;
         final double[] sin;
+        final int[] swaps;
 
         Twiddles(int n) {
             cos = new double[Math.max(2, n)];
@@ -205,6 +211,17 @@ final class Fft {
                     sin[h + j] = Math.sin(angle);
                 }
             }
+            int bits = Integer.numberOfTrailingZeros(n);
+            int[] pairs = new int[n];
+            int count = 0;
+            for (int i = 0; i < n; i++) {
+                int j = bits == 0 ? 0 : Integer.reverse(i) >>> (32 - bits);
+                if (i < j) {
+                    pairs[count++] = i;
+                    pairs[count++] = j;
+                }
+            }
+            swaps = java.util.Arrays.copyOf(pairs, count);
         }
     }
 }
