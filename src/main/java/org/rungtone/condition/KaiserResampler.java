@@ -119,10 +119,7 @@ public final class KaiserResampler implements Resampler {
                 int shift = last ? 0 : (int) lo[s + 1];
                 int at = (int) -lo[s];
                 int len = (int) lengths[s];
-                for (long n = lo[s + 1]; n < hi[s + 1]; n++) {
-                    int m = (int) n;
-                    next[m - shift] = k.whole(m, len) ? k.atWhole(x, at, m) : k.at(x, at, len, m);
-                }
+                k.run(x, at, len, lo[s + 1], hi[s + 1], next, shift);
                 x = next;
             }
         });
@@ -230,21 +227,43 @@ public final class KaiserResampler implements Resampler {
             return exact ? n * num / den : (long) Math.floor(n * step);
         }
 
-        /** True when output n's window lies wholly inside a range of {@code length} samples. */
-        boolean whole(int n, int length) {
-            long start = base(n) - half + 1;
-            return exact && start >= 0 && start + taps <= length;
+        /**
+         * Outputs {@code nFrom .. nTo − 1} of a range of {@code length} samples whose sample p is
+         * {@code x[from + p]}, into {@code out[n − shift]}. With an exact ratio the input position and phase
+         * are stepped from output to output (no division per output), and an output whose window lies wholly
+         * inside the range (the common case, kept apart from the edges so that the compiled loop never meets
+         * a clamped window) is one dot product; the edges and inexact ratios go through {@link #at}.
+         */
+        void run(double[] x, int from, int length, long nFrom, long nTo, double[] out, int shift) {
+            if (!exact) {
+                for (long n = nFrom; n < nTo; n++) {
+                    out[(int) n - shift] = at(x, from, length, (int) n);
+                }
+                return;
+            }
+            long pos = nFrom * num;
+            long base = pos / den;
+            long phase = pos % den;
+            long wholeStep = num / den;
+            long phaseStep = num % den;
+            for (long n = nFrom; n < nTo; n++) {
+                long start = base - half + 1;
+                out[(int) n - shift] = start >= 0 && start + taps <= length
+                        ? dot(rows[(int) phase], x, (int) start + from) : at(x, from, length, (int) n);
+                base += wholeStep;
+                phase += phaseStep;
+                if (phase >= den) {
+                    phase -= den;
+                    base++;
+                }
+            }
         }
 
         /**
-         * Output n when its window is whole and the ratio exact (the common case, kept apart from the edges so
-         * that the compiled loop never meets a clamped window): two partial sums let independent additions
-         * overlap in the CPU; the result differs from one running sum only by rounding, never between runs.
+         * {@code Σ row[j]·x[k + j]} with two partial sums: independent additions overlap in the CPU; the result
+         * differs from one running sum only by rounding, never between runs.
          */
-        double atWhole(double[] x, int from, int n) {
-            long pos = n * num;
-            double[] row = rows[(int) (pos % den)];
-            int k = (int) (pos / den - half + 1) + from;
+        private double dot(double[] row, double[] x, int k) {
             double even = 0;
             double odd = 0;
             for (int j = 0; j < taps; j += 2, k += 2) {
