@@ -168,17 +168,23 @@ final class Fft {
         }
     }
 
-    /** Puts element i at the place whose index is i's bits reversed: the swaps listed in the table. */
+    /**
+     * Puts element i at the place whose index is i's bits reversed: the swaps listed in the table, one array
+     * at a time (each pass then stays within half the memory, which keeps a 32,768-point transform's swaps in
+     * the processor's cache).
+     */
     private static void reverseBits(double[] re, double[] im, int[] swaps) {
+        swap(re, swaps);
+        swap(im, swaps);
+    }
+
+    private static void swap(double[] a, int[] swaps) {
         for (int s = 0; s < swaps.length; s += 2) {
             int i = swaps[s];
             int j = swaps[s + 1];
-            double t = re[i];
-            re[i] = re[j];
-            re[j] = t;
-            t = im[i];
-            im[i] = im[j];
-            im[j] = t;
+            double t = a[i];
+            a[i] = a[j];
+            a[j] = t;
         }
     }
 
