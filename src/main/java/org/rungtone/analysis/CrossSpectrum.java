@@ -131,33 +131,70 @@ final class CrossSpectrum {
      * their cross-correlation: the cross spectrum zero-padded {@value #UPSAMPLE} times and transformed
      * back, then a parabola through the peak and its neighbours. Only delays within ±segmentLength/2 are
      * found.
+     *
+     * <p>The zero-padded transform of length 16M is taken as 16 transforms of length M, one per fraction
+     * r/16 of a sample: with j = 16n + r, {@code e^(2πi·kj/16M) = e^(2πi·kn/M)·e^(2πi·kr/16M)}, so
+     * interpolated value j is the M-point inverse transform of the spectrum turned by {@code e^(2πi·kr/16M)}
+     * at n (the Nyquist bin's two images meet in one bin). Same values to rounding, with the M-point
+     * transform's tables instead of a 16M-point one.
      */
     double delaySamples() {
-        int m = segmentLength * UPSAMPLE;
-        double[][] c = new double[2][m];
-        int half = segmentLength / 2;
+        int m = segmentLength;
+        int half = m / 2;
+        int fine = m * UPSAMPLE;
+        double[] c = new double[fine];
+        // the turn by one sixteenth, e^(2πi·k/16M), per bin; the turn by r/16 is its r-th power
+        double[] stepRe = new double[half + 1];
+        double[] stepIm = new double[half + 1];
         for (int k = 0; k <= half; k++) {
-            // The two-sided cross spectrum of real signals: S(−k) = conj S(k); the Nyquist bin is halved
-            // between its two images.
-            double scale = k == half ? 0.5 : 1;
-            c[0][k] = scale * sre[k];
-            c[1][k] = scale * sim[k];
-            if (k > 0) {
-                c[0][m - k] = scale * sre[k];
-                c[1][m - k] = -scale * sim[k];
+            double angle = 2 * Math.PI * k / fine;
+            stepRe[k] = Math.cos(angle);
+            stepIm[k] = Math.sin(angle);
+        }
+        double[] turnRe = new double[half + 1];
+        double[] turnIm = new double[half + 1];
+        java.util.Arrays.fill(turnRe, 1);
+        double[] re = new double[m];
+        double[] im = new double[m];
+        for (int r = 0; r < UPSAMPLE; r++) {
+            for (int k = 0; k <= half; k++) {
+                // S(k)·turn at +k, and its conjugate at −k (M − k): the two-sided spectrum of real signals
+                double a = sre[k] * turnRe[k] - sim[k] * turnIm[k];
+                double b = sre[k] * turnIm[k] + sim[k] * turnRe[k];
+                if (k == 0) {
+                    re[0] = a;
+                    im[0] = b;
+                } else if (k == half) {
+                    // the Nyquist bin, halved between its two images, which meet here
+                    re[k] = a;
+                    im[k] = 0;
+                } else {
+                    re[k] = a;
+                    im[k] = b;
+                    re[m - k] = a;
+                    im[m - k] = -b;
+                }
+            }
+            Fft.inverse(re, im);
+            for (int n = 0; n < m; n++) {
+                c[n * UPSAMPLE + r] = re[n] / UPSAMPLE;
+            }
+            for (int k = 0; k <= half; k++) {
+                double a = turnRe[k] * stepRe[k] - turnIm[k] * stepIm[k];
+                turnIm[k] = turnRe[k] * stepIm[k] + turnIm[k] * stepRe[k];
+                turnRe[k] = a;
             }
         }
-        Fft.inverse(c[0], c[1]);
         int best = 0;
         int span = half * UPSAMPLE;
         for (int j = -span + 1; j < span; j++) {
-            if (c[0][Math.floorMod(j, m)] > c[0][Math.floorMod(best, m)]) {
+            if (c[Math.floorMod(j, fine)] > c[Math.floorMod(best, fine)]) {
                 best = j;
             }
         }
-        double y0 = c[0][Math.floorMod(best - 1, m)];
-        double y1 = c[0][Math.floorMod(best, m)];
-        double y2 = c[0][Math.floorMod(best + 1, m)];
+        double y0 = c[Math.floorMod(best - 1, fine)];
+        double y1 = c[Math.floorMod(best, fine)];
+        double y2 = c[Math.floorMod(best + 1, fine)];
         double denominator = y0 - 2 * y1 + y2;
         double vertex = denominator < 0 ? 0.5 * (y0 - y2) / denominator : 0;
         return (best + vertex) / UPSAMPLE;
