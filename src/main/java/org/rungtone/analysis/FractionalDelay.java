@@ -16,6 +16,8 @@ import org.rungtone.internal.Checks;
  */
 final class FractionalDelay {
     private static final int CHUNK = 1 << 16;
+    /** Shorter outputs are summed directly (see {@link #apply}). */
+    static final int DIRECT_BELOW = 1 << 16;
 
     private final double[] kernel;
     private final int first;
@@ -66,9 +68,15 @@ final class FractionalDelay {
      * and the last L − taps + 1 outputs of each block are the linear convolution's. Two real blocks share
      * one complex transform (the kernel is real, so the real and imaginary parts stay apart). With 70 taps
      * (a 20 kHz pass edge at 44.1 kHz) and L = 1024 that is about a fifth of the multiplications of the
-     * direct sum; the results agree with it to rounding.
+     * direct sum; the results agree with it to rounding. Below {@value #DIRECT_BELOW} outputs the direct sum
+     * is taken instead: in a short run the transform's code would still be interpreted, and costs more.
      */
     double[] apply(double[] x, int length) {
+        return length < DIRECT_BELOW ? direct(x, length) : convolved(x, length);
+    }
+
+    /** The first {@code length} outputs by fast convolution (see {@link #apply}). */
+    double[] convolved(double[] x, int length) {
         double[] y = new double[length];
         int taps = kernel.length;
         int size = Math.max(64, Integer.highestOneBit(8 * taps - 1) << 1);
@@ -104,6 +112,23 @@ final class FractionalDelay {
                 }
             }
         });
+        return y;
+    }
+
+    /** The first {@code length} outputs by the direct sum {@code Σ_k kernel[k]·x[n − first − k]}. */
+    double[] direct(double[] x, int length) {
+        double[] y = new double[length];
+        int taps = kernel.length;
+        for (int n = 0; n < length; n++) {
+            // taps k whose sample n − first − k lies within x
+            int kLo = Math.max(0, n - first - (x.length - 1));
+            int kHi = Math.min(taps - 1, n - first);
+            double acc = 0;
+            for (int k = kLo; k <= kHi; k++) {
+                acc += kernel[k] * x[n - first - k];
+            }
+            y[n] = acc;
+        }
         return y;
     }
 

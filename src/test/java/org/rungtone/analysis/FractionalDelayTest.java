@@ -29,8 +29,9 @@ class FractionalDelayTest {
     }
 
     /**
-     * The fast convolution gives the direct sum {@code y[n] = Σ_k h[k]·x[n − first − k]} (zero outside x) at
-     * every output, the ends included, over lengths shorter and longer than one block and one chunk.
+     * The fast convolution and the direct sum that short runs take give {@code y[n] = Σ_k h[k]·x[n − first − k]}
+     * (zero outside x) at every output, the ends included, over lengths shorter and longer than one block and
+     * one chunk; apply takes the direct sum below its threshold.
      */
     @ParameterizedTest
     @CsvSource({"0.37, 100, 100", "-2.61, 3000, 2900", "3.5, 70000, 70000", "12.25, 131073, 140000",
@@ -42,7 +43,9 @@ class FractionalDelayTest {
             x[i] = rnd.nextDouble(-1, 1);
         }
         FractionalDelay d = new FractionalDelay(delay, 44_100, 20_000, 100);
-        double[] y = d.apply(x, length);
+        double[] fast = d.convolved(x, length);
+        double[] summed = d.direct(x, length);
+        double[] applied = d.apply(x, length);
         double[] h = d.kernel();
         for (int n = 0; n < length; n++) {
             double direct = 0;
@@ -53,7 +56,9 @@ class FractionalDelayTest {
                 }
             }
             // rounding of a 1024-point transform and back on values of order 1 (common practice, no source)
-            assertEquals(direct, y[n], 1e-12, "output " + n);
+            assertEquals(direct, fast[n], 1e-12, "fast convolution, output " + n);
+            assertEquals(direct, summed[n], 1e-13, "direct sum, output " + n);
+            assertEquals(length < FractionalDelay.DIRECT_BELOW ? summed[n] : fast[n], applied[n], 0.0, "output " + n);
         }
     }
 }
