@@ -22,13 +22,8 @@ class FftTest {
     @ParameterizedTest
     @ValueSource(ints = {1, 2, 4, 8, 16, 32, 64, 128, 256, 512, 1024})
     void forwardIsTheDefiningSum(int n) {
-        SplittableRandom rnd = new SplittableRandom(n);
-        double[] xr = new double[n];
-        double[] xi = new double[n];
-        for (int i = 0; i < n; i++) {
-            xr[i] = rnd.nextDouble(-1, 1);
-            xi[i] = rnd.nextDouble(-1, 1);
-        }
+        double[] xr = noise(n, n);
+        double[] xi = noise(n, n + 1);
         double[] re = xr.clone();
         double[] im = xi.clone();
         Fft.forward(re, im);
@@ -68,13 +63,8 @@ class FftTest {
     @ParameterizedTest
     @ValueSource(ints = {2, 8, 512, 8192, 131072})
     void inverseUndoesForwardAndAgreesWithCommonsMath(int n) {
-        SplittableRandom rnd = new SplittableRandom(7 + n);
-        double[] xr = new double[n];
-        double[] xi = new double[n];
-        for (int i = 0; i < n; i++) {
-            xr[i] = rnd.nextDouble(-1, 1);
-            xi[i] = rnd.nextDouble(-1, 1);
-        }
+        double[] xr = noise(n, 7);
+        double[] xi = noise(n, 8);
         double[] re = xr.clone();
         double[] im = xi.clone();
         Fft.forward(re, im);
@@ -97,5 +87,15 @@ class FftTest {
     void lengthsMustBeOnePowerOfTwo() {
         assertThrows(IllegalArgumentException.class, () -> Fft.forward(new double[12], new double[12]));
         assertThrows(IllegalArgumentException.class, () -> Fft.forward(new double[16], new double[8]));
+    }
+
+    /** n samples uniform in [−1, 1) from the given seed. */
+    private static double[] noise(int n, long seed) {
+        SplittableRandom rnd = new SplittableRandom(seed);
+        double[] x = new double[n];
+        for (int i = 0; i < n; i++) {
+            x[i] = rnd.nextDouble(-1, 1);
+        }
+        return x;
     }
 }
