@@ -50,7 +50,7 @@ public final class Main implements Runnable {
             }
             System.exit(0);
         }
-        if (args.length > 0 && (args[0].equals("build") || args[0].equals("demo"))) {
+        if (drawsPlots(args)) {
             PlotWarmUp.start(); // these draw plots: load that machinery on the other core while options parse
         }
         int code;
@@ -67,6 +67,15 @@ public final class Main implements Runnable {
             code = EXIT_INTERNAL;
         }
         System.exit(code);
+    }
+
+    /** True for a build or demo that will draw plots: not one that only asks for its help or the version. */
+    static boolean drawsPlots(String[] args) {
+        boolean plots = args.length > 0 && (args[0].equals("build") || args[0].equals("demo"));
+        for (String a : args) {
+            plots &= !(a.equals("-h") || a.equals("--help") || a.equals("-V") || a.equals("--version"));
+        }
+        return plots;
     }
 
     /**

@@ -1,6 +1,7 @@
 package org.rungtone.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.PrintWriter;
@@ -19,6 +20,18 @@ class MainTest {
     void aNamedCommandIsBuiltAlone() {
         assertEquals(List.of("build"), names("build", "x.wav"));
         assertEquals(List.of("ladder"), names("ladder", "--help"));
+    }
+
+    /** The plotting machinery is loaded ahead only for runs that draw: not for help or the version. */
+    @Test
+    void onlyABuildOrDemoThatRunsWarmsUpThePlots() {
+        assertTrue(Main.drawsPlots(new String[] {"build", "x.wav", "--bits", "8"}));
+        assertTrue(Main.drawsPlots(new String[] {"demo"}));
+        assertFalse(Main.drawsPlots(new String[] {"build", "--help"}));
+        assertFalse(Main.drawsPlots(new String[] {"build", "x.wav", "-h"}));
+        assertFalse(Main.drawsPlots(new String[] {"demo", "-V"}));
+        assertFalse(Main.drawsPlots(new String[] {"ladder", "--bits", "8"}));
+        assertFalse(Main.drawsPlots(new String[0]));
     }
 
     @Test
