@@ -63,7 +63,7 @@ final class FractionalDelay {
 
     /**
      * The first {@code length} samples of {@code x} delayed. The FIR is applied by fast convolution
-     * (overlap-save: A. V. Oppenheim and R. W. Schafer, Discrete-Time Signal Processing, 3rd ed., sec. 8.7.3):
+     * (overlap-save: A. V. Oppenheim and R. W. Schafer, Discrete-Time Signal Processing, 3rd ed., ch. 8):
      * blocks of L input samples are transformed, multiplied by the kernel's spectrum and transformed back,
      * and the last L − taps + 1 outputs of each block are the linear convolution's. Two real blocks share
      * one complex transform (the kernel is real, so the real and imaginary parts stay apart). With 70 taps

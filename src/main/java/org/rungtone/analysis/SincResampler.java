@@ -274,20 +274,13 @@ final class SincResampler {
         double[] g = held.g;
         int n = codes.length;
         for (int j = from; j < to; j++) {
-            // as place(), written out: a record per output would be an allocation in this loop
-            double c = j * ratio + offset;
-            long i0 = (long) Math.floor(c);
-            long a = Math.floorDiv(i0, held.factor);
-            int r = (int) Math.floorMod(i0, (long) held.factor);
-            double pos = (c - i0) * PHASES;
-            int p = (int) pos;
-            double weight = pos - p;
-            int row0 = (r * (PHASES + 1) + p) * width;
+            Place at = place(held, j, offset);
+            int row0 = at.row0;
             int row1 = row0 + width;
             double acc0 = 0;
             double acc1 = 0;
-            long top = a - dMin;
-            long bottom = a - (dMin + width - 1);
+            long top = at.code - dMin;
+            long bottom = at.code - (dMin + width - 1);
             if (bottom >= 0 && top < n) {
                 int k = (int) top;
                 for (int dd = 0; dd < width; dd++) {
@@ -303,7 +296,7 @@ final class SincResampler {
                     acc1 += x * g[row1 + dd];
                 }
             }
-            out[j] = acc0 + weight * (acc1 - acc0);
+            out[j] = acc0 + at.weight * (acc1 - acc0);
         }
     }
 }

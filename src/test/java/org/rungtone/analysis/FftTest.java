@@ -17,7 +17,7 @@ class FftTest {
     /**
      * Every length from 1 to 2^10 (odd and even numbers of stages) against the sum that defines the DFT,
      * {@code X_k = Σ x_n·e^(−2πi·nk/N)} (A. V. Oppenheim and R. W. Schafer, Discrete-Time Signal Processing,
-     * 3rd ed., eq. 8.67), evaluated with the angle reduced mod N so that it is accurate to rounding.
+     * 3rd ed., ch. 8), evaluated with the angle reduced mod N so that it is accurate to rounding.
      */
     @ParameterizedTest
     @ValueSource(ints = {1, 2, 4, 8, 16, 32, 64, 128, 256, 512, 1024})
